@@ -1,0 +1,60 @@
+// Karma for the unit tests of src/ and shared/, in Debian's Chromium (CHROME_BIN=/usr/bin/chromium).
+// Used through the @angular/build:karma builder (`ng test`).
+const fs = require('node:fs');
+
+/** Prints `N passed, N failed` at the end and, when asked, writes the counts for scripts/test.mjs. */
+function SummaryReporter(baseReporterDecorator) {
+  baseReporterDecorator(this);
+  let passed = 0;
+  let failed = 0;
+  this.onSpecComplete = (_browser, result) => {
+    if (result.skipped) return;
+    if (result.success) passed++;
+    else failed++;
+  };
+  this.onRunComplete = (_browsers, results) => {
+    if (results.error || results.disconnected) failed = Math.max(failed, 1);
+    this.write(`${passed} passed, ${failed} failed\n`);
+    const file = process.env.LAMPLIGHT_RESULTS_FILE;
+    if (file) fs.writeFileSync(file, JSON.stringify({ passed, failed }));
+  };
+}
+SummaryReporter.$inject = ['baseReporterDecorator'];
+
+module.exports = function (config) {
+  config.set({
+    basePath: '',
+    frameworks: ['jasmine'],
+    plugins: [
+      require('karma-jasmine'),
+      require('karma-chrome-launcher'),
+      { 'reporter:summary': ['type', SummaryReporter] },
+    ],
+    client: {
+      clearContext: true,
+      jasmine: { random: true },
+    },
+    reporters: ['dots', 'summary'],
+    browsers: ['ChromiumHeadlessLocal'],
+    customLaunchers: {
+      ChromiumHeadlessLocal: {
+        base: 'ChromeHeadless',
+        // --no-sandbox: the test machines run as root. The rest keep Chromium from calling out
+        // to the network, which is closed here.
+        flags: [
+          '--no-sandbox',
+          '--disable-gpu',
+          '--disable-quic',
+          '--disable-background-networking',
+          '--disable-component-update',
+          '--disable-sync',
+          '--no-first-run',
+        ],
+      },
+    },
+    browserNoActivityTimeout: 120000,
+    captureTimeout: 120000,
+    singleRun: true,
+    restartOnFileChange: false,
+  });
+};

@@ -1,0 +1,70 @@
+import type { Browser, BrowserContext } from 'playwright-core';
+
+import { startTestServer, type RunningServer } from '../support/test-server';
+import { launchBrowser, offOrigin, recordRequests } from './support/browser';
+
+describe('The built app served by the sync server', () => {
+  let server: RunningServer;
+  let browser: Browser;
+  let context: BrowserContext;
+
+  beforeAll(async () => {
+    server = await startTestServer({ withApp: true });
+    browser = await launchBrowser();
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  beforeEach(async () => {
+    context = await browser.newContext();
+  });
+
+  afterEach(async () => {
+    await context.close();
+  });
+
+  it('loads the Lamplight shell in Chromium', async () => {
+    const page = await context.newPage();
+    await page.goto(server.baseUrl);
+
+    await page.locator('.brand-name').waitFor();
+    expect(await page.locator('.brand-name').textContent()).toBe('Lamplight');
+    expect(await page.title()).toContain('Lamplight');
+    expect(new URL(page.url()).pathname).toBe('/today');
+  });
+
+  it('renders text in Atkinson Hyperlegible, loaded from the app itself', async () => {
+    const page = await context.newPage();
+    await page.goto(server.baseUrl);
+    await page.locator('h1').waitFor();
+
+    const fonts = await page.evaluate(async () => {
+      await document.fonts.ready;
+      const faces = Array.from(document.fonts).filter((face) => face.family.replace(/"/g, '') === 'Atkinson Hyperlegible');
+      return {
+        // check() alone is true when no face matches at all, so also look for a loaded face.
+        check: document.fonts.check('16px "Atkinson Hyperlegible"'),
+        loadedFaces: faces.filter((face) => face.status === 'loaded').length,
+        bodyFamily: getComputedStyle(document.body).fontFamily,
+      };
+    });
+
+    expect(fonts.check).toBeTrue();
+    expect(fonts.loadedFaces).toBeGreaterThan(0);
+    expect(fonts.bodyFamily).toMatch(/^"?Atkinson Hyperlegible/);
+  });
+
+  it('makes every request to its own origin', async () => {
+    const page = await context.newPage();
+    const requests = recordRequests(page);
+    await page.goto(`${server.baseUrl}/library`);
+    await page.locator('h1', { hasText: 'Library' }).waitFor();
+    await page.evaluate(() => document.fonts.ready);
+
+    expect(requests.length).toBeGreaterThan(3);
+    expect(offOrigin(requests, server.baseUrl)).toEqual([]);
+  });
+});

@@ -1,0 +1,36 @@
+import { chromium, type Browser, type Page } from 'playwright-core';
+
+/** Debian's Chromium, never a downloaded browser. */
+const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
+
+// Browser specs start Chromium and a server; give them room on a slow, shared machine.
+jasmine.DEFAULT_TIMEOUT_INTERVAL = 60_000;
+
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: CHROMIUM,
+    headless: true,
+    // The network here is closed: keep Chromium from calling out on its own.
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+/** Collects every URL the page (and its workers) request, to check they stay on our origin. */
+export function recordRequests(page: Page): string[] {
+  const urls: string[] = [];
+  page.on('request', (request) => urls.push(request.url()));
+  return urls;
+}
+
+/** The requested URLs that left `origin` (data: and blob: URLs never leave the device). */
+export function offOrigin(urls: readonly string[], origin: string): string[] {
+  return urls.filter((url) => !/^(data|blob):/.test(url) && new URL(url).origin !== origin);
+}

@@ -1,0 +1,60 @@
+import request from 'supertest';
+
+import { createApp } from '../../sync-server/src/app';
+import { createDataSource } from '../../sync-server/src/data-access/data-source';
+import { startTcpProxy } from '../support/tcp-proxy';
+import { testDatabaseUrl, testDataSource } from '../support/test-database';
+
+describe('GET /api/health', () => {
+  it('When PostgreSQL answers, then it reports ok for the server and the database', async () => {
+    const app = createApp({ dataSource: await testDataSource(), appDir: null });
+
+    const res = await request(app).get('/api/health').expect(200);
+
+    expect(res.body).toEqual({ status: 'ok', db: 'ok' });
+  });
+
+  it('When PostgreSQL becomes unreachable, then it answers 503 with db: down', async () => {
+    const target = new URL(testDatabaseUrl());
+    const proxy = await startTcpProxy(target.hostname, Number(target.port));
+    const viaProxy = new URL(target);
+    viaProxy.port = String(proxy.port);
+    const dataSource = createDataSource(viaProxy.toString(), { poolSize: 1 });
+    // A dropped connection surfaces as a pool error event; the probe reports it, not the process.
+    await dataSource.initialize();
+    const app = createApp({ dataSource, appDir: null });
+    try {
+      await request(app).get('/api/health').expect(200);
+
+      await proxy.cut();
+      const res = await request(app).get('/api/health').expect(503);
+
+      expect(res.body).toEqual({ status: 'degraded', db: 'down' });
+    } finally {
+      await dataSource.destroy().catch(() => undefined);
+    }
+  });
+});
+
+describe('The API error contract', () => {
+  it('When a route is unknown under /api, then it answers a JSON 404', async () => {
+    const app = createApp({ dataSource: await testDataSource(), appDir: null });
+
+    const res = await request(app).get('/api/no-such-thing').expect(404);
+
+    expect(res.body.error.code).toBe('not_found');
+    expect(res.body.error.message).toContain('/api/no-such-thing');
+  });
+
+  it('When a body is not valid JSON, then it answers 400 invalid_json', async () => {
+    const app = createApp({ dataSource: await testDataSource(), appDir: null });
+
+    const res = await request(app)
+      .post('/api/anything')
+      .set('Content-Type', 'application/json')
+      .send('{"title": ')
+      .expect(400);
+
+    expect(res.body.error).toEqual({ code: 'invalid_json', message: 'Request body is not valid JSON', details: null });
+  });
+});

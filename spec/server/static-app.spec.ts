@@ -1,0 +1,43 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+
+import request from 'supertest';
+
+import { createApp } from '../../sync-server/src/app';
+import { testDataSource } from '../support/test-database';
+
+describe('Serving the built app', () => {
+  let appDir: string;
+
+  beforeAll(() => {
+    appDir = mkdtempSync(path.join(tmpdir(), 'lamplight-app-'));
+    writeFileSync(path.join(appDir, 'index.html'), '<!doctype html><title>Lamplight</title>');
+    writeFileSync(path.join(appDir, 'main-ABCDEFGH.js'), 'console.log(1)');
+  });
+
+  it('When a client route is asked for, then index.html answers so the client router can take it', async () => {
+    const app = createApp({ dataSource: await testDataSource(), appDir });
+
+    const res = await request(app).get('/library/some-book').expect(200);
+
+    expect(res.text).toContain('<title>Lamplight</title>');
+    expect(res.headers['cache-control']).toBe('no-cache');
+  });
+
+  it('When a hashed bundle is asked for, then it may be cached for a year', async () => {
+    const app = createApp({ dataSource: await testDataSource(), appDir });
+
+    const res = await request(app).get('/main-ABCDEFGH.js').expect(200);
+
+    expect(res.headers['cache-control']).toContain('immutable');
+  });
+
+  it('When an unknown API route is asked for, then the fallback does not hide the JSON 404', async () => {
+    const app = createApp({ dataSource: await testDataSource(), appDir });
+
+    const res = await request(app).get('/api/unknown').expect(404);
+
+    expect(res.body.error.code).toBe('not_found');
+  });
+});

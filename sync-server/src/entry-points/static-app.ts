@@ -1,0 +1,37 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+
+import express, { Router } from 'express';
+
+/**
+ * Serves the built Angular app from the same origin as the API. Hashed bundles are cached for a
+ * year; `index.html` and the service worker files are always revalidated so updates are seen.
+ * Any other non-API path falls back to `index.html` for the client router.
+ */
+export function staticApp(appDir: string): Router {
+  const root = path.resolve(appDir);
+  const indexFile = path.join(root, 'index.html');
+  if (!existsSync(indexFile)) {
+    throw new Error(`No built app in ${appDir} (run: npm run build)`);
+  }
+  const router = Router();
+  router.use(
+    express.static(root, {
+      index: false,
+      setHeaders(res, filePath) {
+        const name = path.basename(filePath);
+        if (/-[A-Z0-9]{8}\.(js|css|woff2?)$/.test(name)) {
+          res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+        } else {
+          res.setHeader('Cache-Control', 'no-cache');
+        }
+      },
+    }),
+  );
+  router.get('/{*splat}', (req, res, next) => {
+    if (req.path.startsWith('/api/') || req.path === '/api') return next();
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(indexFile);
+  });
+  return router;
+}

@@ -1,0 +1,42 @@
+import type { Server } from 'node:http';
+
+import { createApp } from './app';
+import { loadConfig } from './config';
+import { createDataSource } from './data-access/data-source';
+
+/** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
+async function main(): Promise<void> {
+  const config = loadConfig();
+  const dataSource = createDataSource(config.databaseUrl);
+  await dataSource.initialize();
+  await dataSource.runMigrations();
+
+  const app = createApp({ dataSource, appDir: config.appDir });
+  const server: Server = app.listen(config.port, config.host, () => {
+    const address = server.address();
+    const port = typeof address === 'object' && address ? address.port : config.port;
+    console.log(`Lamplight is running at http://${config.host}:${port}/`);
+  });
+  server.on('error', (err) => {
+    console.error(`Could not listen on ${config.host}:${config.port}: ${err.message}`);
+    process.exit(1);
+  });
+
+  let stopping = false;
+  const stop = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    console.log(`\n${signal}: stopping Lamplight…`);
+    server.close(() => {
+      void dataSource.destroy().finally(() => process.exit(0));
+    });
+    server.closeAllConnections();
+  };
+  process.on('SIGINT', () => stop('SIGINT'));
+  process.on('SIGTERM', () => stop('SIGTERM'));
+}
+
+main().catch((err: unknown) => {
+  console.error(err instanceof Error ? err.message : err);
+  process.exit(1);
+});

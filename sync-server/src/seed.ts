@@ -1,0 +1,23 @@
+import { loadConfig } from './config';
+import { createDataSource } from './data-access/data-source';
+import { DEMO_ACCOUNTS, seedDemo } from './data-access/seed-demo';
+
+/** `node dist/node/sync-server/src/seed.js`: migrate, then add the demo accounts (idempotent). */
+async function seed(): Promise<void> {
+  const dataSource = createDataSource(loadConfig().databaseUrl);
+  await dataSource.initialize();
+  try {
+    await dataSource.runMigrations();
+    await seedDemo(dataSource);
+  } finally {
+    await dataSource.destroy();
+  }
+  for (const account of DEMO_ACCOUNTS) {
+    console.log(`  ${account.role.padEnd(6)}  ${account.email}  password: ${account.password}`);
+  }
+}
+
+seed().catch((err: unknown) => {
+  console.error(err);
+  process.exit(1);
+});
