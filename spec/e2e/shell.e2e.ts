@@ -26,14 +26,27 @@ describe('The built app served by the sync server', () => {
     await context.close();
   });
 
-  it('loads the Lamplight shell in Chromium', async () => {
+  it('loads the Lamplight shell in Chromium, on the sign-in page for a new device', async () => {
     const page = await context.newPage();
     await page.goto(server.baseUrl);
 
     await page.locator('.brand-name').waitFor();
     expect(await page.locator('.brand-name').textContent()).toBe('Lamplight');
     expect(await page.title()).toContain('Lamplight');
-    expect(new URL(page.url()).pathname).toBe('/today');
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+  });
+
+  it('satisfies its own Content-Security-Policy: no violation is reported', async () => {
+    const page = await context.newPage();
+    const violations: string[] = [];
+    page.on('console', (message) => {
+      if (/Content Security Policy/i.test(message.text())) violations.push(message.text());
+    });
+    await page.goto(server.baseUrl);
+    await page.getByRole('button', { name: 'Sign in' }).waitFor();
+    await page.evaluate(() => document.fonts.ready);
+
+    expect(violations).toEqual([]);
   });
 
   it('renders text in Atkinson Hyperlegible, loaded from the app itself', async () => {
@@ -60,8 +73,8 @@ describe('The built app served by the sync server', () => {
   it('makes every request to its own origin', async () => {
     const page = await context.newPage();
     const requests = recordRequests(page);
-    await page.goto(`${server.baseUrl}/library`);
-    await page.locator('h1', { hasText: 'Library' }).waitFor();
+    await page.goto(`${server.baseUrl}/register`);
+    await page.locator('h1', { hasText: 'Create your journal' }).waitFor();
     await page.evaluate(() => document.fonts.ready);
 
     expect(requests.length).toBeGreaterThan(3);

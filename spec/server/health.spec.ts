@@ -2,12 +2,15 @@ import request from 'supertest';
 
 import { createApp } from '../../sync-server/src/app';
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
+import { createSmtpMailer } from '../../sync-server/src/domain/mailer';
+import { bearer, registerReader } from '../support/accounts';
 import { startTcpProxy } from '../support/tcp-proxy';
-import { testDatabaseUrl, testDataSource } from '../support/test-database';
+import { testDatabaseUrl } from '../support/test-database';
+import { createTestApp, testConfig } from '../support/test-server';
 
 describe('GET /api/health', () => {
   it('When PostgreSQL answers, then it reports ok for the server and the database', async () => {
-    const app = createApp({ dataSource: await testDataSource(), appDir: null });
+    const app = await createTestApp();
 
     const res = await request(app).get('/api/health').expect(200);
 
@@ -22,7 +25,9 @@ describe('GET /api/health', () => {
     const dataSource = createDataSource(viaProxy.toString(), { poolSize: 1 });
     // A dropped connection surfaces as a pool error event; the probe reports it, not the process.
     await dataSource.initialize();
-    const app = createApp({ dataSource, appDir: null });
+    const config = await testConfig();
+    const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
+    const app = createApp({ config, dataSource, mailer });
     try {
       await request(app).get('/api/health').expect(200);
 
@@ -31,23 +36,33 @@ describe('GET /api/health', () => {
 
       expect(res.body).toEqual({ status: 'degraded', db: 'down' });
     } finally {
+      mailer.close();
       await dataSource.destroy().catch(() => undefined);
     }
   });
 });
 
 describe('The API error contract', () => {
-  it('When a route is unknown under /api, then it answers a JSON 404', async () => {
-    const app = createApp({ dataSource: await testDataSource(), appDir: null });
+  it('When a signed-in reader asks for an unknown /api route, then it answers a JSON 404', async () => {
+    const app = await createTestApp();
+    const { accessToken } = await registerReader(app);
 
-    const res = await request(app).get('/api/no-such-thing').expect(404);
+    const res = await request(app).get('/api/no-such-thing').set(bearer(accessToken)).expect(404);
 
     expect(res.body.error.code).toBe('not_found');
     expect(res.body.error.message).toContain('/api/no-such-thing');
   });
 
+  it('When nobody is signed in, then an unknown /api route answers 401 and reveals nothing', async () => {
+    const app = await createTestApp();
+
+    const res = await request(app).get('/api/no-such-thing').expect(401);
+
+    expect(res.body.error.code).toBe('unauthenticated');
+  });
+
   it('When a body is not valid JSON, then it answers 400 invalid_json', async () => {
-    const app = createApp({ dataSource: await testDataSource(), appDir: null });
+    const app = await createTestApp();
 
     const res = await request(app)
       .post('/api/anything')

@@ -4,8 +4,8 @@ import path from 'node:path';
 
 import request from 'supertest';
 
-import { createApp } from '../../sync-server/src/app';
-import { testDataSource } from '../support/test-database';
+import { bearer, registerReader } from '../support/accounts';
+import { createTestApp } from '../support/test-server';
 
 describe('Serving the built app', () => {
   let appDir: string;
@@ -17,7 +17,7 @@ describe('Serving the built app', () => {
   });
 
   it('When a client route is asked for, then index.html answers so the client router can take it', async () => {
-    const app = createApp({ dataSource: await testDataSource(), appDir });
+    const app = await createTestApp({ LAMPLIGHT_APP_DIR: appDir });
 
     const res = await request(app).get('/library/some-book').expect(200);
 
@@ -26,7 +26,7 @@ describe('Serving the built app', () => {
   });
 
   it('When a hashed bundle is asked for, then it may be cached for a year', async () => {
-    const app = createApp({ dataSource: await testDataSource(), appDir });
+    const app = await createTestApp({ LAMPLIGHT_APP_DIR: appDir });
 
     const res = await request(app).get('/main-ABCDEFGH.js').expect(200);
 
@@ -34,9 +34,10 @@ describe('Serving the built app', () => {
   });
 
   it('When an unknown API route is asked for, then the fallback does not hide the JSON 404', async () => {
-    const app = createApp({ dataSource: await testDataSource(), appDir });
+    const app = await createTestApp({ LAMPLIGHT_APP_DIR: appDir });
+    const { accessToken } = await registerReader(app);
 
-    const res = await request(app).get('/api/unknown').expect(404);
+    const res = await request(app).get('/api/unknown').set(bearer(accessToken)).expect(404);
 
     expect(res.body.error.code).toBe('not_found');
   });

@@ -1,16 +1,67 @@
 import { Routes } from '@angular/router';
 
+import { adminGuard, signedInGuard, signedOutGuard } from './core/auth/auth-guards';
+
 export const routes: Routes = [
-  { path: '', pathMatch: 'full', redirectTo: 'today' },
   {
-    path: 'today',
-    title: 'Today · Lamplight',
-    loadComponent: () => import('./features/today/today').then((m) => m.Today),
+    path: 'sign-in',
+    title: 'Sign in · Lamplight',
+    canMatch: [signedOutGuard],
+    loadComponent: () => import('./features/account/sign-in/sign-in').then((m) => m.SignIn),
   },
   {
-    path: 'library',
-    title: 'Library · Lamplight',
-    loadComponent: () => import('./features/library/library').then((m) => m.Library),
+    path: 'register',
+    title: 'Create your journal · Lamplight',
+    canMatch: [signedOutGuard],
+    loadComponent: () => import('./features/account/register/register').then((m) => m.Register),
+  },
+  {
+    path: 'forgot-password',
+    title: 'Choose a new password · Lamplight',
+    loadComponent: () => import('./features/account/forgot-password/forgot-password').then((m) => m.ForgotPassword),
+  },
+  {
+    path: 'reset-password',
+    title: 'Choose a new password · Lamplight',
+    loadComponent: () => import('./features/account/reset-password/reset-password').then((m) => m.ResetPassword),
+  },
+  {
+    path: '',
+    canMatch: [signedInGuard],
+    children: [
+      { path: '', pathMatch: 'full', redirectTo: 'today' },
+      {
+        path: 'today',
+        title: 'Today · Lamplight',
+        loadComponent: () => import('./features/today/today').then((m) => m.Today),
+      },
+      {
+        path: 'library',
+        title: 'Library · Lamplight',
+        loadComponent: () => import('./features/library/library').then((m) => m.Library),
+      },
+      {
+        path: 'settings',
+        title: 'Settings · Lamplight',
+        loadComponent: () => import('./features/settings/settings').then((m) => m.Settings),
+      },
+      {
+        path: 'admin',
+        canMatch: [adminGuard],
+        children: [
+          {
+            path: '',
+            title: 'Accounts · Lamplight',
+            loadComponent: () => import('./features/admin/accounts/accounts').then((m) => m.Accounts),
+          },
+          {
+            path: 'mail',
+            title: 'Caught mail · Lamplight',
+            loadComponent: () => import('./features/admin/mail/mail').then((m) => m.Mail),
+          },
+        ],
+      },
+    ],
   },
   {
     path: '**',

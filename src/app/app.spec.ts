@@ -1,9 +1,11 @@
+import { provideHttpClient } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
 import { MAT_ICON_DEFAULT_OPTIONS } from '@angular/material/icon';
 import { provideRouter } from '@angular/router';
 
 import { App } from './app';
 import { routes } from './app.routes';
+import { forgetSession, rememberSession } from './core/auth/testing/session-fixtures';
 
 describe('App shell', () => {
   beforeEach(() => {
@@ -11,19 +13,32 @@ describe('App shell', () => {
       imports: [App],
       providers: [
         provideRouter(routes),
+        provideHttpClient(),
         { provide: MAT_ICON_DEFAULT_OPTIONS, useValue: { fontSet: 'material-symbols-outlined' } },
       ],
     });
   });
 
-  it('shows the Lamplight name and a link to each main destination', async () => {
+  afterEach(() => forgetSession());
+
+  it('for a signed-in reader, shows the Lamplight name, their name and a link to each main destination', async () => {
+    rememberSession();
     const fixture = TestBed.createComponent(App);
     await fixture.whenStable();
     const element = fixture.nativeElement as HTMLElement;
 
     expect(element.querySelector('.brand-name')?.textContent).toBe('Lamplight');
+    expect(element.querySelector('.reader-name')?.textContent).toBe('Ilse Varga');
     const links = Array.from(element.querySelectorAll<HTMLAnchorElement>('nav[aria-label="Main"] a'));
     expect(links.map((link) => link.getAttribute('href'))).toEqual(['/today', '/library']);
+  });
+
+  it('with nobody signed in, shows no journal navigation', async () => {
+    forgetSession();
+    const fixture = TestBed.createComponent(App);
+    await fixture.whenStable();
+
+    expect((fixture.nativeElement as HTMLElement).querySelector('nav[aria-label="Main"]')).toBeNull();
   });
 
   it('sends an unknown address to the not-found page rather than a blank screen', () => {

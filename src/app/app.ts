@@ -1,7 +1,12 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
+import { MatMenuModule } from '@angular/material/menu';
 import { MatToolbarModule } from '@angular/material/toolbar';
 import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+
+import { Auth } from './core/auth/auth';
+import { SignOutFlow } from './features/account/sign-out/sign-out-flow';
 
 /** A place in the app the shell links to. */
 interface Destination {
@@ -13,14 +18,24 @@ interface Destination {
 /** The app shell: brand bar, main navigation and the routed page. */
 @Component({
   selector: 'll-root',
-  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbarModule, MatIconModule],
+  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbarModule, MatIconModule, MatButtonModule, MatMenuModule],
   templateUrl: './app.html',
   styleUrl: './app.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class App {
+  private readonly auth = inject(Auth);
+  private readonly signOutFlow = inject(SignOutFlow);
+
+  protected readonly user = this.auth.user;
+  protected readonly isAdmin = this.auth.isAdmin;
+  protected readonly needsSignIn = this.auth.needsSignIn;
   protected readonly destinations: readonly Destination[] = [
     { path: '/today', label: 'Today', icon: 'wb_twilight' },
     { path: '/library', label: 'Library', icon: 'local_library' },
   ];
+
+  protected signOut(): Promise<void> {
+    return this.signOutFlow.start();
+  }
 }

@@ -1,27 +1,55 @@
 import express, { type Express } from 'express';
 import type { DataSource } from 'typeorm';
 
-import { apiNotFound, errorHandler } from './errors';
+import type { ServerConfig } from './config';
+import { Accounts } from './domain/accounts';
+import { AdminUsers } from './domain/admin-users';
+import { DeviceSessions } from './domain/device-sessions';
+import type { Mailer } from './domain/mailer';
+import { PasswordResets } from './domain/password-resets';
+import { adminRoutes } from './entry-points/admin.routes';
+import { authRoutes } from './entry-points/auth.routes';
+import { devicesRoutes } from './entry-points/devices.routes';
 import { healthRoutes } from './entry-points/health.routes';
+import { requireAdmin, requireAuth } from './entry-points/require-auth';
+import { attemptLimiter, securityHeaders } from './entry-points/security';
 import { staticApp } from './entry-points/static-app';
+import { apiNotFound, errorHandler } from './errors';
 
 export interface AppDependencies {
+  readonly config: ServerConfig;
   readonly dataSource: DataSource;
-  /** Folder of the built Angular app, or `null` for an API-only server (specs). */
-  readonly appDir: string | null;
+  readonly mailer: Mailer;
 }
 
-/** Builds the Express app without listening, so specs can run it in-process. */
-export function createApp({ dataSource, appDir }: AppDependencies): Express {
+/**
+ * Builds the Express app without listening, so specs can run it in-process. CORS stays closed:
+ * the app and the API share one origin, so no Access-Control-* headers are ever sent.
+ */
+export function createApp({ config, dataSource, mailer }: AppDependencies): Express {
+  const sessions = new DeviceSessions(dataSource, config.jwtSecret);
+  const accounts = new Accounts(dataSource, config, sessions, mailer);
+  const resets = new PasswordResets(dataSource, config, sessions, mailer);
+  const authenticated = requireAuth(dataSource, config.jwtSecret);
+
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  app.use(securityHeaders());
 
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api/health', healthRoutes(dataSource));
+  app.use(
+    '/api/auth',
+    authRoutes({ accounts, sessions, resets, attemptLimiter: attemptLimiter(config.authRateLimit), requireAuth: authenticated }),
+  );
+  // Everything else under /api needs a signed-in caller.
+  app.use('/api', authenticated);
+  app.use('/api/devices', devicesRoutes(sessions));
+  app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);
 
-  if (appDir) app.use(staticApp(appDir));
+  if (config.appDir) app.use(staticApp(config.appDir));
 
   app.use(errorHandler);
   return app;

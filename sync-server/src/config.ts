@@ -1,3 +1,5 @@
+import path from 'node:path';
+
 import { z } from 'zod';
 
 /** Settings the server reads from the environment, validated once at start-up (fail fast). */
@@ -8,17 +10,49 @@ export interface ServerConfig {
   /** Folder of the built Angular app; `null` serves only the API (server specs). */
   readonly appDir: string | null;
   readonly production: boolean;
+  /** The address readers open, used in links inside e-mails. */
+  readonly publicUrl: string;
+  /** HMAC key for access tokens (HS256), at least 32 bytes. */
+  readonly jwtSecret: Uint8Array;
+  readonly bcryptCost: number;
+  /** The account with this e-mail is made an admin (at start-up and on registration). */
+  readonly adminEmail: string | null;
+  /** Where outgoing mail goes; in development the local inbox that `npm start` runs. */
+  readonly smtpUrl: string;
+  readonly mailFrom: string;
+  /** Folder the development inbox writes caught mail to; `null` hides the admin mail page. */
+  readonly devMailDir: string | null;
+  /** Sign-in, registration and reset attempts allowed per client address per 15 minutes. */
+  readonly authRateLimit: number;
 }
 
-const environmentSchema = z.object({
-  HOST: z.string().min(1).default('127.0.0.1'),
-  PORT: z.coerce.number().int().min(0).max(65535).default(8080),
-  DATABASE_URL: z
-    .string({ error: 'DATABASE_URL is required (scripts/db.sh url prints the local one)' })
-    .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL'),
-  LAMPLIGHT_APP_DIR: z.string().optional(),
-  NODE_ENV: z.string().optional(),
-});
+const environmentSchema = z
+  .object({
+    HOST: z.string().min(1).default('127.0.0.1'),
+    PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+    DATABASE_URL: z
+      .string({ error: 'DATABASE_URL is required (scripts/db.sh url prints the local one)' })
+      .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL'),
+    LAMPLIGHT_APP_DIR: z.string().optional(),
+    LAMPLIGHT_PUBLIC_URL: z.url().optional(),
+    LAMPLIGHT_JWT_SECRET: z
+      .string({ error: 'LAMPLIGHT_JWT_SECRET is required (npm start makes a local one)' })
+      .min(32, 'LAMPLIGHT_JWT_SECRET must be at least 32 characters'),
+    LAMPLIGHT_BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
+    LAMPLIGHT_ADMIN_EMAIL: z.email().optional(),
+    SMTP_URL: z.string().regex(/^smtps?:\/\//, 'SMTP_URL must be an smtp:// or smtps:// URL').optional(),
+    LAMPLIGHT_MAIL_FROM: z.string().default('Lamplight <no-reply@lamplight.invalid>'),
+    LAMPLIGHT_DEV_MAIL_DIR: z.string().optional(),
+    LAMPLIGHT_AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(20),
+    NODE_ENV: z.string().optional(),
+  })
+  .superRefine((env, ctx) => {
+    const production = env.NODE_ENV === 'production';
+    if (production && !env.SMTP_URL) ctx.addIssue({ code: 'custom', path: ['SMTP_URL'], message: 'SMTP_URL is required in production' });
+    if (production && env.LAMPLIGHT_BCRYPT_COST < 10) {
+      ctx.addIssue({ code: 'custom', path: ['LAMPLIGHT_BCRYPT_COST'], message: 'must be at least 10 in production (OWASP)' });
+    }
+  });
 
 /** Reads and validates the environment; throws one error naming every bad variable. */
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
@@ -28,11 +62,20 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     throw new Error(`Invalid server configuration:\n  ${problems.join('\n  ')}`);
   }
   const values = parsed.data;
+  const production = values.NODE_ENV === 'production';
   return {
     host: values.HOST,
     port: values.PORT,
     databaseUrl: values.DATABASE_URL,
-    appDir: values.LAMPLIGHT_APP_DIR ?? null,
-    production: values.NODE_ENV === 'production',
+    appDir: values.LAMPLIGHT_APP_DIR ? path.resolve(values.LAMPLIGHT_APP_DIR) : null,
+    production,
+    publicUrl: (values.LAMPLIGHT_PUBLIC_URL ?? `http://${values.HOST}:${values.PORT}`).replace(/\/$/, ''),
+    jwtSecret: new TextEncoder().encode(values.LAMPLIGHT_JWT_SECRET),
+    bcryptCost: values.LAMPLIGHT_BCRYPT_COST,
+    adminEmail: values.LAMPLIGHT_ADMIN_EMAIL?.toLowerCase() ?? null,
+    smtpUrl: values.SMTP_URL ?? 'smtp://127.0.0.1:2525',
+    mailFrom: values.LAMPLIGHT_MAIL_FROM,
+    devMailDir: production || !values.LAMPLIGHT_DEV_MAIL_DIR ? null : path.resolve(values.LAMPLIGHT_DEV_MAIL_DIR),
+    authRateLimit: values.LAMPLIGHT_AUTH_RATE_LIMIT,
   };
 }

@@ -3,6 +3,8 @@ import type { Server } from 'node:http';
 import { createApp } from './app';
 import { loadConfig } from './config';
 import { createDataSource } from './data-access/data-source';
+import { User } from './data-access/entities/user.entity';
+import { createSmtpMailer } from './domain/mailer';
 
 /** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
 async function main(): Promise<void> {
@@ -10,8 +12,12 @@ async function main(): Promise<void> {
   const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
   await dataSource.runMigrations();
+  if (config.adminEmail) {
+    await dataSource.getRepository(User).update({ email: config.adminEmail }, { role: 'admin' });
+  }
 
-  const app = createApp({ dataSource, appDir: config.appDir });
+  const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
+  const app = createApp({ config, dataSource, mailer });
   const server: Server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
@@ -28,6 +34,7 @@ async function main(): Promise<void> {
     stopping = true;
     console.log(`\n${signal}: stopping Lamplight…`);
     server.close(() => {
+      mailer.close();
       void dataSource.destroy().finally(() => process.exit(0));
     });
     server.closeAllConnections();

@@ -4,11 +4,12 @@ import { DEMO_ACCOUNTS, seedDemo } from './data-access/seed-demo';
 
 /** `node dist/node/sync-server/src/seed.js`: migrate, then add the demo accounts (idempotent). */
 async function seed(): Promise<void> {
-  const dataSource = createDataSource(loadConfig().databaseUrl);
+  const config = loadConfig();
+  const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
   try {
     await dataSource.runMigrations();
-    await seedDemo(dataSource);
+    await seedDemo(dataSource, config.bcryptCost);
   } finally {
     await dataSource.destroy();
   }

@@ -10,7 +10,7 @@ export const DEMO_ACCOUNTS: readonly { email: string; password: string; displayN
 ];
 
 /** Creates the demo accounts when missing; running it again changes nothing. */
-export async function seedDemo(dataSource: DataSource): Promise<void> {
+export async function seedDemo(dataSource: DataSource, bcryptCost: number): Promise<void> {
   const users = dataSource.getRepository(User);
   for (const account of DEMO_ACCOUNTS) {
     if (await users.existsBy({ email: account.email })) continue;
@@ -18,7 +18,7 @@ export async function seedDemo(dataSource: DataSource): Promise<void> {
       email: account.email,
       displayName: account.displayName,
       role: account.role,
-      passwordHash: await hashPassword(account.password),
+      passwordHash: await hashPassword(account.password, bcryptCost),
     });
   }
 }

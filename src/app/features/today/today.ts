@@ -1,4 +1,6 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+
+import { Auth } from '../../core/auth/auth';
 
 /** The home page: what the reader is in the middle of today. */
 @Component({
@@ -6,4 +8,11 @@ import { ChangeDetectionStrategy, Component } from '@angular/core';
   templateUrl: './today.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class Today {}
+export class Today {
+  private readonly auth = inject(Auth);
+  protected readonly greeting = computed(() => {
+    const hour = new Date().getHours();
+    const part = hour < 5 ? 'Good night' : hour < 12 ? 'Good morning' : hour < 18 ? 'Good afternoon' : 'Good evening';
+    return `${part}, ${this.auth.user()?.displayName ?? 'reader'}`;
+  });
+}

@@ -1,4 +1,5 @@
 import { CreateUsers1764633600000 } from './1764633600000-create-users';
+import { CreateAuth1764720000000 } from './1764720000000-create-auth';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
-export const migrations = [CreateUsers1764633600000];
+export const migrations = [CreateUsers1764633600000, CreateAuth1764720000000];

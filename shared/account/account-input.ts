@@ -1,0 +1,122 @@
+import { z } from 'zod';
+
+import { checkPassword } from './password-policy';
+
+/** Display names are shown to people a reader shares with; keep them short and printable. */
+export const DISPLAY_NAME_MAX_LENGTH = 80;
+
+const email = z
+  .string({ error: 'E-mail is required' })
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ error: 'Enter an e-mail address like name@example.com' }).max(254, 'E-mail is too long'));
+
+const displayName = z
+  .string({ error: 'Name is required' })
+  .trim()
+  .min(1, 'Name is required')
+  .max(DISPLAY_NAME_MAX_LENGTH, `Use at most ${DISPLAY_NAME_MAX_LENGTH} characters`);
+
+const deviceName = z.string().trim().min(1).max(80).optional();
+
+/** A new password, checked against the shared policy (NIST SP 800-63B-4). */
+const newPassword = z.string({ error: 'Password is required' });
+
+function refinePassword<T extends { password?: string; newPassword?: string; email?: string; displayName?: string }>(
+  key: 'password' | 'newPassword',
+) {
+  return (value: T, ctx: z.RefinementCtx) => {
+    const password = value[key];
+    if (typeof password !== 'string') return;
+    const problem = checkPassword(password, { email: value.email, displayName: value.displayName });
+    if (problem) ctx.addIssue({ code: 'custom', path: [key], message: problem });
+  };
+}
+
+export const registerInput = z
+  .object({ email, password: newPassword, displayName, deviceName })
+  .superRefine(refinePassword('password'));
+export type RegisterInput = z.infer<typeof registerInput>;
+
+export const loginInput = z.object({
+  email,
+  password: z.string({ error: 'Password is required' }).min(1, 'Password is required'),
+  deviceName,
+});
+export type LoginInput = z.infer<typeof loginInput>;
+
+export const refreshInput = z.object({
+  refreshToken: z.string({ error: 'refreshToken is required' }).min(20, 'refreshToken is malformed').max(200),
+});
+
+export const changePasswordInput = z
+  .object({ currentPassword: z.string({ error: 'Current password is required' }).min(1), newPassword })
+  .superRefine(refinePassword('newPassword'));
+
+export const deleteAccountInput = z.object({
+  password: z.string({ error: 'Enter your password to confirm' }).min(1, 'Enter your password to confirm'),
+});
+
+export const resetRequestInput = z.object({ email });
+
+export const resetConfirmInput = z
+  .object({ token: z.string({ error: 'The link is incomplete' }).min(20).max(200), newPassword })
+  .superRefine(refinePassword('newPassword'));
+
+export const renameDeviceInput = z.object({
+  name: z.string({ error: 'Name is required' }).trim().min(1, 'Name is required').max(80, 'Use at most 80 characters'),
+});
+
+export const adminUserUpdateInput = z
+  .object({ disabled: z.boolean().optional(), role: z.enum(['reader', 'admin']).optional() })
+  .refine((value) => value.disabled !== undefined || value.role !== undefined, {
+    message: 'Send disabled and/or role',
+    path: ['disabled'],
+  });
+
+/** The account as the API shows it to its owner. */
+export interface AccountUser {
+  readonly id: string;
+  readonly email: string;
+  readonly displayName: string;
+  readonly role: 'reader' | 'admin';
+}
+
+/** Answer of register and login. */
+export interface SignedIn {
+  readonly user: AccountUser;
+  readonly accessToken: string;
+  readonly refreshToken: string;
+}
+
+export interface TokenPair {
+  readonly accessToken: string;
+  readonly refreshToken: string;
+}
+
+/** A signed-in device, as listed on the reader's devices page. */
+export interface DeviceSessionView {
+  readonly id: string;
+  readonly name: string;
+  readonly createdAt: string;
+  readonly lastSeenAt: string;
+  readonly current: boolean;
+}
+
+/** One account as the admin page lists it. */
+export interface AdminUserView extends AccountUser {
+  readonly createdAt: string;
+  readonly lastSeenAt: string | null;
+  readonly disabled: boolean;
+  readonly storedBytes: number;
+}
+
+/** One message caught by the development mail inbox. */
+export interface CaughtMail {
+  readonly id: string;
+  readonly receivedAt: string;
+  readonly from: string;
+  readonly to: string[];
+  readonly subject: string;
+  readonly text: string;
+}

@@ -1,0 +1,40 @@
+import { HttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { RouterLink } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+
+import { AccountPage } from '../account-page/account-page';
+import { fieldError } from '../field-errors';
+import { FormSubmission } from '../form-submission';
+
+/** Ask for a link to choose a new password. The answer never says whether the address exists. */
+@Component({
+  selector: 'll-forgot-password',
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, AccountPage],
+  templateUrl: './forgot-password.html',
+  styleUrl: '../account-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ForgotPassword {
+  private readonly http = inject(HttpClient);
+
+  protected readonly form = inject(FormBuilder).nonNullable.group({
+    email: ['', [Validators.required, Validators.email]],
+  });
+  protected readonly sent = signal('');
+  protected readonly submission = new FormSubmission();
+  protected readonly fieldError = fieldError;
+
+  protected async requestLink(): Promise<void> {
+    await this.submission.submit(this.form, async () => {
+      const answer = await firstValueFrom(
+        this.http.post<{ message: string }>('/api/auth/password-reset/request', this.form.getRawValue()),
+      );
+      this.sent.set(answer.message);
+    });
+  }
+}

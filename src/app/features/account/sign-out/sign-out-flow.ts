@@ -1,0 +1,29 @@
+import { inject, Injectable } from '@angular/core';
+import { MatDialog } from '@angular/material/dialog';
+import { Router } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+
+import { Auth } from '../../../core/auth/auth';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { SignOutDialog, type SignOutChoice, type SignOutDialogData } from './sign-out-dialog';
+
+/** Signing out: ask keep-or-erase (with a warning about unsynced changes), then do it. */
+@Injectable({ providedIn: 'root' })
+export class SignOutFlow {
+  private readonly auth = inject(Auth);
+  private readonly journal = inject(LocalJournal);
+  private readonly dialog = inject(MatDialog);
+  private readonly router = inject(Router);
+
+  async start(): Promise<void> {
+    const user = this.auth.user();
+    if (!user) return;
+    const data: SignOutDialogData = { pendingChanges: await this.journal.pendingChanges() };
+    const ref = this.dialog.open<SignOutDialog, SignOutDialogData, SignOutChoice>(SignOutDialog, { data, width: '480px' });
+    const choice = await firstValueFrom(ref.afterClosed());
+    if (!choice) return;
+    await this.auth.signOut();
+    if (choice === 'erase') await this.journal.erase(user.id);
+    await this.router.navigateByUrl('/sign-in');
+  }
+}

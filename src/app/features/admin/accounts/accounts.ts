@@ -1,0 +1,61 @@
+import { DatePipe, DecimalPipe } from '@angular/common';
+import { HttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatSlideToggleModule } from '@angular/material/slide-toggle';
+import { MatTableModule } from '@angular/material/table';
+import { RouterLink } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+
+import type { AdminUserView } from '@shared/account/account-input';
+
+import { Auth } from '../../../core/auth/auth';
+import { readableError } from '../../../core/http/api-error-message';
+
+/** Admins see accounts (never their journals), and can disable one or change its role. */
+@Component({
+  selector: 'll-accounts',
+  imports: [DatePipe, DecimalPipe, RouterLink, MatButtonModule, MatSlideToggleModule, MatTableModule],
+  templateUrl: './accounts.html',
+  styleUrl: './accounts.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class Accounts {
+  private readonly http = inject(HttpClient);
+  protected readonly me = inject(Auth).user;
+
+  protected readonly columns = ['name', 'email', 'role', 'created', 'lastSeen', 'stored', 'enabled'];
+  protected readonly users = signal<readonly AdminUserView[]>([]);
+  protected readonly problem = signal('');
+
+  constructor() {
+    void this.load();
+  }
+
+  private async load(): Promise<void> {
+    try {
+      this.users.set(await firstValueFrom(this.http.get<AdminUserView[]>('/api/admin/users')));
+    } catch (error) {
+      this.problem.set(readableError(error).message);
+    }
+  }
+
+  protected setEnabled(user: AdminUserView, enabled: boolean): Promise<void> {
+    return this.update(user, { disabled: !enabled });
+  }
+
+  protected toggleAdmin(user: AdminUserView): Promise<void> {
+    return this.update(user, { role: user.role === 'admin' ? 'reader' : 'admin' });
+  }
+
+  private async update(user: AdminUserView, change: Partial<Pick<AdminUserView, 'disabled' | 'role'>>): Promise<void> {
+    try {
+      const updated = await firstValueFrom(this.http.patch<AdminUserView>(`/api/admin/users/${user.id}`, change));
+      this.users.update((list) => list.map((u) => (u.id === updated.id ? updated : u)));
+      this.problem.set('');
+    } catch (error) {
+      this.problem.set(readableError(error).message);
+      this.users.update((list) => [...list]); // put the toggle back as it was
+    }
+  }
+}

@@ -1,0 +1,43 @@
+import { HttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { firstValueFrom } from 'rxjs';
+
+import { Auth } from '../../../core/auth/auth';
+import { fieldError } from '../../account/field-errors';
+import { FormSubmission } from '../../account/form-submission';
+import { passwordPolicy } from '../../account/password-validator';
+
+/** Change the password; other devices are signed out, this one stays signed in. */
+@Component({
+  selector: 'll-change-password',
+  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule],
+  templateUrl: './change-password.html',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ChangePassword {
+  private readonly http = inject(HttpClient);
+  private readonly auth = inject(Auth);
+
+  protected readonly form = inject(FormBuilder).nonNullable.group({
+    currentPassword: ['', Validators.required],
+    newPassword: [
+      '',
+      [Validators.required, passwordPolicy(() => ({ email: this.auth.user()?.email, displayName: this.auth.user()?.displayName }))],
+    ],
+  });
+  protected readonly message = signal('');
+  protected readonly submission = new FormSubmission();
+  protected readonly fieldError = fieldError;
+
+  protected async changePassword(): Promise<void> {
+    this.message.set('');
+    if (await this.submission.submit(this.form, () => firstValueFrom(this.http.post('/api/auth/password', this.form.getRawValue())))) {
+      this.form.reset();
+      this.message.set('Password changed. Your other devices were signed out and will ask for it.');
+    }
+  }
+}

@@ -1,0 +1,44 @@
+import { HttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { Router } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+
+import { Auth } from '../../../core/auth/auth';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { fieldError } from '../../account/field-errors';
+import { FormSubmission } from '../../account/form-submission';
+
+/** Delete the account and all its data, on the server and on this device, after the password. */
+@Component({
+  selector: 'll-delete-account',
+  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule],
+  templateUrl: './delete-account.html',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class DeleteAccount {
+  private readonly http = inject(HttpClient);
+  private readonly auth = inject(Auth);
+  private readonly journal = inject(LocalJournal);
+  private readonly router = inject(Router);
+
+  protected readonly form = inject(FormBuilder).nonNullable.group({ password: ['', Validators.required] });
+  protected readonly confirming = signal(false);
+  protected readonly submission = new FormSubmission();
+  protected readonly fieldError = fieldError;
+
+  protected async deleteAccount(): Promise<void> {
+    const user = this.auth.user();
+    if (!user) return;
+    const deleted = await this.submission.submit(this.form, () =>
+      firstValueFrom(this.http.request('DELETE', '/api/auth/account', { body: this.form.getRawValue() })),
+    );
+    if (!deleted) return;
+    await this.auth.signOut();
+    await this.journal.erase(user.id);
+    await this.router.navigateByUrl('/register');
+  }
+}

@@ -1,0 +1,26 @@
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+
+import { Auth } from '../../core/auth/auth';
+import { SignOutFlow } from '../account/sign-out/sign-out-flow';
+import { ChangePassword } from './change-password/change-password';
+import { DeleteAccount } from './delete-account/delete-account';
+import { Devices } from './devices/devices';
+
+/** The reader's account, devices and this device's storage. */
+@Component({
+  selector: 'll-settings',
+  imports: [MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount],
+  templateUrl: './settings.html',
+  styleUrl: './settings.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class Settings {
+  protected readonly user = inject(Auth).user;
+  private readonly signOutFlow = inject(SignOutFlow);
+
+  protected signOut(): Promise<void> {
+    return this.signOutFlow.start();
+  }
+}

@@ -1,0 +1,99 @@
+import type { DataSource } from 'typeorm';
+
+import type { AccountUser, LoginInput, RegisterInput, SignedIn } from '../../../shared/account/account-input';
+import type { ServerConfig } from '../config';
+import { AppError } from '../errors';
+import { User } from '../data-access/entities/user.entity';
+import { welcomeMail } from './account-mail';
+import type { DeviceSessions } from './device-sessions';
+import type { Mailer } from './mailer';
+import { hashPassword, verifyPassword } from './passwords';
+
+/** The same answer for an unknown e-mail and a wrong password, so neither can be probed. */
+const SIGN_IN_REFUSED = new AppError(401, 'invalid_credentials', 'E-mail or password is not right');
+
+/** A hash to compare against when the e-mail is unknown, so both paths take as long. */
+let decoyHash: Promise<string> | undefined;
+
+export function publicUser(user: User): AccountUser {
+  return { id: user.id, email: user.email, displayName: user.displayName, role: user.role };
+}
+
+/** Registration, sign-in, password change and account deletion. */
+export class Accounts {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly config: ServerConfig,
+    private readonly sessions: DeviceSessions,
+    private readonly mailer: Mailer,
+  ) {}
+
+  private get users() {
+    return this.dataSource.getRepository(User);
+  }
+
+  async register(input: RegisterInput, userAgent?: string): Promise<SignedIn> {
+    if (await this.users.existsBy({ email: input.email })) {
+      throw new AppError(409, 'email_taken', 'An account already uses this e-mail', { email: 'An account already uses this e-mail' });
+    }
+    const passwordHash = await hashPassword(input.password, this.config.bcryptCost);
+    const role = input.email === this.config.adminEmail ? 'admin' : 'reader';
+    let user: User;
+    try {
+      user = await this.users.save(this.users.create({ email: input.email, displayName: input.displayName, passwordHash, role }));
+    } catch (err) {
+      // Two registrations racing for one address: the unique index decides.
+      if ((err as { code?: string }).code === '23505') {
+        throw new AppError(409, 'email_taken', 'An account already uses this e-mail', { email: 'An account already uses this e-mail' });
+      }
+      throw err;
+    }
+    const tokens = await this.sessions.start(user, userAgent, input.deviceName);
+    // The welcome note must not hold up or fail the registration.
+    this.mailer.send(welcomeMail(user.email, user.displayName, this.config.publicUrl)).catch((err: unknown) => {
+      console.warn(`welcome e-mail to user ${user.id} not sent: ${(err as Error).message}`);
+    });
+    return { user: publicUser(user), ...tokens };
+  }
+
+  async login(input: LoginInput, userAgent?: string): Promise<SignedIn> {
+    const user = await this.users.findOneBy({ email: input.email });
+    if (!user) {
+      decoyHash ??= hashPassword('decoy password for unknown e-mails', this.config.bcryptCost);
+      await verifyPassword(input.password, await decoyHash);
+      throw SIGN_IN_REFUSED;
+    }
+    if (!(await verifyPassword(input.password, user.passwordHash))) throw SIGN_IN_REFUSED;
+    if (user.disabledAt) throw new AppError(403, 'account_disabled', 'This account is disabled; ask an admin to enable it');
+    const tokens = await this.sessions.start(user, userAgent, input.deviceName);
+    return { user: publicUser(user), ...tokens };
+  }
+
+  async find(userId: string): Promise<User> {
+    const user = await this.users.findOneBy({ id: userId });
+    if (!user) throw new AppError(401, 'unauthenticated', 'This account no longer exists');
+    return user;
+  }
+
+  /** Changes the password and signs out every other device (a common precaution). */
+  async changePassword(userId: string, sessionId: string, currentPassword: string, newPassword: string): Promise<void> {
+    const user = await this.find(userId);
+    if (!(await verifyPassword(currentPassword, user.passwordHash))) {
+      throw new AppError(400, 'invalid_input', 'The current password is not right', { currentPassword: 'The current password is not right' });
+    }
+    const passwordHash = await hashPassword(newPassword, this.config.bcryptCost);
+    await this.dataSource.transaction(async (manager) => {
+      await manager.update(User, { id: userId }, { passwordHash });
+      await this.sessions.revokeAll(manager, userId, sessionId);
+    });
+  }
+
+  /** Deletes the account and, through foreign keys, everything it owns. */
+  async deleteAccount(userId: string, password: string): Promise<void> {
+    const user = await this.find(userId);
+    if (!(await verifyPassword(password, user.passwordHash))) {
+      throw new AppError(400, 'invalid_input', 'The password is not right', { password: 'The password is not right' });
+    }
+    await this.users.delete({ id: userId });
+  }
+}

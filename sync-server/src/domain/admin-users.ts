@@ -1,0 +1,50 @@
+import type { DataSource } from 'typeorm';
+
+import type { AdminUserView } from '../../../shared/account/account-input';
+import { AppError } from '../errors';
+import { User, type Role } from '../data-access/entities/user.entity';
+import { storedBytesByUser } from '../data-access/user-data-size';
+
+/** What admins may see and change about accounts. Journals themselves stay private. */
+export class AdminUsers {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async list(): Promise<AdminUserView[]> {
+    const users = await this.dataSource.getRepository(User).find({ order: { createdAt: 'ASC' } });
+    const sizes = await storedBytesByUser(this.dataSource);
+    return users.map((user) => ({
+      id: user.id,
+      email: user.email,
+      displayName: user.displayName,
+      role: user.role,
+      createdAt: user.createdAt.toISOString(),
+      lastSeenAt: user.lastSeenAt?.toISOString() ?? null,
+      disabled: user.disabledAt !== null,
+      storedBytes: sizes.get(user.id) ?? 0,
+    }));
+  }
+
+  /**
+   * Disables/enables an account or grants/removes admin. An admin cannot lock themselves out,
+   * so there is always someone left who can undo a mistake.
+   */
+  async update(actingAdminId: string, userId: string, change: { disabled?: boolean; role?: Role }): Promise<AdminUserView> {
+    if (userId === actingAdminId && (change.disabled === true || change.role === 'reader')) {
+      throw new AppError(400, 'invalid_input', 'You cannot disable your own account or remove your own admin role', {
+        [change.disabled === true ? 'disabled' : 'role']: 'You cannot change this on your own account',
+      });
+    }
+    const users = this.dataSource.getRepository(User);
+    const user = await users.findOneBy({ id: userId });
+    if (!user) throw new AppError(404, 'not_found', 'No such account');
+    await this.dataSource.transaction(async (manager) => {
+      if (change.role) await manager.update(User, { id: userId }, { role: change.role });
+      if (change.disabled !== undefined) {
+        await manager.update(User, { id: userId }, { disabledAt: change.disabled ? (user.disabledAt ?? new Date()) : null });
+      }
+    });
+    const updated = (await this.list()).find((view) => view.id === userId);
+    if (!updated) throw new AppError(404, 'not_found', 'No such account');
+    return updated;
+  }
+}

@@ -1,0 +1,120 @@
+import { IsNull, type DataSource, type EntityManager } from 'typeorm';
+
+import type { TokenPair } from '../../../shared/account/account-input';
+import { AppError } from '../errors';
+import { DeviceSession } from '../data-access/entities/device-session.entity';
+import { RefreshToken } from '../data-access/entities/refresh-token.entity';
+import type { User } from '../data-access/entities/user.entity';
+import { signAccessToken } from './access-tokens';
+import { deviceNameFromUserAgent } from './device-name';
+import { hashSecretToken, newSecretToken } from './secret-tokens';
+
+/** Readers stay signed in on a device for months of offline use; each refresh extends this. */
+export const REFRESH_TOKEN_DAYS = 90;
+
+const refreshExpiry = () => new Date(Date.now() + REFRESH_TOKEN_DAYS * 24 * 3600 * 1000);
+
+/** Device sessions and their rotating refresh tokens (RFC 9700 §4.14.2). */
+export class DeviceSessions {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly jwtSecret: Uint8Array,
+  ) {}
+
+  /** A new device session for a successful sign-in, with its first token pair. */
+  async start(user: User, userAgent: string | undefined, name?: string): Promise<TokenPair> {
+    return this.dataSource.transaction(async (manager) => {
+      const session = await manager.save(
+        manager.create(DeviceSession, {
+          userId: user.id,
+          name: name ?? deviceNameFromUserAgent(userAgent),
+          userAgent: (userAgent ?? '').slice(0, 500),
+        }),
+      );
+      await manager.update('users', { id: user.id }, { lastSeenAt: new Date() });
+      return this.issue(manager, session.id, user);
+    });
+  }
+
+  /**
+   * Exchanges a refresh token for a new pair. A token that was already exchanged means two
+   * parties hold it (one of them perhaps an attacker), so the whole family is revoked.
+   */
+  async rotate(refreshToken: string): Promise<TokenPair> {
+    const tokenHash = hashSecretToken(refreshToken);
+    type Outcome = { pair: TokenPair } | { error: 'unknown' | 'revoked' | 'reused' | 'expired' | 'disabled' };
+    const outcome = await this.dataSource.transaction(async (manager): Promise<Outcome> => {
+      const token = await manager
+        .getRepository(RefreshToken)
+        .createQueryBuilder('token')
+        .innerJoinAndSelect('token.session', 'session')
+        .innerJoinAndSelect('session.user', 'user')
+        .where('token.tokenHash = :tokenHash', { tokenHash })
+        .setLock('pessimistic_write', undefined, ['token', 'session'])
+        .getOne();
+      if (!token || !token.session?.user) return { error: 'unknown' };
+      const { session } = token;
+      const user = session.user!;
+      if (session.revokedAt) return { error: 'revoked' };
+      if (token.usedAt) {
+        await manager.update(DeviceSession, { id: session.id }, { revokedAt: new Date() });
+        return { error: 'reused' };
+      }
+      if (token.expiresAt.getTime() <= Date.now()) return { error: 'expired' };
+      if (user.disabledAt) return { error: 'disabled' };
+
+      await manager.update(RefreshToken, { id: token.id }, { usedAt: new Date() });
+      await manager.update(DeviceSession, { id: session.id }, { lastSeenAt: new Date() });
+      await manager.update('users', { id: user.id }, { lastSeenAt: new Date() });
+      return { pair: await this.issue(manager, session.id, user) };
+    });
+    if ('pair' in outcome) return outcome.pair;
+    if (outcome.error === 'disabled') throw new AppError(403, 'account_disabled', 'This account is disabled');
+    const messages = {
+      unknown: 'This sign-in is not known; sign in again',
+      revoked: 'This device was signed out; sign in again',
+      reused: 'This sign-in was used twice, so it was ended for safety; sign in again',
+      expired: 'This sign-in has expired; sign in again',
+    } as const;
+    throw new AppError(401, `refresh_${outcome.error}`, messages[outcome.error]);
+  }
+
+  /** Ends a device session and every refresh token it issued. */
+  async revoke(userId: string, sessionId: string): Promise<boolean> {
+    const result = await this.dataSource
+      .getRepository(DeviceSession)
+      .update({ id: sessionId, userId, revokedAt: IsNull() }, { revokedAt: new Date() });
+    return (result.affected ?? 0) > 0;
+  }
+
+  /** Ends every session of a reader, optionally keeping one (after a password change). */
+  async revokeAll(manager: EntityManager, userId: string, keepSessionId?: string): Promise<void> {
+    const query = manager
+      .createQueryBuilder()
+      .update(DeviceSession)
+      .set({ revokedAt: () => 'now()' })
+      .where('user_id = :userId AND revoked_at IS NULL', { userId });
+    if (keepSessionId) query.andWhere('id <> :keepSessionId', { keepSessionId });
+    await query.execute();
+  }
+
+  list(userId: string): Promise<DeviceSession[]> {
+    return this.dataSource.getRepository(DeviceSession).find({
+      where: { userId, revokedAt: IsNull() },
+      order: { lastSeenAt: 'DESC' },
+    });
+  }
+
+  async rename(userId: string, sessionId: string, name: string): Promise<DeviceSession | null> {
+    const sessions = this.dataSource.getRepository(DeviceSession);
+    const result = await sessions.update({ id: sessionId, userId, revokedAt: IsNull() }, { name });
+    return (result.affected ?? 0) > 0 ? sessions.findOneBy({ id: sessionId }) : null;
+  }
+
+  private async issue(manager: EntityManager, sessionId: string, user: User): Promise<TokenPair> {
+    const refreshToken = newSecretToken();
+    await manager.insert(RefreshToken, { sessionId, tokenHash: hashSecretToken(refreshToken), expiresAt: refreshExpiry() });
+    const accessToken = await signAccessToken({ userId: user.id, sessionId, role: user.role }, this.jwtSecret);
+    return { accessToken, refreshToken };
+  }
+}

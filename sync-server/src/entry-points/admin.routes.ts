@@ -1,0 +1,30 @@
+import { Router } from 'express';
+
+import { adminUserUpdateInput } from '../../../shared/account/account-input';
+import type { AdminUsers } from '../domain/admin-users';
+import { readCaughtMail } from '../dev-inbox/caught-mail';
+import { AppError } from '../errors';
+import { parseInput } from './parse-input';
+import { callerOf } from './require-auth';
+
+/** `/api/admin` (behind requireAuth and requireAdmin). */
+export function adminRoutes(adminUsers: AdminUsers, devMailDir: string | null): Router {
+  const router = Router();
+
+  router.get('/users', async (_req, res) => {
+    res.json(await adminUsers.list());
+  });
+
+  router.patch('/users/:id', async (req, res) => {
+    const change = parseInput(adminUserUpdateInput, req.body);
+    res.json(await adminUsers.update(callerOf(res).userId, req.params['id']!, change));
+  });
+
+  /** Development only: what the local inbox caught, so a newcomer can follow a reset link. */
+  router.get('/mail', async (_req, res) => {
+    if (!devMailDir) throw new AppError(404, 'not_found', 'The mail inbox exists only in development');
+    res.json(await readCaughtMail(devMailDir));
+  });
+
+  return router;
+}
