@@ -68,7 +68,8 @@ export function goalPacing(input: GoalPacingInput): GoalPacing {
   const daysElapsed = Math.min(Math.max(gone, 0), daysInYear);
   const daysLeft = daysInYear - daysElapsed;
 
-  const expectedByToday = (target * daysElapsed) / daysInYear;
+  // The share of the year first, so the last day gives exactly the target (no rounding past it).
+  const expectedByToday = target * (daysElapsed / daysInYear);
   const difference = actual - expectedByToday;
   const tolerance = Math.max((target * 7) / daysInYear, 0.5);
   const status: PacingStatus = difference > tolerance ? 'ahead' : difference < -tolerance ? 'behind' : 'on-track';
