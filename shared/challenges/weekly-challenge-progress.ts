@@ -1,0 +1,58 @@
+import { isoWeekOf } from '../calendar/iso-week-of';
+import { IsoWeekSpan } from '../calendar/iso-week';
+import { isoWeeksOfYear } from '../calendar/iso-weeks-of-year';
+import { parseCalendarDay } from '../calendar/parse-calendar-day';
+import { booksFinishedIn } from './books-finished-in';
+import { ChallengeBook, ChallengeStatus } from './challenge-book';
+import { challengeStatus } from './challenge-status';
+
+export type WeekState = 'met' | 'missed' | 'upcoming';
+
+export interface ChallengeWeek extends IsoWeekSpan {
+  /** Books finished in this ISO week, earliest first. */
+  readonly bookIds: readonly string[];
+  /** 'upcoming' covers the week in progress until a book is finished or the week ends. */
+  readonly state: WeekState;
+}
+
+export interface WeeklyChallengeProgress extends ChallengeStatus {
+  readonly weeks: readonly ChallengeWeek[];
+}
+
+/**
+ * A "book a week" challenge over the ISO 8601 week-numbering year `year` (52 or 53 weeks,
+ * Monday to Sunday; week 1 can start in December and the last week end in January). A week is
+ * met by any book finished in it.
+ *
+ * @param today the reader's local date, 'YYYY-MM-DD': weeks ended before it are missed if unmet.
+ * @example
+ * const progress = weeklyChallengeProgress({ year: 2026, books, today: '2026-03-04' });
+ * progress.weeks.length // 53
+ * progress.weeks[52].sunday // '2027-01-03'
+ */
+export function weeklyChallengeProgress(input: {
+  readonly year: number;
+  readonly books: readonly ChallengeBook[];
+  readonly today: string;
+}): WeeklyChallengeProgress {
+  const { year, today } = input;
+  parseCalendarDay(today);
+  const spans = isoWeeksOfYear(year);
+  const period = { start: spans[0].monday, end: spans[spans.length - 1].sunday };
+
+  const byWeek = new Map<number, string[]>();
+  for (const book of booksFinishedIn(input.books, period)) {
+    const { week } = isoWeekOf(book.finishedOn);
+    byWeek.set(week, [...(byWeek.get(week) ?? []), book.id]);
+  }
+
+  const weeks = spans.map((span): ChallengeWeek => {
+    const bookIds = byWeek.get(span.week) ?? [];
+    // Same-shaped ISO 8601 dates sort as text in time order (RFC 3339 §5.1).
+    const state: WeekState = bookIds.length > 0 ? 'met' : span.sunday < today ? 'missed' : 'upcoming';
+    return { ...span, bookIds, state };
+  });
+  const done = weeks.filter((week) => week.state === 'met').length;
+  const counted = weeks.flatMap((week) => week.bookIds);
+  return { ...challengeStatus({ period, done, target: weeks.length, counted }), weeks };
+}
