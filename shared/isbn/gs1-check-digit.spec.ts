@@ -37,7 +37,7 @@ describe('gs1CheckDigit', () => {
         const body = prefix + rest;
         const accepted = [...'0123456789'].filter((c) => parse(body + c) !== null);
         fc.pre(accepted.length > 0);
-        expect(accepted).toEqual([String(gs1CheckDigit(body))]);
+        return accepted.length === 1 && accepted[0] === String(gs1CheckDigit(body));
       }),
       { numRuns: 200 },
     );

@@ -30,10 +30,9 @@ describe('isValidIsbn10', () => {
   it('agrees with isbn3 (npm reference) wherever isbn3 knows the range', () => {
     fc.assert(
       fc.property(validIsbn10, (isbn) => {
-        expect(isValidIsbn10(isbn)).toBeTrue();
         // isbn3 also checks the range is assigned, so it may say null for a valid check digit.
         const reference = parse(isbn);
-        if (reference !== null) expect(reference.isbn10).toBe(isbn);
+        return isValidIsbn10(isbn) && (reference === null || reference.isbn10 === isbn);
       }),
       { numRuns: 300 },
     );
@@ -43,8 +42,7 @@ describe('isValidIsbn10', () => {
     fc.assert(
       fc.property(validIsbn10, fc.nat({ max: 8 }), fc.integer({ min: 1, max: 9 }), (isbn, at, shift) => {
         const corrupted = isbn.slice(0, at) + String((Number(isbn[at]) + shift) % 10) + isbn.slice(at + 1);
-        expect(isValidIsbn10(corrupted)).toBeFalse();
-        expect(parse(corrupted)).toBeNull();
+        return !isValidIsbn10(corrupted) && parse(corrupted) === null;
       }),
       { numRuns: 300 },
     );
@@ -56,8 +54,7 @@ describe('isValidIsbn10', () => {
       fc.property(validIsbn10, fc.nat({ max: 7 }), (isbn, at) => {
         fc.pre(isbn[at] !== isbn[at + 1]);
         const swapped = isbn.slice(0, at) + isbn[at + 1] + isbn[at] + isbn.slice(at + 2);
-        expect(isValidIsbn10(swapped)).toBeFalse();
-        expect(parse(swapped)).toBeNull();
+        return !isValidIsbn10(swapped) && parse(swapped) === null;
       }),
       { numRuns: 300 },
     );

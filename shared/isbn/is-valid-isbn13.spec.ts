@@ -31,9 +31,8 @@ describe('isValidIsbn13', () => {
   it('agrees with isbn3 (npm reference) wherever isbn3 knows the range', () => {
     fc.assert(
       fc.property(validIsbn13, (isbn) => {
-        expect(isValidIsbn13(isbn)).toBeTrue();
         const reference = parse(isbn);
-        if (reference !== null) expect(reference.isbn13).toBe(isbn);
+        return isValidIsbn13(isbn) && (reference === null || reference.isbn13 === isbn);
       }),
       { numRuns: 300 },
     );
@@ -44,8 +43,7 @@ describe('isValidIsbn13', () => {
     fc.assert(
       fc.property(validIsbn13, fc.integer({ min: 3, max: 12 }), fc.integer({ min: 1, max: 9 }), (isbn, at, shift) => {
         const corrupted = isbn.slice(0, at) + String((Number(isbn[at]) + shift) % 10) + isbn.slice(at + 1);
-        expect(isValidIsbn13(corrupted)).toBeFalse();
-        expect(parse(corrupted)).toBeNull();
+        return !isValidIsbn13(corrupted) && parse(corrupted) === null;
       }),
       { numRuns: 300 },
     );

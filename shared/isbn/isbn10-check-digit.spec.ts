@@ -28,7 +28,7 @@ describe('isbn10CheckDigit', () => {
       fc.property(fc.stringMatching(/^\d{9}$/), (body) => {
         const accepted = [...'0123456789X'].filter((c) => parse(body + c) !== null);
         fc.pre(accepted.length > 0);
-        expect(accepted).toEqual([isbn10CheckDigit(body) as string]);
+        return accepted.length === 1 && accepted[0] === isbn10CheckDigit(body);
       }),
       { numRuns: 200 },
     );

@@ -27,8 +27,8 @@ describe('normalizeIsbn', () => {
         const reference = asIsbn13(input);
         const ours = normalizeIsbn(input);
         // isbn3 also rejects unassigned ranges, so only its "valid" answers bind us.
-        if (reference !== null) expect(ours).toBe(reference);
-        else if (ours !== null) expect(ours).toMatch(/^97[89]\d{10}$/);
+        if (reference !== null) return ours === reference;
+        return ours === null || /^97[89]\d{10}$/.test(ours);
       }),
       { numRuns: 500 },
     );

@@ -14,7 +14,7 @@ describe('dayFromIndex', () => {
   it('is the inverse of dayIndex over years 0000–9999', () => {
     fc.assert(
       fc.property(fc.integer({ min: dayIndex('0000-01-01'), max: dayIndex('9999-12-31') }), (index) => {
-        expect(dayIndex(dayFromIndex(index))).toBe(index);
+        return dayIndex(dayFromIndex(index)) === index;
       }),
     );
   });

@@ -29,7 +29,7 @@ describe('dayIndex', () => {
       fc.property(fc.date({ min: new Date('0001-01-01T00:00:00Z'), max: new Date('9999-12-31T00:00:00Z'), noInvalidDate: true }), (date) => {
         const day = date.toISOString().slice(0, 10);
         const epoch = new Date('1970-01-01T00:00:00Z');
-        expect(dayIndex(day)).toBe(differenceInCalendarDays(date, epoch, { in: tz('UTC') }));
+        return dayIndex(day) === differenceInCalendarDays(date, epoch, { in: tz('UTC') });
       }),
       { numRuns: 300 },
     );
