@@ -7,7 +7,8 @@ import { streaks } from './streaks';
 describe('streaks', () => {
   it('counts a run ending today', () => {
     // Hand-worked: 6, 7, 8 March are three days in a row; 1 March stands alone.
-    expect(streaks(['2026-03-06', '2026-03-07', '2026-03-08', '2026-03-01'], '2026-03-08')).toEqual({ current: 3, longest: 3 });
+    const days = ['2026-03-06', '2026-03-07', '2026-03-08', '2026-03-01'];
+    expect(streaks(days, '2026-03-08')).toEqual({ current: 3, longest: 3 });
   });
 
   it('keeps the streak alive when the last reading day is yesterday (the reader still has today)', () => {
@@ -47,8 +48,8 @@ describe('streaks', () => {
     // Every evening 22:00–22:30 Los Angeles time, 6–10 March 2026; DST starts 8 March
     // (EPAct 2005), so 22:00 is 06:00Z before and 05:00Z from 8 March. In UTC the same sessions
     // fall on 7–11 March; in Tokyo (UTC+9) on 7–11 March too, at 14:00/15:00 JST.
-    const starts = ['2026-03-07T06:00:00Z', '2026-03-08T06:00:00Z', '2026-03-09T05:00:00Z', '2026-03-10T05:00:00Z', '2026-03-11T05:00:00Z'];
-    const sessions = starts.map((s) => ({ startedAt: s, endedAt: new Date(Date.parse(s) + 1_800_000).toISOString(), activeMinutes: 30 }));
+    const starts = ['2026-03-07T06:00', '2026-03-08T06:00', '2026-03-09T05:00', '2026-03-10T05:00', '2026-03-11T05:00'];
+    const sessions = starts.map((s) => ({ startedAt: `${s}:00Z`, endedAt: `${s.slice(0, -2)}30:00Z`, activeMinutes: 30 }));
     const days = (zone: string) => dailyLog(sessions, zone).map((e) => e.day);
     expect(days('America/Los_Angeles')).toEqual(['2026-03-06', '2026-03-07', '2026-03-08', '2026-03-09', '2026-03-10']);
     expect(streaks(days('America/Los_Angeles'), '2026-03-10')).toEqual({ current: 5, longest: 5 });
@@ -66,7 +67,8 @@ describe('streaks', () => {
         (date, n, endOffset) => {
           const utc = tz('UTC');
           const today = format(date, 'yyyy-MM-dd', { in: utc });
-          const run = Array.from({ length: n }, (_, i) => format(addDays(date, -i - endOffset, { in: utc }), 'yyyy-MM-dd', { in: utc }));
+          const dayBefore = (i: number) => format(addDays(date, -i - endOffset, { in: utc }), 'yyyy-MM-dd', { in: utc });
+          const run = Array.from({ length: n }, (_, i) => dayBefore(i));
           const whole = streaks(run, today);
           if (whole.current !== n || whole.longest !== n) return false;
           if (n < 3) return true;

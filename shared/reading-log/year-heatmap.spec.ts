@@ -64,7 +64,8 @@ describe('yearHeatmap', () => {
     // 2028-12-31T15:30Z is 00:30 JST on 1 January 2029 and 07:30 PST on 31 December 2028.
     const sessions = [{ startedAt: '2028-12-31T15:30:00Z', endedAt: '2028-12-31T16:30:00Z', activeMinutes: 60 }];
     expect(yearHeatmap(dailyLog(sessions, 'Asia/Tokyo'), 2028)[365].level).toBe(0);
-    expect(yearHeatmap(dailyLog(sessions, 'America/Los_Angeles'), 2028)[365]).toEqual({ day: '2028-12-31', minutes: 60, level: 4 });
+    const losAngeles = yearHeatmap(dailyLog(sessions, 'America/Los_Angeles'), 2028);
+    expect(losAngeles[365]).toEqual({ day: '2028-12-31', minutes: 60, level: 4 });
     expect(yearHeatmap(dailyLog(sessions, 'Asia/Tokyo'), 2029)[0]).toEqual({ day: '2029-01-01', minutes: 60, level: 4 });
   });
 

@@ -41,7 +41,8 @@ export function yearHeatmap(
 
   const minutesByDay = new Map<string, number>();
   for (const entry of log) {
-    if (entry.day.startsWith(`${yyyy}-`)) minutesByDay.set(entry.day, (minutesByDay.get(entry.day) ?? 0) + entry.minutes);
+    if (!entry.day.startsWith(`${yyyy}-`)) continue;
+    minutesByDay.set(entry.day, (minutesByDay.get(entry.day) ?? 0) + entry.minutes);
   }
 
   const cells: HeatmapCell[] = [];

@@ -1,8 +1,10 @@
 import { Pace } from './pace';
 import { ASSUMED_BOOK_WORDS, SILENT_READING_WPM, WORDS_PER_PAGE } from './reading-rates';
 
+/** Brysbaert (2019) gives separate silent reading rates for fiction and non-fiction. */
 export type Genre = 'fiction' | 'nonfiction';
 
+/** What `fallbackPace` may know about the book, by format. */
 export type FallbackPaceInput =
   | { readonly format: 'print'; readonly genre?: Genre; readonly wordsPerPage?: number }
   | {
@@ -26,9 +28,9 @@ export type FallbackPaceInput =
  * the playback speed, since at 1× one listened minute takes one real minute.
  *
  * @example
- * fallbackPace({ format: 'print', genre: 'fiction' })    // { format: 'print', rate: 56.72… } pages/hour (260 × 60 / 275)
- * fallbackPace({ format: 'ebook', pageCount: 300 })      // { format: 'ebook', rate: 17.30… } percent/hour
- * fallbackPace({ format: 'audiobook', playbackSpeed: 1.5 }) // { format: 'audiobook', rate: 1.5 }
+ * fallbackPace({ format: 'print', genre: 'fiction' })      // rate 56.72… pages/hour (260 × 60 / 275)
+ * fallbackPace({ format: 'ebook', pageCount: 300 })        // rate 17.30… percent/hour
+ * fallbackPace({ format: 'audiobook', playbackSpeed: 1.5 }) // rate 1.5 listened min per minute
  */
 export function fallbackPace(input: FallbackPaceInput): Pace {
   if (input.format === 'audiobook') {

@@ -4,6 +4,7 @@ import { dayIndex } from '../reading-log/day-index';
 import { minutesToCover } from './minutes-to-cover';
 import { Pace } from './pace';
 
+/** What `forecastFinish` needs. */
 export interface ForecastInput {
   /** What is left, in the pace's unit: pages, percent, or listened minutes. */
   readonly remaining: number;
@@ -16,6 +17,7 @@ export interface ForecastInput {
   readonly timeZone: string;
 }
 
+/** When the reader should finish. */
 export interface Forecast {
   /** Real minutes of reading left. */
   readonly minutesLeft: number;

@@ -77,11 +77,15 @@ describe('personalPace', () => {
     fc.assert(
       fc.property(
         fc.array(fc.oneof(session, tying), { minLength: 3, maxLength: 25 }).chain((sessions) =>
-          fc.tuple(fc.constant(sessions), fc.shuffledSubarray(sessions, { minLength: sessions.length, maxLength: sessions.length })),
+          fc.tuple(
+            fc.constant(sessions),
+            fc.shuffledSubarray(sessions, { minLength: sessions.length, maxLength: sessions.length }),
+          ),
         ),
         ([sessions, shuffled]) => {
-        const rate = personalPace(sessions, 'print')?.rate;
-        return personalPace(shuffled, 'print')?.rate === rate && personalPace([...sessions].reverse(), 'print')?.rate === rate;
+          const rate = personalPace(sessions, 'print')?.rate;
+          const reversed = [...sessions].reverse();
+          return personalPace(shuffled, 'print')?.rate === rate && personalPace(reversed, 'print')?.rate === rate;
         },
       ),
     );

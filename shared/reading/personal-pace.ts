@@ -1,6 +1,7 @@
 import { Pace } from './pace';
 import { PaceSession, ReadingFormat } from './pace-session';
 
+/** Tuning for `personalPace`. */
 export interface PersonalPaceOptions {
   /** How many of the most recent usable sessions to use (default 10). */
   readonly recent?: number;
@@ -17,11 +18,13 @@ export interface PersonalPaceOptions {
  * sessions are usable: then use `fallbackPace`.
  *
  * @example
- * personalPace([
- *   { format: 'print', startedAt: '2026-03-01T20:00:00Z', endedAt: '2026-03-01T21:00:00Z', activeMinutes: 60, fromPosition: 0, toPosition: 30 },
- *   { format: 'print', startedAt: '2026-03-02T20:00:00Z', endedAt: '2026-03-02T20:30:00Z', activeMinutes: 30, fromPosition: 30, toPosition: 50 },
- *   { format: 'print', startedAt: '2026-03-03T20:00:00Z', endedAt: '2026-03-03T21:00:00Z', activeMinutes: 60, fromPosition: 50, toPosition: 75 },
- * ], 'print') // { format: 'print', rate: 30 } (median of 30, 40 and 25 pages per hour)
+ * const evening = (day: string, minutes: number, from: number, to: number) => ({
+ *   format: 'print' as const, startedAt: `${day}T20:00:00Z`, endedAt: `${day}T21:00:00Z`,
+ *   activeMinutes: minutes, fromPosition: from, toPosition: to,
+ * });
+ * personalPace([evening('2026-03-01', 60, 0, 30), evening('2026-03-02', 30, 30, 50),
+ *               evening('2026-03-03', 60, 50, 75)], 'print')
+ * // { format: 'print', rate: 30 } (median of 30, 40 and 25 pages per hour)
  */
 export function personalPace(
   sessions: readonly PaceSession[],

@@ -29,7 +29,9 @@ export function usualMinutesPerDay(
   timeZone: string,
   windowDays = 28,
 ): number {
-  if (!Number.isInteger(windowDays) || windowDays < 1) throw new RangeError(`windowDays must be a whole number ≥ 1, not ${windowDays}`);
+  if (!Number.isInteger(windowDays) || windowDays < 1) {
+    throw new RangeError(`windowDays must be a whole number ≥ 1, not ${windowDays}`);
+  }
   const log = dailyLog(sessions, timeZone);
   const todayIndex = dayIndex(today);
   const windowStart = dayFromIndex(todayIndex - windowDays + 1);

@@ -1,11 +1,13 @@
 import { dayIndex } from '../reading-log/day-index';
 import { ForecastInput, forecastFinish } from './forecast-finish';
 
+/** A forecast's inputs plus the due date. */
 export interface DueForecastInput extends ForecastInput {
   /** Last local day, 'YYYY-MM-DD', on which finishing still counts (a library loan's due date). */
   readonly dueDate: string;
 }
 
+/** Whether the book will be finished in time, and what it would take. */
 export interface DueForecast {
   /** Whether the forecast finish date is on or before the due date. */
   readonly likely: boolean;
