@@ -27,6 +27,12 @@ describe('localDay', () => {
     expect(localDay('2026-03-09T07:30:00Z', 'America/Los_Angeles')).toBe('2026-03-09');
   });
 
+  it('puts the last millisecond before local midnight on the earlier day', () => {
+    // 2026-03-08T07:59:59.999Z is 23:59:59.999 PST, the last instant of 7 March in Los Angeles.
+    expect(localDay('2026-03-08T07:59:59.999Z', 'America/Los_Angeles')).toBe('2026-03-07');
+    expect(localDay('2026-03-08T08:00:00.000Z', 'America/Los_Angeles')).toBe('2026-03-08');
+  });
+
   it('honours an explicit offset in the timestamp', () => {
     // RFC 3339 §5.6: time-offset = "Z" / ("+" / "-") HH:MM; 2026-01-05T08:30+09:00 is 2026-01-04T23:30Z.
     expect(localDay('2026-01-05T08:30:00+09:00', 'UTC')).toBe('2026-01-04');

@@ -1,6 +1,8 @@
 import { tz } from '@date-fns/tz';
 import { format, isValid, parseISO } from 'date-fns';
 
+import { assertTimeZone } from './assert-time-zone';
+
 // Without an offset parseISO would read the time in the machine's zone; we never want that.
 const HAS_OFFSET = /T[^+-]*(?:Z|[+-]\d{2}(?::?\d{2})?)$/i;
 
@@ -19,15 +21,7 @@ export function localDay(timestamp: string, timeZone: string): string {
   if (!HAS_OFFSET.test(timestamp) || !isValid(instant)) {
     throw new RangeError(`Not an ISO 8601 timestamp with an offset: ${timestamp}`);
   }
-  if (!isValidTimeZone(timeZone)) throw new RangeError(`Unknown time zone: ${timeZone}`);
+  assertTimeZone(timeZone);
   return format(instant, 'yyyy-MM-dd', { in: tz(timeZone) });
 }
 
-function isValidTimeZone(timeZone: string): boolean {
-  try {
-    new Intl.DateTimeFormat('en', { timeZone });
-    return true;
-  } catch {
-    return false;
-  }
-}

@@ -15,7 +15,7 @@ describe('alphabetChallengeProgress', () => {
   const books = [
     book('q2', 'Quarry Songs', 'Lio Penhallow', '2026-05-02'),
     book('q1', 'The Quiet Orchard', 'Ada Okafor', '2026-02-11'),
-    book('m1', 'A Map of Salt', 'Ruth Ellery', '2026-03-03'),
+    book('m1', 'A Marsh of Lanterns', 'Ruth Ellery', '2026-03-03'),
     book('e1', 'Émile and the Tidewater Clock', 'Marisol Ávila', '2026-04-20'),
     book('z0', 'Zephyr Hollow', 'Tamsin Greer', '2025-12-31'), // before the period
     book('b0', 'Brackwater', 'Noor Halvorsen', undefined, 'reading'), // not finished

@@ -8,7 +8,7 @@ describe('alphabetKey', () => {
       // 1980; MARC 21 Bibliographic, field 245 second indicator "nonfiling characters", e.g. 4
       // for "The " — both from memory).
       expect(alphabetKey('The Quiet Orchard', 'title')).toBe('Q');
-      expect(alphabetKey('A Map of Salt', 'title')).toBe('M');
+      expect(alphabetKey('A Chart of Brine', 'title')).toBe('C');
       expect(alphabetKey('An Owl at Dusk', 'title')).toBe('O');
       expect(alphabetKey('the lantern keepers', 'title')).toBe('L');
     });

@@ -1,6 +1,6 @@
 import { TZDate } from '@date-fns/tz';
 import { format, startOfDay } from 'date-fns';
-import { assertTimeZone } from './assert-time-zone';
+import { assertTimeZone } from '../calendar/assert-time-zone';
 import { DailyLogEntry, LogSession } from './log-session';
 
 /**

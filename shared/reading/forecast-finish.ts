@@ -1,4 +1,4 @@
-import { assertTimeZone } from '../reading-log/assert-time-zone';
+import { assertTimeZone } from '../calendar/assert-time-zone';
 import { dayFromIndex } from '../reading-log/day-from-index';
 import { dayIndex } from '../reading-log/day-index';
 import { minutesToCover } from './minutes-to-cover';
