@@ -7,7 +7,7 @@ export interface ApiErrorBody {
   readonly error: {
     readonly code: string;
     readonly message: string;
-    readonly details: Readonly<Record<string, string>> | readonly Readonly<Record<string, unknown>>[] | null;
+    readonly details: Readonly<Record<string, string>> | readonly object[] | null;
   };
 }
 

@@ -10,6 +10,8 @@ import { PasswordResets } from './domain/password-resets';
 import { adminRoutes } from './entry-points/admin.routes';
 import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
+import { syncRoutes } from './entry-points/sync.routes';
+import { SyncStore } from './data-access/sync-store';
 import { healthRoutes } from './entry-points/health.routes';
 import { requireAdmin, requireAuth } from './entry-points/require-auth';
 import { attemptLimiter, securityHeaders } from './entry-points/security';
@@ -37,7 +39,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.set('trust proxy', 'loopback');
   app.use(securityHeaders());
 
-  app.use('/api', express.json({ limit: '1mb' }));
+  app.use('/api', express.json({ limit: '64kb' }));
   app.use('/api/health', healthRoutes(dataSource));
   app.use(
     '/api/auth',
@@ -46,6 +48,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
+  app.use('/api/sync', syncRoutes(new SyncStore(dataSource)));
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);
 

@@ -3,7 +3,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { ApiErrorBody } from '../../shared/api/api-error';
 
 /** Field-level problems, keyed by the field's path (for example `changes.3.value`). */
-export type ErrorDetails = Record<string, string> | readonly Record<string, unknown>[];
+export type ErrorDetails = Record<string, string> | readonly object[];
 
 /**
  * The one error type of the API. Route code throws it; the error middleware turns it into

@@ -1,7 +1,9 @@
 import type { DataSource } from 'typeorm';
 
+import { COLLECTIONS } from '../../../shared/sync/schema/collections';
+
 /** Tables whose rows belong to one reader (by `user_id`); their size is the reader's stored data. */
-export const USER_DATA_TABLES: readonly string[] = [];
+export const USER_DATA_TABLES: readonly string[] = Object.keys(COLLECTIONS);
 
 /** Bytes each user's rows take in PostgreSQL (`pg_column_size` of whole rows), by user id. */
 export async function storedBytesByUser(dataSource: DataSource): Promise<Map<string, number>> {

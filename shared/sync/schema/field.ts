@@ -1,0 +1,66 @@
+import { z } from 'zod';
+
+import { isValidIsbn13 } from '../../isbn/is-valid-isbn13';
+
+/** How a field is stored in PostgreSQL; a spec checks the TypeORM entities against this. */
+export type SqlType = 'text' | 'text[]' | 'double precision' | 'integer' | 'boolean' | 'uuid' | 'jsonb';
+
+/** One field of a synced collection: its validator and its column type. */
+export interface FieldSpec<T = unknown> {
+  readonly sqlType: SqlType;
+  readonly schema: z.ZodType<T>;
+}
+
+const spec = <T>(sqlType: SqlType, schema: z.ZodType<T>): FieldSpec<T> => ({ sqlType, schema });
+
+/** Calendar dates as readers think of them, 'YYYY-MM-DD' (RFC 3339 full-date). */
+const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
+/** Instants in UTC, as `Date.prototype.toISOString` writes them (RFC 3339, 'Z'). */
+const TIMESTAMP = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z$/;
+
+/**
+ * Field builders. Values are validated by type and range only: rows arrive in pieces from
+ * several devices, so no field is ever "required" on the server.
+ */
+export const field = {
+  text: (max: number) => spec('text', z.string().max(max, `must be at most ${max} characters`)),
+  optionalText: (max: number) => spec('text', z.string().max(max, `must be at most ${max} characters`).nullable()),
+  textList: (maxItems: number, maxLength: number) =>
+    spec(
+      'text[]',
+      z
+        .array(z.string().max(maxLength, `each entry must be at most ${maxLength} characters`))
+        .max(maxItems, `must have at most ${maxItems} entries`),
+    ),
+  choice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
+    spec('text', z.enum(values, { error: `must be one of ${values.join(', ')}` })),
+  optionalChoice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
+    spec('text', z.enum(values, { error: `must be one of ${values.join(', ')} or null` }).nullable()),
+  optionalInteger: (min: number, max: number) =>
+    spec('integer', z.number().int('must be a whole number').min(min, `must be at least ${min}`).max(max, `must be at most ${max}`).nullable()),
+  optionalNumber: (min: number, max: number, step?: number) => {
+    let number = z.number().min(min, `must be at least ${min}`).max(max, `must be at most ${max}`);
+    if (step) number = number.multipleOf(step, `must be in steps of ${step}`);
+    return spec('double precision', number.nullable());
+  },
+  boolean: () => spec('boolean', z.boolean({ error: 'must be true or false' })),
+  optionalDate: () => spec('text', z.string().regex(DATE, 'must be a date like 2026-03-08').nullable()),
+  optionalTimestamp: () => spec('text', z.string().regex(TIMESTAMP, 'must be a UTC time like 2026-03-08T09:30:00.000Z').nullable()),
+  optionalRef: () => spec('uuid', z.uuid('must be a row id (UUID)').nullable()),
+  /** ISBN-13 digits only (ISO 2108): the client converts an ISBN-10 before writing. */
+  optionalIsbn13: () =>
+    spec(
+      'text',
+      z
+        .string()
+        .regex(/^\d{13}$/, 'must be the 13 digits of an ISBN-13, without hyphens')
+        .refine(isValidIsbn13, 'is not a valid ISBN-13 (check digit)')
+        .nullable(),
+    ),
+  json: <T>(schema: z.ZodType<T>) => spec('jsonb', schema),
+};
+
+/** camelCase field name → its snake_case column. */
+export function columnName(fieldName: string): string {
+  return fieldName.replace(/[A-Z]/g, (letter) => `_${letter.toLowerCase()}`);
+}

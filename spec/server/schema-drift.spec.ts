@@ -1,0 +1,56 @@
+import { COLLECTIONS } from '../../shared/sync/schema/collections';
+import { columnName, type SqlType } from '../../shared/sync/schema/field';
+import { SYNCED_ENTITIES } from '../../sync-server/src/data-access/entities';
+import { testDataSource } from '../support/test-database';
+
+/** Columns every synced table has besides its fields. */
+const SYNC_COLUMNS = ['user_id', 'id', 'clocks', 'seq'];
+
+/** information_schema's name for each of our column types. */
+const INFORMATION_SCHEMA_TYPE: Record<SqlType, string> = {
+  text: 'text',
+  'text[]': 'ARRAY',
+  'double precision': 'double precision',
+  integer: 'integer',
+  boolean: 'boolean',
+  uuid: 'uuid',
+  jsonb: 'jsonb',
+};
+
+describe('The shared schema, the TypeORM entities and the migrated database agree', () => {
+  it('has an entity for every synced collection and no other', () => {
+    expect(Object.keys(SYNCED_ENTITIES).sort()).toEqual(Object.keys(COLLECTIONS).sort());
+  });
+
+  for (const spec of Object.values(COLLECTIONS)) {
+    it(`${spec.name}: every field is a nullable entity column of the same type, and nothing else is`, async () => {
+      const metadata = (await testDataSource()).getMetadata(SYNCED_ENTITIES[spec.name as keyof typeof SYNCED_ENTITIES]);
+      expect(metadata.tableName).toBe(spec.name);
+      const byColumn = new Map(metadata.columns.map((column) => [column.databaseName, column]));
+
+      for (const [name, field] of Object.entries(spec.fields)) {
+        const column = byColumn.get(columnName(name));
+        expect(column).withContext(`${spec.name}.${name}`).toBeDefined();
+        const type = `${String(column?.type)}${column?.isArray ? '[]' : ''}`;
+        expect(type).withContext(`${spec.name}.${name} type`).toBe(field.sqlType);
+        expect(column?.isNullable).withContext(`${spec.name}.${name} nullable (rows arrive in pieces)`).toBeTrue();
+      }
+      const expected = [...SYNC_COLUMNS, ...Object.keys(spec.fields).map(columnName)].sort();
+      expect([...byColumn.keys()].sort()).toEqual(expected);
+    });
+
+    it(`${spec.name}: the migrated table has exactly those columns and types`, async () => {
+      const rows: { column_name: string; data_type: string; is_nullable: string }[] = await (await testDataSource()).query(
+        `SELECT column_name, data_type, is_nullable FROM information_schema.columns WHERE table_name = $1`,
+        [spec.name],
+      );
+      const actual = new Map(rows.map((row) => [row.column_name, row]));
+
+      for (const [name, field] of Object.entries(spec.fields)) {
+        expect(actual.get(columnName(name))?.data_type).withContext(`${spec.name}.${name}`).toBe(INFORMATION_SCHEMA_TYPE[field.sqlType]);
+        expect(actual.get(columnName(name))?.is_nullable).toBe('YES');
+      }
+      expect([...actual.keys()].sort()).toEqual([...SYNC_COLUMNS, ...Object.keys(spec.fields).map(columnName)].sort());
+    });
+  }
+});
