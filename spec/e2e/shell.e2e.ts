@@ -1,25 +1,14 @@
-import type { Browser, BrowserContext } from 'playwright-core';
+import type { BrowserContext } from 'playwright-core';
 
-import { startTestServer, type RunningServer } from '../support/test-server';
-import { launchBrowser, offOrigin, recordRequests } from './support/browser';
+import { offOrigin, recordRequests } from './support/browser';
+import { useServerAndBrowser } from './support/harness';
 
 describe('The built app served by the sync server', () => {
-  let server: RunningServer;
-  let browser: Browser;
+  const harness = useServerAndBrowser();
   let context: BrowserContext;
 
-  beforeAll(async () => {
-    server = await startTestServer({ withApp: true });
-    browser = await launchBrowser();
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
-
   beforeEach(async () => {
-    context = await browser.newContext();
+    context = await harness.browser.newContext();
   });
 
   afterEach(async () => {
@@ -28,7 +17,7 @@ describe('The built app served by the sync server', () => {
 
   it('loads the Lamplight shell in Chromium, on the sign-in page for a new device', async () => {
     const page = await context.newPage();
-    await page.goto(server.baseUrl);
+    await page.goto(harness.server.baseUrl);
 
     await page.locator('.brand-name').waitFor();
     expect(await page.locator('.brand-name').textContent()).toBe('Lamplight');
@@ -42,7 +31,7 @@ describe('The built app served by the sync server', () => {
     page.on('console', (message) => {
       if (/Content Security Policy/i.test(message.text())) violations.push(message.text());
     });
-    await page.goto(server.baseUrl);
+    await page.goto(harness.server.baseUrl);
     await page.getByRole('button', { name: 'Sign in' }).waitFor();
     await page.evaluate(() => document.fonts.ready);
 
@@ -51,7 +40,7 @@ describe('The built app served by the sync server', () => {
 
   it('renders text in Atkinson Hyperlegible, loaded from the app itself', async () => {
     const page = await context.newPage();
-    await page.goto(server.baseUrl);
+    await page.goto(harness.server.baseUrl);
     await page.locator('h1').waitFor();
 
     const fonts = await page.evaluate(async () => {
@@ -73,11 +62,11 @@ describe('The built app served by the sync server', () => {
   it('makes every request to its own origin', async () => {
     const page = await context.newPage();
     const requests = recordRequests(page);
-    await page.goto(`${server.baseUrl}/register`);
+    await page.goto(`${harness.server.baseUrl}/register`);
     await page.locator('h1', { hasText: 'Create your journal' }).waitFor();
     await page.evaluate(() => document.fonts.ready);
 
     expect(requests.length).toBeGreaterThan(3);
-    expect(offOrigin(requests, server.baseUrl)).toEqual([]);
+    expect(offOrigin(requests, harness.server.baseUrl)).toEqual([]);
   });
 });

@@ -1,32 +1,18 @@
-import type { Browser } from 'playwright-core';
-
-import { startTestServer, type RunningServer } from '../support/test-server';
-import { launchBrowser } from './support/browser';
+import { useServerAndBrowser } from './support/harness';
 import { databaseNames, registerThroughApi, signInThroughUi } from './support/reader';
 import { waitForOfflineReady } from './support/service-worker';
 
 describe('Signing in once, then reading offline', () => {
-  let server: RunningServer;
-  let browser: Browser;
-
-  beforeAll(async () => {
-    server = await startTestServer({ withApp: true });
-    browser = await launchBrowser();
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  const harness = useServerAndBrowser();
 
   it('opens the journal with no network after one sign-in, and signs out keeping the local copy', async () => {
-    const reader = await registerThroughApi(server.baseUrl, 'Marit Solberg');
-    const context = await browser.newContext();
+    const reader = await registerThroughApi(harness.server.baseUrl, 'Marit Solberg');
+    const context = await harness.browser.newContext();
     const page = await context.newPage();
 
-    await signInThroughUi(page, server.baseUrl, reader.user.email, reader.password);
+    await signInThroughUi(page, harness.server.baseUrl, reader.user.email, reader.password);
     await page.getByRole('heading', { name: /Marit Solberg/ }).waitFor();
-    await waitForOfflineReady(page, server.baseUrl);
+    await waitForOfflineReady(page, harness.server.baseUrl);
 
     await context.setOffline(true);
     await page.reload();
@@ -37,7 +23,7 @@ describe('Signing in once, then reading offline', () => {
     await page.getByRole('button', { name: 'Account menu' }).click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
     await page.getByRole('button', { name: 'Keep and sign out' }).click();
-    await page.waitForURL(`${server.baseUrl}/sign-in`);
+    await page.waitForURL(`${harness.server.baseUrl}/sign-in`);
 
     expect(await databaseNames(page)).toContain(`lamplight-journal-${reader.user.id}`);
     expect(await page.evaluate(() => localStorage.getItem('lamplight.session'))).toBeNull();
@@ -45,27 +31,27 @@ describe('Signing in once, then reading offline', () => {
   });
 
   it('erases the local copy when the reader chooses to', async () => {
-    const reader = await registerThroughApi(server.baseUrl, 'Joaquín Ferreira');
-    const context = await browser.newContext();
+    const reader = await registerThroughApi(harness.server.baseUrl, 'Joaquín Ferreira');
+    const context = await harness.browser.newContext();
     const page = await context.newPage();
-    await signInThroughUi(page, server.baseUrl, reader.user.email, reader.password);
+    await signInThroughUi(page, harness.server.baseUrl, reader.user.email, reader.password);
     await page.getByRole('heading', { name: /Joaquín Ferreira/ }).waitFor();
     expect(await databaseNames(page)).toContain(`lamplight-journal-${reader.user.id}`);
 
     await page.getByRole('button', { name: 'Account menu' }).click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
     await page.getByRole('button', { name: 'Erase from this device' }).click();
-    await page.waitForURL(`${server.baseUrl}/sign-in`);
+    await page.waitForURL(`${harness.server.baseUrl}/sign-in`);
 
     expect(await databaseNames(page)).not.toContain(`lamplight-journal-${reader.user.id}`);
     await context.close();
   });
 
   it('shows a per-field message when the password is wrong, and stays on sign-in', async () => {
-    const reader = await registerThroughApi(server.baseUrl);
-    const context = await browser.newContext();
+    const reader = await registerThroughApi(harness.server.baseUrl);
+    const context = await harness.browser.newContext();
     const page = await context.newPage();
-    await page.goto(`${server.baseUrl}/sign-in`);
+    await page.goto(`${harness.server.baseUrl}/sign-in`);
 
     await page.getByLabel('E-mail').fill(reader.user.email);
     await page.getByLabel('Password').fill('not the password at all');

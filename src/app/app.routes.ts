@@ -37,8 +37,28 @@ export const routes: Routes = [
       },
       {
         path: 'library',
-        title: 'Library · Lamplight',
-        loadComponent: () => import('./features/library/library').then((m) => m.Library),
+        children: [
+          {
+            path: '',
+            title: 'Library · Lamplight',
+            loadComponent: () => import('./features/library/library').then((m) => m.Library),
+          },
+          {
+            path: 'new',
+            title: 'Add a book · Lamplight',
+            loadComponent: () => import('./features/library/book-editor/book-editor').then((m) => m.BookEditor),
+          },
+          {
+            path: ':id',
+            title: 'Book · Lamplight',
+            loadComponent: () => import('./features/library/book-page/book-page').then((m) => m.BookPage),
+          },
+          {
+            path: ':id/edit',
+            title: 'Edit book · Lamplight',
+            loadComponent: () => import('./features/library/book-editor/book-editor').then((m) => m.BookEditor),
+          },
+        ],
       },
       {
         path: 'settings',

@@ -6,6 +6,7 @@ import { MatToolbarModule } from '@angular/material/toolbar';
 import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 
 import { Auth } from './core/auth/auth';
+import { SyncStatus } from './core/sync/sync-status/sync-status';
 import { SignOutFlow } from './features/account/sign-out/sign-out-flow';
 
 /** A place in the app the shell links to. */
@@ -18,7 +19,7 @@ interface Destination {
 /** The app shell: brand bar, main navigation and the routed page. */
 @Component({
   selector: 'll-root',
-  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbarModule, MatIconModule, MatButtonModule, MatMenuModule],
+  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbarModule, MatIconModule, MatButtonModule, MatMenuModule, SyncStatus],
   templateUrl: './app.html',
   styleUrl: './app.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,6 +1,6 @@
 import path from 'node:path';
 
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Settings the server reads from the environment, validated once at start-up (fail fast). */
 export interface ServerConfig {

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 import { isValidIsbn13 } from '../../isbn/is-valid-isbn13';
 

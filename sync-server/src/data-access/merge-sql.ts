@@ -1,52 +1,51 @@
 import type { CollectionSpec } from '../../../shared/sync/schema/collection';
-import { columnName, type FieldSpec } from '../../../shared/sync/schema/field';
+import { columnName } from '../../../shared/sync/schema/field';
 
 /**
  * SQL that merges a batch of row pieces into one collection's table with the per-field
- * last-writer-wins rule of shared/sync/merge.ts, in one set-based upsert.
+ * last-writer-wins rule of shared/sync/merge.ts, set-based, in one statement.
  *
- * Input `$2` is a JSON array of `{ id, vals, clocks }`: for each row, the new values and clocks of
- * the fields this batch touches (already reduced to one per field). A field's value is taken only
- * when its clock is greater than the stored one. Clocks compare with COLLATE "C" so the database
- * orders them byte for byte, exactly as JavaScript compares strings, whatever its locale.
+ * Input `$2` is a JSON array with one object per row: `id`, the new value of each field the batch
+ * touches (keyed by column name) and `clocks` (field → HLC) for those fields only. A field's
+ * value is taken when its clock is greater than the stored one; an absent field has no clock and
+ * keeps its value. Rows where nothing wins are not written at all (a re-sent batch costs a read).
+ * Clocks compare with COLLATE "C", byte for byte, exactly as JavaScript compares strings,
+ * whatever the database's locale. The statement answers how many field values won; the caller
+ * holds the user's advisory lock, so the clocks read in `decided` are still current.
  */
 export function mergeSql(spec: CollectionSpec): string {
   const fields = Object.keys(spec.fields);
-  const columns = fields.map(columnName);
-  const newer = (fieldName: string) =>
-    `(excluded.clocks->>'${fieldName}') COLLATE "C" > coalesce(t.clocks->>'${fieldName}', '') COLLATE "C"`;
-  const winners = `FROM jsonb_each_text(excluded.clocks) AS e(k, v) WHERE e.v COLLATE "C" > coalesce(t.clocks->>e.k, '') COLLATE "C"`;
+  const column = (field: string) => columnName(field);
+  const recordColumns = fields.map((field) => `${column(field)} ${spec.fields[field]!.sqlType}`).join(', ');
+  const beats = (field: string, incoming: string, stored: string) =>
+    `coalesce((${incoming}->>'${field}') COLLATE "C" > coalesce(${stored}->>'${field}', '') COLLATE "C", false)`;
+  const anyWins = (incoming: string, stored: string) => fields.map((field) => beats(field, incoming, stored)).join(' OR ');
+  const newer = (field: string) => beats(field, 'excluded.clocks', 't.clocks');
   return `
     WITH input AS (
-      SELECT r.id, r.vals, r.clocks, nextval('sync_seq') AS seq
-        FROM jsonb_to_recordset($2::jsonb) AS r(id uuid, vals jsonb, clocks jsonb)
+      SELECT r.*, nextval('sync_seq') AS seq
+        FROM jsonb_to_recordset($2::jsonb) AS r(id uuid, ${recordColumns}, clocks jsonb)
+    ), decided AS (
+      -- A scalar subquery is never flattened into a join: one primary-key probe per row, even
+      -- while statistics lag behind a big first sync (a join was planned as a scan of all the
+      -- reader's rows then).
+      SELECT i.*, (SELECT t.clocks FROM ${spec.name} t WHERE t.user_id = $1::uuid AND t.id = i.id) AS stored_clocks
+        FROM input i
+    ), merged AS (
+      INSERT INTO ${spec.name} AS t (user_id, id, ${fields.map(column).join(', ')}, clocks, seq)
+      SELECT $1::uuid, d.id, ${fields.map((field) => `d.${column(field)}`).join(', ')}, d.clocks, d.seq
+        FROM decided d
+       WHERE d.stored_clocks IS NULL OR ${anyWins('d.clocks', 'd.stored_clocks')}
+      ON CONFLICT (user_id, id) DO UPDATE SET
+        ${fields.map((field) => `${column(field)} = CASE WHEN ${newer(field)} THEN excluded.${column(field)} ELSE t.${column(field)} END`).join(',\n        ')},
+        clocks = t.clocks || jsonb_strip_nulls(jsonb_build_object(${fields
+          .map((field) => `'${field}', CASE WHEN ${newer(field)} THEN excluded.clocks->'${field}' END`)
+          .join(', ')})),
+        seq = excluded.seq
+      RETURNING 1
     )
-    INSERT INTO ${spec.name} AS t (user_id, id, ${columns.join(', ')}, clocks, seq)
-    SELECT $1::uuid, i.id, ${fields.map((name) => valueFromJson(name, spec.fields[name]!)).join(', ')}, i.clocks, i.seq
-      FROM input i
-    ON CONFLICT (user_id, id) DO UPDATE SET
-      ${fields.map((name, n) => `${columns[n]} = CASE WHEN ${newer(name)} THEN excluded.${columns[n]} ELSE t.${columns[n]} END`).join(',\n      ')},
-      clocks = t.clocks || coalesce((SELECT jsonb_object_agg(e.k, e.v) ${winners}), '{}'),
-      seq = CASE WHEN EXISTS (SELECT 1 ${winners}) THEN excluded.seq ELSE t.seq END`;
-}
-
-/** A field's value out of the `vals` JSON, cast to its column type. */
-function valueFromJson(fieldName: string, field: FieldSpec): string {
-  const json = `i.vals->'${fieldName}'`;
-  const text = `i.vals->>'${fieldName}'`;
-  switch (field.sqlType) {
-    case 'text':
-      return `(${text})`;
-    case 'text[]':
-      return `CASE WHEN jsonb_typeof(${json}) = 'array' THEN ARRAY(SELECT jsonb_array_elements_text(${json})) END`;
-    case 'double precision':
-    case 'integer':
-    case 'boolean':
-    case 'uuid':
-      return `(${text})::${field.sqlType}`;
-    case 'jsonb':
-      return `NULLIF(${json}, 'null'::jsonb)`;
-  }
+    SELECT (SELECT count(*) FROM merged)::int AS rows,
+           (SELECT sum(${fields.map((field) => `${beats(field, 'd.clocks', 'd.stored_clocks')}::int`).join(' + ')}) FROM decided d)::int AS won`;
 }
 
 /** Rows changed after a sequence, across every collection, in sequence order. */

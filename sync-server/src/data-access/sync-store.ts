@@ -1,4 +1,4 @@
-import type { DataSource, EntityManager } from 'typeorm';
+import type { DataSource } from 'typeorm';
 
 import type { FieldChange, PulledChange } from '../../../shared/sync/field-change';
 import { wins } from '../../../shared/sync/merge';
@@ -6,18 +6,30 @@ import { columnName } from '../../../shared/sync/schema/field';
 import { COLLECTIONS, collectionSpec } from '../../../shared/sync/schema/collections';
 import { mergeSql, pullSql } from './merge-sql';
 
-/** Applied change ids are kept this long; a batch re-sent later still merges as a no-op. */
-const APPLIED_IDS_KEPT_DAYS = 30;
-
 const SPECS = Object.values(COLLECTIONS);
-const MERGE_SQL = new Map(SPECS.map((spec) => [spec.name, mergeSql(spec)]));
+/** Per collection: its merge statement (prepared once per connection) and its columns by field. */
+const MERGES = new Map(
+  SPECS.map((spec) => [
+    spec.name,
+    {
+      statement: { name: `lamplight_merge_${spec.name}`, text: mergeSql(spec) },
+      columns: new Map(Object.keys(spec.fields).map((field) => [field, columnName(field)])),
+    },
+  ]),
+);
 const PULL_SQL = pullSql(SPECS);
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
-/** One row's pieces from a batch: the winning value and clock of each field it touches. */
+/** The part of a node-postgres client the hot path uses. */
+interface PgClient {
+  query(config: { name?: string; text: string; values?: unknown[] } | string): Promise<{ rows: Record<string, unknown>[] }>;
+}
+
+/** One row's pieces from a batch: the winning value (by column) and clock of each field it touches. */
 interface RowPieces {
   id: string;
-  vals: Record<string, unknown>;
   clocks: Record<string, string>;
+  [column: string]: unknown;
 }
 
 export interface PulledPage {
@@ -32,31 +44,62 @@ export class SyncStore {
   constructor(private readonly dataSource: DataSource) {}
 
   /**
-   * Applies a validated batch in one transaction. Each user's writes are serialised by a
-   * transaction-level advisory lock, so sequence numbers commit in the order they were taken
-   * and a pull cursor can never step over a change that commits later.
+   * Applies a validated batch in one transaction and answers how many changes took effect.
+   * Each user's writes are serialised by a transaction-level advisory lock, so sequence numbers
+   * commit in the order they were taken and a pull cursor can never step over a change that
+   * commits later.
+   *
+   * A change is applied at most once without keeping its id: clocks are unique per write, so a
+   * change sent again finds its own clock (or a later one) already stored and changes nothing.
+   * Such changes are counted as `duplicates`, like any change that arrived after a newer value.
    */
   async push(userId: string, changes: readonly FieldChange[]): Promise<{ applied: number; duplicates: number }> {
-    return this.dataSource.transaction(async (manager) => {
-      await manager.query('SELECT pg_advisory_xact_lock(hashtextextended($1, 0))', [userId]);
-      const fresh = await this.claimChangeIds(manager, userId, changes);
-      const byCollection = new Map<string, Map<string, RowPieces>>();
-      for (const change of fresh) {
-        const rows = byCollection.get(change.collection) ?? new Map<string, RowPieces>();
-        byCollection.set(change.collection, rows);
-        const row = rows.get(change.rowId) ?? { id: change.rowId, vals: {}, clocks: {} };
-        rows.set(change.rowId, row);
-        // One statement may not touch a row twice: reduce the batch to one winner per field first.
-        if (wins(change.hlc, row.clocks[change.field])) {
-          row.vals[change.field] = change.value;
-          row.clocks[change.field] = change.hlc;
-        }
+    const byCollection = new Map<string, Map<string, RowPieces>>();
+    for (const change of changes) {
+      const rows = byCollection.get(change.collection) ?? new Map<string, RowPieces>();
+      byCollection.set(change.collection, rows);
+      const row = rows.get(change.rowId) ?? { id: change.rowId, clocks: {} };
+      rows.set(change.rowId, row);
+      // One statement may not touch a row twice: reduce the batch to one winner per field first.
+      if (wins(change.hlc, row.clocks[change.field])) {
+        row[MERGES.get(change.collection)!.columns.get(change.field)!] = change.value;
+        row.clocks[change.field] = change.hlc;
       }
+    }
+    const applied = await this.inUserTransaction(userId, async (client) => {
+      let won = 0;
       for (const [collection, rows] of byCollection) {
-        await manager.query(MERGE_SQL.get(collection)!, [userId, JSON.stringify([...rows.values()])]);
+        const { statement } = MERGES.get(collection)!;
+        const result = await client.query({ ...statement, values: [userId, JSON.stringify([...rows.values()])] });
+        won += Number(result.rows[0]?.['won'] ?? 0);
       }
-      return { applied: fresh.length, duplicates: changes.length - fresh.length };
+      return won;
     });
+    return { applied, duplicates: changes.length - applied };
+  }
+
+  /**
+   * Runs `work` in a transaction that first takes the user's advisory lock. This is the hot path
+   * of sync, so it talks to the node-postgres client directly: BEGIN and the lock go in one
+   * round trip, and the merge statements are prepared once per connection.
+   */
+  private async inUserTransaction<T>(userId: string, work: (client: PgClient) => Promise<T>): Promise<T> {
+    // Inlined into SQL text, so it must be exactly a UUID (it comes from our own verified token).
+    if (!UUID.test(userId)) throw new Error('user id must be a lower-case UUID');
+    const runner = this.dataSource.createQueryRunner();
+    await runner.connect();
+    const client = (runner as unknown as { databaseConnection: PgClient }).databaseConnection;
+    try {
+      await client.query(`BEGIN; SELECT pg_advisory_xact_lock(hashtextextended('${userId}', 0))`);
+      const result = await work(client);
+      await client.query('COMMIT');
+      return result;
+    } catch (error) {
+      await client.query('ROLLBACK').catch(() => undefined);
+      throw error;
+    } finally {
+      await runner.release();
+    }
   }
 
   /**
@@ -85,21 +128,6 @@ export class SyncStore {
     return { changes, lastSeq, hasMore: taken < rows.length };
   }
 
-  /** Records the batch's change ids; returns the changes whose id was not seen before. */
-  private async claimChangeIds(manager: EntityManager, userId: string, changes: readonly FieldChange[]): Promise<FieldChange[]> {
-    await manager.query(
-      `DELETE FROM applied_changes WHERE user_id = $1 AND applied_at < now() - make_interval(days => $2)`,
-      [userId, APPLIED_IDS_KEPT_DAYS],
-    );
-    const claimed: { change_id: string }[] = await manager.query(
-      `INSERT INTO applied_changes (user_id, change_id) SELECT $1, unnest($2::uuid[])
-       ON CONFLICT DO NOTHING RETURNING change_id`,
-      [userId, changes.map((change) => change.id)],
-    );
-    const fresh = new Set(claimed.map((row) => row.change_id));
-    // A change id repeated inside one batch counts once.
-    return changes.filter((change) => fresh.delete(change.id.toLowerCase()));
-  }
 }
 
 function rowFields(collection: string, row: Record<string, unknown>): PulledChange[] {

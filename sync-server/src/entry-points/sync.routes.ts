@@ -1,5 +1,5 @@
 import express, { Router } from 'express';
-import { z } from 'zod';
+import * as z from 'zod';
 
 import {
   MAX_PULL_LIMIT,

@@ -1,27 +1,59 @@
 import Dexie, { type Table } from 'dexie';
 
-/** One change waiting to reach the server: one field of one row, stamped with its clock. */
-export interface OutboxEntry {
-  /** Local order of writes. */
+import type { FieldChange } from '@shared/sync/field-change';
+import type { LocalRow } from '@shared/sync/local-row';
+import { COLLECTIONS } from '@shared/sync/schema/collections';
+
+/** One change waiting to reach the server; `seq` is its place in the local order of writes. */
+export interface OutboxEntry extends FieldChange {
   readonly seq?: number;
-  /** Globally unique; the server applies each id at most once. */
-  readonly id: string;
-  readonly collection: string;
-  readonly rowId: string;
-  readonly field: string;
-  readonly value: unknown;
-  readonly hlc: string;
+}
+
+/** A change the server refused for good, kept so the reader can see why. */
+export interface RejectedChange extends FieldChange {
+  readonly code: string;
+  readonly reason: string;
+  readonly rejectedAt: string;
+}
+
+/** Small key-value facts about this database: the last clock, the pull cursor, the last sync. */
+export interface MetaEntry {
+  readonly key: 'clock' | 'cursor' | 'lastSyncedAt';
+  readonly value: string;
 }
 
 /** The name of a reader's local database: one per user id, so readers sharing a tablet never mix. */
 export const journalDbName = (userId: string) => `lamplight-journal-${userId}`;
 
+/**
+ * Bump when the stores below change (a new collection or index). Dexie works out the upgrade
+ * from the latest declaration; other open tabs get a `versionchange` and close.
+ */
+export const JOURNAL_DB_VERSION = 1;
+
+/** Dexie store specs for every synced collection, from the shared schema: `id` plus its indexes. */
+export function collectionStores(): Record<string, string> {
+  return Object.fromEntries(Object.values(COLLECTIONS).map((spec) => [spec.name, ['id', ...spec.indexes].join(', ')]));
+}
+
 /** A reader's journal in IndexedDB, the app's first and only place to read and write. */
 export class JournalDb extends Dexie {
   outbox!: Table<OutboxEntry, number>;
+  rejected!: Table<RejectedChange, string>;
+  meta!: Table<MetaEntry, string>;
 
-  constructor(userId: string) {
+  constructor(readonly userId: string) {
     super(journalDbName(userId));
-    this.version(1).stores({ outbox: '++seq, id' });
+    this.version(JOURNAL_DB_VERSION).stores({
+      ...collectionStores(),
+      outbox: '++seq',
+      rejected: 'id',
+      meta: 'key',
+    });
+  }
+
+  /** The rows of one synced collection. */
+  rows(collection: string): Table<LocalRow, string> {
+    return this.table(collection);
   }
 }

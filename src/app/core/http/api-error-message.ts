@@ -11,12 +11,21 @@ export interface ReadableError {
 }
 
 /**
+ * Whether a failed request never reached our server: no network (status 0), or a gateway's
+ * answer without our error body — the service worker answers 504 when the network is down.
+ */
+export function isUnreachable(error: unknown): boolean {
+  if (!(error instanceof HttpErrorResponse)) return false;
+  return error.status === 0 || ([502, 503, 504].includes(error.status) && !isApiErrorBody(error.error));
+}
+
+/**
  * Turns a failed request into a message the UI can show. Network failures are reported as being
  * offline (calmly: reading offline is normal here), never as the reader's fault.
  */
 export function readableError(error: unknown): ReadableError {
   if (error instanceof HttpErrorResponse) {
-    if (error.status === 0) {
+    if (isUnreachable(error)) {
       return { message: 'You seem to be offline. Try again when you have a connection.', fields: {}, offline: true };
     }
     if (isApiErrorBody(error.error)) {

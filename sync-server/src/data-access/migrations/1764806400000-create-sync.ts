@@ -22,20 +22,13 @@ export class CreateSync1764806400000 implements MigrationInterface {
         seq bigint NOT NULL,
         PRIMARY KEY (user_id, id)
       )`);
-    await queryRunner.query('CREATE INDEX books_user_seq_idx ON books (user_id, seq)');
-    // Change ids already applied, so a re-sent batch is a no-op; old ones are pruned.
-    await queryRunner.query(`
-      CREATE TABLE applied_changes (
-        user_id uuid NOT NULL REFERENCES users (id) ON DELETE CASCADE,
-        change_id uuid NOT NULL,
-        applied_at timestamptz NOT NULL DEFAULT now(),
-        PRIMARY KEY (user_id, change_id)
-      )`);
-    await queryRunner.query('CREATE INDEX applied_changes_age_idx ON applied_changes (user_id, applied_at)');
+    // Pulls page by (user_id, seq). The index is partial on purpose: `seq IS NOT NULL` is always
+    // true, but a lookup by primary key does not imply it, so the planner can never pick this
+    // index for one (with stale statistics it once did, scanning all of a reader's rows per row).
+    await queryRunner.query('CREATE INDEX books_user_seq_idx ON books (user_id, seq) WHERE seq IS NOT NULL');
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query('DROP TABLE applied_changes');
     await queryRunner.query('DROP TABLE books');
     await queryRunner.query('DROP SEQUENCE sync_seq');
   }

@@ -1,0 +1,38 @@
+import type { PulledChange } from './field-change';
+import { wins } from './merge';
+
+/**
+ * A row as a device keeps it: its field values plus, under `_hlc`, the clock of each field's
+ * value. The clocks are what let a device merge pulled values with its own pending edits.
+ */
+export interface LocalRow {
+  readonly id: string;
+  readonly _hlc: Readonly<Record<string, string>>;
+  readonly [field: string]: unknown;
+}
+
+/** An empty row, before any of its fields has arrived. */
+export const emptyRow = (id: string): LocalRow => ({ id, _hlc: {} });
+
+/**
+ * Applies pulled values to a local row with the same per-field rule the server uses: a value
+ * replaces the local one only when its clock is greater, so a pending local edit with a later
+ * clock is never overwritten. Returns the same row object when nothing changed.
+ *
+ * @example
+ * applyPulled({ id: 'r', _hlc: { title: '…:00002:a' }, title: 'Mine' }, [{ field: 'title', value: 'Old', hlc: '…:00001:b', … }])
+ * // unchanged: the local title is newer
+ */
+export function applyPulled(row: LocalRow, changes: readonly Pick<PulledChange, 'field' | 'value' | 'hlc'>[]): LocalRow {
+  let next: Record<string, unknown> | null = null;
+  let clocks: Record<string, string> | null = null;
+  for (const change of changes) {
+    const current = (clocks ?? row._hlc)[change.field];
+    if (!wins(change.hlc, current)) continue;
+    next ??= { ...row };
+    clocks ??= { ...row._hlc };
+    next[change.field] = change.value;
+    clocks[change.field] = change.hlc;
+  }
+  return next ? ({ ...next, id: row.id, _hlc: clocks! } as LocalRow) : row;
+}

@@ -1,0 +1,86 @@
+import type { ChangeProblem, FieldChange, PullResponse } from './field-change';
+import { MAX_PUSH_CHANGES } from './field-change';
+
+/** An outbox entry as the cycle sees it: a change plus its local order. */
+export type QueuedChange = FieldChange & { readonly seq?: number };
+
+/** What a push came back with, once HTTP is taken out of it. */
+export type PushOutcome =
+  | { readonly kind: 'applied' }
+  | { readonly kind: 'refused'; readonly problems: readonly ChangeProblem[] }
+  | { readonly kind: 'too-large' };
+
+/**
+ * What a device provides for one sync: its outbox, its local rows and its connection. Network
+ * failures, 401s and server errors are thrown and end the cycle; the caller retries later and
+ * nothing is lost, because entries leave the outbox only after the server confirmed them.
+ */
+export interface SyncPorts {
+  /** The oldest `limit` changes of the outbox, in write order. */
+  nextBatch(limit: number): Promise<readonly QueuedChange[]>;
+  /** The server has them: drop them from the outbox. */
+  acknowledge(changes: readonly QueuedChange[]): Promise<void>;
+  /** The server refused them for good: move them aside with the reason, out of the outbox. */
+  setAside(refused: readonly { change: QueuedChange; problem: ChangeProblem }[]): Promise<void>;
+  push(changes: readonly FieldChange[]): Promise<PushOutcome>;
+  cursor(): Promise<string | undefined>;
+  pull(cursor: string | undefined): Promise<PullResponse>;
+  /** Merges a pulled page into local rows and keeps its cursor, together. */
+  apply(page: PullResponse): Promise<void>;
+}
+
+export interface CycleReport {
+  readonly pushed: number;
+  readonly refused: number;
+  readonly pulled: number;
+}
+
+/**
+ * One sync: push the outbox in batches until it is empty, then pull from the last cursor until
+ * there is no more. Refused changes are set aside (and the rest of their batch re-sent); a batch
+ * the server finds too large is halved; one change too large on its own is set aside.
+ */
+export async function runSyncCycle(ports: SyncPorts, batchSize = 500): Promise<CycleReport> {
+  let size = Math.min(batchSize, MAX_PUSH_CHANGES);
+  let pushed = 0;
+  let refused = 0;
+  for (;;) {
+    const batch = await ports.nextBatch(size);
+    if (batch.length === 0) break;
+    const outcome = await ports.push(batch.map(({ seq: _seq, ...change }) => change));
+    if (outcome.kind === 'applied') {
+      await ports.acknowledge(batch);
+      pushed += batch.length;
+    } else if (outcome.kind === 'refused') {
+      const setAside = outcome.problems.filter((p) => batch[p.index]).map((problem) => ({ change: batch[problem.index]!, problem }));
+      if (setAside.length === 0) throw new Error('The server refused a batch without saying which change');
+      await ports.setAside(setAside);
+      refused += setAside.length;
+    } else if (batch.length > 1) {
+      size = Math.max(1, Math.floor(batch.length / 2));
+    } else {
+      await ports.setAside([{ change: batch[0]!, problem: { index: 0, code: 'too_large', reason: 'This change is too large to sync' } }]);
+      refused++;
+    }
+  }
+  let pulled = 0;
+  let cursor = await ports.cursor();
+  for (;;) {
+    const page = await ports.pull(cursor);
+    await ports.apply(page);
+    pulled += page.changes.length;
+    cursor = page.cursor;
+    if (!page.hasMore) break;
+  }
+  return { pushed, refused, pulled };
+}
+
+/**
+ * How long to wait before retry `attempt` (0-based): exponential backoff from 1 s, capped at a
+ * minute, with "equal jitter" so many devices coming back online do not retry in step
+ * (common practice, as in the AWS Architecture Blog's "Exponential Backoff and Jitter").
+ */
+export function retryDelayMs(attempt: number, random: () => number = Math.random): number {
+  const ceiling = Math.min(60_000, 1000 * 2 ** Math.max(0, attempt));
+  return Math.round(ceiling / 2 + random() * (ceiling / 2));
+}

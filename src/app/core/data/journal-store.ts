@@ -1,0 +1,86 @@
+import { inject, Injectable } from '@angular/core';
+import { Subject } from 'rxjs';
+
+import { HlcClock } from '@shared/sync/hlc';
+import { emptyRow, type LocalRow } from '@shared/sync/local-row';
+import { validatePatch } from '@shared/sync/validate-patch';
+import type { CollectionName } from '@shared/sync/schema/collections';
+import { COLLECTIONS } from '@shared/sync/schema/collections';
+import type { PatchOf, RowOf } from '@shared/sync/schema/collection';
+
+import { deviceId } from '../device/device-id';
+import { InvalidFieldsError } from './field-errors';
+import type { JournalDb, OutboxEntry } from './journal-db';
+import { LocalJournal } from './local-journal';
+
+type Spec<C extends CollectionName> = (typeof COLLECTIONS)[C];
+
+/**
+ * Every local write. In one Dexie transaction it updates the row, stamps each changed field with
+ * a new hybrid logical clock and appends one outbox change per changed field, so a write is
+ * either wholly saved (and will sync) or not at all. The clock's state lives in the same
+ * database, so tabs of one device never issue the same clock twice.
+ */
+@Injectable({ providedIn: 'root' })
+export class JournalStore {
+  private readonly journal = inject(LocalJournal);
+  private readonly writes = new Subject<void>();
+
+  /** Fires after each local write that changed something (the sync engine listens). */
+  readonly localWrites = this.writes.asObservable();
+
+  /** Writes the given fields of a row (creating it if needed); unchanged fields are skipped. */
+  async write<C extends CollectionName>(collection: C, rowId: string, patch: PatchOf<Spec<C>>): Promise<void> {
+    const db = this.requireDb();
+    const problems = validatePatch(COLLECTIONS[collection], patch);
+    if (Object.keys(problems).length > 0) throw new InvalidFieldsError(problems);
+
+    const changed = await db.transaction('rw', [db.rows(collection), db.outbox, db.meta], async () => {
+      const row: LocalRow = (await db.rows(collection).get(rowId)) ?? emptyRow(rowId);
+      const fields = Object.entries(patch).filter(([field, value]) => !sameValue(row[field], value));
+      if (fields.length === 0) return false;
+      const clock = new HlcClock(deviceId(), Date.now, (await db.meta.get('clock'))?.value);
+      const hlc = clock.tick();
+      await db.meta.put({ key: 'clock', value: hlc });
+      const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
+      const outbox: OutboxEntry[] = [];
+      for (const [field, value] of fields) {
+        next[field] = value;
+        (next['_hlc'] as Record<string, string>)[field] = hlc;
+        outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value, hlc });
+      }
+      await db.rows(collection).put(next as LocalRow);
+      await db.outbox.bulkAdd(outbox);
+      return true;
+    });
+    if (changed) this.writes.next();
+  }
+
+  /** Adds a new row with a client-made id and returns the id. */
+  async create<C extends CollectionName>(collection: C, fields: PatchOf<Spec<C>>): Promise<string> {
+    const id = crypto.randomUUID();
+    await this.write(collection, id, { ...fields, deleted: false } as PatchOf<Spec<C>>);
+    return id;
+  }
+
+  /** Deletes by tombstone, which syncs like any other edit. */
+  remove<C extends CollectionName>(collection: C, rowId: string): Promise<void> {
+    return this.write(collection, rowId, { deleted: true } as PatchOf<Spec<C>>);
+  }
+
+  /** One row, or `undefined` when it does not exist here (yet). */
+  async get<C extends CollectionName>(collection: C, rowId: string): Promise<RowOf<Spec<C>> | undefined> {
+    return (await this.requireDb().rows(collection).get(rowId)) as RowOf<Spec<C>> | undefined;
+  }
+
+  private requireDb(): JournalDb {
+    const db = this.journal.db();
+    if (!db) throw new Error('Nobody is signed in on this device');
+    return db;
+  }
+}
+
+/** Values are JSON (strings, numbers, booleans, null, lists): compare them as JSON. */
+function sameValue(a: unknown, b: unknown): boolean {
+  return a === b || JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
+}

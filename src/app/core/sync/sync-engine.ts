@@ -1,0 +1,149 @@
+import { HttpClient, HttpErrorResponse } from '@angular/common/http';
+import { computed, DestroyRef, effect, inject, Injectable, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { debounceTime } from 'rxjs';
+
+import { retryDelayMs, runSyncCycle } from '@shared/sync/sync-cycle';
+
+import { Auth } from '../auth/auth';
+import { isUnreachable } from '../http/api-error-message';
+import { JournalStore } from '../data/journal-store';
+import { DeviceStorage } from '../device/device-storage';
+import { liveQuerySignal } from '../data/live-query';
+import { LocalJournal } from '../data/local-journal';
+import { DexieSyncPorts } from './dexie-sync-ports';
+
+/** What the engine is doing right now. */
+export type SyncPhase = 'idle' | 'syncing' | 'offline' | 'needs-sign-in' | 'retrying';
+
+/** A local write syncs this long after the last keystroke-sized edit. */
+const WRITE_DEBOUNCE_MS = 1500;
+/** While online and visible, look for other devices' changes this often. */
+const PERIODIC_MS = 60_000;
+
+/**
+ * Keeps this device and the server in step: runs the shared sync cycle at start, when the
+ * browser comes online, shortly after local writes, every minute while visible, and on demand.
+ * Only one tab syncs at a time (Web Locks). Failures back off with jitter; a refused sign-in
+ * pauses sync and leaves the outbox untouched.
+ */
+@Injectable({ providedIn: 'root' })
+export class SyncEngine {
+  private readonly http = inject(HttpClient);
+  private readonly auth = inject(Auth);
+  private readonly journal = inject(LocalJournal);
+
+  private readonly phaseState = signal<SyncPhase>('idle');
+  private readonly lastError = signal<string | null>(null);
+  private attempt = 0;
+  private timer: ReturnType<typeof setTimeout> | undefined;
+  private running: Promise<void> | null = null;
+  private again = false;
+
+  /** Changes saved here that the server has not confirmed. */
+  readonly pending = liveQuerySignal((db) => db.outbox.count(), 0);
+  /** Changes the server refused for good, newest first. */
+  readonly rejected = liveQuerySignal((db) => db.rejected.reverse().sortBy('rejectedAt'), []);
+  /** When this device last finished a pull (in any tab). */
+  readonly lastSyncedAt = liveQuerySignal(async (db) => (await db.meta.get('lastSyncedAt'))?.value ?? null, null);
+  readonly phase = computed<SyncPhase>(() => (this.auth.needsSignIn() ? 'needs-sign-in' : this.phaseState()));
+  readonly error = this.lastError.asReadonly();
+
+  constructor() {
+    const destroyRef = inject(DestroyRef);
+    // A reader signed in (or the app opened with one): ask to keep the journal's storage, and sync.
+    const storage = inject(DeviceStorage);
+    effect(() => {
+      if (!this.journal.db()) return;
+      void storage.requestPersistence();
+      if (!this.auth.needsSignIn()) this.schedule(0);
+    });
+    inject(JournalStore)
+      .localWrites.pipe(debounceTime(WRITE_DEBOUNCE_MS), takeUntilDestroyed(destroyRef))
+      .subscribe(() => this.schedule(0));
+    const online = () => this.schedule(0);
+    const offline = () => this.phaseState.set('offline');
+    globalThis.addEventListener?.('online', online);
+    globalThis.addEventListener?.('offline', offline);
+    const periodic = setInterval(() => {
+      if (globalThis.document?.visibilityState !== 'hidden' && this.phaseState() !== 'syncing') this.schedule(0);
+    }, PERIODIC_MS);
+    destroyRef.onDestroy(() => {
+      clearInterval(periodic);
+      clearTimeout(this.timer);
+      globalThis.removeEventListener?.('online', online);
+      globalThis.removeEventListener?.('offline', offline);
+    });
+  }
+
+  /** "Sync now": runs at once, forgetting any backoff. */
+  syncNow(): Promise<void> {
+    this.attempt = 0;
+    return this.run();
+  }
+
+  private schedule(delayMs: number): void {
+    clearTimeout(this.timer);
+    this.timer = setTimeout(() => void this.run(), delayMs);
+  }
+
+  private run(): Promise<void> {
+    if (this.running) {
+      this.again = true; // a trigger arrived mid-sync: go round once more afterwards
+      return this.running;
+    }
+    this.running = this.cycle().finally(() => {
+      this.running = null;
+      if (this.again) {
+        this.again = false;
+        this.schedule(0);
+      }
+    });
+    return this.running;
+  }
+
+  private async cycle(): Promise<void> {
+    const db = this.journal.db();
+    if (!db || this.auth.needsSignIn()) return;
+    clearTimeout(this.timer);
+    this.phaseState.set('syncing');
+    try {
+      const ran = await this.withTabLock(db.userId, () => runSyncCycle(new DexieSyncPorts(db, this.http)));
+      this.attempt = 0;
+      this.lastError.set(null);
+      this.phaseState.set('idle');
+      if (!ran) this.schedule(retryDelayMs(0)); // another tab holds the lock; look again soon
+    } catch (error) {
+      this.phaseState.set(this.describeFailure(error));
+      if (this.phaseState() !== 'needs-sign-in') this.schedule(retryDelayMs(this.attempt++));
+    }
+  }
+
+  private describeFailure(error: unknown): SyncPhase {
+    if (isUnreachable(error)) {
+      this.lastError.set(null);
+      return 'offline';
+    }
+    if (error instanceof HttpErrorResponse) {
+      if (error.status === 401 || error.status === 403) return 'needs-sign-in';
+      this.lastError.set(`The server answered ${error.status}; trying again shortly`);
+      return 'retrying';
+    }
+    this.lastError.set(error instanceof Error ? error.message : 'Sync failed; trying again shortly');
+    return 'retrying';
+  }
+
+  /** Runs `work` only if no other tab of this reader is syncing; resolves whether it ran. */
+  private async withTabLock(userId: string, work: () => Promise<unknown>): Promise<boolean> {
+    const locks = globalThis.navigator?.locks;
+    if (!locks) {
+      await work();
+      return true;
+    }
+    return (await locks.request(`lamplight-sync-${userId}`, { ifAvailable: true }, async (lock) => {
+      if (!lock) return false;
+      await work();
+      return true;
+    })) as boolean;
+  }
+}

@@ -1,0 +1,48 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatMenuModule } from '@angular/material/menu';
+import { RouterLink } from '@angular/router';
+import { format } from 'date-fns';
+
+import { SyncEngine } from '../sync-engine';
+
+/** The shell's calm line about where the reader's words are: here, waiting, syncing, synced. */
+@Component({
+  selector: 'll-sync-status',
+  imports: [DatePipe, MatButtonModule, MatIconModule, MatMenuModule, RouterLink],
+  templateUrl: './sync-status.html',
+  styleUrl: './sync-status.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SyncStatus {
+  protected readonly engine = inject(SyncEngine);
+
+  /** The icon and the short label shown in the bar. */
+  protected readonly summary = computed(() => {
+    const pending = this.engine.pending();
+    const waiting = `${pending} ${pending === 1 ? 'change' : 'changes'} waiting`;
+    const rejected = this.engine.rejected().length;
+    switch (this.engine.phase()) {
+      case 'needs-sign-in':
+        return { icon: 'key', label: 'Sign in to sync' };
+      case 'offline':
+        return { icon: 'cloud_off', label: pending > 0 ? `Offline · ${waiting}` : 'Offline · saved here' };
+      case 'syncing':
+        return { icon: 'sync', label: 'Syncing…' };
+      case 'retrying':
+        return { icon: 'schedule', label: pending > 0 ? waiting : 'Will retry' };
+      case 'idle': {
+        if (pending > 0) return { icon: 'cloud_upload', label: waiting };
+        if (rejected > 0) return { icon: 'report', label: `${rejected} ${rejected === 1 ? 'change' : 'changes'} refused` };
+        const last = this.engine.lastSyncedAt();
+        return last ? { icon: 'cloud_done', label: `Synced ${format(new Date(last), 'HH:mm')}` } : { icon: 'save', label: 'Saved on this device' };
+      }
+    }
+  });
+
+  protected syncNow(): void {
+    void this.engine.syncNow();
+  }
+}
