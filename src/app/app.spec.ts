@@ -2,6 +2,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
 import { MAT_ICON_DEFAULT_OPTIONS } from '@angular/material/icon';
 import { provideRouter } from '@angular/router';
+import { provideServiceWorker } from '@angular/service-worker';
 
 import { App } from './app';
 import { routes } from './app.routes';
@@ -14,6 +15,7 @@ describe('App shell', () => {
       providers: [
         provideRouter(routes),
         provideHttpClient(),
+        provideServiceWorker('ngsw-worker.js', { enabled: false }),
         { provide: MAT_ICON_DEFAULT_OPTIONS, useValue: { fontSet: 'material-symbols-outlined' } },
       ],
     });

@@ -1,4 +1,6 @@
-import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, effect, inject } from '@angular/core';
+import { MatDialog } from '@angular/material/dialog';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
@@ -6,6 +8,13 @@ import { MatToolbarModule } from '@angular/material/toolbar';
 import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 
 import { Auth } from './core/auth/auth';
+import { LocalJournal } from './core/data/local-journal';
+import { browserStorage } from './core/device/browser-storage';
+import { DeviceStorage } from './core/device/device-storage';
+import { AppUpdates } from './core/pwa/app-updates';
+import { InstallHelpDialog } from './core/pwa/install-help-dialog';
+import { InstallPrompt } from './core/pwa/install-prompt';
+import { TabCoordination } from './core/pwa/tab-coordination';
 import { SyncStatus } from './core/sync/sync-status/sync-status';
 import { SignOutFlow } from './features/account/sign-out/sign-out-flow';
 
@@ -27,6 +36,8 @@ interface Destination {
 export class App {
   private readonly auth = inject(Auth);
   private readonly signOutFlow = inject(SignOutFlow);
+  private readonly dialog = inject(MatDialog);
+  protected readonly installPrompt = inject(InstallPrompt);
 
   protected readonly user = this.auth.user;
   protected readonly isAdmin = this.auth.isAdmin;
@@ -36,7 +47,42 @@ export class App {
     { path: '/library', label: 'Library', icon: 'local_library' },
   ];
 
+  constructor() {
+    inject(AppUpdates);
+    inject(TabCoordination);
+    this.askToKeepStorage();
+  }
+
   protected signOut(): Promise<void> {
     return this.signOutFlow.start();
+  }
+
+  protected install(): void {
+    if (this.installPrompt.option() === 'ios-how-to') this.dialog.open(InstallHelpDialog, { width: '440px' });
+    else void this.installPrompt.install();
+  }
+
+  /**
+   * After sign-in, ask the browser to keep the journal's storage, and say once per device what
+   * it answered (Settings shows it from then on).
+   */
+  private askToKeepStorage(): void {
+    const journal = inject(LocalJournal);
+    const storage = inject(DeviceStorage);
+    const snackBar = inject(MatSnackBar);
+    effect(() => {
+      if (!journal.db()) return;
+      void storage.requestPersistence().then((kept) => {
+        if (browserStorage.read<boolean>('lamplight.storageAsked')) return;
+        browserStorage.write('lamplight.storageAsked', true);
+        snackBar.open(
+          kept
+            ? 'Your browser will keep Lamplight’s storage, so your journal is not cleared to free space.'
+            : 'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.',
+          'OK',
+          { duration: 8000 },
+        );
+      });
+    });
   }
 }

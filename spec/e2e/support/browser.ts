@@ -1,4 +1,8 @@
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
 /** Debian's Chromium, never a downloaded browser. */
 const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
@@ -6,21 +10,28 @@ const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
 // Browser specs start Chromium and a server; give them room on a slow, shared machine.
 jasmine.DEFAULT_TIMEOUT_INTERVAL = 60_000;
 
+// The network here is closed: keep Chromium from calling out on its own.
+const ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
 export function launchBrowser(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: CHROMIUM,
-    headless: true,
-    // The network here is closed: keep Chromium from calling out on its own.
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
+  return chromium.launch({ executablePath: CHROMIUM, headless: true, args: ARGS });
+}
+
+/**
+ * A browser with a real profile on disk. Contexts of `launchBrowser()` are incognito-like, and
+ * Chromium never offers to install an app from incognito.
+ */
+export function launchProfile(): Promise<BrowserContext> {
+  const profile = mkdtempSync(path.join(tmpdir(), 'lamplight-profile-'));
+  return chromium.launchPersistentContext(profile, { executablePath: CHROMIUM, headless: true, args: ARGS });
 }
 
 /** Collects every URL the page (and its workers) request, to check they stay on our origin. */

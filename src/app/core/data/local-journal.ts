@@ -1,4 +1,4 @@
-import { computed, effect, inject, Injectable, type Signal } from '@angular/core';
+import { computed, effect, inject, Injectable, signal, type Signal } from '@angular/core';
 import Dexie from 'dexie';
 
 import { Auth } from '../auth/auth';
@@ -13,18 +13,31 @@ export class LocalJournal {
   private readonly auth = inject(Auth);
   private readonly userId = computed(() => this.auth.user()?.id ?? null);
 
+  private readonly closedByOtherTab = signal(false);
+  private readonly upgradeWaiting = signal(false);
+
   /** The reader's database, or `null` when nobody is signed in. */
   readonly db: Signal<JournalDb | null> = computed(() => {
     const userId = this.userId();
     return userId ? new JournalDb(userId) : null;
   });
+  /** Another tab opened a newer version of the database, so this tab closed its copy. */
+  readonly replacedElsewhere = this.closedByOtherTab.asReadonly();
+  /** This tab wants to upgrade the database but an older tab still holds it open. */
+  readonly upgradeBlocked = this.upgradeWaiting.asReadonly();
 
   constructor() {
     // Open at sign-in rather than on first read, so a schema upgrade happens at a calm moment.
     effect((onCleanup) => {
       const db = this.db();
-      db?.open().catch((error: unknown) => console.error('Could not open the local journal', error));
-      onCleanup(() => db?.close());
+      if (!db) return;
+      // Dexie closes this connection on versionchange after we are told, so the other tab's
+      // upgrade never waits on us.
+      db.on('versionchange', () => this.closedByOtherTab.set(true));
+      db.on('blocked', () => this.upgradeWaiting.set(true));
+      db.on('ready', () => this.upgradeWaiting.set(false));
+      db.open().catch((error: unknown) => console.error('Could not open the local journal', error));
+      onCleanup(() => db.close());
     });
   }
 

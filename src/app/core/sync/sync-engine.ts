@@ -8,7 +8,6 @@ import { retryDelayMs, runSyncCycle } from '@shared/sync/sync-cycle';
 import { Auth } from '../auth/auth';
 import { isUnreachable } from '../http/api-error-message';
 import { JournalStore } from '../data/journal-store';
-import { DeviceStorage } from '../device/device-storage';
 import { liveQuerySignal } from '../data/live-query';
 import { LocalJournal } from '../data/local-journal';
 import { DexieSyncPorts } from './dexie-sync-ports';
@@ -51,12 +50,9 @@ export class SyncEngine {
 
   constructor() {
     const destroyRef = inject(DestroyRef);
-    // A reader signed in (or the app opened with one): ask to keep the journal's storage, and sync.
-    const storage = inject(DeviceStorage);
+    // A reader signed in (or the app opened with one): sync now.
     effect(() => {
-      if (!this.journal.db()) return;
-      void storage.requestPersistence();
-      if (!this.auth.needsSignIn()) this.schedule(0);
+      if (this.journal.db() && !this.auth.needsSignIn()) this.schedule(0);
     });
     inject(JournalStore)
       .localWrites.pipe(debounceTime(WRITE_DEBOUNCE_MS), takeUntilDestroyed(destroyRef))

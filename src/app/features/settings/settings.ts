@@ -7,11 +7,12 @@ import { SignOutFlow } from '../account/sign-out/sign-out-flow';
 import { ChangePassword } from './change-password/change-password';
 import { DeleteAccount } from './delete-account/delete-account';
 import { Devices } from './devices/devices';
+import { StoragePanel } from './storage-panel/storage-panel';
 
 /** The reader's account, devices and this device's storage. */
 @Component({
   selector: 'll-settings',
-  imports: [MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount],
+  imports: [MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount, StoragePanel],
   templateUrl: './settings.html',
   styleUrl: './settings.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -5,11 +5,14 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { Router, RouterLink } from '@angular/router';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { map } from 'rxjs';
 
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
 import { BOOK_FORMATS, BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
+import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { JournalStore } from '../../../core/data/journal-store';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { FORMAT_LABELS, STATUS_LABELS } from '../book-labels';
@@ -53,6 +56,8 @@ export class BookEditor {
   private original: BookFormValue = EMPTY_BOOK_FORM;
 
   constructor() {
+    // An update or another tab must not reload the page over unsaved input.
+    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
     effect(() => {
       const id = this.id();
       if (id) void this.load(id);

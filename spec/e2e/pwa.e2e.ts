@@ -1,0 +1,86 @@
+import { createHash } from 'node:crypto';
+import { cpSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+
+import { BUILT_APP_DIR, startTestServer, type RunningServer } from '../support/test-server';
+import { launchProfile, offOrigin, recordRequests } from './support/browser';
+import { fillBook } from './support/library';
+import { registerThroughApi, signInThroughUi } from './support/reader';
+import { waitForOfflineReady } from './support/service-worker';
+
+/**
+ * The installable, offline app. The server serves a copy of the production build, so the spec
+ * can turn that copy into a "new version" the way a deployment would: change a file and its hash
+ * in ngsw.json.
+ */
+describe('Lamplight as an installed app on a plane', () => {
+  let appDir: string;
+  let server: RunningServer;
+
+  beforeAll(async () => {
+    appDir = mkdtempSync(path.join(tmpdir(), 'lamplight-build-'));
+    cpSync(BUILT_APP_DIR, appDir, { recursive: true });
+    server = await startTestServer({ withApp: true, env: { LAMPLIGHT_APP_DIR: appDir } });
+  });
+
+  afterAll(async () => {
+    await server?.close();
+  });
+
+  it('activates its service worker, is installable, works offline with the reader’s data, stays on its origin, and offers a new version', async () => {
+    const reader = await registerThroughApi(server.baseUrl, 'Wilhelmina Osei');
+    const context = await launchProfile();
+    const page = context.pages()[0] ?? (await context.newPage());
+    const requests = recordRequests(page);
+    context.on('request', (request) => requests.push(request.url())); // service worker fetches too
+
+    await signInThroughUi(page, server.baseUrl, reader.user.email, reader.password);
+    await page.goto(`${server.baseUrl}/library/new`);
+    await fillBook(page, { title: 'Lanterns over Lake Vell', authors: 'Corin Hale' });
+
+    // (1) The service worker activates and controls the page.
+    await waitForOfflineReady(page, server.baseUrl);
+    const worker = await page.evaluate(async () => {
+      const registration = await navigator.serviceWorker.ready;
+      return { state: registration.active?.state, controlled: navigator.serviceWorker.controller !== null, script: registration.active?.scriptURL };
+    });
+    expect(worker).toEqual({ state: 'activated', controlled: true, script: `${server.baseUrl}/ngsw-worker.js` });
+
+    // (2) Chromium finds nothing stopping installation (DevTools Protocol).
+    const cdp = await context.newCDPSession(page);
+    const { installabilityErrors } = (await cdp.send('Page.getInstallabilityErrors')) as { installabilityErrors: unknown[] };
+    expect(installabilityErrors).toEqual([]);
+
+    // (3) Offline, a reload still shows the shell and the reader's local data.
+    await context.setOffline(true);
+    await page.goto(`${server.baseUrl}/library`);
+    await page.getByRole('link', { name: /Lanterns over Lake Vell/ }).waitFor();
+    expect(await page.locator('.brand-name').textContent()).toBe('Lamplight');
+    await page.getByRole('button', { name: /^Sync status: Offline/ }).waitFor();
+    await context.setOffline(false);
+
+    // (4) Every request went to the app's own origin.
+    expect(requests.length).toBeGreaterThan(5);
+    expect(offOrigin(requests, server.baseUrl)).toEqual([]);
+
+    // (5) A new build is detected and the update snackbar appears.
+    publishNewVersion(appDir);
+    await page.reload();
+    await page.getByText('A new version of Lamplight is ready.').waitFor({ timeout: 30_000 });
+    await page.getByRole('button', { name: 'Reload', exact: true }).waitFor();
+    await context.close();
+  });
+});
+
+/** What a deployment changes: a file's content, and its SHA-1 in the service worker's manifest. */
+function publishNewVersion(dir: string): void {
+  const indexFile = path.join(dir, 'index.html');
+  const html = readFileSync(indexFile, 'utf8').replace('</body>', '<!-- next version --></body>');
+  writeFileSync(indexFile, html);
+  const ngswFile = path.join(dir, 'ngsw.json');
+  const ngsw = JSON.parse(readFileSync(ngswFile, 'utf8')) as { timestamp: number; hashTable: Record<string, string> };
+  ngsw.hashTable['/index.html'] = createHash('sha1').update(html).digest('hex');
+  ngsw.timestamp = Date.now();
+  writeFileSync(ngswFile, JSON.stringify(ngsw, null, 2));
+}

@@ -1,0 +1,70 @@
+import { DestroyRef, effect, inject, Injectable, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { SwUpdate, type VersionReadyEvent } from '@angular/service-worker';
+import { filter } from 'rxjs';
+
+import { UnsavedWork } from './unsaved-work';
+
+/** Look for a new version this often while the app is open (and whenever it becomes visible). */
+const CHECK_EVERY_MS = 30 * 60 * 1000;
+
+/**
+ * New versions of Lamplight: when one is ready, offers a reload in a snackbar; when the running
+ * version cannot continue ("unrecoverable"), says so and reloads. Neither ever reloads while a
+ * form holds unsaved input or a timer dialog is open: it waits until that is done.
+ */
+@Injectable({ providedIn: 'root' })
+export class AppUpdates {
+  private readonly updates = inject(SwUpdate);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly unsaved = inject(UnsavedWork);
+  private readonly reloadWanted = signal(false);
+
+  constructor() {
+    if (!this.updates.isEnabled) return;
+    const destroyRef = inject(DestroyRef);
+    this.updates.versionUpdates
+      .pipe(
+        filter((event): event is VersionReadyEvent => event.type === 'VERSION_READY'),
+        takeUntilDestroyed(destroyRef),
+      )
+      .subscribe(() => this.offerReload());
+    this.updates.unrecoverable.pipe(takeUntilDestroyed(destroyRef)).subscribe(() => {
+      this.snackBar.open('Lamplight has to reload to keep working. Your journal is safe on this device.', undefined, {
+        duration: 6000,
+      });
+      this.reloadWanted.set(true);
+    });
+    // Reload as soon as it is safe, once a reload is wanted.
+    effect(() => {
+      if (this.reloadWanted() && !this.unsaved.present()) globalThis.location.reload();
+    });
+    void this.check();
+    const timer = setInterval(() => void this.check(), CHECK_EVERY_MS);
+    const onVisible = () => globalThis.document.visibilityState === 'visible' && void this.check();
+    globalThis.document?.addEventListener('visibilitychange', onVisible);
+    destroyRef.onDestroy(() => {
+      clearInterval(timer);
+      globalThis.document?.removeEventListener('visibilitychange', onVisible);
+    });
+  }
+
+  private async check(): Promise<void> {
+    try {
+      await this.updates.checkForUpdate();
+    } catch {
+      // Offline, or the server is away: the next check will do.
+    }
+  }
+
+  private offerReload(): void {
+    const ref = this.snackBar.open('A new version of Lamplight is ready.', 'Reload', { duration: 0 });
+    ref.onAction().subscribe(() => {
+      if (this.unsaved.present()) {
+        this.snackBar.open('Lamplight will reload once you have saved what you are writing.', undefined, { duration: 5000 });
+      }
+      this.reloadWanted.set(true);
+    });
+  }
+}
