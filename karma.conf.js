@@ -8,6 +8,7 @@ function SummaryReporter(baseReporterDecorator) {
   let passed = 0;
   let failed = 0;
   this.onSpecComplete = (_browser, result) => {
+    if (process.env.KARMA_VERBOSE) this.write(`\n  ${result.success ? 'ok' : 'FAIL'}  ${result.fullName}\n`);
     if (result.skipped) return;
     if (result.success) passed++;
     else failed++;
@@ -32,7 +33,7 @@ module.exports = function (config) {
     ],
     client: {
       clearContext: true,
-      jasmine: { random: true },
+      jasmine: { random: true, seed: process.env.KARMA_SEED },
     },
     reporters: ['dots', 'summary'],
     browsers: ['ChromiumHeadlessLocal'],

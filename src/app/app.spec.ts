@@ -7,6 +7,7 @@ import { provideServiceWorker } from '@angular/service-worker';
 import { App } from './app';
 import { routes } from './app.routes';
 import { forgetSession, rememberSession } from './core/auth/testing/session-fixtures';
+import { PAGE_RELOAD } from './core/pwa/page-reload';
 
 describe('App shell', () => {
   beforeEach(() => {
@@ -16,6 +17,7 @@ describe('App shell', () => {
         provideRouter(routes),
         provideHttpClient(),
         provideServiceWorker('ngsw-worker.js', { enabled: false }),
+        { provide: PAGE_RELOAD, useValue: () => fail('the app tried to reload the page') },
         { provide: MAT_ICON_DEFAULT_OPTIONS, useValue: { fontSet: 'material-symbols-outlined' } },
       ],
     });

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, effect, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject } from '@angular/core';
 import { MatDialog } from '@angular/material/dialog';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatButtonModule } from '@angular/material/button';
@@ -70,10 +70,12 @@ export class App {
     const journal = inject(LocalJournal);
     const storage = inject(DeviceStorage);
     const snackBar = inject(MatSnackBar);
+    let destroyed = false;
+    inject(DestroyRef).onDestroy(() => (destroyed = true));
     effect(() => {
       if (!journal.db()) return;
       void storage.requestPersistence().then((kept) => {
-        if (browserStorage.read<boolean>('lamplight.storageAsked')) return;
+        if (destroyed || browserStorage.read<boolean>('lamplight.storageAsked')) return;
         browserStorage.write('lamplight.storageAsked', true);
         snackBar.open(
           kept

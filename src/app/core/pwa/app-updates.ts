@@ -4,6 +4,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { SwUpdate, type VersionReadyEvent } from '@angular/service-worker';
 import { filter } from 'rxjs';
 
+import { PAGE_RELOAD } from './page-reload';
 import { UnsavedWork } from './unsaved-work';
 
 /** Look for a new version this often while the app is open (and whenever it becomes visible). */
@@ -20,6 +21,7 @@ export class AppUpdates {
   private readonly snackBar = inject(MatSnackBar);
   private readonly unsaved = inject(UnsavedWork);
   private readonly reloadWanted = signal(false);
+  private readonly reload = inject(PAGE_RELOAD);
 
   constructor() {
     if (!this.updates.isEnabled) return;
@@ -38,7 +40,7 @@ export class AppUpdates {
     });
     // Reload as soon as it is safe, once a reload is wanted.
     effect(() => {
-      if (this.reloadWanted() && !this.unsaved.present()) globalThis.location.reload();
+      if (this.reloadWanted() && !this.unsaved.present()) this.reload();
     });
     void this.check();
     const timer = setInterval(() => void this.check(), CHECK_EVERY_MS);

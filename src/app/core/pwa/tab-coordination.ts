@@ -1,7 +1,8 @@
-import { effect, inject, Injectable } from '@angular/core';
+import { DestroyRef, effect, inject, Injectable } from '@angular/core';
 import { MatSnackBar } from '@angular/material/snack-bar';
 
 import { LocalJournal } from '../data/local-journal';
+import { PAGE_RELOAD } from './page-reload';
 import { UnsavedWork } from './unsaved-work';
 
 /**
@@ -15,16 +16,20 @@ export class TabCoordination {
     const journal = inject(LocalJournal);
     const unsaved = inject(UnsavedWork);
     const snackBar = inject(MatSnackBar);
+    const reload = inject(PAGE_RELOAD);
     let told = false;
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    inject(DestroyRef).onDestroy(() => clearTimeout(timer));
     effect(() => {
       if (!journal.replacedElsewhere()) return;
       if (!told) {
         told = true;
         snackBar.open('Lamplight was updated in another tab, so this tab reloads to keep up.', 'Reload now', { duration: 0 })
           .onAction()
-          .subscribe(() => globalThis.location.reload());
+          .subscribe(() => reload());
       }
-      if (!unsaved.present()) setTimeout(() => globalThis.location.reload(), 2500);
+      clearTimeout(timer);
+      if (!unsaved.present()) timer = setTimeout(reload, 2500);
     });
     effect(() => {
       if (journal.upgradeBlocked()) {
