@@ -7,11 +7,14 @@ import { AdminUsers } from './domain/admin-users';
 import { DeviceSessions } from './domain/device-sessions';
 import type { Mailer } from './domain/mailer';
 import { PasswordResets } from './domain/password-resets';
+import { Uploads } from './domain/uploads';
 import { adminRoutes } from './entry-points/admin.routes';
 import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
+import { uploadsRoutes } from './entry-points/uploads.routes';
 import { SyncStore } from './data-access/sync-store';
+import { UploadStore } from './data-access/upload-store';
 import { healthRoutes } from './entry-points/health.routes';
 import { requireAdmin, requireAuth } from './entry-points/require-auth';
 import { attemptLimiter, securityHeaders } from './entry-points/security';
@@ -49,6 +52,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
   app.use('/api/sync', syncRoutes(new SyncStore(dataSource)));
+  app.use('/api/uploads', uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);
 

@@ -24,7 +24,12 @@ export interface ServerConfig {
   readonly devMailDir: string | null;
   /** Sign-in, registration and reset attempts allowed per client address per 15 minutes. */
   readonly authRateLimit: number;
+  /** Largest cover image accepted by `POST /api/uploads`, in bytes. */
+  readonly uploadMaxBytes: number;
 }
+
+/** Covers are resized on the device to at most 600 px tall, so 2 MiB leaves plenty of room. */
+const DEFAULT_UPLOAD_MAX_BYTES = 2 * 1024 * 1024;
 
 const environmentSchema = z
   .object({
@@ -44,6 +49,13 @@ const environmentSchema = z
     LAMPLIGHT_MAIL_FROM: z.string().default('Lamplight <no-reply@lamplight.invalid>'),
     LAMPLIGHT_DEV_MAIL_DIR: z.string().optional(),
     LAMPLIGHT_AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(20),
+    // An upload is held in memory while it is checked and stored in one bytea value, hence the cap.
+    LAMPLIGHT_UPLOAD_MAX_BYTES: z.coerce
+      .number()
+      .int('must be a whole number of bytes')
+      .min(1024, 'must be at least 1024 bytes')
+      .max(16 * 1024 * 1024, 'must be at most 16 MiB (16777216 bytes)')
+      .default(DEFAULT_UPLOAD_MAX_BYTES),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
@@ -77,5 +89,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     mailFrom: values.LAMPLIGHT_MAIL_FROM,
     devMailDir: production || !values.LAMPLIGHT_DEV_MAIL_DIR ? null : path.resolve(values.LAMPLIGHT_DEV_MAIL_DIR),
     authRateLimit: values.LAMPLIGHT_AUTH_RATE_LIMIT,
+    uploadMaxBytes: values.LAMPLIGHT_UPLOAD_MAX_BYTES,
   };
 }

@@ -5,14 +5,25 @@ import { COLLECTIONS } from '../../../shared/sync/schema/collections';
 /** Tables whose rows belong to one reader (by `user_id`); their size is the reader's stored data. */
 export const USER_DATA_TABLES: readonly string[] = Object.keys(COLLECTIONS);
 
-/** Bytes each user's rows take in PostgreSQL (`pg_column_size` of whole rows), by user id. */
+/**
+ * Bytes each user's data takes in PostgreSQL, by user id: `pg_column_size` of whole rows of the
+ * synced tables, plus the byte size of every upload they own. An image two readers uploaded is
+ * stored once but counts for both, since each would keep it if the other left.
+ */
 export async function storedBytesByUser(dataSource: DataSource): Promise<Map<string, number>> {
   const sizes = new Map<string, number>();
-  for (const table of USER_DATA_TABLES) {
-    const rows: { user_id: string; bytes: string }[] = await dataSource.query(
-      `SELECT user_id, sum(pg_column_size(t.*))::bigint AS bytes FROM ${table} t GROUP BY user_id`,
-    );
+  const add = (rows: { user_id: string; bytes: string }[]) => {
     for (const row of rows) sizes.set(row.user_id, (sizes.get(row.user_id) ?? 0) + Number(row.bytes));
+  };
+  for (const table of USER_DATA_TABLES) {
+    add(await dataSource.query(`SELECT user_id, sum(pg_column_size(t.*))::bigint AS bytes FROM ${table} t GROUP BY user_id`));
   }
+  add(
+    await dataSource.query(
+      `SELECT o.user_id, sum(u.byte_size)::bigint AS bytes
+         FROM upload_owners o JOIN uploads u ON u.id = o.upload_id
+        GROUP BY o.user_id`,
+    ),
+  );
   return sizes;
 }

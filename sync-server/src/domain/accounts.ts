@@ -4,6 +4,7 @@ import type { AccountUser, LoginInput, RegisterInput, SignedIn } from '../../../
 import type { ServerConfig } from '../config';
 import { AppError } from '../errors';
 import { User } from '../data-access/entities/user.entity';
+import { ownedUploadIds, removeOrphanedUploads } from '../data-access/upload-store';
 import { welcomeMail } from './account-mail';
 import type { DeviceSessions } from './device-sessions';
 import type { Mailer } from './mailer';
@@ -88,12 +89,19 @@ export class Accounts {
     });
   }
 
-  /** Deletes the account and, through foreign keys, everything it owns. */
+  /**
+   * Deletes the account and, through foreign keys, everything it owns, including its ownership
+   * of uploads. Images that no other reader owns go too, in the same transaction.
+   */
   async deleteAccount(userId: string, password: string): Promise<void> {
     const user = await this.find(userId);
     if (!(await verifyPassword(password, user.passwordHash))) {
       throw new AppError(400, 'invalid_input', 'The password is not right', { password: 'The password is not right' });
     }
-    await this.users.delete({ id: userId });
+    await this.dataSource.transaction(async (manager) => {
+      const uploadIds = await ownedUploadIds(manager, userId);
+      await manager.delete(User, { id: userId });
+      await removeOrphanedUploads(manager, uploadIds);
+    });
   }
 }

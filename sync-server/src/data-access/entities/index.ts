@@ -2,10 +2,12 @@ import { BookRow } from './book.entity';
 import { DeviceSession } from './device-session.entity';
 import { PasswordReset } from './password-reset.entity';
 import { RefreshToken } from './refresh-token.entity';
+import { Upload } from './upload.entity';
+import { UploadOwner } from './upload-owner.entity';
 import { User } from './user.entity';
 
 /** The entity of each synced collection, by collection name (its table has the same name). */
 export const SYNCED_ENTITIES = { books: BookRow } as const;
 
-/** Every entity the DataSource knows; add new ones here. */
-export const entities = [User, DeviceSession, RefreshToken, PasswordReset, ...Object.values(SYNCED_ENTITIES)];
+/** Every entity the DataSource knows; add new ones here. Uploads are not synced rows: they have their own API. */
+export const entities = [User, DeviceSession, RefreshToken, PasswordReset, Upload, UploadOwner, ...Object.values(SYNCED_ENTITIES)];
