@@ -25,7 +25,7 @@ describe('The shared schema, the TypeORM entities and the migrated database agre
   for (const spec of Object.values(COLLECTIONS)) {
     it(`${spec.name}: every field is a nullable entity column of the same type, and nothing else is`, async () => {
       const metadata = (await testDataSource()).getMetadata(SYNCED_ENTITIES[spec.name as keyof typeof SYNCED_ENTITIES]);
-      expect(metadata.tableName).toBe(spec.name);
+      expect(metadata.tableName).toBe(spec.table);
       const byColumn = new Map(metadata.columns.map((column) => [column.databaseName, column]));
 
       for (const [name, field] of Object.entries(spec.fields)) {
@@ -42,7 +42,7 @@ describe('The shared schema, the TypeORM entities and the migrated database agre
     it(`${spec.name}: the migrated table has exactly those columns and types`, async () => {
       const rows: { column_name: string; data_type: string; is_nullable: string }[] = await (await testDataSource()).query(
         `SELECT column_name, data_type, is_nullable FROM information_schema.columns WHERE table_name = $1`,
-        [spec.name],
+        [spec.table],
       );
       const actual = new Map(rows.map((row) => [row.column_name, row]));
 

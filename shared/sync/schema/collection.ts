@@ -1,12 +1,15 @@
 import type { z } from 'zod';
 
-import { field, type FieldSpec } from './field';
+import { columnName, field, type FieldSpec } from './field';
 
 /** Field names the sync layer keeps for itself. */
 export const RESERVED_FIELDS = ['id', 'userId', 'hlc', 'clocks', 'seq'] as const;
 
 export interface CollectionSpec<Fields extends Record<string, FieldSpec> = Record<string, FieldSpec>> {
+  /** The name on the wire and in IndexedDB (camelCase). */
   readonly name: string;
+  /** The PostgreSQL table (snake_case of the name). */
+  readonly table: string;
   /** Every field, including the `deleted` tombstone. */
   readonly fields: Fields & { readonly deleted: FieldSpec<boolean> };
   /** Fields the client indexes in IndexedDB for its queries. */
@@ -22,7 +25,7 @@ export function defineCollection<const Fields extends Record<string, FieldSpec>>
   for (const reserved of RESERVED_FIELDS) {
     if (reserved in fields) throw new Error(`${name}.${reserved} is reserved for the sync layer`);
   }
-  return { name, fields: { ...fields, deleted: field.boolean() }, indexes: options.indexes ?? [] };
+  return { name, table: columnName(name), fields: { ...fields, deleted: field.boolean() }, indexes: options.indexes ?? [] };
 }
 
 /** The shape of a row of a collection: its id plus every field (absent until its piece arrives). */

@@ -57,6 +57,11 @@ export const field = {
         .refine(isValidIsbn13, 'is not a valid ISBN-13 (check digit)')
         .nullable(),
     ),
+  /** A language tag such as 'en' or 'pt-BR' (BCP 47 shape: a 2–3 letter language, then subtags). */
+  optionalLanguage: () =>
+    spec('text', z.string().regex(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/, 'must be a language tag like en or pt-BR').nullable()),
+  /** The id of an uploaded image: the hex SHA-256 of its bytes (FIPS 180-4). */
+  optionalUploadId: () => spec('text', z.string().regex(/^[0-9a-f]{64}$/, 'must be an upload id (64 hex digits)').nullable()),
   json: <T>(schema: z.ZodType<T>) => spec('jsonb', schema),
 };
 

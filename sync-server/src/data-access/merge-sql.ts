@@ -29,10 +29,10 @@ export function mergeSql(spec: CollectionSpec): string {
       -- A scalar subquery is never flattened into a join: one primary-key probe per row, even
       -- while statistics lag behind a big first sync (a join was planned as a scan of all the
       -- reader's rows then).
-      SELECT i.*, (SELECT t.clocks FROM ${spec.name} t WHERE t.user_id = $1::uuid AND t.id = i.id) AS stored_clocks
+      SELECT i.*, (SELECT t.clocks FROM ${spec.table} t WHERE t.user_id = $1::uuid AND t.id = i.id) AS stored_clocks
         FROM input i
     ), merged AS (
-      INSERT INTO ${spec.name} AS t (user_id, id, ${fields.map(column).join(', ')}, clocks, seq)
+      INSERT INTO ${spec.table} AS t (user_id, id, ${fields.map(column).join(', ')}, clocks, seq)
       SELECT $1::uuid, d.id, ${fields.map((field) => `d.${column(field)}`).join(', ')}, d.clocks, d.seq
         FROM decided d
        WHERE d.stored_clocks IS NULL OR ${anyWins('d.clocks', 'd.stored_clocks')}
@@ -51,7 +51,7 @@ export function mergeSql(spec: CollectionSpec): string {
 /** Rows changed after a sequence, across every collection, in sequence order. */
 export function pullSql(specs: readonly CollectionSpec[]): string {
   const parts = specs.map(
-    (spec) => `SELECT '${spec.name}' AS collection, t.seq, to_jsonb(t) AS row FROM ${spec.name} t WHERE t.user_id = $1 AND t.seq > $2`,
+    (spec) => `SELECT '${spec.name}' AS collection, t.seq, to_jsonb(t) AS row FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2`,
   );
   return `SELECT collection, seq, row FROM (${parts.join(' UNION ALL ')}) changed ORDER BY seq LIMIT $3`;
 }

@@ -12,7 +12,7 @@ const MERGES = new Map(
   SPECS.map((spec) => [
     spec.name,
     {
-      statement: { name: `lamplight_merge_${spec.name}`, text: mergeSql(spec) },
+      statement: { name: `lamplight_merge_${spec.table}`, text: mergeSql(spec) },
       columns: new Map(Object.keys(spec.fields).map((field) => [field, columnName(field)])),
     },
   ]),

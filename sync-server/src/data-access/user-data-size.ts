@@ -3,7 +3,7 @@ import type { DataSource } from 'typeorm';
 import { COLLECTIONS } from '../../../shared/sync/schema/collections';
 
 /** Tables whose rows belong to one reader (by `user_id`); their size is the reader's stored data. */
-export const USER_DATA_TABLES: readonly string[] = Object.keys(COLLECTIONS);
+export const USER_DATA_TABLES: readonly string[] = Object.values(COLLECTIONS).map((spec) => spec.table);
 
 /**
  * Bytes each user's data takes in PostgreSQL, by user id: `pg_column_size` of whole rows of the

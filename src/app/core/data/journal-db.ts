@@ -16,6 +16,19 @@ export interface RejectedChange extends FieldChange {
   readonly rejectedAt: string;
 }
 
+/**
+ * A cover image kept on this device: the compressed bytes, shown offline, and whether the
+ * server has them yet. `id` is the hex SHA-256 of the bytes, which is also the server's id.
+ */
+export interface StoredCover {
+  readonly id: string;
+  readonly blob: Blob;
+  readonly mediaType: string;
+  readonly state: 'pending' | 'uploaded' | 'refused';
+  /** Why the server refused it, for the reader. */
+  readonly problem?: string;
+}
+
 /** Small key-value facts about this database: the last clock, the pull cursor, the last sync. */
 export interface MetaEntry {
   readonly key: 'clock' | 'cursor' | 'lastSyncedAt';
@@ -29,7 +42,7 @@ export const journalDbName = (userId: string) => `lamplight-journal-${userId}`;
  * Bump when the stores below change (a new collection or index). Dexie works out the upgrade
  * from the latest declaration; other open tabs get a `versionchange` and close.
  */
-export const JOURNAL_DB_VERSION = 1;
+export const JOURNAL_DB_VERSION = 2;
 
 /** Dexie store specs for every synced collection, from the shared schema: `id` plus its indexes. */
 export function collectionStores(): Record<string, string> {
@@ -41,6 +54,8 @@ export class JournalDb extends Dexie {
   outbox!: Table<OutboxEntry, number>;
   rejected!: Table<RejectedChange, string>;
   meta!: Table<MetaEntry, string>;
+  /** Cover images on this device (not a synced collection: books sync their `coverId`). */
+  covers!: Table<StoredCover, string>;
 
   constructor(readonly userId: string) {
     super(journalDbName(userId));
@@ -49,6 +64,7 @@ export class JournalDb extends Dexie {
       outbox: '++seq',
       rejected: 'id',
       meta: 'key',
+      covers: 'id, state',
     });
   }
 

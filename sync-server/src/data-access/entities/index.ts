@@ -1,4 +1,6 @@
+import { BookStatusChangeRow } from './book-status-change.entity';
 import { BookRow } from './book.entity';
+import { ReadingRow } from './reading.entity';
 import { DeviceSession } from './device-session.entity';
 import { PasswordReset } from './password-reset.entity';
 import { RefreshToken } from './refresh-token.entity';
@@ -7,7 +9,7 @@ import { UploadOwner } from './upload-owner.entity';
 import { User } from './user.entity';
 
 /** The entity of each synced collection, by collection name (its table has the same name). */
-export const SYNCED_ENTITIES = { books: BookRow } as const;
+export const SYNCED_ENTITIES = { books: BookRow, bookStatusChanges: BookStatusChangeRow, readings: ReadingRow } as const;
 
 /** Every entity the DataSource knows; add new ones here. Uploads are not synced rows: they have their own API. */
 export const entities = [User, DeviceSession, RefreshToken, PasswordReset, Upload, UploadOwner, ...Object.values(SYNCED_ENTITIES)];

@@ -2,6 +2,13 @@ import { CreateUsers1764633600000 } from './1764633600000-create-users';
 import { CreateAuth1764720000000 } from './1764720000000-create-auth';
 import { CreateSync1764806400000 } from './1764806400000-create-sync';
 import { CreateUploads1764892800000 } from './1764892800000-create-uploads';
+import { Library1764979200000 } from './1764979200000-library';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
-export const migrations = [CreateUsers1764633600000, CreateAuth1764720000000, CreateSync1764806400000, CreateUploads1764892800000];
+export const migrations = [
+  CreateUsers1764633600000,
+  CreateAuth1764720000000,
+  CreateSync1764806400000,
+  CreateUploads1764892800000,
+  Library1764979200000,
+];
