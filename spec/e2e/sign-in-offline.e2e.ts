@@ -20,7 +20,7 @@ describe('Signing in once, then reading offline', () => {
     expect(new URL(page.url()).pathname).toBe('/today');
     expect(await databaseNames(page)).toContain(`lamplight-journal-${reader.user.id}`);
 
-    await page.getByRole('button', { name: 'Account menu' }).click();
+    await page.getByRole('button', { name: /account menu/ }).click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
     await page.getByRole('button', { name: 'Keep and sign out' }).click();
     await page.waitForURL(`${harness.server.baseUrl}/sign-in`);
@@ -38,7 +38,7 @@ describe('Signing in once, then reading offline', () => {
     await page.getByRole('heading', { name: /Joaquín Ferreira/ }).waitFor();
     expect(await databaseNames(page)).toContain(`lamplight-journal-${reader.user.id}`);
 
-    await page.getByRole('button', { name: 'Account menu' }).click();
+    await page.getByRole('button', { name: /account menu/ }).click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
     await page.getByRole('button', { name: 'Erase from this device' }).click();
     await page.waitForURL(`${harness.server.baseUrl}/sign-in`);

@@ -32,7 +32,7 @@ describe('Two devices of one reader editing offline', () => {
     await laptop.goto(`${harness.server.baseUrl}/library`);
     await syncNow(laptop);
     await laptop.getByRole('link', { name: /The Cartographer of Tides/ }).click();
-    expect((await bookFacts(laptop))['Pages']).toBe('320');
+    expect((await bookFacts(laptop))['Length']).toBe('320 pages');
 
     // Both go offline and edit the same book: different fields, and the rating on both.
     await tablet.context().setOffline(true);
@@ -44,7 +44,7 @@ describe('Two devices of one reader editing offline', () => {
 
     // Nothing typed offline is lost across a reload.
     await laptop.reload();
-    expect(await bookFacts(laptop)).toEqual(jasmine.objectContaining({ Pages: '352', Rating: '3.5 of 5' }));
+    expect(await bookFacts(laptop)).toEqual(jasmine.objectContaining({ Length: '352 pages', Rating: '3.5 of 5 stars' }));
 
     await laptop.getByRole('button', { name: /^Sync status: Offline · 2 changes waiting/ }).waitFor();
 
@@ -55,7 +55,7 @@ describe('Two devices of one reader editing offline', () => {
     await syncNow(laptop);
     await syncNow(tablet);
 
-    const expected = { Title: 'The Cartographer of Quiet Tides', Pages: '352', Rating: '3.5 of 5', Status: 'Reading', Format: 'Print' };
+    const expected = { Title: 'The Cartographer of Quiet Tides', Length: '352 pages', Rating: '3.5 of 5 stars', Status: 'Reading', Format: 'Print' };
     await tablet.reload();
     await laptop.reload();
     expect(await bookFacts(tablet)).toEqual(jasmine.objectContaining(expected));

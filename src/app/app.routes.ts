@@ -58,6 +58,16 @@ export const routes: Routes = [
             title: 'Edit book · Lamplight',
             loadComponent: () => import('./features/library/book-editor/book-editor').then((m) => m.BookEditor),
           },
+          {
+            path: ':id/readings/new',
+            title: 'A reading · Lamplight',
+            loadComponent: () => import('./features/library/reading-editor/reading-editor').then((m) => m.ReadingEditor),
+          },
+          {
+            path: ':id/readings/:readingId',
+            title: 'Edit reading · Lamplight',
+            loadComponent: () => import('./features/library/reading-editor/reading-editor').then((m) => m.ReadingEditor),
+          },
         ],
       },
       {

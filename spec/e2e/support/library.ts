@@ -26,7 +26,15 @@ export async function bookFacts(page: Page): Promise<Record<string, string>> {
   return page.evaluate(() => {
     const facts: Record<string, string> = { Title: document.querySelector('article.book .title')?.textContent?.trim() ?? '' };
     for (const dt of Array.from(document.querySelectorAll('article.book dt'))) {
-      facts[dt.textContent!.trim()] = dt.nextElementSibling?.textContent?.trim() ?? '';
+      const dd = dt.nextElementSibling as HTMLElement | null;
+      // A select shows its chosen option; stars are read by their label, as a screen reader would.
+      const select = dd?.querySelector('select');
+      const stars = dd?.querySelector('[role="img"]');
+      facts[dt.textContent!.trim()] = select
+        ? (select.selectedOptions[0]?.textContent?.trim() ?? '')
+        : stars
+          ? (stars.getAttribute('aria-label') ?? '')
+          : (dd?.textContent?.trim() ?? '');
     }
     return facts;
   });

@@ -15,6 +15,13 @@ import { LocalJournal } from './local-journal';
 
 type Spec<C extends CollectionName> = (typeof COLLECTIONS)[C];
 
+/** One row's fields to write, for {@link JournalStore.writeAll}. */
+export interface RowWrite {
+  readonly collection: CollectionName;
+  readonly rowId: string;
+  readonly patch: Readonly<Record<string, unknown>>;
+}
+
 /**
  * Every local write. In one Dexie transaction it updates the row, stamps each changed field with
  * a new hybrid logical clock and appends one outbox change per changed field, so a write is
@@ -30,26 +37,39 @@ export class JournalStore {
   readonly localWrites = this.writes.asObservable();
 
   /** Writes the given fields of a row (creating it if needed); unchanged fields are skipped. */
-  async write<C extends CollectionName>(collection: C, rowId: string, patch: PatchOf<Spec<C>>): Promise<void> {
-    const db = this.requireDb();
-    const problems = validatePatch(COLLECTIONS[collection], patch);
-    if (Object.keys(problems).length > 0) throw new InvalidFieldsError(problems);
+  write<C extends CollectionName>(collection: C, rowId: string, patch: PatchOf<Spec<C>>): Promise<void> {
+    return this.writeAll([{ collection, rowId, patch }]);
+  }
 
-    const changed = await db.transaction('rw', [db.rows(collection), db.outbox, db.meta], async () => {
-      const row: LocalRow = (await db.rows(collection).get(rowId)) ?? emptyRow(rowId);
-      const fields = Object.entries(patch).filter(([field, value]) => !sameValue(row[field], value));
-      if (fields.length === 0) return false;
-      const clock = new HlcClock(deviceId(), Date.now, (await db.meta.get('clock'))?.value);
-      const hlc = clock.tick();
-      await db.meta.put({ key: 'clock', value: hlc });
-      const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
+  /**
+   * Several rows in one transaction, under one clock: all of them are saved, or none (a book's
+   * status and its history entry, say).
+   */
+  async writeAll(writes: readonly RowWrite[]): Promise<void> {
+    const db = this.requireDb();
+    for (const { collection, patch } of writes) {
+      const problems = validatePatch(COLLECTIONS[collection], patch);
+      if (Object.keys(problems).length > 0) throw new InvalidFieldsError(problems);
+    }
+    const tables = [...new Set(writes.map((w) => w.collection))].map((name) => db.rows(name));
+    const changed = await db.transaction('rw', [...tables, db.outbox, db.meta], async () => {
       const outbox: OutboxEntry[] = [];
-      for (const [field, value] of fields) {
-        next[field] = value;
-        (next['_hlc'] as Record<string, string>)[field] = hlc;
-        outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value, hlc });
+      let hlc: string | null = null;
+      for (const { collection, rowId, patch } of writes) {
+        const row: LocalRow = (await db.rows(collection).get(rowId)) ?? emptyRow(rowId);
+        const fields = Object.entries(patch).filter(([field, value]) => !sameValue(row[field], value));
+        if (fields.length === 0) continue;
+        hlc ??= new HlcClock(deviceId(), Date.now, (await db.meta.get('clock'))?.value).tick();
+        const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
+        for (const [field, value] of fields) {
+          next[field] = value;
+          (next['_hlc'] as Record<string, string>)[field] = hlc;
+          outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value, hlc });
+        }
+        await db.rows(collection).put(next as LocalRow);
       }
-      await db.rows(collection).put(next as LocalRow);
+      if (!hlc) return false;
+      await db.meta.put({ key: 'clock', value: hlc });
       await db.outbox.bulkAdd(outbox);
       return true;
     });
@@ -61,6 +81,11 @@ export class JournalStore {
     const id = crypto.randomUUID();
     await this.write(collection, id, { ...fields, deleted: false } as PatchOf<Spec<C>>);
     return id;
+  }
+
+  /** Rows of a collection that are not deleted. */
+  async list<C extends CollectionName>(collection: C): Promise<RowOf<Spec<C>>[]> {
+    return (await this.requireDb().rows(collection).toArray()).filter((row) => !row['deleted']) as unknown as RowOf<Spec<C>>[];
   }
 
   /** Deletes by tombstone, which syncs like any other edit. */

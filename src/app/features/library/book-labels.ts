@@ -1,4 +1,4 @@
-import type { Book } from '@shared/sync/schema/collections';
+import type { Book, Reading } from '@shared/sync/schema/collections';
 
 /** Words readers see for each format and status. TBR and DNF are readers' own terms. */
 export const FORMAT_LABELS: Record<NonNullable<Book['format']>, string> = {
@@ -15,9 +15,34 @@ export const STATUS_LABELS: Record<NonNullable<Book['status']>, string> = {
   dnf: 'DNF',
 };
 
+/** Where the copy is. */
+export const COPY_LABELS: Record<NonNullable<Book['copy']>, string> = {
+  owned: 'On my shelf',
+  borrowed: 'Borrowed',
+  library: 'From the library',
+  wishlist: 'On my wishlist',
+};
+
+export const RECOMMEND_LABELS: Record<NonNullable<Reading['recommend']>, string> = {
+  yes: 'Yes',
+  maybe: 'Maybe',
+  no: 'No',
+};
+
 /** Authors as one line: "Nell Ashby and Tomas Reyes", "A, B and C". */
 export function authorLine(authors: readonly string[] | undefined): string {
   const names = authors ?? [];
   if (names.length <= 1) return names[0] ?? '';
   return `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
+}
+
+/** The book's length in its own unit: "320 pages", "11 h 5 min". */
+export function lengthLine(book: Pick<Book, 'format' | 'pageCount' | 'audioMinutes'>): string {
+  if (book.format === 'audiobook') {
+    const minutes = book.audioMinutes;
+    if (!minutes) return '';
+    const hours = Math.floor(minutes / 60);
+    return hours > 0 ? `${hours} h ${minutes % 60} min` : `${minutes} min`;
+  }
+  return book.pageCount ? `${book.pageCount} pages` : '';
 }

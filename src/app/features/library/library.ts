@@ -1,30 +1,106 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatPaginatorModule, type PageEvent } from '@angular/material/paginator';
+import { MatSortModule, type Sort } from '@angular/material/sort';
+import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 
-import type { Book } from '@shared/sync/schema/collections';
+import { BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../core/data/live-query';
+import { browserStorage } from '../../core/device/browser-storage';
 import { authorLine, FORMAT_LABELS, STATUS_LABELS } from './book-labels';
+import { BookStatus } from './book-status';
+import { queryLibrary, searchText, type LibraryQuery, type LibrarySortKey } from './library-query';
+import { StarRating } from './star-rating/star-rating';
 
-/** Every book the reader tracks: owned, borrowed, wanted and finished. Read from this device. */
+type View = 'table' | 'covers';
+const VIEW_KEY = 'lamplight.libraryView';
+
+/** Every book the reader tracks, as a table or a wall of covers. Read from this device only. */
 @Component({
   selector: 'll-library',
-  imports: [RouterLink, MatButtonModule, MatIconModule],
+  imports: [
+    RouterLink,
+    MatButtonModule,
+    MatButtonToggleModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatPaginatorModule,
+    MatSortModule,
+    MatTableModule,
+    StarRating,
+  ],
   templateUrl: './library.html',
   styleUrl: './library.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class Library {
+  private readonly bookStatus = inject(BookStatus);
+
   protected readonly books = liveQuerySignal(
-    async (db) =>
-      ((await db.rows('books').toArray()) as Book[])
-        .filter((book) => !book.deleted)
-        .sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')),
+    async (db) => ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted),
     [] as Book[],
   );
-  protected readonly authorLine = authorLine;
-  protected readonly formatLabels = FORMAT_LABELS;
+  /** Search text per book, rebuilt when the library changes rather than on every keystroke. */
+  private readonly index = computed(() => new Map(this.books().map((book) => [book.id, searchText(book)])));
+
+  protected readonly text = signal('');
+  protected readonly status = signal<LibraryQuery['status']>('all');
+  protected readonly sort = signal<LibraryQuery['sort']>({ by: 'title', direction: 'asc' });
+  protected readonly view = signal<View>(browserStorage.read<View>(VIEW_KEY) ?? 'table');
+  protected readonly page = signal({ index: 0, size: 50 });
+
+  protected readonly found = computed(() =>
+    queryLibrary(this.books(), this.index(), { text: this.text(), status: this.status(), sort: this.sort() }),
+  );
+  protected readonly shown = computed(() => {
+    const { index, size } = this.page();
+    return this.found().slice(index * size, (index + 1) * size);
+  });
+
+  protected readonly columns = ['title', 'authors', 'format', 'status', 'rating'];
+  protected readonly statuses = BOOK_STATUSES;
   protected readonly statusLabels = STATUS_LABELS;
+  protected readonly authorLine = authorLine;
+
+  protected formatOf(book: Book): string {
+    return book.format ? FORMAT_LABELS[book.format] : '';
+  }
+
+  protected statusOf(book: Book): string {
+    return book.status ? STATUS_LABELS[book.status] : '';
+  }
+
+  protected search(text: string): void {
+    this.text.set(text);
+    this.page.update((page) => ({ ...page, index: 0 }));
+  }
+
+  protected filterStatus(status: LibraryQuery['status']): void {
+    this.status.set(status);
+    this.page.update((page) => ({ ...page, index: 0 }));
+  }
+
+  protected sortBy(sort: Sort): void {
+    this.sort.set({ by: (sort.active || 'title') as LibrarySortKey, direction: sort.direction || 'asc' });
+  }
+
+  protected turnPage(event: PageEvent): void {
+    this.page.set({ index: event.pageIndex, size: event.pageSize });
+  }
+
+  protected show(view: View): void {
+    this.view.set(view);
+    browserStorage.write(VIEW_KEY, view);
+  }
+
+  protected changeStatus(book: Book, status: string): void {
+    void this.bookStatus.change(book.id, status as NonNullable<Book['status']>);
+  }
 }

@@ -1,30 +1,35 @@
-import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators, type AbstractControl } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { MatSelectModule } from '@angular/material/select';
 import { Router, RouterLink } from '@angular/router';
-import { toSignal } from '@angular/core/rxjs-interop';
-import { map } from 'rxjs';
+import { map, startWith } from 'rxjs';
 
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
-import { BOOK_FORMATS, BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
+import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
-import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { JournalStore } from '../../../core/data/journal-store';
+import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { fieldError, showServerErrors } from '../../account/field-errors';
-import { FORMAT_LABELS, STATUS_LABELS } from '../book-labels';
+import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS } from '../book-labels';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
 
 const isbnValidator = (control: AbstractControl<string>) =>
   !control.value?.trim() || normalizeIsbn(control.value) ? null : { server: 'Enter a valid ISBN-10 or ISBN-13 (check the digits)' };
+const languageValidator = (control: AbstractControl<string>) =>
+  !control.value?.trim() || /^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/.test(control.value.trim())
+    ? null
+    : { server: 'Use a language tag such as en, fr or pt-BR' };
+const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), Validators.min(min), Validators.max(max)];
 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
 @Component({
   selector: 'll-book-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -38,19 +43,32 @@ export class BookEditor {
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
     title: ['', [Validators.required, Validators.maxLength(500)]],
+    subtitle: ['', Validators.maxLength(500)],
     authors: [''],
     format: EMPTY_BOOK_FORM.format as BookFormValue['format'],
+    pageCount: ['', whole(1, 100_000)],
+    audioMinutes: ['', whole(1, 20_000)],
     status: EMPTY_BOOK_FORM.status as BookFormValue['status'],
+    copy: EMPTY_BOOK_FORM.copy as BookFormValue['copy'],
     rating: [''],
-    pageCount: ['', [Validators.min(1), Validators.max(100_000), Validators.pattern(/^\d*$/)]],
     isbn: ['', isbnValidator],
+    publisher: ['', Validators.maxLength(200)],
+    year: ['', whole(1, 3000)],
+    language: ['', languageValidator],
+    genres: [''],
+    tags: [''],
   });
+  private readonly format = toSignal(this.form.controls.format.valueChanges.pipe(startWith(this.form.controls.format.value)));
+  /** Audiobooks are measured in minutes, other formats in pages. */
+  protected readonly audio = computed(() => this.format() === 'audiobook');
   protected readonly missing = signal(false);
   protected readonly problem = signal('');
   protected readonly formats = BOOK_FORMATS;
   protected readonly statuses = BOOK_STATUSES;
+  protected readonly copies = BOOK_COPIES;
   protected readonly formatLabels = FORMAT_LABELS;
   protected readonly statusLabels = STATUS_LABELS;
+  protected readonly copyLabels = COPY_LABELS;
   protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
   protected readonly fieldError = fieldError;
   private original: BookFormValue = EMPTY_BOOK_FORM;
@@ -76,16 +94,26 @@ export class BookEditor {
 
   protected async save(): Promise<void> {
     this.form.markAllAsTouched();
-    if (this.form.invalid) return;
+    if (this.form.invalid) {
+      this.problem.set('Some fields need attention.');
+      return;
+    }
     const value = this.form.getRawValue();
+    const existing = this.id();
+    const bookId = existing ?? crypto.randomUUID();
+    const patch: Record<string, unknown> = existing ? changedFields(this.original, value) : { ...toFields(value), deleted: false };
+    const now = new Date().toISOString();
+    const statusChanged = !existing || patch['status'] !== undefined;
+    if (statusChanged) patch['statusChangedAt'] = now;
     try {
-      const id = this.id();
-      if (id) {
-        await this.store.write('books', id, changedFields(this.original, value));
-      }
-      const savedId = id ?? (await this.store.create('books', toFields(value)));
+      await this.store.writeAll([
+        { collection: 'books', rowId: bookId, patch },
+        ...(statusChanged
+          ? [{ collection: 'bookStatusChanges' as const, rowId: crypto.randomUUID(), patch: { bookId, status: value.status, changedAt: now, deleted: false } }]
+          : []),
+      ]);
       this.form.markAsPristine();
-      await this.router.navigate(['/library', savedId]);
+      await this.router.navigate(['/library', bookId]);
     } catch (error) {
       if (error instanceof InvalidFieldsError) {
         showServerErrors(this.form, error.fields);

@@ -18,14 +18,24 @@ describe('book form model', () => {
   });
 
   it('reads authors from a comma-separated line and blanks as null', () => {
-    expect(toFields({ ...EMPTY_BOOK_FORM, title: ' A Lantern for Ada ', authors: 'Ivo Brandt,  Selma Rook ,', pageCount: ' ' })).toEqual({
+    expect(
+      toFields({ ...EMPTY_BOOK_FORM, title: ' A Lantern for Ada ', authors: 'Ivo Brandt,  Selma Rook ,Ivo Brandt', pageCount: ' ', genres: 'fable, ' }),
+    ).toEqual({
       title: 'A Lantern for Ada',
+      subtitle: null,
       authors: ['Ivo Brandt', 'Selma Rook'],
       format: 'print',
-      status: 'tbr',
-      rating: null,
       pageCount: null,
+      audioMinutes: null,
+      status: 'tbr',
+      copy: 'owned',
+      rating: null,
       isbn: null,
+      publisher: null,
+      year: null,
+      language: null,
+      genres: ['fable'],
+      tags: [],
     });
   });
 

@@ -1,55 +1,92 @@
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
-import type { Book } from '@shared/sync/schema/collections';
 import type { PatchOf } from '@shared/sync/schema/collection';
-import type { books } from '@shared/sync/schema/collections';
+import type { Book, books } from '@shared/sync/schema/collections';
 
 /** The editor's form values: what the inputs hold, as text where the reader types text. */
 export interface BookFormValue {
   title: string;
+  subtitle: string;
   authors: string;
   format: NonNullable<Book['format']>;
-  status: NonNullable<Book['status']>;
-  rating: string;
   pageCount: string;
+  audioMinutes: string;
+  status: NonNullable<Book['status']>;
+  copy: NonNullable<Book['copy']> | '';
+  rating: string;
   isbn: string;
+  publisher: string;
+  year: string;
+  language: string;
+  genres: string;
+  tags: string;
 }
 
 export const EMPTY_BOOK_FORM: BookFormValue = {
   title: '',
+  subtitle: '',
   authors: '',
   format: 'print',
-  status: 'tbr',
-  rating: '',
   pageCount: '',
+  audioMinutes: '',
+  status: 'tbr',
+  copy: 'owned',
+  rating: '',
   isbn: '',
+  publisher: '',
+  year: '',
+  language: '',
+  genres: '',
+  tags: '',
 };
+
+const text = (value: string | null | undefined) => value ?? '';
+const number = (value: number | null | undefined) => (value == null ? '' : String(value));
+const list = (value: readonly string[] | undefined) => (value ?? []).join(', ');
 
 /** A stored book as form values. */
 export function toFormValue(book: Book): BookFormValue {
   return {
-    title: book.title ?? '',
-    authors: (book.authors ?? []).join(', '),
+    title: text(book.title),
+    subtitle: text(book.subtitle),
+    authors: list(book.authors),
     format: book.format ?? 'print',
+    pageCount: number(book.pageCount),
+    audioMinutes: number(book.audioMinutes),
     status: book.status ?? 'tbr',
-    rating: book.rating == null ? '' : String(book.rating),
-    pageCount: book.pageCount == null ? '' : String(book.pageCount),
-    isbn: book.isbn ?? '',
+    copy: book.copy ?? '',
+    rating: number(book.rating),
+    isbn: text(book.isbn),
+    publisher: text(book.publisher),
+    year: number(book.year),
+    language: text(book.language),
+    genres: list(book.genres),
+    tags: list(book.tags),
   };
 }
 
-/** Form values as field values: authors split on commas, blanks as null, ISBN-10 as ISBN-13. */
+const optionalText = (value: string) => (value.trim() === '' ? null : value.trim());
+const optionalNumber = (value: string) => (value.trim() === '' ? null : Number(value));
+/** "Nell Ashby, Tomas Reyes" → ['Nell Ashby', 'Tomas Reyes']; repeated names once. */
+const splitList = (value: string) => [...new Set(value.split(/[,\n]/).map((item) => item.trim()).filter(Boolean))];
+
+/** Form values as field values: lists split on commas, blanks as null, ISBN-10 as ISBN-13. */
 export function toFields(value: BookFormValue): PatchOf<typeof books> {
   return {
     title: value.title.trim(),
-    authors: value.authors
-      .split(/[,\n]/)
-      .map((name) => name.trim())
-      .filter(Boolean),
+    subtitle: optionalText(value.subtitle),
+    authors: splitList(value.authors),
     format: value.format,
+    pageCount: optionalNumber(value.pageCount),
+    audioMinutes: optionalNumber(value.audioMinutes),
     status: value.status,
-    rating: value.rating === '' ? null : Number(value.rating),
-    pageCount: value.pageCount.trim() === '' ? null : Number(value.pageCount),
+    copy: value.copy === '' ? null : value.copy,
+    rating: optionalNumber(value.rating),
     isbn: value.isbn.trim() === '' ? null : (normalizeIsbn(value.isbn) ?? value.isbn.trim()),
+    publisher: optionalText(value.publisher),
+    year: optionalNumber(value.year),
+    language: optionalText(value.language),
+    genres: splitList(value.genres),
+    tags: splitList(value.tags),
   };
 }
 

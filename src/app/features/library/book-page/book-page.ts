@@ -1,3 +1,4 @@
+import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -6,15 +7,39 @@ import { RouterLink } from '@angular/router';
 import { liveQuery } from 'dexie';
 import { combineLatest, from, of, switchMap } from 'rxjs';
 
-import type { Book } from '@shared/sync/schema/collections';
+import { BOOK_STATUSES, type Book, type BookStatusChange, type Reading } from '@shared/sync/schema/collections';
 
+import type { JournalDb } from '../../../core/data/journal-db';
+import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { authorLine, FORMAT_LABELS, STATUS_LABELS } from '../book-labels';
+import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS } from '../book-labels';
+import { BookStatus } from '../book-status';
+import { StarRating } from '../star-rating/star-rating';
 
-/** Everything about one book, live from this device (edits from other devices appear as they sync). */
+/** Everything the reader keeps about one book, on this device, together with what is linked to it. */
+interface BookDossier {
+  readonly book: Book | undefined;
+  readonly readings: Reading[];
+  readonly history: BookStatusChange[];
+}
+
+async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
+  const [book, readings, history] = await Promise.all([
+    db.rows('books').get(id) as Promise<Book | undefined>,
+    db.rows('readings').where('bookId').equals(id).toArray() as Promise<Reading[]>,
+    db.rows('bookStatusChanges').where('bookId').equals(id).toArray() as Promise<BookStatusChange[]>,
+  ]);
+  return {
+    book,
+    readings: readings.filter((r) => !r.deleted).sort((a, b) => (b.startedOn ?? '').localeCompare(a.startedOn ?? '')),
+    history: history.filter((h) => !h.deleted).sort((a, b) => (b.changedAt ?? '').localeCompare(a.changedAt ?? '')),
+  };
+}
+
+/** One book: its details, its readings with reviews, and its status history, live from this device. */
 @Component({
   selector: 'll-book-page',
-  imports: [RouterLink, MatButtonModule, MatIconModule],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -24,12 +49,31 @@ export class BookPage {
   readonly id = input.required<string>();
 
   private readonly journal = inject(LocalJournal);
-  protected readonly book = toSignal(
+  private readonly store = inject(JournalStore);
+  private readonly bookStatus = inject(BookStatus);
+  private readonly data = toSignal(
     combineLatest([toObservable(this.journal.db), toObservable(this.id)]).pipe(
-      switchMap(([db, id]) => (db ? from(liveQuery(async () => (await db.rows('books').get(id)) as Book | undefined)) : of(undefined))),
+      switchMap(([db, id]) => (db ? from(liveQuery(() => dossier(db, id))) : of(undefined))),
     ),
   );
+  protected readonly book = computed(() => this.data()?.book);
+  protected readonly readings = computed(() => this.data()?.readings ?? []);
+  protected readonly history = computed(() => this.data()?.history ?? []);
+  protected readonly loaded = computed(() => this.data() !== undefined);
   protected readonly authors = computed(() => authorLine(this.book()?.authors));
+  protected readonly length = computed(() => (this.book() ? lengthLine(this.book()!) : ''));
+
+  protected readonly statuses = BOOK_STATUSES;
   protected readonly formatLabels = FORMAT_LABELS;
   protected readonly statusLabels = STATUS_LABELS;
+  protected readonly copyLabels = COPY_LABELS;
+  protected readonly recommendLabels = RECOMMEND_LABELS;
+
+  protected changeStatus(status: string): void {
+    void this.bookStatus.change(this.id(), status as NonNullable<Book['status']>);
+  }
+
+  protected async deleteReading(reading: Reading): Promise<void> {
+    await this.store.remove('readings', reading.id);
+  }
 }

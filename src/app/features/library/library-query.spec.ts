@@ -1,0 +1,42 @@
+import type { Book } from '@shared/sync/schema/collections';
+
+import { queryLibrary, searchText, type LibraryQuery } from './library-query';
+
+const book = (id: string, fields: Partial<Book>): Book => ({ id, deleted: false, ...fields });
+const shelf = [
+  book('a', { title: 'Émile and the Salt Roads', authors: ['Priya Lindqvist'], status: 'reading', rating: 4, isbn: '9789295055124' }),
+  book('b', { title: 'A Harbour of Small Hours', authors: ['Tobias Avery'], status: 'finished', rating: 5, tags: ['winter'] }),
+  book('c', { title: 'The Copper Orchard', authors: ['Mina Achebe-Ross'], status: 'tbr' }),
+  book('d', { title: 'copper kettles', authors: ['Ana Zorrilla'], status: 'finished', rating: 2.5 }),
+];
+const index = new Map(shelf.map((b) => [b.id, searchText(b)]));
+const query = (overrides: Partial<LibraryQuery>): string[] =>
+  queryLibrary(shelf, index, { text: '', status: 'all', sort: { by: 'title', direction: 'asc' }, ...overrides }).map((b) => b.id);
+
+describe('queryLibrary', () => {
+  it('finds books by any words of the title or author, ignoring case and accents', () => {
+    expect(query({ text: 'copper' })).toEqual(['c', 'd']);
+    expect(query({ text: 'emile salt' })).toEqual(['a']);
+    expect(query({ text: 'AVERY harbour' })).toEqual(['b']);
+    expect(query({ text: 'winter' })).toEqual(['b']);
+    expect(query({ text: 'nothing like this' })).toEqual([]);
+  });
+
+  it('finds a book by its ISBN typed with hyphens (ISBN Users’ Manual form 978-92-95055-12-4)', () => {
+    expect(query({ text: '978-92-95055-12-4' })).toEqual(['a']);
+  });
+
+  it('filters by status', () => {
+    expect(query({ status: 'finished' })).toEqual(['b', 'd']);
+  });
+
+  it('sorts titles in a human way (Intl.Collator, base sensitivity) and authors by surname', () => {
+    expect(query({})).toEqual(['b', 'd', 'a', 'c']); // "A Harbour", "copper kettles", "Émile", "The Copper"
+    expect(query({ sort: { by: 'authors', direction: 'asc' } })).toEqual(['c', 'b', 'a', 'd']); // Achebe-Ross, Avery, Lindqvist, Zorrilla
+  });
+
+  it('puts unrated books last whichever way ratings are sorted', () => {
+    expect(query({ sort: { by: 'rating', direction: 'desc' } })).toEqual(['b', 'a', 'd', 'c']);
+    expect(query({ sort: { by: 'rating', direction: 'asc' } })).toEqual(['d', 'a', 'b', 'c']);
+  });
+});

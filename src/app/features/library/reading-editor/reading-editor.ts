@@ -1,0 +1,115 @@
+import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { Router, RouterLink } from '@angular/router';
+import { format } from 'date-fns';
+import { map } from 'rxjs';
+
+import { RECOMMEND_ANSWERS, type Book, type Reading } from '@shared/sync/schema/collections';
+
+import { InvalidFieldsError } from '../../../core/data/field-errors';
+import { JournalStore, type RowWrite } from '../../../core/data/journal-store';
+import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { fieldError, showServerErrors } from '../../account/field-errors';
+import { RECOMMEND_LABELS } from '../book-labels';
+import {
+  changedReadingFields,
+  EMPTY_READING_FORM,
+  readingDatesValidator,
+  toReadingFields,
+  toReadingForm,
+  type ReadingFormValue,
+} from './reading-form-model';
+
+/** One reading of a book: its dates and the review. A re-read is simply another reading. */
+@Component({
+  selector: 'll-reading-editor',
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  templateUrl: './reading-editor.html',
+  styleUrl: './reading-editor.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ReadingEditor {
+  private readonly store = inject(JournalStore);
+  private readonly router = inject(Router);
+
+  /** The book, from the route. */
+  readonly id = input.required<string>();
+  /** The reading, from the route; absent for a new one. */
+  readonly readingId = input<string>();
+
+  protected readonly form = inject(FormBuilder).nonNullable.group(
+    {
+      startedOn: [''],
+      finishedOn: [''],
+      rating: [''],
+      summary: ['', Validators.maxLength(200)],
+      review: ['', Validators.maxLength(20_000)],
+      takeaways: ['', Validators.maxLength(5_000)],
+      recommend: EMPTY_READING_FORM.recommend as ReadingFormValue['recommend'],
+      recommendTo: ['', Validators.maxLength(200)],
+    },
+    { validators: readingDatesValidator(() => format(new Date(), 'yyyy-MM-dd')) },
+  );
+  protected readonly bookTitle = signal('');
+  protected readonly problem = signal('');
+  protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
+  protected readonly answers = RECOMMEND_ANSWERS;
+  protected readonly answerLabels = RECOMMEND_LABELS;
+  protected readonly fieldError = fieldError;
+  private original: ReadingFormValue = EMPTY_READING_FORM;
+
+  constructor() {
+    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    effect(() => void this.load(this.id(), this.readingId()));
+  }
+
+  private async load(bookId: string, readingId: string | undefined): Promise<void> {
+    const book = (await this.store.get('books', bookId)) as Book | undefined;
+    this.bookTitle.set(book?.title ?? '');
+    if (!readingId) {
+      this.form.reset({ ...EMPTY_READING_FORM, startedOn: format(new Date(), 'yyyy-MM-dd') });
+      this.original = EMPTY_READING_FORM;
+      return;
+    }
+    const reading = (await this.store.get('readings', readingId)) as Reading | undefined;
+    if (reading) {
+      this.original = toReadingForm(reading);
+      this.form.reset(this.original);
+    }
+  }
+
+  protected async save(): Promise<void> {
+    this.form.markAllAsTouched();
+    if (this.form.invalid) {
+      this.problem.set(this.form.errors?.['dates'] ?? 'Some fields need attention.');
+      return;
+    }
+    const bookId = this.id();
+    const existing = this.readingId();
+    const readingId = existing ?? crypto.randomUUID();
+    const value = this.form.getRawValue();
+    const patch = existing ? changedReadingFields(this.original, value) : { ...toReadingFields(value), bookId, deleted: false };
+    const writes: RowWrite[] = [{ collection: 'readings', rowId: readingId, patch }];
+    if (patch.rating !== undefined && (await this.isLatest(bookId, readingId, value.startedOn))) {
+      // The book's rating follows its latest reading.
+      writes.push({ collection: 'books', rowId: bookId, patch: { rating: patch.rating } });
+    }
+    try {
+      await this.store.writeAll(writes);
+      this.form.markAsPristine();
+      await this.router.navigate(['/library', bookId]);
+    } catch (error) {
+      if (error instanceof InvalidFieldsError) showServerErrors(this.form, error.fields);
+      this.problem.set('This reading could not be saved. What was saved before is unchanged.');
+    }
+  }
+
+  private async isLatest(bookId: string, readingId: string, startedOn: string): Promise<boolean> {
+    const others = (await this.store.list('readings')).filter((r) => r.bookId === bookId && r.id !== readingId);
+    return others.every((other) => (other.startedOn ?? '') <= (startedOn || '9999'));
+  }
+}
