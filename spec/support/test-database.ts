@@ -24,8 +24,8 @@ export function testDataSource(): Promise<DataSource> {
   return shared;
 }
 
-/** Closes the shared DataSource after all specs, so Jasmine can exit. */
-afterAll(async () => {
+/** Closes the shared DataSource after all specs, so Jasmine can exit (not loaded under Jasmine by benchmarks). */
+if (typeof afterAll === 'function') afterAll(async () => {
   if (shared) await (await shared).destroy();
   shared = undefined;
 });
