@@ -6,6 +6,16 @@ export const BOOK_STATUSES = ['tbr', 'reading', 'paused', 'finished', 'dnf'] as 
 /** Where the reader's copy is. */
 export const BOOK_COPIES = ['owned', 'borrowed', 'library', 'wishlist'] as const;
 export const RECOMMEND_ANSWERS = ['yes', 'maybe', 'no'] as const;
+export const WISH_PRIORITIES = ['high', 'medium', 'low'] as const;
+/** How far a DNF got: a page, or a percent of the book. */
+export const PROGRESS_UNITS = ['page', 'percent', 'minute'] as const;
+export const FAVOURITE_KINDS = ['book', 'author', 'quote'] as const;
+/** Our label palette and icons: named, so every device draws them alike. */
+export const LABEL_COLOURS = ['amber', 'rose', 'sage', 'teal', 'sky', 'plum', 'slate', 'sand'] as const;
+export const LABEL_ICONS = ['star', 'repeat', 'group', 'favorite', 'bolt', 'spa', 'local_cafe', 'flag', 'auto_stories', 'bookmark'] as const;
+
+/** Labels a book or a quote may carry, by label id (at most 20). */
+const labelIds = () => field.textList(20, 36);
 
 /** The books of a reader's library. */
 export const books = defineCollection(
@@ -31,8 +41,24 @@ export const books = defineCollection(
     coverId: field.optionalUploadId(),
     /** The reader's rating of the book (the latest reading's, unless they set it themselves). */
     rating: field.optionalNumber(0.5, 5, 0.5),
+    labelIds: labelIds(),
+    /** Place in a series; decimals allowed for in-between stories (2.5). */
+    seriesId: field.optionalRef(),
+    seriesPosition: field.optionalNumber(0, 1000),
+    /** A DNF keeps how far the reader got, when and why. */
+    dnfProgress: field.optionalNumber(0, 100_000),
+    dnfUnit: field.optionalChoice(PROGRESS_UNITS),
+    dnfOn: field.optionalDate(),
+    dnfReason: field.optionalText(1000),
+    /** On the wishlist: how much it is wanted, where to get it, a note on price. */
+    wishPriority: field.optionalChoice(WISH_PRIORITIES),
+    wishWhere: field.optionalText(300),
+    wishPriceNote: field.optionalText(200),
+    /** An upcoming release. */
+    releaseDate: field.optionalDate(),
+    preordered: field.optionalBoolean(),
   },
-  { indexes: ['status', 'title'] },
+  { indexes: ['status', 'title', 'seriesId'] },
 );
 export type Book = RowOf<typeof books>;
 
@@ -70,8 +96,107 @@ export const readings = defineCollection(
 );
 export type Reading = RowOf<typeof readings>;
 
+/** A series the reader follows: its books are the books whose `seriesId` points here. */
+export const series = defineCollection('series', {
+  name: field.text(300),
+  /** How many books the series will have, when known. */
+  plannedCount: field.optionalInteger(1, 500),
+  review: field.optionalText(20_000),
+  rating: field.optionalNumber(0.5, 5, 0.5),
+});
+export type Series = RowOf<typeof series>;
+
+/** A passage the reader kept, with where in the book it is. */
+export const quotes = defineCollection(
+  'quotes',
+  {
+    bookId: field.optionalRef(),
+    text: field.text(5_000),
+    /** Where it is, in the book's own unit: a page, an ebook location, or an audio position. */
+    page: field.optionalInteger(0, 100_000),
+    ebookLocation: field.optionalText(40),
+    audioSeconds: field.optionalInteger(0, 1_200_000),
+    chapter: field.optionalText(200),
+    note: field.optionalText(5_000),
+    tags: field.textList(40, 60),
+    labelIds: labelIds(),
+    favourite: field.optionalBoolean(),
+    /** When it was captured (for ordering and the year in review). */
+    capturedAt: field.optionalTimestamp(),
+  },
+  { indexes: ['bookId'] },
+);
+export type Quote = RowOf<typeof quotes>;
+
+/** A notebook of free-form pages, optionally about one book. */
+export const notebooks = defineCollection('notebooks', {
+  title: field.text(300),
+  bookId: field.optionalRef(),
+});
+export type Notebook = RowOf<typeof notebooks>;
+
+/** One page of a notebook: plain text with light formatting (see shared/journal/light-format). */
+export const notebookPages = defineCollection(
+  'notebookPages',
+  {
+    notebookId: field.optionalRef(),
+    title: field.optionalText(300),
+    body: field.optionalText(50_000),
+    /** Order within the notebook; decimals let a page slot in between two others. */
+    position: field.optionalNumber(-1e9, 1e9),
+  },
+  { indexes: ['notebookId'] },
+);
+export type NotebookPage = RowOf<typeof notebookPages>;
+
+/** A page layout the reader saved for reuse. Starter templates ship with the app instead. */
+export const pageTemplates = defineCollection('pageTemplates', {
+  name: field.text(120),
+  title: field.optionalText(300),
+  body: field.optionalText(50_000),
+});
+export type PageTemplate = RowOf<typeof pageTemplates>;
+
+/** A favourite book, author or quote, with why. */
+export const favourites = defineCollection('favourites', {
+  kind: field.choice(FAVOURITE_KINDS),
+  bookId: field.optionalRef(),
+  quoteId: field.optionalRef(),
+  authorName: field.optionalText(200),
+  why: field.optionalText(2_000),
+});
+export type Favourite = RowOf<typeof favourites>;
+
+/** The pick of a month. Its row id is `deterministicId('month-pick', month)`: one row per month. */
+export const monthPicks = defineCollection('monthPicks', {
+  month: field.optionalMonth(),
+  bookId: field.optionalRef(),
+  why: field.optionalText(2_000),
+});
+export type MonthPick = RowOf<typeof monthPicks>;
+
+/** A small label for books and quotes: our starter set (fixed ids) and the reader's own. */
+export const labels = defineCollection('labels', {
+  name: field.text(40),
+  colour: field.choice(LABEL_COLOURS),
+  icon: field.choice(LABEL_ICONS),
+});
+export type Label = RowOf<typeof labels>;
+
 /** Every synced collection, by name: the one source of truth for Dexie, zod and TypeORM. */
-export const COLLECTIONS = { books, bookStatusChanges, readings } as const;
+export const COLLECTIONS = {
+  books,
+  bookStatusChanges,
+  readings,
+  series,
+  quotes,
+  notebooks,
+  notebookPages,
+  pageTemplates,
+  favourites,
+  monthPicks,
+  labels,
+} as const;
 export type CollectionName = keyof typeof COLLECTIONS;
 
 export function collectionSpec(name: string) {

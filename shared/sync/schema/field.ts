@@ -44,6 +44,9 @@ export const field = {
     return spec('double precision', number.nullable());
   },
   boolean: () => spec('boolean', z.boolean({ error: 'must be true or false' })),
+  optionalBoolean: () => spec('boolean', z.boolean({ error: 'must be true or false' }).nullable()),
+  /** A calendar month, 'YYYY-MM' (ISO 8601). */
+  optionalMonth: () => spec('text', z.string().regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'must be a month like 2026-03').nullable()),
   optionalDate: () => spec('text', z.string().regex(DATE, 'must be a date like 2026-03-08').nullable()),
   optionalTimestamp: () => spec('text', z.string().regex(TIMESTAMP, 'must be a UTC time like 2026-03-08T09:30:00.000Z').nullable()),
   optionalRef: () => spec('uuid', z.uuid('must be a row id (UUID)').nullable()),

@@ -59,4 +59,40 @@ export class BookRow extends SyncedRow {
 
   @Column({ type: 'double precision', nullable: true })
   rating: number | null;
+
+  @Column({ name: 'label_ids', type: 'text', array: true, nullable: true })
+  labelIds: string[] | null;
+
+  @Column({ name: 'series_id', type: 'uuid', nullable: true })
+  seriesId: string | null;
+
+  @Column({ name: 'series_position', type: 'double precision', nullable: true })
+  seriesPosition: number | null;
+
+  @Column({ name: 'dnf_progress', type: 'double precision', nullable: true })
+  dnfProgress: number | null;
+
+  @Column({ name: 'dnf_unit', type: 'text', nullable: true })
+  dnfUnit: string | null;
+
+  @Column({ name: 'dnf_on', type: 'text', nullable: true })
+  dnfOn: string | null;
+
+  @Column({ name: 'dnf_reason', type: 'text', nullable: true })
+  dnfReason: string | null;
+
+  @Column({ name: 'wish_priority', type: 'text', nullable: true })
+  wishPriority: string | null;
+
+  @Column({ name: 'wish_where', type: 'text', nullable: true })
+  wishWhere: string | null;
+
+  @Column({ name: 'wish_price_note', type: 'text', nullable: true })
+  wishPriceNote: string | null;
+
+  @Column({ name: 'release_date', type: 'text', nullable: true })
+  releaseDate: string | null;
+
+  @Column({ type: 'boolean', nullable: true })
+  preordered: boolean | null;
 }

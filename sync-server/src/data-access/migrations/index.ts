@@ -3,6 +3,7 @@ import { CreateAuth1764720000000 } from './1764720000000-create-auth';
 import { CreateSync1764806400000 } from './1764806400000-create-sync';
 import { CreateUploads1764892800000 } from './1764892800000-create-uploads';
 import { Library1764979200000 } from './1764979200000-library';
+import { Journal1765065600000 } from './1765065600000-journal';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   CreateSync1764806400000,
   CreateUploads1764892800000,
   Library1764979200000,
+  Journal1765065600000,
 ];
