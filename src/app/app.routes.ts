@@ -71,6 +71,27 @@ export const routes: Routes = [
         ],
       },
       {
+        path: 'journal',
+        children: [
+          { path: '', title: 'Journal · Lamplight', loadComponent: () => import('./features/journal/journal').then((m) => m.Journal) },
+          {
+            path: 'quotes',
+            title: 'Quotes · Lamplight',
+            loadComponent: () => import('./features/quotes/quotes-page/quotes-page').then((m) => m.QuotesPage),
+          },
+          {
+            path: 'notebooks',
+            title: 'Notebooks · Lamplight',
+            loadComponent: () => import('./features/notebooks/notebooks-page/notebooks-page').then((m) => m.NotebooksPage),
+          },
+          {
+            path: 'notebooks/:id',
+            title: 'Notebook · Lamplight',
+            loadComponent: () => import('./features/notebooks/notebook-view/notebook-view').then((m) => m.NotebookView),
+          },
+        ],
+      },
+      {
         path: 'settings',
         title: 'Settings · Lamplight',
         loadComponent: () => import('./features/settings/settings').then((m) => m.Settings),

@@ -45,6 +45,7 @@ export class App {
   protected readonly destinations: readonly Destination[] = [
     { path: '/today', label: 'Today', icon: 'wb_twilight' },
     { path: '/library', label: 'Library', icon: 'local_library' },
+    { path: '/journal', label: 'Journal', icon: 'edit_note' },
   ];
 
   constructor() {
