@@ -1,15 +1,7 @@
-import AxeBuilder from '@axe-core/playwright';
-import type { Page } from 'playwright-core';
-
+import { seriousViolations } from './support/axe';
 import { useServerAndBrowser } from './support/harness';
 import { bookFacts, fillBook } from './support/library';
 import { registerThroughApi, signInThroughUi } from './support/reader';
-
-/** axe-core findings that block or seriously hinder someone (WCAG impact "serious" or "critical"). */
-async function seriousViolations(page: Page): Promise<string[]> {
-  const { violations } = await new AxeBuilder({ page }).analyze();
-  return violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.help} (${v.nodes.length})`);
-}
 
 describe('The library', () => {
   const harness = useServerAndBrowser();

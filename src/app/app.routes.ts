@@ -85,6 +85,26 @@ export const routes: Routes = [
             loadComponent: () => import('./features/notebooks/notebooks-page/notebooks-page').then((m) => m.NotebooksPage),
           },
           {
+            path: 'series',
+            title: 'Series · Lamplight',
+            loadComponent: () => import('./features/series/series-list/series-list').then((m) => m.SeriesList),
+          },
+          {
+            path: 'series/:id',
+            title: 'Series · Lamplight',
+            loadComponent: () => import('./features/series/series-page/series-page').then((m) => m.SeriesPage),
+          },
+          {
+            path: 'favourites',
+            title: 'Favourites and picks · Lamplight',
+            loadComponent: () => import('./features/favourites/favourites-page/favourites-page').then((m) => m.FavouritesPage),
+          },
+          {
+            path: 'labels',
+            title: 'Labels · Lamplight',
+            loadComponent: () => import('./features/labels/labels-page/labels-page').then((m) => m.LabelsPage),
+          },
+          {
             path: 'notebooks/:id',
             title: 'Notebook · Lamplight',
             loadComponent: () => import('./features/notebooks/notebook-view/notebook-view').then((m) => m.NotebookView),

@@ -23,6 +23,13 @@ export const COPY_LABELS: Record<NonNullable<Book['copy']>, string> = {
   wishlist: 'On my wishlist',
 };
 
+/** How much a wishlist book is wanted. */
+export const WISH_PRIORITY_LABELS: Record<NonNullable<Book['wishPriority']>, string> = {
+  high: 'Soon, please',
+  medium: 'Some day',
+  low: 'If it comes my way',
+};
+
 export const RECOMMEND_LABELS: Record<NonNullable<Reading['recommend']>, string> = {
   yes: 'Yes',
   maybe: 'Maybe',

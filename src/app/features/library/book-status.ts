@@ -1,17 +1,23 @@
 import { inject, Injectable } from '@angular/core';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { Router } from '@angular/router';
 
-import type { Book } from '@shared/sync/schema/collections';
+import { nextUnread, seriesBooks } from '@shared/journal/series-order';
+import type { Book, Series } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../core/data/journal-store';
 
 /**
  * Changing a book's status: the book keeps its current status and when it changed, and every
  * change is added to the book's history as a row of its own, so changes made on two devices
- * offline both stay. Both are written in one transaction.
+ * offline both stay. Both are written in one transaction. Finishing a book of a series suggests
+ * the next one to read.
  */
 @Injectable({ providedIn: 'root' })
 export class BookStatus {
   private readonly store = inject(JournalStore);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly router = inject(Router);
 
   /** Does nothing when the book already has that status. */
   async change(bookId: string, status: NonNullable<Book['status']>, at = new Date()): Promise<void> {
@@ -22,5 +28,17 @@ export class BookStatus {
       { collection: 'books', rowId: bookId, patch: { status, statusChangedAt: changedAt } },
       { collection: 'bookStatusChanges', rowId: crypto.randomUUID(), patch: { bookId, status, changedAt, deleted: false } },
     ]);
+    if (status === 'finished' && book?.seriesId) await this.suggestNext(bookId, book.seriesId);
+  }
+
+  /** The next book of the series, offered in a snackbar. */
+  private async suggestNext(bookId: string, seriesId: string): Promise<void> {
+    const series = (await this.store.get('series', seriesId)) as Series | undefined;
+    const next = nextUnread(seriesBooks(await this.store.list('books'), seriesId), bookId);
+    if (!next) return;
+    this.snackBar
+      .open(`Next in ${series?.name ?? 'the series'}: ${next.title ?? 'the next book'}`, 'Open', { duration: 8000 })
+      .onAction()
+      .subscribe(() => void this.router.navigate(['/library', next.id]));
   }
 }

@@ -4,6 +4,8 @@ import type { Book } from '@shared/sync/schema/collections';
 export interface LibraryQuery {
   readonly text: string;
   readonly status: NonNullable<Book['status']> | 'all';
+  /** Only books with this label; `null` for any. */
+  readonly labelId?: string | null;
   readonly sort: { readonly by: LibrarySortKey; readonly direction: 'asc' | 'desc' };
 }
 
@@ -38,6 +40,7 @@ export function queryLibrary(books: readonly Book[], index: ReadonlyMap<string, 
   const matches = books.filter(
     (book) =>
       (query.status === 'all' || book.status === query.status) &&
+      (!query.labelId || (book.labelIds ?? []).includes(query.labelId)) &&
       words.every((word) => (index.get(book.id) ?? '').includes(word)),
   );
   const sign = query.sort.direction === 'asc' ? 1 : -1;

@@ -17,6 +17,8 @@ import { authorLine, FORMAT_LABELS, STATUS_LABELS } from './book-labels';
 import { BookStatus } from './book-status';
 import { queryLibrary, searchText, type LibraryQuery, type LibrarySortKey } from './library-query';
 import { StarRating } from './star-rating/star-rating';
+import { LabelChips } from '../labels/label-chips/label-chips';
+import { LabelDirectory } from '../labels/label-directory';
 
 type View = 'table' | 'covers';
 const VIEW_KEY = 'lamplight.libraryView';
@@ -35,6 +37,7 @@ const VIEW_KEY = 'lamplight.libraryView';
     MatSortModule,
     MatTableModule,
     StarRating,
+    LabelChips,
   ],
   templateUrl: './library.html',
   styleUrl: './library.scss',
@@ -52,12 +55,14 @@ export class Library {
 
   protected readonly text = signal('');
   protected readonly status = signal<LibraryQuery['status']>('all');
+  protected readonly labelId = signal<string | null>(null);
+  protected readonly labels = inject(LabelDirectory).all;
   protected readonly sort = signal<LibraryQuery['sort']>({ by: 'title', direction: 'asc' });
   protected readonly view = signal<View>(browserStorage.read<View>(VIEW_KEY) ?? 'table');
   protected readonly page = signal({ index: 0, size: 50 });
 
   protected readonly found = computed(() =>
-    queryLibrary(this.books(), this.index(), { text: this.text(), status: this.status(), sort: this.sort() }),
+    queryLibrary(this.books(), this.index(), { text: this.text(), status: this.status(), labelId: this.labelId(), sort: this.sort() }),
   );
   protected readonly shown = computed(() => {
     const { index, size } = this.page();
@@ -84,6 +89,11 @@ export class Library {
 
   protected filterStatus(status: LibraryQuery['status']): void {
     this.status.set(status);
+    this.page.update((page) => ({ ...page, index: 0 }));
+  }
+
+  protected filterLabel(labelId: string): void {
+    this.labelId.set(labelId || null);
     this.page.update((page) => ({ ...page, index: 0 }));
   }
 

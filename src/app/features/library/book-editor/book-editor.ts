@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, effect, inject, input, si
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators, type AbstractControl } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
@@ -9,13 +10,15 @@ import { Router, RouterLink } from '@angular/router';
 import { map, startWith } from 'rxjs';
 
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
-import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
+import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, PROGRESS_UNITS, WISH_PRIORITIES, type Book, type Series } from '@shared/sync/schema/collections';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
+import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { fieldError, showServerErrors } from '../../account/field-errors';
-import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS } from '../book-labels';
+import { LabelPicker } from '../../labels/label-picker/label-picker';
+import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
 
 const isbnValidator = (control: AbstractControl<string>) =>
@@ -29,7 +32,7 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
 @Component({
   selector: 'll-book-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, LabelPicker],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -57,10 +60,35 @@ export class BookEditor {
     language: ['', languageValidator],
     genres: [''],
     tags: [''],
+    labelIds: [[] as string[]],
+    seriesId: [''],
+    seriesPosition: ['', [Validators.min(0), Validators.max(1000), Validators.pattern(/^\s*\d*([.,]\d+)?\s*$/)]],
+    dnfProgress: ['', [Validators.min(0), Validators.max(100_000), Validators.pattern(/^\s*\d*([.,]\d+)?\s*$/)]],
+    dnfUnit: EMPTY_BOOK_FORM.dnfUnit as BookFormValue['dnfUnit'],
+    dnfOn: [''],
+    dnfReason: ['', Validators.maxLength(1000)],
+    wishPriority: EMPTY_BOOK_FORM.wishPriority as BookFormValue['wishPriority'],
+    wishWhere: ['', Validators.maxLength(300)],
+    wishPriceNote: ['', Validators.maxLength(200)],
+    releaseDate: [''],
+    preordered: [false],
   });
   private readonly format = toSignal(this.form.controls.format.valueChanges.pipe(startWith(this.form.controls.format.value)));
+  private readonly status = toSignal(this.form.controls.status.valueChanges.pipe(startWith(this.form.controls.status.value)));
+  private readonly copy = toSignal(this.form.controls.copy.valueChanges.pipe(startWith(this.form.controls.copy.value)));
   /** Audiobooks are measured in minutes, other formats in pages. */
   protected readonly audio = computed(() => this.format() === 'audiobook');
+  /** The DNF and wishlist sections appear only where they apply. */
+  protected readonly dnf = computed(() => this.status() === 'dnf');
+  protected readonly wished = computed(() => this.copy() === 'wishlist');
+  protected readonly allSeries = liveQuerySignal(
+    async (db) => ((await db.rows('series').toArray()) as Series[]).filter((s) => !s.deleted).sort((a, b) => (a.name ?? '').localeCompare(b.name ?? '')),
+    [] as Series[],
+  );
+  protected readonly progressUnits = PROGRESS_UNITS;
+  protected readonly progressUnitLabels = { page: 'Page', percent: 'Percent', minute: 'Minute' } as const;
+  protected readonly priorities = WISH_PRIORITIES;
+  protected readonly priorityLabels = WISH_PRIORITY_LABELS;
   protected readonly missing = signal(false);
   protected readonly problem = signal('');
   protected readonly formats = BOOK_FORMATS;

@@ -36,6 +36,18 @@ describe('book form model', () => {
       language: null,
       genres: ['fable'],
       tags: [],
+      labelIds: [],
+      seriesId: null,
+      seriesPosition: null,
+      dnfProgress: null,
+      dnfUnit: null,
+      dnfOn: null,
+      dnfReason: null,
+      wishPriority: null,
+      wishWhere: null,
+      wishPriceNote: null,
+      releaseDate: null,
+      preordered: false,
     });
   });
 

@@ -19,6 +19,18 @@ export interface BookFormValue {
   language: string;
   genres: string;
   tags: string;
+  labelIds: string[];
+  seriesId: string;
+  seriesPosition: string;
+  dnfProgress: string;
+  dnfUnit: NonNullable<Book['dnfUnit']> | '';
+  dnfOn: string;
+  dnfReason: string;
+  wishPriority: NonNullable<Book['wishPriority']> | '';
+  wishWhere: string;
+  wishPriceNote: string;
+  releaseDate: string;
+  preordered: boolean;
 }
 
 export const EMPTY_BOOK_FORM: BookFormValue = {
@@ -37,6 +49,18 @@ export const EMPTY_BOOK_FORM: BookFormValue = {
   language: '',
   genres: '',
   tags: '',
+  labelIds: [],
+  seriesId: '',
+  seriesPosition: '',
+  dnfProgress: '',
+  dnfUnit: '',
+  dnfOn: '',
+  dnfReason: '',
+  wishPriority: '',
+  wishWhere: '',
+  wishPriceNote: '',
+  releaseDate: '',
+  preordered: false,
 };
 
 const text = (value: string | null | undefined) => value ?? '';
@@ -61,6 +85,18 @@ export function toFormValue(book: Book): BookFormValue {
     language: text(book.language),
     genres: list(book.genres),
     tags: list(book.tags),
+    labelIds: [...(book.labelIds ?? [])],
+    seriesId: text(book.seriesId),
+    seriesPosition: number(book.seriesPosition),
+    dnfProgress: number(book.dnfProgress),
+    dnfUnit: book.dnfUnit ?? '',
+    dnfOn: text(book.dnfOn),
+    dnfReason: text(book.dnfReason),
+    wishPriority: book.wishPriority ?? '',
+    wishWhere: text(book.wishWhere),
+    wishPriceNote: text(book.wishPriceNote),
+    releaseDate: text(book.releaseDate),
+    preordered: book.preordered ?? false,
   };
 }
 
@@ -87,6 +123,18 @@ export function toFields(value: BookFormValue): PatchOf<typeof books> {
     language: optionalText(value.language),
     genres: splitList(value.genres),
     tags: splitList(value.tags),
+    labelIds: value.labelIds,
+    seriesId: optionalText(value.seriesId),
+    seriesPosition: optionalNumber(value.seriesPosition),
+    dnfProgress: optionalNumber(value.dnfProgress),
+    dnfUnit: value.dnfUnit === '' ? null : value.dnfUnit,
+    dnfOn: optionalText(value.dnfOn),
+    dnfReason: optionalText(value.dnfReason),
+    wishPriority: value.wishPriority === '' ? null : value.wishPriority,
+    wishWhere: optionalText(value.wishWhere),
+    wishPriceNote: optionalText(value.wishPriceNote),
+    releaseDate: optionalText(value.releaseDate),
+    preordered: value.preordered,
   };
 }
 

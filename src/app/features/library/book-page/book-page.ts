@@ -7,20 +7,22 @@ import { RouterLink } from '@angular/router';
 import { liveQuery } from 'dexie';
 import { combineLatest, from, of, switchMap } from 'rxjs';
 
-import { BOOK_STATUSES, type Book, type BookStatusChange, type Reading } from '@shared/sync/schema/collections';
+import { BOOK_STATUSES, type Book, type BookStatusChange, type Reading, type Series } from '@shared/sync/schema/collections';
 
 import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS } from '../book-labels';
+import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
 import { BookStatus } from '../book-status';
 import { StarRating } from '../star-rating/star-rating';
+import { LabelChips } from '../../labels/label-chips/label-chips';
 
 /** Everything the reader keeps about one book, on this device, together with what is linked to it. */
 interface BookDossier {
   readonly book: Book | undefined;
   readonly readings: Reading[];
   readonly history: BookStatusChange[];
+  readonly series: Series | undefined;
 }
 
 async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
@@ -29,8 +31,10 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
     db.rows('readings').where('bookId').equals(id).toArray() as Promise<Reading[]>,
     db.rows('bookStatusChanges').where('bookId').equals(id).toArray() as Promise<BookStatusChange[]>,
   ]);
+  const series = book?.seriesId ? ((await db.rows('series').get(book.seriesId)) as Series | undefined) : undefined;
   return {
     book,
+    series: series?.deleted ? undefined : series,
     readings: readings.filter((r) => !r.deleted).sort((a, b) => (b.startedOn ?? '').localeCompare(a.startedOn ?? '')),
     history: history.filter((h) => !h.deleted).sort((a, b) => (b.changedAt ?? '').localeCompare(a.changedAt ?? '')),
   };
@@ -39,7 +43,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
 /** One book: its details, its readings with reviews, and its status history, live from this device. */
 @Component({
   selector: 'll-book-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -59,6 +63,7 @@ export class BookPage {
   protected readonly book = computed(() => this.data()?.book);
   protected readonly readings = computed(() => this.data()?.readings ?? []);
   protected readonly history = computed(() => this.data()?.history ?? []);
+  protected readonly series = computed(() => this.data()?.series);
   protected readonly loaded = computed(() => this.data() !== undefined);
   protected readonly authors = computed(() => authorLine(this.book()?.authors));
   protected readonly length = computed(() => (this.book() ? lengthLine(this.book()!) : ''));
@@ -68,6 +73,7 @@ export class BookPage {
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly copyLabels = COPY_LABELS;
   protected readonly recommendLabels = RECOMMEND_LABELS;
+  protected readonly priorityLabels = WISH_PRIORITY_LABELS;
 
   protected changeStatus(status: string): void {
     void this.bookStatus.change(this.id(), status as NonNullable<Book['status']>);

@@ -1,0 +1,108 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { RouterLink } from '@angular/router';
+import { format } from 'date-fns';
+
+import { deterministicId } from '@shared/sync/deterministic-id';
+import { FAVOURITE_KINDS, type Book, type Favourite, type MonthPick, type Quote } from '@shared/sync/schema/collections';
+
+import { JournalStore } from '../../../core/data/journal-store';
+import { liveQuerySignal } from '../../../core/data/live-query';
+import { fieldError } from '../../account/field-errors';
+
+const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'Book', author: 'Author', quote: 'Quote' };
+
+/** Favourite books, authors and quotes, each with why; and a pick for each month of the year. */
+@Component({
+  selector: 'll-favourites-page',
+  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  templateUrl: './favourites-page.html',
+  styleUrl: './favourites-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class FavouritesPage {
+  private readonly store = inject(JournalStore);
+  private readonly data = liveQuerySignal(
+    async (db) => ({
+      favourites: ((await db.rows('favourites').toArray()) as Favourite[]).filter((f) => !f.deleted),
+      picks: ((await db.rows('monthPicks').toArray()) as MonthPick[]).filter((p) => !p.deleted),
+      books: ((await db.rows('books').toArray()) as Book[]).filter((b) => !b.deleted),
+      quotes: ((await db.rows('quotes').toArray()) as Quote[]).filter((q) => !q.deleted),
+    }),
+    { favourites: [] as Favourite[], picks: [] as MonthPick[], books: [] as Book[], quotes: [] as Quote[] },
+  );
+  protected readonly books = computed(() => [...this.data().books].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')));
+  protected readonly quotes = computed(() => this.data().quotes);
+  private readonly bookById = computed(() => new Map(this.data().books.map((b) => [b.id, b])));
+  private readonly quoteById = computed(() => new Map(this.data().quotes.map((q) => [q.id, q])));
+  protected readonly favourites = computed(() =>
+    this.data().favourites.map((favourite) => ({ favourite, subject: this.subject(favourite) })),
+  );
+
+  /** The year whose months are shown. */
+  protected readonly year = signal(new Date().getFullYear());
+  protected readonly months = computed(() => {
+    const picks = new Map(this.data().picks.map((pick) => [pick.month, pick]));
+    return Array.from({ length: 12 }, (_, n) => {
+      const month = `${this.year()}-${String(n + 1).padStart(2, '0')}`;
+      const pick = picks.get(month);
+      return { month, first: `${month}-01`, pick, book: pick?.bookId ? this.bookById().get(pick.bookId) : undefined };
+    });
+  });
+  protected readonly currentMonth = format(new Date(), 'yyyy-MM');
+
+  protected readonly kinds = FAVOURITE_KINDS;
+  protected readonly kindLabels = KIND_LABELS;
+  protected readonly adding = signal(false);
+  protected readonly form = inject(FormBuilder).nonNullable.group({
+    kind: 'book' as (typeof FAVOURITE_KINDS)[number],
+    bookId: [''],
+    quoteId: [''],
+    authorName: ['', Validators.maxLength(200)],
+    why: ['', Validators.maxLength(2_000)],
+  });
+  protected readonly problem = signal('');
+  protected readonly fieldError = fieldError;
+
+  private subject(favourite: Favourite): string {
+    if (favourite.kind === 'author') return favourite.authorName ?? '';
+    if (favourite.kind === 'quote') return `“${this.quoteById().get(favourite.quoteId ?? '')?.text ?? '…'}”`;
+    return this.bookById().get(favourite.bookId ?? '')?.title ?? 'A book not on this device yet';
+  }
+
+  protected async addFavourite(): Promise<void> {
+    const { kind, bookId, quoteId, authorName, why } = this.form.getRawValue();
+    const missing = kind === 'book' ? !bookId : kind === 'quote' ? !quoteId : !authorName.trim();
+    if (this.form.invalid || missing) {
+      this.problem.set(`Choose the ${kind} you love.`);
+      return;
+    }
+    await this.store.create('favourites', {
+      kind,
+      bookId: kind === 'book' ? bookId : null,
+      quoteId: kind === 'quote' ? quoteId : null,
+      authorName: kind === 'author' ? authorName.trim() : null,
+      why: why.trim() || null,
+    });
+    this.problem.set('');
+    this.adding.set(false);
+    this.form.reset();
+  }
+
+  protected removeFavourite(favourite: Favourite): Promise<void> {
+    return this.store.remove('favourites', favourite.id);
+  }
+
+  /** One row per month, the same on every device (a name-based id), so picks never double up. */
+  protected pickForMonth(month: string, bookId: string): Promise<void> {
+    return this.store.write('monthPicks', deterministicId('month-pick', month), { month, bookId: bookId || null, deleted: false });
+  }
+
+  protected explainPick(month: string, why: string): Promise<void> {
+    return this.store.write('monthPicks', deterministicId('month-pick', month), { month, why: why.trim() || null, deleted: false });
+  }
+}

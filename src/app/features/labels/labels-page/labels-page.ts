@@ -1,0 +1,73 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+
+import { LABEL_COLOURS, LABEL_ICONS, type Label } from '@shared/sync/schema/collections';
+
+import { JournalStore } from '../../../core/data/journal-store';
+import { fieldError } from '../../account/field-errors';
+import { LabelDirectory, type LabelView } from '../label-directory';
+
+/** Words for our colours and icons, so choices read well to everyone. */
+const COLOUR_NAMES: Record<NonNullable<Label['colour']>, string> = {
+  amber: 'Amber', rose: 'Rose', sage: 'Sage', teal: 'Teal', sky: 'Sky', plum: 'Plum', slate: 'Slate', sand: 'Sand',
+};
+const ICON_NAMES: Record<NonNullable<Label['icon']>, string> = {
+  star: 'Star', repeat: 'Again', group: 'Together', favorite: 'Heart', bolt: 'Spark', spa: 'Leaf',
+  local_cafe: 'Cup', flag: 'Flag', auto_stories: 'Open book', bookmark: 'Bookmark',
+};
+
+/** The reader's labels: our starter set and their own, to rename, recolour, add or remove. */
+@Component({
+  selector: 'll-labels-page',
+  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  templateUrl: './labels-page.html',
+  styleUrl: './labels-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class LabelsPage {
+  private readonly store = inject(JournalStore);
+  protected readonly directory = inject(LabelDirectory);
+  protected readonly colours = LABEL_COLOURS;
+  protected readonly icons = LABEL_ICONS;
+  protected readonly colourNames = COLOUR_NAMES;
+  protected readonly iconNames = ICON_NAMES;
+  protected readonly editing = signal<string | null>(null);
+  protected readonly fieldError = fieldError;
+
+  protected readonly form = inject(FormBuilder).nonNullable.group({
+    name: ['', [Validators.required, Validators.maxLength(40)]],
+    colour: 'amber' as NonNullable<Label['colour']>,
+    icon: 'bookmark' as NonNullable<Label['icon']>,
+  });
+
+  protected startNew(): void {
+    this.editing.set('new');
+    this.form.reset({ name: '', colour: 'amber', icon: 'bookmark' });
+  }
+
+  protected edit(label: LabelView): void {
+    this.editing.set(label.id);
+    this.form.reset({ name: label.name, colour: label.colour, icon: label.icon });
+  }
+
+  protected async save(): Promise<void> {
+    this.form.markAllAsTouched();
+    const id = this.editing();
+    if (this.form.invalid || !id) return;
+    const value = { ...this.form.getRawValue(), name: this.form.getRawValue().name.trim() };
+    if (id === 'new') await this.store.create('labels', value);
+    else {
+      // A starter label has no row until first changed: write every field so the row is whole.
+      await this.store.write('labels', id, { ...value, deleted: false });
+    }
+    this.editing.set(null);
+  }
+
+  protected async remove(label: LabelView): Promise<void> {
+    await this.store.write('labels', label.id, { name: label.name, colour: label.colour, icon: label.icon, deleted: true });
+  }
+}

@@ -1,0 +1,107 @@
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { liveQuery } from 'dexie';
+import { combineLatest, from, map, of, switchMap } from 'rxjs';
+
+import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-order';
+import type { Book, Series } from '@shared/sync/schema/collections';
+
+import { JournalStore } from '../../../core/data/journal-store';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { fieldError } from '../../account/field-errors';
+import { STATUS_LABELS } from '../../library/book-labels';
+import { StarRating } from '../../library/star-rating/star-rating';
+
+/** One series: its books in order, progress, the next to read, and the reader's view of it all. */
+@Component({
+  selector: 'll-series-page',
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, StarRating],
+  templateUrl: './series-page.html',
+  styleUrl: './series-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SeriesPage {
+  /** The series id, from the route. */
+  readonly id = input.required<string>();
+
+  private readonly store = inject(JournalStore);
+  private readonly journal = inject(LocalJournal);
+  private readonly data = toSignal(
+    combineLatest([toObservable(this.journal.db), toObservable(this.id)]).pipe(
+      switchMap(([db, id]) =>
+        db
+          ? from(
+              liveQuery(async () => ({
+                series: (await db.rows('series').get(id)) as Series | undefined,
+                books: (await db.rows('books').where('seriesId').equals(id).toArray()) as Book[],
+              })),
+            )
+          : of(undefined),
+      ),
+    ),
+  );
+  protected readonly series = computed(() => this.data()?.series);
+  protected readonly ordered = computed(() => seriesBooks(this.data()?.books ?? [], this.id()));
+  protected readonly progress = computed(() => seriesProgress(this.ordered(), this.series()?.plannedCount));
+  protected readonly next = computed(() => nextUnread(this.ordered()));
+  protected readonly statusLabels = STATUS_LABELS;
+  protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
+  protected readonly saved = signal(false);
+  protected readonly fieldError = fieldError;
+
+  protected readonly form = inject(FormBuilder).nonNullable.group({
+    name: ['', [Validators.required, Validators.maxLength(300)]],
+    plannedCount: ['', [Validators.pattern(/^\s*\d*\s*$/), Validators.min(1), Validators.max(500)]],
+    rating: [''],
+    review: ['', Validators.maxLength(20_000)],
+  });
+  private original = this.form.getRawValue();
+
+  constructor() {
+    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    // Fill the form once per series; later live updates must not wipe what the reader is typing.
+    let filledFor: string | null = null;
+    effect(() => {
+      const series = this.series();
+      if (!series || filledFor === series.id) return;
+      filledFor = series.id;
+      this.original = {
+        name: series.name ?? '',
+        plannedCount: series.plannedCount == null ? '' : String(series.plannedCount),
+        rating: series.rating == null ? '' : String(series.rating),
+        review: series.review ?? '',
+      };
+      this.form.reset(this.original);
+    });
+  }
+
+  protected async save(): Promise<void> {
+    this.form.markAllAsTouched();
+    if (this.form.invalid) return;
+    const value = this.form.getRawValue();
+    const fields = {
+      name: value.name.trim(),
+      plannedCount: value.plannedCount.trim() ? Number(value.plannedCount) : null,
+      rating: value.rating ? Number(value.rating) : null,
+      review: value.review.trim() || null,
+    };
+    const before = {
+      name: this.original.name.trim(),
+      plannedCount: this.original.plannedCount.trim() ? Number(this.original.plannedCount) : null,
+      rating: this.original.rating ? Number(this.original.rating) : null,
+      review: this.original.review.trim() || null,
+    };
+    const changed = Object.fromEntries(Object.entries(fields).filter(([key, v]) => v !== before[key as keyof typeof before]));
+    await this.store.write('series', this.id(), changed);
+    this.original = value;
+    this.form.markAsPristine();
+    this.saved.set(true);
+  }
+}
