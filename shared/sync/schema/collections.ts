@@ -183,6 +183,60 @@ export const labels = defineCollection('labels', {
 });
 export type Label = RowOf<typeof labels>;
 
+/** How a session felt, in the reader's own shorthand (optional). */
+export const SESSION_MOODS = ['absorbed', 'calm', 'restless', 'sleepy', 'moved'] as const;
+export const SESSION_SOURCES = ['timer', 'manual'] as const;
+export const TIMER_STATES = ['running', 'paused', 'idle'] as const;
+
+/**
+ * One stretch of reading or listening. Positions are in the book's own unit: page (print),
+ * percent 0–100 (ebook), listened minutes into the book (audiobook).
+ */
+export const sessions = defineCollection(
+  'sessions',
+  {
+    bookId: field.optionalRef(),
+    format: field.optionalChoice(BOOK_FORMATS),
+    startedAt: field.optionalTimestamp(),
+    endedAt: field.optionalTimestamp(),
+    /** Time actually spent, pauses left out. At most 20 hours (a longer one is refused). */
+    activeMinutes: field.optionalNumber(0, 1200),
+    fromPosition: field.optionalNumber(0, 100_000),
+    toPosition: field.optionalNumber(0, 100_000),
+    /** An ebook's own location, as the reader's device shows it. */
+    ebookLocation: field.optionalText(40),
+    playbackSpeed: field.optionalNumber(0.5, 4),
+    mood: field.optionalChoice(SESSION_MOODS),
+    note: field.optionalText(2_000),
+    source: field.optionalChoice(SESSION_SOURCES),
+  },
+  { indexes: ['bookId', 'startedAt'] },
+);
+export type Session = RowOf<typeof sessions>;
+
+/**
+ * The reader's one reading timer, stored rather than counted: its start and pauses are written
+ * at each action and the elapsed time is always computed from them, so it survives reloads,
+ * sleep and days offline, and shows on every device. Its row id is
+ * `deterministicId('reading-timer', 'current')`.
+ */
+export const timers = defineCollection('timers', {
+  state: field.choice(TIMER_STATES),
+  bookId: field.optionalRef(),
+  startedAt: field.optionalTimestamp(),
+  /** Set while paused. */
+  pausedAt: field.optionalTimestamp(),
+  /** Paused time before the current pause, in milliseconds. */
+  pausedMs: field.optionalNumber(0, 1e10),
+  /** Which device started it, for "running on another device". */
+  deviceId: field.optionalText(64),
+  deviceName: field.optionalText(80),
+  targetMinutes: field.optionalInteger(1, 600),
+  /** Where the reader started, in the book's unit. */
+  startPosition: field.optionalNumber(0, 100_000),
+});
+export type Timer = RowOf<typeof timers>;
+
 /** Every synced collection, by name: the one source of truth for Dexie, zod and TypeORM. */
 export const COLLECTIONS = {
   books,
@@ -196,6 +250,8 @@ export const COLLECTIONS = {
   favourites,
   monthPicks,
   labels,
+  sessions,
+  timers,
 } as const;
 export type CollectionName = keyof typeof COLLECTIONS;
 

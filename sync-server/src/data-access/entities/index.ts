@@ -8,6 +8,8 @@ import { NotebookRow } from './notebook.entity';
 import { PageTemplateRow } from './page-template.entity';
 import { QuoteRow } from './quote.entity';
 import { SeriesRow } from './series.entity';
+import { SessionRow } from './session.entity';
+import { TimerRow } from './timer.entity';
 import { ReadingRow } from './reading.entity';
 import { DeviceSession } from './device-session.entity';
 import { PasswordReset } from './password-reset.entity';
@@ -29,6 +31,8 @@ export const SYNCED_ENTITIES = {
   favourites: FavouriteRow,
   monthPicks: MonthPickRow,
   labels: LabelRow,
+  sessions: SessionRow,
+  timers: TimerRow,
 } as const;
 
 /** Every entity the DataSource knows; add new ones here. Uploads are not synced rows: they have their own API. */

@@ -4,6 +4,7 @@ import { CreateSync1764806400000 } from './1764806400000-create-sync';
 import { CreateUploads1764892800000 } from './1764892800000-create-uploads';
 import { Library1764979200000 } from './1764979200000-library';
 import { Journal1765065600000 } from './1765065600000-journal';
+import { Sessions1765152000000 } from './1765152000000-sessions';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   CreateUploads1764892800000,
   Library1764979200000,
   Journal1765065600000,
+  Sessions1765152000000,
 ];
