@@ -16,6 +16,7 @@ import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { JournalStore } from '../../../core/data/journal-store';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { FORMAT_LABELS, STATUS_LABELS } from '../book-labels';
+import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
 
 const isbnValidator = (control: AbstractControl<string>) =>
@@ -24,7 +25,7 @@ const isbnValidator = (control: AbstractControl<string>) =>
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
 @Component({
   selector: 'll-book-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, IsbnScanButton],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -72,6 +73,12 @@ export class BookEditor {
     }
     this.original = toFormValue(book);
     this.form.reset(this.original);
+  }
+
+  /** A scanned ISBN fills the field as if typed (dirty first, so unsaved work is tracked). */
+  protected fillIsbn(isbn: string): void {
+    this.form.controls.isbn.markAsDirty();
+    this.form.controls.isbn.setValue(isbn);
   }
 
   protected async save(): Promise<void> {
