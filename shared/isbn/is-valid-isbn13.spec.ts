@@ -48,4 +48,9 @@ describe('isValidIsbn13', () => {
       { numRuns: 300 },
     );
   });
+
+  it('refuses 979-0, the range ISO 10957 gives to the ISMN (printed music), though its check digit is right', () => {
+    // ISMN example 979-0-2600-0043-8 (from memory of the ISMN Users' Manual); GS1 mod-10 check digit 8.
+    expect(isValidIsbn13('9790260000438')).toBeFalse();
+  });
 });

@@ -2,20 +2,22 @@ import { loadConfig } from './config';
 import { createDataSource } from './data-access/data-source';
 import { DEMO_ACCOUNTS, seedDemo } from './data-access/seed-demo';
 
-/** `node dist/node/sync-server/src/seed.js`: migrate, then add the demo accounts (idempotent). */
+/** `node dist/node/sync-server/src/seed.js`: migrate, then add the demo accounts and library (idempotent). */
 async function seed(): Promise<void> {
   const config = loadConfig();
   const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
+  let demoBooksAdded = 0;
   try {
     await dataSource.runMigrations();
-    await seedDemo(dataSource, config.bcryptCost);
+    ({ demoBooksAdded } = await seedDemo(dataSource, config.bcryptCost));
   } finally {
     await dataSource.destroy();
   }
   for (const account of DEMO_ACCOUNTS) {
     console.log(`  ${account.role.padEnd(6)}  ${account.email}  password: ${account.password}`);
   }
+  if (demoBooksAdded > 0) console.log(`  (the reader's demo library: ${demoBooksAdded} invented books added)`);
 }
 
 seed().catch((err: unknown) => {

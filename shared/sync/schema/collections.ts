@@ -25,8 +25,9 @@ export const books = defineCollection(
     subtitle: field.optionalText(500),
     authors: field.textList(20, 200),
     format: field.choice(BOOK_FORMATS),
-    /** Length in the book's own unit: pages for print and ebook, minutes for audiobooks. */
+    /** Length in the book's own unit: pages for print and ebook… */
     pageCount: field.optionalInteger(1, 100_000),
+    /** …and listening minutes at normal speed for audiobooks. */
     audioMinutes: field.optionalInteger(1, 20_000),
     isbn: field.optionalIsbn13(),
     publisher: field.optionalText(200),

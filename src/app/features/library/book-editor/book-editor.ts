@@ -19,6 +19,7 @@ import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { LabelPicker } from '../../labels/label-picker/label-picker';
 import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
+import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
 
 const isbnValidator = (control: AbstractControl<string>) =>
@@ -32,7 +33,7 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
 @Component({
   selector: 'll-book-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, LabelPicker],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, LabelPicker, IsbnScanButton],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -118,6 +119,12 @@ export class BookEditor {
     }
     this.original = toFormValue(book);
     this.form.reset(this.original);
+  }
+
+  /** A scanned ISBN fills the field as if typed (dirty first, so unsaved work is tracked). */
+  protected fillIsbn(isbn: string): void {
+    this.form.controls.isbn.markAsDirty();
+    this.form.controls.isbn.setValue(isbn);
   }
 
   protected async save(): Promise<void> {
