@@ -44,12 +44,13 @@ describe('Covers', () => {
   /** An error body as a blob request receives it. */
   const blobError = (code: string, message: string) => new Blob([JSON.stringify(apiError(code, message))], { type: 'application/json' });
 
-  beforeEach(() => {
+  beforeEach(async () => {
     userId = `covers-${crypto.randomUUID()}`;
     rememberSession({ user: { ...READER, id: userId } });
     TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting()] });
     covers = TestBed.inject(Covers);
     backend = TestBed.inject(HttpTestingController);
+    await db().open(); // before any spec ends, so teardown never closes it mid-open
   });
 
   afterEach(async () => {
