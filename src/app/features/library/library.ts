@@ -5,13 +5,14 @@ import { RouterLink } from '@angular/router';
 
 import type { Book } from '@shared/sync/schema/collections';
 
+import { BookCover } from '../../core/covers/book-cover/book-cover';
 import { liveQuerySignal } from '../../core/data/live-query';
 import { authorLine, FORMAT_LABELS, STATUS_LABELS } from './book-labels';
 
 /** Every book the reader tracks: owned, borrowed, wanted and finished. Read from this device. */
 @Component({
   selector: 'll-library',
-  imports: [RouterLink, MatButtonModule, MatIconModule],
+  imports: [RouterLink, MatButtonModule, MatIconModule, BookCover],
   templateUrl: './library.html',
   styleUrl: './library.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -11,6 +11,7 @@ import { map } from 'rxjs';
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
 import { BOOK_FORMATS, BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
 
+import { CoverPicker } from '../../../core/covers/cover-picker/cover-picker';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { JournalStore } from '../../../core/data/journal-store';
@@ -24,7 +25,7 @@ const isbnValidator = (control: AbstractControl<string>) =>
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
 @Component({
   selector: 'll-book-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, CoverPicker],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -44,7 +45,10 @@ export class BookEditor {
     rating: [''],
     pageCount: ['', [Validators.min(1), Validators.max(100_000), Validators.pattern(/^\d*$/)]],
     isbn: ['', isbnValidator],
+    coverId: EMPTY_BOOK_FORM.coverId,
   });
+  /** For the cover preview's placeholder. */
+  protected readonly title = toSignal(this.form.controls.title.valueChanges, { initialValue: '' });
   protected readonly missing = signal(false);
   protected readonly problem = signal('');
   protected readonly formats = BOOK_FORMATS;

@@ -12,6 +12,7 @@ export interface BookFormValue {
   rating: string;
   pageCount: string;
   isbn: string;
+  coverId: string | null;
 }
 
 export const EMPTY_BOOK_FORM: BookFormValue = {
@@ -22,6 +23,7 @@ export const EMPTY_BOOK_FORM: BookFormValue = {
   rating: '',
   pageCount: '',
   isbn: '',
+  coverId: null,
 };
 
 /** A stored book as form values. */
@@ -34,6 +36,7 @@ export function toFormValue(book: Book): BookFormValue {
     rating: book.rating == null ? '' : String(book.rating),
     pageCount: book.pageCount == null ? '' : String(book.pageCount),
     isbn: book.isbn ?? '',
+    coverId: book.coverId ?? null,
   };
 }
 
@@ -50,6 +53,7 @@ export function toFields(value: BookFormValue): PatchOf<typeof books> {
     rating: value.rating === '' ? null : Number(value.rating),
     pageCount: value.pageCount.trim() === '' ? null : Number(value.pageCount),
     isbn: value.isbn.trim() === '' ? null : (normalizeIsbn(value.isbn) ?? value.isbn.trim()),
+    coverId: value.coverId,
   };
 }
 

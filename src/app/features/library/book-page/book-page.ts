@@ -8,13 +8,14 @@ import { combineLatest, from, of, switchMap } from 'rxjs';
 
 import type { Book } from '@shared/sync/schema/collections';
 
+import { BookCover } from '../../../core/covers/book-cover/book-cover';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { authorLine, FORMAT_LABELS, STATUS_LABELS } from '../book-labels';
 
 /** Everything about one book, live from this device (edits from other devices appear as they sync). */
 @Component({
   selector: 'll-book-page',
-  imports: [RouterLink, MatButtonModule, MatIconModule],
+  imports: [RouterLink, MatButtonModule, MatIconModule, BookCover],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
