@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { booleanAttribute, ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 
 import { Covers } from '../covers';
@@ -28,7 +28,7 @@ export class BookCover {
   readonly title = input<string | null | undefined>('');
   readonly size = input<BookCoverSize>('small');
   /** The title is shown beside the cover: screen readers need not hear it twice. */
-  readonly decorative = input(false);
+  readonly decorative = input(false, { transform: booleanAttribute });
 
   private readonly covers = inject(Covers);
   private readonly stored = liveCover(this.coverId);
