@@ -1,5 +1,5 @@
 import { useServerAndBrowser } from './support/harness';
-import { databaseNames, registerThroughApi, signInThroughUi } from './support/reader';
+import { databaseNames, registerThroughApi, signInThroughUi, waitForDatabase } from './support/reader';
 import { waitForOfflineReady } from './support/service-worker';
 
 describe('Signing in once, then reading offline', () => {
@@ -36,7 +36,7 @@ describe('Signing in once, then reading offline', () => {
     const page = await context.newPage();
     await signInThroughUi(page, harness.server.baseUrl, reader.user.email, reader.password);
     await page.getByRole('heading', { name: /Joaquín Ferreira/ }).waitFor();
-    expect(await databaseNames(page)).toContain(`lamplight-journal-${reader.user.id}`);
+    await waitForDatabase(page, `lamplight-journal-${reader.user.id}`);
 
     await page.getByRole('button', { name: /account menu/ }).click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();

@@ -8,6 +8,7 @@ import { MatToolbarModule } from '@angular/material/toolbar';
 import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 
 import { Auth } from './core/auth/auth';
+import { Covers } from './core/covers/covers';
 import { LocalJournal } from './core/data/local-journal';
 import { browserStorage } from './core/device/browser-storage';
 import { DeviceStorage } from './core/device/device-storage';
@@ -51,6 +52,7 @@ export class App {
   constructor() {
     inject(AppUpdates);
     inject(TabCoordination);
+    inject(Covers); // uploads covers an earlier visit saved offline
     this.askToKeepStorage();
   }
 

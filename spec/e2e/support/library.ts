@@ -39,3 +39,19 @@ export async function bookFacts(page: Page): Promise<Record<string, string>> {
     return facts;
   });
 }
+
+/**
+ * Waits until the cover inside `scope` (a CSS selector) is a decoded image and returns its
+ * `src` and natural size: a placeholder, or an image that failed to load, never passes.
+ */
+export async function shownCover(page: Page, scope: string, timeoutMs = 20_000): Promise<{ src: string; naturalWidth: number; naturalHeight: number }> {
+  const selector = `${scope} ll-book-cover img`;
+  await page.waitForFunction((css) => {
+    const img = document.querySelector<HTMLImageElement>(css);
+    return !!img && img.complete && img.naturalWidth > 0;
+  }, selector, { timeout: timeoutMs });
+  return page.$eval(selector, (img) => {
+    const image = img as HTMLImageElement;
+    return { src: image.src, naturalWidth: image.naturalWidth, naturalHeight: image.naturalHeight };
+  });
+}

@@ -26,3 +26,12 @@ export async function signInThroughUi(page: Page, baseUrl: string, email: string
 export function databaseNames(page: Page): Promise<string[]> {
   return page.evaluate(async () => (await indexedDB.databases()).map((db) => db.name ?? ''));
 }
+
+/** Waits until the app has created a database (it opens the reader's journal just after sign-in). */
+export async function waitForDatabase(page: Page, name: string, timeoutMs = 10_000): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  while (!(await databaseNames(page)).includes(name)) {
+    if (Date.now() > deadline) throw new Error(`no IndexedDB database ${name}`);
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+}

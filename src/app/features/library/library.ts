@@ -11,6 +11,7 @@ import { RouterLink } from '@angular/router';
 
 import { BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
 
+import { BookCover } from '../../core/covers/book-cover/book-cover';
 import { liveQuerySignal } from '../../core/data/live-query';
 import { browserStorage } from '../../core/device/browser-storage';
 import { authorLine, FORMAT_LABELS, STATUS_LABELS } from './book-labels';
@@ -38,6 +39,7 @@ const VIEW_KEY = 'lamplight.libraryView';
     MatTableModule,
     StarRating,
     LabelChips,
+    BookCover,
   ],
   templateUrl: './library.html',
   styleUrl: './library.scss',
@@ -69,7 +71,7 @@ export class Library {
     return this.found().slice(index * size, (index + 1) * size);
   });
 
-  protected readonly columns = ['title', 'authors', 'format', 'status', 'rating'];
+  protected readonly columns = ['cover', 'title', 'authors', 'format', 'status', 'rating'];
   protected readonly statuses = BOOK_STATUSES;
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly authorLine = authorLine;

@@ -12,6 +12,7 @@ import { map, startWith } from 'rxjs';
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
 import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, PROGRESS_UNITS, WISH_PRIORITIES, type Book, type Series } from '@shared/sync/schema/collections';
 
+import { CoverPicker } from '../../../core/covers/cover-picker/cover-picker';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
@@ -33,7 +34,7 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
 @Component({
   selector: 'll-book-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, LabelPicker, IsbnScanButton],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, LabelPicker, IsbnScanButton, CoverPicker],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -73,7 +74,10 @@ export class BookEditor {
     wishPriceNote: ['', Validators.maxLength(200)],
     releaseDate: [''],
     preordered: [false],
+    coverId: EMPTY_BOOK_FORM.coverId,
   });
+  /** For the cover preview's placeholder. */
+  protected readonly title = toSignal(this.form.controls.title.valueChanges, { initialValue: '' });
   private readonly format = toSignal(this.form.controls.format.valueChanges.pipe(startWith(this.form.controls.format.value)));
   private readonly status = toSignal(this.form.controls.status.valueChanges.pipe(startWith(this.form.controls.status.value)));
   private readonly copy = toSignal(this.form.controls.copy.valueChanges.pipe(startWith(this.form.controls.copy.value)));

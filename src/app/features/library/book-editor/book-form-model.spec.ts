@@ -10,11 +10,13 @@ describe('book form model', () => {
     rating: 4,
     pageCount: 312,
     isbn: '9789295055124',
+    coverId: 'ab'.repeat(32),
   });
 
   it('sends only the fields the reader changed, so edits from other devices are not overwritten', () => {
     expect(changedFields(loaded, { ...loaded, rating: '4.5' })).toEqual({ rating: 4.5 });
     expect(changedFields(loaded, { ...loaded })).toEqual({});
+    expect(changedFields(loaded, { ...loaded, coverId: null })).toEqual({ coverId: null });
   });
 
   it('reads authors from a comma-separated line and blanks as null', () => {
@@ -48,6 +50,7 @@ describe('book form model', () => {
       wishPriceNote: null,
       releaseDate: null,
       preordered: false,
+      coverId: null,
     });
   });
 

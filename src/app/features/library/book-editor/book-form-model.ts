@@ -31,6 +31,7 @@ export interface BookFormValue {
   wishPriceNote: string;
   releaseDate: string;
   preordered: boolean;
+  coverId: string | null;
 }
 
 export const EMPTY_BOOK_FORM: BookFormValue = {
@@ -61,6 +62,7 @@ export const EMPTY_BOOK_FORM: BookFormValue = {
   wishPriceNote: '',
   releaseDate: '',
   preordered: false,
+  coverId: null,
 };
 
 const text = (value: string | null | undefined) => value ?? '';
@@ -97,6 +99,7 @@ export function toFormValue(book: Book): BookFormValue {
     wishPriceNote: text(book.wishPriceNote),
     releaseDate: text(book.releaseDate),
     preordered: book.preordered ?? false,
+    coverId: book.coverId ?? null,
   };
 }
 
@@ -135,6 +138,7 @@ export function toFields(value: BookFormValue): PatchOf<typeof books> {
     wishPriceNote: optionalText(value.wishPriceNote),
     releaseDate: optionalText(value.releaseDate),
     preordered: value.preordered,
+    coverId: value.coverId,
   };
 }
 

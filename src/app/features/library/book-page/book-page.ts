@@ -11,6 +11,7 @@ import { BOOK_STATUSES, type Book, type BookStatusChange, type Reading, type Ser
 
 import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
+import { BookCover } from '../../../core/covers/book-cover/book-cover';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
 import { BookStatus } from '../book-status';
@@ -43,7 +44,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
 /** One book: its details, its readings with reviews, and its status history, live from this device. */
 @Component({
   selector: 'll-book-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips, BookCover],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

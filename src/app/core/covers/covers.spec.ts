@@ -1,0 +1,229 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpEventType } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import Dexie from 'dexie';
+
+import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
+import { journalDbName, type JournalDb } from '../data/journal-db';
+import { LocalJournal } from '../data/local-journal';
+import { CoverError } from './cover-error';
+import { Covers } from './covers';
+import { sha256Hex } from './sha256-hex';
+import { drawnImage } from './testing/test-images';
+
+/** Real IndexedDB in Chromium, one fresh database per spec; the network is HttpTestingController. */
+describe('Covers', () => {
+  let covers: Covers;
+  let backend: HttpTestingController;
+  let userId: string;
+
+  const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
+  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
+
+  /** The request to `url` once it has been sent (Dexie reads and the tab lock take a few turns). */
+  async function sent(url: string): Promise<TestRequest> {
+    for (let i = 0; i < 200; i++) {
+      const [found] = backend.match(url);
+      if (found) return found;
+      await turn();
+    }
+    throw new Error(`no request to ${url} was sent`);
+  }
+
+  /** A cover stored as an earlier visit would have left it, waiting to upload. */
+  async function pendingCover(): Promise<{ id: string; blob: Blob }> {
+    const blob = await drawnImage(20, 30, 'image/webp');
+    const id = await sha256Hex(blob);
+    await db().covers.add({ id, blob, mediaType: 'image/webp', state: 'pending' });
+    return { id, blob };
+  }
+
+  const offline = () => spyOnProperty(navigator, 'onLine').and.returnValue(false);
+  const apiError = (code: string, message: string) => ({ error: { code, message, details: { file: message } } });
+  /** An error body as a blob request receives it. */
+  const blobError = (code: string, message: string) => new Blob([JSON.stringify(apiError(code, message))], { type: 'application/json' });
+
+  beforeEach(async () => {
+    userId = `covers-${crypto.randomUUID()}`;
+    rememberSession({ user: { ...READER, id: userId } });
+    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting()] });
+    covers = TestBed.inject(Covers);
+    backend = TestBed.inject(HttpTestingController);
+    await db().open(); // before any spec ends, so teardown never closes it mid-open
+  });
+
+  afterEach(async () => {
+    backend.verify();
+    TestBed.resetTestingModule();
+    await Dexie.delete(journalDbName(userId));
+    forgetSession();
+  });
+
+  describe('saving', () => {
+    beforeEach(offline); // keeps save's upload round from starting
+
+    it('keeps the prepared image on this device as pending, named by the SHA-256 of its bytes', async () => {
+      const id = await covers.save(await drawnImage(1200, 1800));
+
+      const stored = await db().covers.get(id);
+      expect(stored).toEqual(jasmine.objectContaining({ id, mediaType: 'image/webp', state: 'pending' }));
+      expect(await sha256Hex(stored!.blob)).toBe(id);
+      const bitmap = await createImageBitmap(stored!.blob);
+      expect([bitmap.width, bitmap.height]).toEqual([400, 600]);
+    });
+
+    it('stores the same picture once, and keeps what is known about it', async () => {
+      const picture = await drawnImage(90, 120);
+      const id = await covers.save(picture);
+      await db().covers.update(id, { state: 'uploaded' });
+
+      expect(await covers.save(picture)).toBe(id);
+      expect(await db().covers.count()).toBe(1);
+      expect((await db().covers.get(id))?.state).toBe('uploaded');
+    });
+
+    it('refuses a file that is not an image and stores nothing', async () => {
+      await expectAsync(covers.save(new Blob(['a grocery list'], { type: 'text/plain' }))).toBeRejectedWithError(
+        CoverError,
+        'This file is not an image Lamplight can read. Try a JPEG, PNG or WebP picture.',
+      );
+      expect(await db().covers.count()).toBe(0);
+    });
+  });
+
+  describe('uploading', () => {
+    it('posts each pending cover as multipart, shows its progress, and marks it uploaded', async () => {
+      const { id, blob } = await pendingCover();
+
+      const round = covers.uploadPending();
+      const request = await sent('/api/uploads');
+      expect(request.request.method).toBe('POST');
+      expect(request.request.reportProgress).toBeTrue();
+      const sentFile = (request.request.body as FormData).get('file') as File;
+      expect(await sha256Hex(sentFile)).toBe(id);
+      expect(sentFile.type).toBe('image/webp');
+      expect(covers.uploadProgress().get(id)).toBe(0);
+
+      request.event({ type: HttpEventType.UploadProgress, loaded: 300, total: 1200 });
+      expect(covers.uploadProgress().get(id)).toBe(0.25);
+
+      request.flush({ id, mediaType: 'image/webp', byteSize: blob.size }, { status: 201, statusText: 'Created' });
+      await round;
+      expect((await db().covers.get(id))?.state).toBe('uploaded');
+      expect(covers.uploadProgress().has(id)).toBeFalse();
+    });
+
+    it('marks a cover the server refuses as refused, with the server’s reason, and goes on to the next', async () => {
+      const first = await pendingCover();
+      const second = { blob: await drawnImage(20, 31, 'image/webp') };
+      const secondId = await sha256Hex(second.blob);
+      await db().covers.add({ id: secondId, blob: second.blob, mediaType: 'image/webp', state: 'pending' });
+      const [tooLarge, unsupported] = [first.id, secondId].sort(); // pending covers go in id order
+
+      const round = covers.uploadPending();
+      (await sent('/api/uploads')).flush(apiError('too_large', 'The image is larger than 2097152 bytes'), {
+        status: 413,
+        statusText: 'Payload Too Large',
+      });
+      (await sent('/api/uploads')).flush(apiError('unsupported_type', 'Covers must be JPEG, PNG or WebP images'), {
+        status: 400,
+        statusText: 'Bad Request',
+      });
+      await round;
+
+      expect(await db().covers.get(tooLarge!)).toEqual(
+        jasmine.objectContaining({ state: 'refused', problem: 'The image is larger than 2097152 bytes' }),
+      );
+      expect(await db().covers.get(unsupported!)).toEqual(
+        jasmine.objectContaining({ state: 'refused', problem: 'Covers must be JPEG, PNG or WebP images' }),
+      );
+    });
+
+    it('keeps a cover pending when the server cannot be reached, and uploads it on a later round', async () => {
+      const { id, blob } = await pendingCover();
+
+      const failed = covers.uploadPending();
+      (await sent('/api/uploads')).error(new ProgressEvent('error'), { status: 0, statusText: '' });
+      await failed;
+      expect((await db().covers.get(id))?.state).toBe('pending');
+      expect(covers.uploadProgress().has(id)).toBeFalse();
+
+      const retried = covers.uploadPending();
+      (await sent('/api/uploads')).flush({ id, mediaType: 'image/webp', byteSize: blob.size });
+      await retried;
+      expect((await db().covers.get(id))?.state).toBe('uploaded');
+    });
+
+    it('waits while the browser is offline, sending nothing', async () => {
+      offline();
+      const { id } = await pendingCover();
+      await covers.uploadPending();
+      backend.expectNone('/api/uploads');
+      expect((await db().covers.get(id))?.state).toBe('pending');
+    });
+
+    it('uploads soon after a save, without being asked', async () => {
+      const id = await covers.save(await drawnImage(30, 45));
+      const request = await sent('/api/uploads');
+      request.flush({ id, mediaType: 'image/webp', byteSize: 1 }, { status: 201, statusText: 'Created' });
+      for (let i = 0; i < 200 && (await db().covers.get(id))?.state !== 'uploaded'; i++) await turn();
+      expect((await db().covers.get(id))?.state).toBe('uploaded');
+    });
+  });
+
+  describe('downloading', () => {
+    it('fetches a cover this device lacks and keeps it as uploaded', async () => {
+      const blob = await drawnImage(12, 18, 'image/webp');
+      const id = await sha256Hex(blob);
+
+      const fetched = covers.download(id);
+      const request = await sent(`/api/uploads/${id}`);
+      expect(request.request.method).toBe('GET');
+      expect(request.request.responseType).toBe('blob');
+      request.flush(blob);
+
+      expect(await fetched).toBeTrue();
+      const stored = await db().covers.get(id);
+      expect(stored).toEqual(jasmine.objectContaining({ id, state: 'uploaded', mediaType: 'image/webp' }));
+      expect(await sha256Hex(stored!.blob)).toBe(id);
+    });
+
+    it('asks once for a cover the server does not have, for the rest of the session', async () => {
+      const id = 'a'.repeat(64);
+      const first = covers.download(id);
+      expect(covers.download(id)).toBe(first); // one request for two showings at once
+      (await sent(`/api/uploads/${id}`)).flush(blobError('not_found', 'No such upload'), { status: 404, statusText: 'Not Found' });
+      expect(await first).toBeFalse();
+
+      expect(await covers.download(id)).toBeFalse();
+      backend.expectNone(`/api/uploads/${id}`);
+    });
+
+    it('asks again after a failure that was not a 404', async () => {
+      const id = 'b'.repeat(64);
+      const first = covers.download(id);
+      (await sent(`/api/uploads/${id}`)).error(new ProgressEvent('error'), { status: 0, statusText: '' });
+      expect(await first).toBeFalse();
+
+      const second = covers.download(id);
+      (await sent(`/api/uploads/${id}`)).flush(blobError('not_found', 'No such upload'), { status: 404, statusText: 'Not Found' });
+      expect(await second).toBeFalse();
+    });
+
+    it('keeps nothing whose bytes do not match the id', async () => {
+      const id = 'c'.repeat(64);
+      const fetched = covers.download(id);
+      (await sent(`/api/uploads/${id}`)).flush(await drawnImage(5, 5, 'image/webp'));
+      expect(await fetched).toBeFalse();
+      expect(await db().covers.count()).toBe(0);
+    });
+
+    it('does not ask for a cover already here, or for something that is not a cover id', async () => {
+      const { id } = await pendingCover();
+      expect(await covers.download(id)).toBeTrue();
+      expect(await covers.download('../sync/pull')).toBeFalse();
+      backend.expectNone(() => true);
+    });
+  });
+});
