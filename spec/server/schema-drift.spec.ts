@@ -1,5 +1,5 @@
 import { COLLECTIONS } from '../../shared/sync/schema/collections';
-import { columnName, type SqlType } from '../../shared/sync/schema/field';
+import { columnName, type FieldSpec, type SqlType } from '../../shared/sync/schema/field';
 import { SYNCED_ENTITIES } from '../../sync-server/src/data-access/entities';
 import { testDataSource } from '../support/test-database';
 
@@ -28,7 +28,7 @@ describe('The shared schema, the TypeORM entities and the migrated database agre
       expect(metadata.tableName).toBe(spec.table);
       const byColumn = new Map(metadata.columns.map((column) => [column.databaseName, column]));
 
-      for (const [name, field] of Object.entries(spec.fields)) {
+      for (const [name, field] of Object.entries(spec.fields as Record<string, FieldSpec>)) {
         const column = byColumn.get(columnName(name));
         expect(column).withContext(`${spec.name}.${name}`).toBeDefined();
         const type = `${String(column?.type)}${column?.isArray ? '[]' : ''}`;
@@ -46,7 +46,7 @@ describe('The shared schema, the TypeORM entities and the migrated database agre
       );
       const actual = new Map(rows.map((row) => [row.column_name, row]));
 
-      for (const [name, field] of Object.entries(spec.fields)) {
+      for (const [name, field] of Object.entries(spec.fields as Record<string, FieldSpec>)) {
         expect(actual.get(columnName(name))?.data_type).withContext(`${spec.name}.${name}`).toBe(INFORMATION_SCHEMA_TYPE[field.sqlType]);
         expect(actual.get(columnName(name))?.is_nullable).toBe('YES');
       }

@@ -202,6 +202,24 @@ describe('/api/sync', () => {
       ]);
     });
 
+    it('When a field holds a list of objects (jsonb), then it comes back exactly as sent, and null clears it', async () => {
+      const { client } = await newReader();
+      const row = randomUUID();
+      const prompts = [
+        { id: 'p1', text: 'A book set at sea', bookId: null },
+        { id: 'p2', text: 'A debut', done: true, bookId: randomUUID() },
+      ];
+      await client.push([
+        fieldChange(row, 'name', 'Prompts of 2026', { wall: NOW }, 'challenges'),
+        fieldChange(row, 'kind', 'prompts', { wall: NOW }, 'challenges'),
+        fieldChange(row, 'prompts', prompts, { wall: NOW }, 'challenges'),
+      ]);
+      expect((await client.pullAll()).state.get(`challenges/${row}/prompts`)?.value).toEqual(prompts);
+
+      await client.push([fieldChange(row, 'prompts', null, { wall: NOW + 1 }, 'challenges')]);
+      expect((await client.pullAll()).state.get(`challenges/${row}/prompts`)?.value).toBeNull();
+    });
+
     it('When a book is deleted, then the tombstone syncs like any field', async () => {
       const { client } = await newReader();
       const row = randomUUID();

@@ -1,3 +1,5 @@
+import * as z from 'zod';
+
 import { defineCollection, type RowOf } from './collection';
 import { field } from './field';
 
@@ -238,6 +240,63 @@ export const timers = defineCollection('timers', {
 });
 export type Timer = RowOf<typeof timers>;
 
+export const CHALLENGE_KINDS = ['count', 'alphabet', 'weekly', 'prompts'] as const;
+export const ALPHABET_BY = ['title', 'author-surname'] as const;
+
+/** A short checklist item (a reading goal that is not a number, a prompt with its book). */
+const checklist = z
+  .array(
+    z.object({
+      id: z.string().min(1).max(36),
+      text: z.string().max(300, 'each entry must be at most 300 characters'),
+      done: z.boolean().optional(),
+      bookId: z.uuid().nullable().optional(),
+    }),
+  )
+  .max(100, 'must have at most 100 entries');
+
+/** The reader's plan for a year. Row id `deterministicId('year-plan', 'YYYY')`: one per year. */
+export const yearPlans = defineCollection('yearPlans', {
+  year: field.optionalInteger(1900, 3000),
+  booksTarget: field.optionalInteger(1, 10_000),
+  pagesTarget: field.optionalInteger(1, 10_000_000),
+  minutesTarget: field.optionalInteger(1, 1_000_000),
+  bestBookId: field.optionalRef(),
+  /** Goals that are not numbers ("read a book in French"), as a checklist. */
+  otherGoals: field.json(checklist.nullable()),
+  notes: field.optionalText(20_000),
+});
+export type YearPlan = RowOf<typeof yearPlans>;
+
+/** The reader's plan and look back for a month. Row id `deterministicId('month-plan', 'YYYY-MM')`. */
+export const monthPlans = defineCollection('monthPlans', {
+  month: field.optionalMonth(),
+  booksTarget: field.optionalInteger(1, 1_000),
+  pagesTarget: field.optionalInteger(1, 1_000_000),
+  minutesTarget: field.optionalInteger(1, 50_000),
+  favouriteBookId: field.optionalRef(),
+  leastFavouriteBookId: field.optionalRef(),
+  reflection: field.optionalText(20_000),
+});
+export type MonthPlan = RowOf<typeof monthPlans>;
+
+/** A reading challenge of one of the kinds readers play. */
+export const challenges = defineCollection('challenges', {
+  name: field.text(200),
+  kind: field.choice(CHALLENGE_KINDS),
+  periodStart: field.optionalDate(),
+  periodEnd: field.optionalDate(),
+  /** Count: books to read. */
+  target: field.optionalInteger(1, 10_000),
+  /** Alphabet: a letter per title, or per author surname. */
+  alphabetBy: field.optionalChoice(ALPHABET_BY),
+  /** Prompts: the reader's own list, each with the book that answers it. */
+  prompts: field.json(checklist.nullable()),
+  /** When the finish was celebrated, so the celebration shows once. */
+  celebratedAt: field.optionalTimestamp(),
+});
+export type Challenge = RowOf<typeof challenges>;
+
 /** Every synced collection, by name: the one source of truth for Dexie, zod and TypeORM. */
 export const COLLECTIONS = {
   books,
@@ -253,6 +312,9 @@ export const COLLECTIONS = {
   labels,
   sessions,
   timers,
+  yearPlans,
+  monthPlans,
+  challenges,
 } as const;
 export type CollectionName = keyof typeof COLLECTIONS;
 

@@ -10,6 +10,9 @@ import { QuoteRow } from './quote.entity';
 import { SeriesRow } from './series.entity';
 import { SessionRow } from './session.entity';
 import { TimerRow } from './timer.entity';
+import { ChallengeRow } from './challenge.entity';
+import { MonthPlanRow } from './month-plan.entity';
+import { YearPlanRow } from './year-plan.entity';
 import { ReadingRow } from './reading.entity';
 import { DeviceSession } from './device-session.entity';
 import { PasswordReset } from './password-reset.entity';
@@ -33,6 +36,9 @@ export const SYNCED_ENTITIES = {
   labels: LabelRow,
   sessions: SessionRow,
   timers: TimerRow,
+  yearPlans: YearPlanRow,
+  monthPlans: MonthPlanRow,
+  challenges: ChallengeRow,
 } as const;
 
 /** Every entity the DataSource knows; add new ones here. Uploads are not synced rows: they have their own API. */

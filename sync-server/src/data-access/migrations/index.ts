@@ -5,6 +5,7 @@ import { CreateUploads1764892800000 } from './1764892800000-create-uploads';
 import { Library1764979200000 } from './1764979200000-library';
 import { Journal1765065600000 } from './1765065600000-journal';
 import { Sessions1765152000000 } from './1765152000000-sessions';
+import { Goals1765238400000 } from './1765238400000-goals';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   Library1764979200000,
   Journal1765065600000,
   Sessions1765152000000,
+  Goals1765238400000,
 ];
