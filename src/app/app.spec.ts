@@ -37,12 +37,29 @@ describe('App shell', () => {
     expect(links.map((link) => link.getAttribute('href'))).toEqual(['/today', '/library', '/journal']);
   });
 
+  it('for a signed-in reader, offers an Add action with "Capture a quote" and "Add a book"', async () => {
+    rememberSession();
+    const fixture = TestBed.createComponent(App);
+    await fixture.whenStable();
+    const add = (fixture.nativeElement as HTMLElement).querySelector<HTMLButtonElement>('button[aria-label="Add"]')!;
+
+    add.click();
+    await fixture.whenStable();
+    const items = Array.from(document.querySelectorAll('.mat-mdc-menu-panel [mat-menu-item]'));
+    expect(items.map((item) => item.textContent?.replace(item.querySelector('mat-icon')?.textContent ?? '', '').trim())).toEqual([
+      'Capture a quote',
+      'Add a book',
+    ]);
+    expect(items[1]?.getAttribute('href')).toBe('/library/new');
+  });
+
   it('with nobody signed in, shows no journal navigation', async () => {
     forgetSession();
     const fixture = TestBed.createComponent(App);
     await fixture.whenStable();
 
     expect((fixture.nativeElement as HTMLElement).querySelector('nav[aria-label="Main"]')).toBeNull();
+    expect((fixture.nativeElement as HTMLElement).querySelector('button[aria-label="Add"]')).toBeNull();
   });
 
   it('sends an unknown address to the not-found page rather than a blank screen', () => {

@@ -18,6 +18,7 @@ import { InstallPrompt } from './core/pwa/install-prompt';
 import { TabCoordination } from './core/pwa/tab-coordination';
 import { SyncStatus } from './core/sync/sync-status/sync-status';
 import { SignOutFlow } from './features/account/sign-out/sign-out-flow';
+import { QuoteCapture } from './features/quotes/quote-capture';
 
 /** A place in the app the shell links to. */
 interface Destination {
@@ -38,6 +39,7 @@ export class App {
   private readonly auth = inject(Auth);
   private readonly signOutFlow = inject(SignOutFlow);
   private readonly dialog = inject(MatDialog);
+  private readonly quoteCapture = inject(QuoteCapture);
   protected readonly installPrompt = inject(InstallPrompt);
 
   protected readonly user = this.auth.user;
@@ -58,6 +60,10 @@ export class App {
 
   protected signOut(): Promise<void> {
     return this.signOutFlow.start();
+  }
+
+  protected captureQuote(): void {
+    void this.quoteCapture.open();
   }
 
   protected install(): void {

@@ -1,5 +1,7 @@
 import type { Book, Reading } from '@shared/sync/schema/collections';
 
+export { authorLine } from '@shared/journal/author-line';
+
 /** Words readers see for each format and status. TBR and DNF are readers' own terms. */
 export const FORMAT_LABELS: Record<NonNullable<Book['format']>, string> = {
   print: 'Print',
@@ -36,12 +38,6 @@ export const RECOMMEND_LABELS: Record<NonNullable<Reading['recommend']>, string>
   no: 'No',
 };
 
-/** Authors as one line: "Nell Ashby and Tomas Reyes", "A, B and C". */
-export function authorLine(authors: readonly string[] | undefined): string {
-  const names = authors ?? [];
-  if (names.length <= 1) return names[0] ?? '';
-  return `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
-}
 
 /** The book's length in its own unit: "320 pages", "11 h 5 min". */
 export function lengthLine(book: Pick<Book, 'format' | 'pageCount' | 'audioMinutes'>): string {

@@ -13,6 +13,8 @@ import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { BookCover } from '../../../core/covers/book-cover/book-cover';
 import { LocalJournal } from '../../../core/data/local-journal';
+import { BookQuotes } from '../../quotes/book-quotes/book-quotes';
+import { QuoteCapture } from '../../quotes/quote-capture';
 import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
 import { BookStatus } from '../book-status';
 import { StarRating } from '../star-rating/star-rating';
@@ -44,7 +46,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
 /** One book: its details, its readings with reviews, and its status history, live from this device. */
 @Component({
   selector: 'll-book-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips, BookCover],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips, BookCover, BookQuotes],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -56,6 +58,7 @@ export class BookPage {
   private readonly journal = inject(LocalJournal);
   private readonly store = inject(JournalStore);
   private readonly bookStatus = inject(BookStatus);
+  private readonly quoteCapture = inject(QuoteCapture);
   private readonly data = toSignal(
     combineLatest([toObservable(this.journal.db), toObservable(this.id)]).pipe(
       switchMap(([db, id]) => (db ? from(liveQuery(() => dossier(db, id))) : of(undefined))),
@@ -78,6 +81,10 @@ export class BookPage {
 
   protected changeStatus(status: string): void {
     void this.bookStatus.change(this.id(), status as NonNullable<Book['status']>);
+  }
+
+  protected captureQuote(): void {
+    void this.quoteCapture.open({ bookId: this.id() });
   }
 
   protected async deleteReading(reading: Reading): Promise<void> {

@@ -1,0 +1,53 @@
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { liveQuery } from 'dexie';
+import { combineLatest, from, of, switchMap } from 'rxjs';
+
+import type { Book, Quote } from '@shared/sync/schema/collections';
+
+import type { JournalDb } from '../../../core/data/journal-db';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { QuoteCard } from '../quote-card/quote-card';
+import { newestFirst } from '../quote-query';
+
+async function bookQuotes(db: JournalDb, bookId: string): Promise<{ book: Book | undefined; quotes: Quote[] }> {
+  const [book, quotes] = await Promise.all([
+    db.rows('books').get(bookId) as Promise<Book | undefined>,
+    db.rows('quotes').where('bookId').equals(bookId).toArray() as Promise<Quote[]>,
+  ]);
+  return { book, quotes: quotes.filter((quote) => !quote.deleted).sort(newestFirst) };
+}
+
+/** The quotes kept from one book, newest first, for its book page. Live from this device. */
+@Component({
+  selector: 'll-book-quotes',
+  imports: [QuoteCard],
+  template: `
+    <section aria-labelledby="book-quotes-heading">
+      <h2 id="book-quotes-heading">Quotes</h2>
+      @for (quote of quotes(); track quote.id) {
+        <ll-quote-card [quote]="quote" [book]="book()" [showBook]="false" />
+      } @empty {
+        <p class="quiet">No quotes from this book yet. When a passage stays with you, use Capture a quote to keep it with its page.</p>
+      }
+    </section>
+  `,
+  styles: `
+    h2 { margin-top: 24px; }
+    .quiet { color: var(--mat-sys-on-surface-variant); }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class BookQuotes {
+  /** The book whose quotes to show. */
+  readonly bookId = input.required<string>();
+
+  private readonly journal = inject(LocalJournal);
+  private readonly data = toSignal(
+    combineLatest([toObservable(this.journal.db), toObservable(this.bookId)]).pipe(
+      switchMap(([db, id]) => (db ? from(liveQuery(() => bookQuotes(db, id))) : of(undefined))),
+    ),
+  );
+  protected readonly book = computed(() => this.data()?.book);
+  protected readonly quotes = computed(() => this.data()?.quotes ?? []);
+}
