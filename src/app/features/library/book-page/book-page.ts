@@ -13,6 +13,7 @@ import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS } from '../book-labels';
+import { BookNotebooks } from '../../notebooks/book-notebooks/book-notebooks';
 import { BookStatus } from '../book-status';
 import { StarRating } from '../star-rating/star-rating';
 
@@ -39,7 +40,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
 /** One book: its details, its readings with reviews, and its status history, live from this device. */
 @Component({
   selector: 'll-book-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, BookNotebooks],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
