@@ -49,6 +49,14 @@ describe('NotebookView', () => {
     expect(button('Move down: Lighthouse').disabled).toBeTrue();
   });
 
+  it('keeps headings and items apart in an excerpt, and cuts a long one short', async () => {
+    await journal.store.write('notebookPages', pageIds[1]!, { body: `# Dunes\n- marram grass\n- *sand* in everything\n\n${'wind '.repeat(60)}` });
+    await until(() => textOf(element.querySelectorAll('.excerpt')[1]).startsWith('Dunes · marram grass · sand in everything · wind'), fixture);
+    const excerpt = textOf(element.querySelectorAll('.excerpt')[1]);
+    expect(excerpt.length).toBeLessThanOrEqual(160);
+    expect(excerpt).toMatch(/wind…$/);
+  });
+
   it('moves a page down and up', async () => {
     button('Move down: Harbour').click();
     await until(() => titles()[1] === 'Harbour', fixture);

@@ -50,7 +50,12 @@ async function notebookData(db: JournalDb, id: string) {
 
 /** The first words of a page, without formatting marks. */
 function excerpt(body: string): string {
-  const text = lightPlainText(parseLightFormat(body.slice(0, EXCERPT_LENGTH * 4))).replace(/\s+/g, ' ').trim();
+  // Lines and blocks run on, with a dot between them so headings and items stay apart.
+  const text = lightPlainText(parseLightFormat(body.slice(0, EXCERPT_LENGTH * 4)))
+    .split('\n')
+    .map((line) => line.replace(/\s+/g, ' ').trim())
+    .filter(Boolean)
+    .join(' · ');
   return text.length > EXCERPT_LENGTH ? `${text.slice(0, EXCERPT_LENGTH - 1).trimEnd()}…` : text;
 }
 
