@@ -109,6 +109,11 @@ export const routes: Routes = [
             title: 'Notebook · Lamplight',
             loadComponent: () => import('./features/notebooks/notebook-view/notebook-view').then((m) => m.NotebookView),
           },
+          {
+            path: 'notebooks/:id/pages/:pageId',
+            title: 'Notebook page · Lamplight',
+            loadComponent: () => import('./features/notebooks/page-editor/page-editor').then((m) => m.PageEditor),
+          },
         ],
       },
       {

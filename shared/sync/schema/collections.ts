@@ -132,10 +132,14 @@ export const quotes = defineCollection(
 export type Quote = RowOf<typeof quotes>;
 
 /** A notebook of free-form pages, optionally about one book. */
-export const notebooks = defineCollection('notebooks', {
-  title: field.text(300),
-  bookId: field.optionalRef(),
-});
+export const notebooks = defineCollection(
+  'notebooks',
+  {
+    title: field.text(300),
+    bookId: field.optionalRef(),
+  },
+  { indexes: ['bookId'] },
+);
 export type Notebook = RowOf<typeof notebooks>;
 
 /** One page of a notebook: plain text with light formatting (see shared/journal/light-format). */

@@ -16,6 +16,7 @@ import { LocalJournal } from '../../../core/data/local-journal';
 import { BookQuotes } from '../../quotes/book-quotes/book-quotes';
 import { QuoteCapture } from '../../quotes/quote-capture';
 import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
+import { BookNotebooks } from '../../notebooks/book-notebooks/book-notebooks';
 import { BookStatus } from '../book-status';
 import { StarRating } from '../star-rating/star-rating';
 import { LabelChips } from '../../labels/label-chips/label-chips';
@@ -46,7 +47,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
 /** One book: its details, its readings with reviews, and its status history, live from this device. */
 @Component({
   selector: 'll-book-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips, BookCover, BookQuotes],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips, BookCover, BookQuotes, BookNotebooks],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

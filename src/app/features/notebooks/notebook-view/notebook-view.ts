@@ -1,9 +1,167 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { Router, RouterLink } from '@angular/router';
+import { format } from 'date-fns';
+import { liveQuery } from 'dexie';
+import { combineLatest, from, map, of, switchMap } from 'rxjs';
 
-/** Placeholder until this part of the journal lands. */
+import { lightPlainText, parseLightFormat } from '@shared/journal/light-format';
+import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
+import { byPosition } from '@shared/journal/page-order';
+import { ownTemplates, STARTER_TEMPLATES } from '@shared/journal/starter-templates';
+import type { Notebook, NotebookPage, PageTemplate } from '@shared/sync/schema/collections';
+
+import { InvalidFieldsError } from '../../../core/data/field-errors';
+import type { JournalDb } from '../../../core/data/journal-db';
+import { JournalStore } from '../../../core/data/journal-store';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { fieldError, showServerErrors } from '../../account/field-errors';
+import { bookOptions } from '../notebook-data';
+import { Notebooks } from '../notebooks';
+import { PageTemplates } from '../page-templates/page-templates';
+
+const EXCERPT_LENGTH = 160;
+
+async function notebookData(db: JournalDb, id: string) {
+  const [notebook, pages, books, templates] = await Promise.all([
+    db.rows('notebooks').get(id) as Promise<Notebook | undefined>,
+    db.rows('notebookPages').where('notebookId').equals(id).toArray() as Promise<NotebookPage[]>,
+    db.rows('books').toArray(),
+    db.rows('pageTemplates').toArray() as Promise<PageTemplate[]>,
+  ]);
+  return {
+    notebook,
+    pages: byPosition(pages.filter((page) => !page.deleted)).map((page) => ({
+      id: page.id,
+      title: page.title ?? '',
+      excerpt: excerpt(page.body ?? ''),
+    })),
+    books: bookOptions(books),
+    templates: ownTemplates(templates),
+  };
+}
+
+/** The first words of a page, without formatting marks. */
+function excerpt(body: string): string {
+  // Lines and blocks run on, with a dot between them so headings and items stay apart.
+  const text = lightPlainText(parseLightFormat(body.slice(0, EXCERPT_LENGTH * 4)))
+    .split('\n')
+    .map((line) => line.replace(/\s+/g, ' ').trim())
+    .filter(Boolean)
+    .join(' · ');
+  return text.length > EXCERPT_LENGTH ? `${text.slice(0, EXCERPT_LENGTH - 1).trimEnd()}…` : text;
+}
+
+/** One notebook: its pages in order, adding and arranging them, and the notebook's title and book. */
 @Component({
   selector: 'll-notebook-view',
-  template: '<h1>Notebook</h1>',
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates],
+  templateUrl: './notebook-view.html',
+  styleUrl: './notebook-view.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class NotebookView {}
+export class NotebookView {
+  /** The notebook's id, from the route. */
+  readonly id = input.required<string>();
+
+  private readonly journal = inject(LocalJournal);
+  private readonly store = inject(JournalStore);
+  private readonly notebooks = inject(Notebooks);
+  private readonly router = inject(Router);
+  private readonly snackBar = inject(MatSnackBar);
+
+  private readonly data = toSignal(
+    combineLatest([toObservable(this.journal.db), toObservable(this.id)]).pipe(
+      switchMap(([db, id]) => (db ? from(liveQuery(() => notebookData(db, id))) : of(undefined))),
+    ),
+  );
+  protected readonly notebook = computed(() => this.data()?.notebook);
+  protected readonly pages = computed(() => this.data()?.pages ?? []);
+  protected readonly books = computed(() => this.data()?.books ?? []);
+  protected readonly ownTemplates = computed(() => this.data()?.templates ?? []);
+  protected readonly starterTemplates = STARTER_TEMPLATES;
+  protected readonly loaded = computed(() => this.data() !== undefined);
+  protected readonly bookTitle = computed(() => {
+    const bookId = this.notebook()?.bookId;
+    return bookId ? (this.books().find((book) => book.id === bookId)?.title ?? null) : null;
+  });
+
+  /** Which template a new page starts from: '' for a blank page. */
+  protected readonly startFrom = signal('');
+  protected readonly editing = signal(false);
+  protected readonly confirmingDelete = signal(false);
+  protected readonly problem = signal('');
+  protected readonly detailsForm = inject(FormBuilder).nonNullable.group({
+    title: ['', [Validators.required, Validators.maxLength(NOTEBOOK_LIMITS.notebookTitle)]],
+    bookId: [''],
+  });
+  protected readonly fieldError = fieldError;
+
+  constructor() {
+    inject(UnsavedWork).track(toSignal(this.detailsForm.events.pipe(map(() => this.detailsForm.dirty)), { initialValue: false }));
+  }
+
+  protected async addPage(): Promise<void> {
+    const chosen = this.startFrom();
+    const template = [...this.starterTemplates, ...this.ownTemplates()].find((t) => t.id === chosen) ?? null;
+    try {
+      const pageId = await this.notebooks.addPage(this.id(), template, format(new Date(), 'yyyy-MM-dd'));
+      await this.router.navigate(['/journal/notebooks', this.id(), 'pages', pageId]);
+    } catch {
+      this.problem.set('This device could not add the page.');
+    }
+  }
+
+  protected move(pageId: string, by: -1 | 1): Promise<void> {
+    return this.notebooks.movePage(this.id(), pageId, by);
+  }
+
+  protected async removePage(page: { id: string; title: string }): Promise<void> {
+    await this.notebooks.removePage(page.id);
+    const undo = this.snackBar.open(`Page “${page.title || 'Untitled page'}” deleted.`, 'Undo', { duration: 8000 });
+    undo.onAction().subscribe(() => void this.notebooks.restorePage(page.id));
+  }
+
+  protected startEditing(): void {
+    const notebook = this.notebook();
+    this.detailsForm.reset({ title: notebook?.title ?? '', bookId: notebook?.bookId ?? '' });
+    this.editing.set(true);
+  }
+
+  protected cancelEditing(): void {
+    this.detailsForm.reset();
+    this.editing.set(false);
+  }
+
+  protected async saveDetails(): Promise<void> {
+    const form = this.detailsForm;
+    form.markAllAsTouched();
+    if (!form.controls.title.value.trim()) form.controls.title.setErrors({ required: true });
+    if (form.invalid) return;
+    const notebook = this.notebook();
+    const value = form.getRawValue();
+    // Only what the reader changed, so an edit from another device to the other field survives.
+    const patch: { title?: string; bookId?: string | null } = {};
+    if (value.title.trim() !== (notebook?.title ?? '')) patch.title = value.title.trim();
+    if ((value.bookId || null) !== (notebook?.bookId ?? null)) patch.bookId = value.bookId || null;
+    try {
+      if (Object.keys(patch).length) await this.store.write('notebooks', this.id(), patch);
+      this.cancelEditing();
+    } catch (error) {
+      if (error instanceof InvalidFieldsError) showServerErrors(form, error.fields);
+      this.problem.set('This device could not save the notebook.');
+    }
+  }
+
+  protected async removeNotebook(): Promise<void> {
+    await this.notebooks.removeNotebook(this.id());
+    await this.router.navigate(['/journal/notebooks']);
+  }
+}

@@ -1,9 +1,78 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { Router, RouterLink } from '@angular/router';
+import { map } from 'rxjs';
 
-/** Placeholder until this part of the journal lands. */
+import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
+
+import { InvalidFieldsError } from '../../../core/data/field-errors';
+import { liveQuerySignal } from '../../../core/data/live-query';
+import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { fieldError, showServerErrors } from '../../account/field-errors';
+import { bookOptions, summarizeNotebooks, type BookOption, type NotebookSummary } from '../notebook-data';
+import { Notebooks } from '../notebooks';
+import { PageTemplates } from '../page-templates/page-templates';
+
+/** Every notebook the reader keeps, and a form to start one. */
 @Component({
   selector: 'll-notebooks-page',
-  template: '<h1>Notebooks</h1>',
+  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates],
+  templateUrl: './notebooks-page.html',
+  styleUrl: './notebooks-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class NotebooksPage {}
+export class NotebooksPage {
+  private readonly notebooksService = inject(Notebooks);
+  private readonly router = inject(Router);
+
+  /** A book to start the new notebook on, from `?book=` (the book page links here). */
+  readonly book = input<string>();
+
+  /** `null` until the first read from this device. */
+  protected readonly notebooks = liveQuerySignal<NotebookSummary[] | null>(async (db) => {
+    const [notebooks, pages, books] = await Promise.all([db.rows('notebooks').toArray(), db.rows('notebookPages').toArray(), db.rows('books').toArray()]);
+    return summarizeNotebooks(notebooks, pages, books);
+  }, null);
+  protected readonly books = liveQuerySignal<BookOption[]>(async (db) => bookOptions(await db.rows('books').toArray()), []);
+
+  protected readonly form = inject(FormBuilder).nonNullable.group({
+    title: ['', [Validators.required, Validators.maxLength(NOTEBOOK_LIMITS.notebookTitle)]],
+    bookId: [''],
+  });
+  protected readonly problem = signal('');
+  protected readonly fieldError = fieldError;
+
+  constructor() {
+    inject(UnsavedWork).track(toSignal(this.form.events.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    effect(() => {
+      const book = this.book();
+      if (book && !this.form.dirty) this.form.controls.bookId.setValue(book);
+    });
+  }
+
+  protected async create(): Promise<void> {
+    this.form.markAllAsTouched();
+    // A blank title is as good as none.
+    if (!this.form.controls.title.value.trim()) this.form.controls.title.setErrors({ required: true });
+    if (this.form.invalid) {
+      this.problem.set('Give the notebook a title first.');
+      return;
+    }
+    const { title, bookId } = this.form.getRawValue();
+    try {
+      const id = await this.notebooksService.createNotebook(title, bookId || null);
+      this.form.reset({ title: '', bookId: '' });
+      this.problem.set('');
+      await this.router.navigate(['/journal/notebooks', id]);
+    } catch (error) {
+      if (error instanceof InvalidFieldsError) showServerErrors(this.form, error.fields);
+      this.problem.set('This device could not save the notebook.');
+    }
+  }
+}

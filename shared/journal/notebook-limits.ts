@@ -1,0 +1,22 @@
+import * as z from 'zod';
+
+import type { FieldSpec } from '../sync/schema/field';
+import { notebookPages, notebooks, pageTemplates } from '../sync/schema/collections';
+
+/** The longest text a text field of the schema takes (unwrapping `nullable`). */
+export function maxTextLength(spec: FieldSpec): number {
+  const schema = spec.schema instanceof z.ZodNullable ? spec.schema.unwrap() : spec.schema;
+  const max = schema instanceof z.ZodString ? schema.maxLength : null;
+  if (max == null) throw new Error('not a text field with a maximum length');
+  return max;
+}
+
+/** Lengths the notebook forms check before writing, read from the schema so they never drift. */
+export const NOTEBOOK_LIMITS = {
+  notebookTitle: maxTextLength(notebooks.fields.title),
+  pageTitle: maxTextLength(notebookPages.fields.title),
+  pageBody: maxTextLength(notebookPages.fields.body),
+  templateName: maxTextLength(pageTemplates.fields.name),
+  templateTitle: maxTextLength(pageTemplates.fields.title),
+  templateBody: maxTextLength(pageTemplates.fields.body),
+} as const;

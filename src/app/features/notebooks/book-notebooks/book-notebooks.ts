@@ -1,0 +1,44 @@
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
+import { liveQuery } from 'dexie';
+import { combineLatest, from, of, switchMap } from 'rxjs';
+
+import type { JournalDb } from '../../../core/data/journal-db';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { summarizeNotebooks } from '../notebook-data';
+
+async function notebooksAbout(db: JournalDb, bookId: string) {
+  // Readers keep few notebooks, so a scan is fine (notebooks are not indexed by book).
+  const notebooks = await db.rows('notebooks').where('bookId').equals(bookId).toArray();
+  const pages = await db
+    .rows('notebookPages')
+    .where('notebookId')
+    .anyOf(notebooks.map((notebook) => notebook.id))
+    .toArray();
+  return summarizeNotebooks(notebooks, pages, []);
+}
+
+/** The notebooks attached to one book, for the book's page; live from this device. */
+@Component({
+  selector: 'll-book-notebooks',
+  imports: [RouterLink, MatButtonModule, MatIconModule],
+  templateUrl: './book-notebooks.html',
+  styleUrl: './book-notebooks.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class BookNotebooks {
+  /** The book whose notebooks to list. */
+  readonly bookId = input.required<string>();
+
+  private readonly journal = inject(LocalJournal);
+  private readonly found = toSignal(
+    combineLatest([toObservable(this.journal.db), toObservable(this.bookId)]).pipe(
+      switchMap(([db, bookId]) => (db ? from(liveQuery(() => notebooksAbout(db, bookId))) : of([]))),
+    ),
+  );
+  protected readonly notebooks = computed(() => this.found() ?? []);
+  protected readonly loaded = computed(() => this.found() !== undefined);
+}

@@ -1,0 +1,56 @@
+import { provideHttpClient } from '@angular/common/http';
+import type { EnvironmentProviders, Provider } from '@angular/core';
+import { TestBed, type ComponentFixture } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import Dexie from 'dexie';
+
+import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
+import type { JournalDb } from '../../../core/data/journal-db';
+import { journalDbName } from '../../../core/data/journal-db';
+import { JournalStore } from '../../../core/data/journal-store';
+import { LocalJournal } from '../../../core/data/local-journal';
+
+/** A signed-in reader with a fresh, real IndexedDB journal (Dexie in Chromium), for one spec. */
+export interface TestJournal {
+  readonly store: JournalStore;
+  readonly db: JournalDb;
+  /** Closes and deletes the database and forgets the session. */
+  close(): Promise<void>;
+}
+
+/** Configures TestBed for a fresh reader; call in `beforeEach`, and `close()` in `afterEach`. */
+export function openTestJournal(providers: (Provider | EnvironmentProviders)[] = []): TestJournal {
+  const userId = `spec-${crypto.randomUUID()}`;
+  rememberSession({ user: { ...READER, id: userId } });
+  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideRouter([]), ...providers] });
+  const store = TestBed.inject(JournalStore);
+  const db = TestBed.inject(LocalJournal).db()!;
+  return {
+    store,
+    db,
+    async close() {
+      TestBed.resetTestingModule(); // closes the database (LocalJournal's cleanup)
+      await Dexie.delete(journalDbName(userId));
+      forgetSession();
+    },
+  };
+}
+
+/**
+ * Waits until `check` passes, letting live queries and change detection run in between.
+ * Live queries answer asynchronously, so a fixed wait would be either flaky or slow.
+ */
+export async function until(check: () => boolean, fixture?: ComponentFixture<unknown>, timeoutMs = 3000): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    if (fixture) await fixture.whenStable();
+    if (check()) return;
+    if (Date.now() > deadline) throw new Error('timed out waiting for the condition');
+    await new Promise((resolve) => setTimeout(resolve, 20));
+  }
+}
+
+/** The element's text with runs of whitespace as single spaces. */
+export function textOf(element: Element | null | undefined): string {
+  return (element?.textContent ?? '').replace(/\s+/g, ' ').trim();
+}
