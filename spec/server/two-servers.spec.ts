@@ -9,10 +9,14 @@ import { testDatabaseUrl } from '../support/test-database';
 
 const MAIN = path.resolve(__dirname, '../../sync-server/src/main.js');
 
+/** Every process started here, so none outlives the spec even if a step times out. */
+const children: ChildProcess[] = [];
+
 /** Starts a real server process (as in production) on a free port; resolves with its base URL. */
 function startServerProcess(env: Record<string, string>): Promise<{ baseUrl: string; child: ChildProcess }> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, [MAIN], { env: { ...process.env, ...env, PORT: '0' }, stdio: ['ignore', 'pipe', 'inherit'] });
+    children.push(child);
     const timer = setTimeout(() => reject(new Error('server process did not start')), 20_000);
     child.stdout!.on('data', (chunk: Buffer) => {
       const match = /running at (http:\/\/127\.0\.0\.1:\d+)\//.exec(chunk.toString());
@@ -35,7 +39,6 @@ async function signIn(baseUrl: string, email: string): Promise<string> {
 }
 
 describe('Two server instances on one PostgreSQL (behind a load balancer)', () => {
-  const children: ChildProcess[] = [];
   afterAll(() => children.forEach((child) => child.kill('SIGTERM')));
 
   it('When one device pushes to the first and another pulls from the second, then they converge', async () => {
@@ -48,10 +51,7 @@ describe('Two server instances on one PostgreSQL (behind a load balancer)', () =
       SMTP_URL: `smtp://127.0.0.1:${port}`,
       NODE_ENV: 'test',
     };
-    const first = await startServerProcess(env);
-    children.push(first.child);
-    const second = await startServerProcess(env);
-    children.push(second.child);
+    const [first, second] = await Promise.all([startServerProcess(env), startServerProcess(env)]);
     expect(first.baseUrl).not.toBe(second.baseUrl);
     expect(config.databaseUrl).toBe(env.DATABASE_URL);
 
@@ -75,5 +75,5 @@ describe('Two server instances on one PostgreSQL (behind a load balancer)', () =
     expect(onLaptop.state.get(`books/${row}/title`)?.value).toBe('The Orchard Ledger');
     expect(asObject(onLaptop.state)).toEqual(asObject(onTablet.state));
     expect(onTablet.state.get(`books/${row}/rating`)?.value).toBe(4);
-  });
+  }, 60_000); // two Node processes start, connect and migrate: slow on a busy machine
 });
