@@ -7,6 +7,8 @@ import request from 'supertest';
 import { isValidIsbn13 } from '../../shared/isbn/is-valid-isbn13';
 import type { PulledChange } from '../../shared/sync/field-change';
 import { parseHlc } from '../../shared/sync/hlc';
+import { sessionProblems } from '../../shared/reading/session-problems';
+import type { Session } from '../../shared/sync/schema/collections';
 import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, COLLECTIONS, type CollectionName } from '../../shared/sync/schema/collections';
 import { validateChange } from '../../shared/sync/validate-change';
 import { validatePatch } from '../../shared/sync/validate-patch';
@@ -205,6 +207,21 @@ describe('demo library (seedDemoLibrary)', () => {
         const places = inSeries.filter((book) => book['seriesId'] === id).map((book) => book['seriesPosition']).sort();
         expect(places).toEqual([1, 2, 3]);
       }
+    });
+
+    it('When seeded, then the journal has possible sessions (no overlap, none in the future, none over 20 h), quotes, a plan and challenges', () => {
+      const sessions = pulled.rows.sessions as unknown as Session[];
+      expect(sessions.length).toBeGreaterThan(50);
+      const now = Date.now();
+      for (const session of sessions) {
+        expect(sessionProblems(session, sessions, now)).withContext(`${session.startedAt}`).toEqual({});
+        expect(booksById().has(session.bookId!)).toBeTrue();
+      }
+      expect(pulled.rows.quotes.length).toBeGreaterThan(0);
+      expect(pulled.rows.notebooks.length).toBe(1);
+      expect(pulled.rows.yearPlans.map((plan) => plan['booksTarget'])).toEqual([24]);
+      expect(pulled.rows.challenges.map((c) => c['kind']).sort()).toEqual(['alphabet', 'count']);
+      expect(pulled.rows.books.some((book) => (book['labelIds'] as string[] | undefined)?.length)).toBeTrue();
     });
 
     it('When seeded again, then nothing is added and the covers are not uploaded again', async () => {

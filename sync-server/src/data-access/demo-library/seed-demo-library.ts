@@ -14,6 +14,7 @@ import { SyncStore } from '../sync-store';
 import { UploadStore } from '../upload-store';
 import { demoCover } from './demo-cover';
 import { DEMO_BOOKS, type DemoBook, type DemoReview } from './demo-books';
+import { seedDemoJournal } from './demo-journal';
 
 /** The clocks' node id: every demo row was written by the seed, not by a device. */
 export const DEMO_SEED_NODE = 'demo-seed';
@@ -24,6 +25,8 @@ export interface DemoLibrarySummary {
   readonly statusChanges: number;
   readonly readings: number;
   readonly covers: number;
+  readonly sessions: number;
+  readonly quotes: number;
 }
 
 /**
@@ -41,7 +44,8 @@ export async function seedDemoLibrary(dataSource: DataSource, userId: string, no
   const uploads = new Uploads(new UploadStore(dataSource));
   const clock = new HlcClock(DEMO_SEED_NODE, now);
   const changes: FieldChange[] = [];
-  const counts = { books: 0, statusChanges: 0, readings: 0, covers: 0 };
+  const counts = { books: 0, statusChanges: 0, readings: 0, covers: 0, sessions: 0, quotes: 0 };
+  const seeded: { id: string; book: DemoBook }[] = [];
   // One clock per row, as a device stamps one write: all of a row's fields share it.
   const write = (collection: { readonly name: string }, fields: Record<string, unknown>, rowId: string = randomUUID()) => {
     const hlc = clock.tick();
@@ -60,6 +64,7 @@ export async function seedDemoLibrary(dataSource: DataSource, userId: string, no
     const coverId = book.cover ? (await uploads.upload(userId, demoCover(book.title, book.cover))).upload.id : null;
     if (coverId) counts.covers++;
     const bookId = write(books, bookFields(book, coverId));
+    seeded.push({ id: bookId, book });
     counts.books++;
     for (const [status, at] of book.history) {
       write(bookStatusChanges, { bookId, status, changedAt: instant(at), deleted: false } satisfies Fields<BookStatusChange>);
@@ -70,6 +75,8 @@ export async function seedDemoLibrary(dataSource: DataSource, userId: string, no
       counts.readings++;
     }
   }
+
+  Object.assign(counts, seedDemoJournal(write, seeded, now()));
 
   // The seed is held to the rules a device's push is: a mistake here must fail loudly, not sync.
   const problems = changes.map((change, index) => validateChange(change, index, now())).filter((problem) => problem !== null);
