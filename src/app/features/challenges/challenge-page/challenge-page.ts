@@ -16,6 +16,7 @@ import type { Challenge } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { goalRecord } from '../../goals/goal-rows';
+import { OneAtATime } from '../../goals/one-at-a-time';
 import { celebrateOnce } from '../celebrate-once';
 import { ChallengeCelebration } from '../challenge-celebration/challenge-celebration';
 import { KIND_LABELS, progressLine, progressPercent } from '../challenge-labels';
@@ -52,6 +53,7 @@ export class ChallengePage {
   readonly id = input.required<string>();
 
   private readonly store = inject(JournalStore);
+  private readonly promptUpdates = new OneAtATime();
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
   private readonly record = goalRecord();
@@ -121,7 +123,7 @@ export class ChallengePage {
   protected readonly libraryBooks = computed(() =>
     [...(this.record.rows()?.books ?? [])].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')),
   );
-  protected readonly newPrompt = inject(FormBuilder).nonNullable.control('');
+  protected readonly newPromptForm = inject(FormBuilder).nonNullable.group({ text: '' });
 
   protected readonly kindLabels = KIND_LABELS;
   protected readonly weekStates = WEEK_STATES;
@@ -132,18 +134,18 @@ export class ChallengePage {
   }
 
   protected choosePromptBook(promptId: string, bookId: string): Promise<void> {
-    return this.writePrompts(this.storedPrompts().map((prompt) => (prompt.id === promptId ? { ...prompt, bookId: bookId || null } : prompt)));
+    return this.updatePrompts((prompts) => prompts.map((prompt) => (prompt.id === promptId ? { ...prompt, bookId: bookId || null } : prompt)));
   }
 
   protected async addPrompt(): Promise<void> {
-    const text = this.newPrompt.value.trim().slice(0, 300);
+    const text = this.newPromptForm.controls.text.value.trim().slice(0, 300);
     if (!text) return;
-    await this.writePrompts([...this.storedPrompts(), { id: crypto.randomUUID(), text, bookId: null }]);
-    this.newPrompt.reset();
+    this.newPromptForm.reset();
+    await this.updatePrompts((prompts) => [...prompts, { id: crypto.randomUUID(), text, bookId: null }]);
   }
 
   protected removePrompt(promptId: string): Promise<void> {
-    return this.writePrompts(this.storedPrompts().filter((prompt) => prompt.id !== promptId));
+    return this.updatePrompts((prompts) => prompts.filter((prompt) => prompt.id !== promptId));
   }
 
   /** Removes the challenge (a tombstone, so it syncs), with a way back. */
@@ -158,13 +160,16 @@ export class ChallengePage {
       .subscribe(() => void this.store.write('challenges', id, { deleted: false }));
   }
 
-  private storedPrompts(): Prompt[] {
-    return [...(this.challenge()?.prompts ?? [])];
-  }
-
-  /** The list is written as a whole (the later edit of the list wins, as for tags). */
-  private writePrompts(prompts: Prompt[]): Promise<void> {
-    return this.store.write('challenges', this.id(), { prompts });
+  /**
+   * Changes the prompts as stored now (not as last shown), one change at a time. The list is
+   * written as a whole: across devices the later edit of the list wins, as for tags.
+   */
+  private updatePrompts(change: (prompts: Prompt[]) => Prompt[]): Promise<void> {
+    const id = this.id();
+    return this.promptUpdates.run(async () => {
+      const stored = (await this.store.get('challenges', id)) as Challenge | undefined;
+      await this.store.write('challenges', id, { prompts: change([...(stored?.prompts ?? [])]) });
+    });
   }
 
   private title(bookId: string): string {

@@ -24,6 +24,7 @@ import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { KIND_LABELS, progressLine, progressPercent } from '../../challenges/challenge-labels';
 import { goalAmount, goalFigure, signedFigure, UNIT_LABELS } from '../goal-figures';
 import { goalRecord } from '../goal-rows';
+import { OneAtATime } from '../one-at-a-time';
 import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
 
 type OtherGoal = NonNullable<YearPlan['otherGoals']>[number];
@@ -57,6 +58,7 @@ export class GoalsPage {
   readonly year = input<string>();
 
   private readonly store = inject(JournalStore);
+  private readonly listUpdates = new OneAtATime();
   private readonly record = goalRecord();
   protected readonly today = this.record.today;
   protected readonly loaded = computed(() => this.record.rows() !== null);
@@ -135,7 +137,7 @@ export class GoalsPage {
     minutes: targetControl(MAX_TARGETS.minutes),
   });
   private original: TargetTexts = this.targetsForm.getRawValue();
-  protected readonly newGoal = inject(FormBuilder).nonNullable.control('');
+  protected readonly newGoalForm = inject(FormBuilder).nonNullable.group({ text: '' });
 
   constructor() {
     inject(UnsavedWork).track(toSignal(this.targetsForm.valueChanges.pipe(map(() => this.targetsForm.dirty)), { initialValue: false }));
@@ -176,18 +178,27 @@ export class GoalsPage {
   }
 
   protected async addGoal(): Promise<void> {
-    const text = this.newGoal.value.trim().slice(0, 300);
+    const text = this.newGoalForm.controls.text.value.trim().slice(0, 300);
     if (!text) return;
-    await this.writePlan({ otherGoals: [...this.otherGoals(), { id: crypto.randomUUID(), text, done: false }] });
-    this.newGoal.reset();
+    this.newGoalForm.reset();
+    await this.updateGoals((goals) => [...goals, { id: crypto.randomUUID(), text, done: false }]);
   }
 
   protected checkGoal(goal: OtherGoal, done: boolean): Promise<void> {
-    return this.writePlan({ otherGoals: this.otherGoals().map((entry) => (entry.id === goal.id ? { ...entry, done } : entry)) });
+    return this.updateGoals((goals) => goals.map((entry) => (entry.id === goal.id ? { ...entry, done } : entry)));
   }
 
   protected removeGoal(goal: OtherGoal): Promise<void> {
-    return this.writePlan({ otherGoals: this.otherGoals().filter((entry) => entry.id !== goal.id) });
+    return this.updateGoals((goals) => goals.filter((entry) => entry.id !== goal.id));
+  }
+
+  /** Changes the checklist as stored now (not as last shown), one change at a time. */
+  private updateGoals(change: (goals: OtherGoal[]) => OtherGoal[]): Promise<void> {
+    const id = this.planId();
+    return this.listUpdates.run(async () => {
+      const stored = (await this.store.get('yearPlans', id)) as YearPlan | undefined;
+      await this.writePlan({ otherGoals: change([...(stored?.otherGoals ?? [])]) });
+    });
   }
 
   protected async saveNotes(notes: string): Promise<void> {
