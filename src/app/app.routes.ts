@@ -117,6 +117,33 @@ export const routes: Routes = [
         ],
       },
       {
+        path: 'goals',
+        children: [
+          { path: '', title: 'Goals · Lamplight', loadComponent: () => import('./features/goals/goals-page/goals-page').then((m) => m.GoalsPage) },
+          {
+            path: 'challenges',
+            title: 'Challenges · Lamplight',
+            loadComponent: () => import('./features/challenges/challenges-list/challenges-list').then((m) => m.ChallengesList),
+          },
+          {
+            path: 'challenges/new',
+            title: 'New challenge · Lamplight',
+            loadComponent: () => import('./features/challenges/challenge-editor/challenge-editor').then((m) => m.ChallengeEditor),
+          },
+          {
+            path: 'challenges/:id',
+            title: 'Challenge · Lamplight',
+            loadComponent: () => import('./features/challenges/challenge-page/challenge-page').then((m) => m.ChallengePage),
+          },
+          { path: ':year', title: 'Goals · Lamplight', loadComponent: () => import('./features/goals/goals-page/goals-page').then((m) => m.GoalsPage) },
+          {
+            path: ':year/:month',
+            title: 'A month · Lamplight',
+            loadComponent: () => import('./features/goals/month-page/month-page').then((m) => m.MonthPage),
+          },
+        ],
+      },
+      {
         path: 'settings',
         title: 'Settings · Lamplight',
         loadComponent: () => import('./features/settings/settings').then((m) => m.Settings),

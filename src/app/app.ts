@@ -49,6 +49,7 @@ export class App {
     { path: '/today', label: 'Today', icon: 'wb_twilight' },
     { path: '/library', label: 'Library', icon: 'local_library' },
     { path: '/journal', label: 'Journal', icon: 'edit_note' },
+    { path: '/goals', label: 'Goals', icon: 'flag' },
   ];
 
   constructor() {

@@ -1,0 +1,178 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { Router, RouterLink } from '@angular/router';
+
+import { challengeProgress } from '@shared/challenges/challenge-progress';
+import type { PromptState } from '@shared/challenges/prompt-challenge-progress';
+import type { WeekState } from '@shared/challenges/weekly-challenge-progress';
+import type { Challenge } from '@shared/sync/schema/collections';
+
+import { JournalStore } from '../../../core/data/journal-store';
+import { goalRecord } from '../../goals/goal-rows';
+import { OneAtATime } from '../../goals/one-at-a-time';
+import { celebrateOnce } from '../celebrate-once';
+import { ChallengeCelebration } from '../challenge-celebration/challenge-celebration';
+import { KIND_LABELS, progressLine, progressPercent } from '../challenge-labels';
+import { periodLine } from '../challenge-period';
+
+type Prompt = NonNullable<Challenge['prompts']>[number];
+
+const WEEK_STATES: Readonly<Record<WeekState, string>> = { met: 'Met', missed: 'Missed', upcoming: 'To come' };
+const PROMPT_STATES: Readonly<Record<PromptState, string>> = { done: 'Done', planned: 'Planned', open: 'Open' };
+
+/** How many TBR books to suggest for each open letter. */
+const SUGGESTIONS_PER_LETTER = 3;
+
+/** One challenge: its progress, the books that counted, and the view its kind calls for. */
+@Component({
+  selector: 'll-challenge-page',
+  imports: [
+    DatePipe,
+    ReactiveFormsModule,
+    RouterLink,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressBarModule,
+    ChallengeCelebration,
+  ],
+  templateUrl: './challenge-page.html',
+  styleUrl: './challenge-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ChallengePage {
+  /** The challenge's id, from the route. */
+  readonly id = input.required<string>();
+
+  private readonly store = inject(JournalStore);
+  private readonly promptUpdates = new OneAtATime();
+  private readonly router = inject(Router);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly record = goalRecord();
+  protected readonly loaded = computed(() => this.record.rows() !== null);
+  protected readonly today = this.record.today;
+
+  protected readonly challenge = computed(() => this.record.rows()?.challenges.find((row) => row.id === this.id()));
+  protected readonly progress = computed(() => {
+    const challenge = this.challenge();
+    return challenge ? challengeProgress(challenge, { library: this.record.library(), today: this.today }) : null;
+  });
+  protected readonly line = computed(() => {
+    const progress = this.progress();
+    return progress ? progressLine(progress) : '';
+  });
+  protected readonly percent = computed(() => {
+    const progress = this.progress();
+    return progress ? progressPercent(progress) : 0;
+  });
+  protected readonly period = computed(() => periodLine(this.challenge() ?? {}));
+  protected readonly finished = computed(() => this.progress()?.progress.finished ?? false);
+
+  private readonly celebration = celebrateOnce(
+    computed(() => {
+      const challenge = this.challenge();
+      return challenge ? [{ challenge, finished: this.finished() }] : [];
+    }),
+  );
+  protected readonly celebrating = computed(() => this.celebration.showing().has(this.id()));
+
+  private readonly finishDay = computed(() => new Map(this.record.finished().map((book) => [book.id, book.finishedOn])));
+  /** The books that counted, in the order the challenge counted them. */
+  protected readonly counted = computed(() =>
+    [...new Set(this.progress()?.progress.counted ?? [])].map((id) => ({ id, title: this.title(id), finishedOn: this.finishDay().get(id) })),
+  );
+
+  protected readonly letters = computed(() => {
+    const progress = this.progress();
+    if (progress?.kind !== 'alphabet') return [];
+    return progress.progress.letters.map((entry) => ({
+      letter: entry.letter,
+      book: entry.bookId ? { id: entry.bookId, title: this.title(entry.bookId) } : null,
+      suggestions: (progress.progress.suggestions[entry.letter] ?? []).slice(0, SUGGESTIONS_PER_LETTER).map((id) => ({ id, title: this.title(id) })),
+    }));
+  });
+  protected readonly openLetters = computed(() => {
+    const progress = this.progress();
+    return progress?.kind === 'alphabet' ? progress.progress.open : [];
+  });
+
+  protected readonly weeks = computed(() => {
+    const progress = this.progress();
+    if (progress?.kind !== 'weekly') return [];
+    return progress.progress.weeks.map((week) => ({ ...week, titles: week.bookIds.map((id) => this.title(id)).join(', ') }));
+  });
+  protected readonly weekCounts = computed(() => {
+    const counts: Record<WeekState, number> = { met: 0, missed: 0, upcoming: 0 };
+    for (const week of this.weeks()) counts[week.state]++;
+    return counts;
+  });
+
+  protected readonly prompts = computed(() => {
+    const progress = this.progress();
+    return progress?.kind === 'prompts' ? progress.progress.prompts : [];
+  });
+  /** Every book of the library, by title, to answer a prompt with. */
+  protected readonly libraryBooks = computed(() =>
+    [...(this.record.rows()?.books ?? [])].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')),
+  );
+  protected readonly newPromptForm = inject(FormBuilder).nonNullable.group({ text: '' });
+
+  protected readonly kindLabels = KIND_LABELS;
+  protected readonly weekStates = WEEK_STATES;
+  protected readonly promptStates = PROMPT_STATES;
+
+  protected closeCelebration(): void {
+    this.celebration.close(this.id());
+  }
+
+  protected choosePromptBook(promptId: string, bookId: string): Promise<void> {
+    return this.updatePrompts((prompts) => prompts.map((prompt) => (prompt.id === promptId ? { ...prompt, bookId: bookId || null } : prompt)));
+  }
+
+  protected async addPrompt(): Promise<void> {
+    const text = this.newPromptForm.controls.text.value.trim().slice(0, 300);
+    if (!text) return;
+    this.newPromptForm.reset();
+    await this.updatePrompts((prompts) => [...prompts, { id: crypto.randomUUID(), text, bookId: null }]);
+  }
+
+  protected removePrompt(promptId: string): Promise<void> {
+    return this.updatePrompts((prompts) => prompts.filter((prompt) => prompt.id !== promptId));
+  }
+
+  /** Removes the challenge (a tombstone, so it syncs), with a way back. */
+  protected async remove(): Promise<void> {
+    const id = this.id();
+    const name = this.challenge()?.name ?? 'The challenge';
+    await this.store.remove('challenges', id);
+    await this.router.navigate(['/goals/challenges']);
+    this.snackBar
+      .open(`${name} removed`, 'Undo', { duration: 8000 })
+      .onAction()
+      .subscribe(() => void this.store.write('challenges', id, { deleted: false }));
+  }
+
+  /**
+   * Changes the prompts as stored now (not as last shown), one change at a time. The list is
+   * written as a whole: across devices the later edit of the list wins, as for tags.
+   */
+  private updatePrompts(change: (prompts: Prompt[]) => Prompt[]): Promise<void> {
+    const id = this.id();
+    return this.promptUpdates.run(async () => {
+      const stored = (await this.store.get('challenges', id)) as Challenge | undefined;
+      await this.store.write('challenges', id, { prompts: change([...(stored?.prompts ?? [])]) });
+    });
+  }
+
+  private title(bookId: string): string {
+    return this.record.bookById().get(bookId)?.title || 'A book not on this device yet';
+  }
+}

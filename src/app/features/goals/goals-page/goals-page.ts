@@ -1,0 +1,214 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { map } from 'rxjs';
+
+import { booksFinishedIn } from '@shared/challenges/books-finished-in';
+import { challengeProgress } from '@shared/challenges/challenge-progress';
+import { monthlyAmounts, yearPeriod } from '@shared/goals/amounts-in';
+import { GOAL_UNITS, type GoalUnit } from '@shared/goals/goal-unit';
+import { yearGoalPacing } from '@shared/goals/year-goal-pacing';
+import { deterministicId } from '@shared/sync/deterministic-id';
+import type { YearPlan } from '@shared/sync/schema/collections';
+
+import { JournalStore } from '../../../core/data/journal-store';
+import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { KIND_LABELS, progressLine, progressPercent } from '../../challenges/challenge-labels';
+import { goalAmount, goalFigure, signedFigure, UNIT_LABELS } from '../goal-figures';
+import { goalRecord } from '../goal-rows';
+import { OneAtATime } from '../one-at-a-time';
+import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
+
+type OtherGoal = NonNullable<YearPlan['otherGoals']>[number];
+
+/** Largest yearly targets the schema takes, by unit. */
+const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 10_000, pages: 10_000_000, minutes: 1_000_000 };
+
+/**
+ * A year of reading goals: targets in books, pages and minutes with their pace, the months,
+ * the best book, other goals as a checklist, notes, and the challenges running that year.
+ */
+@Component({
+  selector: 'll-goals-page',
+  imports: [
+    DatePipe,
+    ReactiveFormsModule,
+    RouterLink,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressBarModule,
+  ],
+  templateUrl: './goals-page.html',
+  styleUrl: './goals-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class GoalsPage {
+  /** The year from the route ('2026'); the current year when absent. */
+  readonly year = input<string>();
+
+  private readonly store = inject(JournalStore);
+  private readonly listUpdates = new OneAtATime();
+  private readonly record = goalRecord();
+  protected readonly today = this.record.today;
+  protected readonly loaded = computed(() => this.record.rows() !== null);
+
+  /** The year shown, or null for a route that names no year we keep. */
+  protected readonly shownYear = computed(() => {
+    const text = this.year();
+    if (text === undefined) return Number(this.today.slice(0, 4));
+    return /^\d{4}$/.test(text) && Number(text) >= 1900 && Number(text) <= 3000 ? Number(text) : null;
+  });
+  private readonly planId = computed(() => deterministicId('year-plan', String(this.shownYear())));
+  protected readonly plan = computed(() => this.record.rows()?.yearPlans.find((plan) => plan.id === this.planId()));
+  private readonly targets = computed(() => targetsByUnit(this.plan()));
+  protected readonly hasTargets = computed(() => Object.keys(this.targets()).length > 0);
+
+  protected readonly pacing = computed(() => {
+    const year = this.shownYear();
+    if (year === null) return [];
+    return yearGoalPacing({ targets: this.targets(), year, today: this.today, finished: this.record.finished(), log: this.record.log() });
+  });
+
+  protected readonly months = computed(() => {
+    const year = this.shownYear();
+    if (year === null) return [];
+    const plans = new Map((this.record.rows()?.monthPlans ?? []).map((plan) => [plan.id, plan]));
+    return monthlyAmounts(year, this.record.finished(), this.record.log()).map((amounts, index) => {
+      const month = `${year}-${String(index + 1).padStart(2, '0')}`;
+      const booksTarget = plans.get(deterministicId('month-plan', month))?.booksTarget ?? null;
+      return { month, number: String(index + 1).padStart(2, '0'), first: `${month}-01`, amounts, booksTarget, now: this.today.startsWith(month) };
+    });
+  });
+
+  /** Books finished in the year, for the best book (and the one chosen, if it is another). */
+  protected readonly bestCandidates = computed(() => {
+    const year = this.shownYear();
+    if (year === null) return [];
+    const ids = booksFinishedIn(this.record.finished(), yearPeriod(year)).map((book) => book.id);
+    const best = this.plan()?.bestBookId;
+    if (best && !ids.includes(best)) ids.push(best);
+    return ids.map((id) => ({ id, title: this.record.bookById().get(id)?.title ?? 'A book not on this device yet' }));
+  });
+  protected readonly bestBook = computed(() => {
+    const id = this.plan()?.bestBookId;
+    return id ? this.record.bookById().get(id) : undefined;
+  });
+
+  protected readonly otherGoals = computed<readonly OtherGoal[]>(() => this.plan()?.otherGoals ?? []);
+
+  protected readonly challenges = computed(() => {
+    const year = this.shownYear();
+    if (year === null) return [];
+    const { start, end } = yearPeriod(year);
+    return (this.record.rows()?.challenges ?? [])
+      .filter((challenge) => (challenge.periodStart ?? '') <= end && (challenge.periodEnd ?? '') >= start)
+      .flatMap((challenge) => {
+        const progress = challengeProgress(challenge, { library: this.record.library(), today: this.today });
+        return progress ? [{ challenge, progress, line: progressLine(progress), percent: progressPercent(progress) }] : [];
+      })
+      .sort((a, b) => (a.challenge.name ?? '').localeCompare(b.challenge.name ?? ''));
+  });
+
+  protected readonly units = GOAL_UNITS;
+  protected readonly unitLabels = UNIT_LABELS;
+  protected readonly kindLabels = KIND_LABELS;
+  protected readonly maxTargets = MAX_TARGETS;
+  protected readonly goalAmount = goalAmount;
+  protected readonly goalFigure = goalFigure;
+  protected readonly signedFigure = signedFigure;
+
+  protected readonly editingTargets = signal(false);
+  protected readonly targetsSaved = signal(false);
+  protected readonly notesSaved = signal(false);
+  protected readonly targetsForm = inject(FormBuilder).nonNullable.group({
+    books: targetControl(MAX_TARGETS.books),
+    pages: targetControl(MAX_TARGETS.pages),
+    minutes: targetControl(MAX_TARGETS.minutes),
+  });
+  private original: TargetTexts = this.targetsForm.getRawValue();
+  protected readonly newGoalForm = inject(FormBuilder).nonNullable.group({ text: '' });
+
+  constructor() {
+    inject(UnsavedWork).track(toSignal(this.targetsForm.valueChanges.pipe(map(() => this.targetsForm.dirty)), { initialValue: false }));
+    // Follow the stored targets (another device's edit) unless the reader is typing; a new year
+    // starts afresh.
+    let filledYear: number | null = null;
+    effect(() => {
+      const texts = targetTexts(this.plan());
+      const year = this.shownYear();
+      if (this.targetsForm.dirty && year === filledYear) return;
+      filledYear = year;
+      this.original = texts;
+      this.targetsForm.reset(texts);
+      this.editingTargets.set(false);
+      this.targetsSaved.set(false);
+    });
+  }
+
+  protected async saveTargets(): Promise<void> {
+    this.targetsForm.markAllAsTouched();
+    const year = this.shownYear();
+    if (this.targetsForm.invalid || year === null) return;
+    const after = this.targetsForm.getRawValue();
+    await this.writePlan(changedTargets(this.original, after));
+    this.original = after;
+    this.targetsForm.markAsPristine();
+    this.targetsSaved.set(true);
+    this.editingTargets.set(false);
+  }
+
+  protected cancelTargets(): void {
+    this.targetsForm.reset(this.original);
+    this.editingTargets.set(false);
+  }
+
+  protected chooseBest(bookId: string): Promise<void> {
+    return this.writePlan({ bestBookId: bookId || null });
+  }
+
+  protected async addGoal(): Promise<void> {
+    const text = this.newGoalForm.controls.text.value.trim().slice(0, 300);
+    if (!text) return;
+    this.newGoalForm.reset();
+    await this.updateGoals((goals) => [...goals, { id: crypto.randomUUID(), text, done: false }]);
+  }
+
+  protected checkGoal(goal: OtherGoal, done: boolean): Promise<void> {
+    return this.updateGoals((goals) => goals.map((entry) => (entry.id === goal.id ? { ...entry, done } : entry)));
+  }
+
+  protected removeGoal(goal: OtherGoal): Promise<void> {
+    return this.updateGoals((goals) => goals.filter((entry) => entry.id !== goal.id));
+  }
+
+  /** Changes the checklist as stored now (not as last shown), one change at a time. */
+  private updateGoals(change: (goals: OtherGoal[]) => OtherGoal[]): Promise<void> {
+    const id = this.planId();
+    return this.listUpdates.run(async () => {
+      const stored = (await this.store.get('yearPlans', id)) as YearPlan | undefined;
+      await this.writePlan({ otherGoals: change([...(stored?.otherGoals ?? [])]) });
+    });
+  }
+
+  protected async saveNotes(notes: string): Promise<void> {
+    await this.writePlan({ notes: notes.trim() || null });
+    this.notesSaved.set(true);
+  }
+
+  /** The year's one row (a name-based id), so two devices planning offline settle on one row. */
+  private writePlan(patch: Partial<Omit<YearPlan, 'id'>>): Promise<void> {
+    const year = this.shownYear()!;
+    return this.store.write('yearPlans', deterministicId('year-plan', String(year)), { year, deleted: false, ...patch });
+  }
+}

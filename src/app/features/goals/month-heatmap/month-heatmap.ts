@@ -1,0 +1,56 @@
+import { formatDate } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+
+import type { DailyLogEntry } from '@shared/reading-log/log-session';
+
+import { goalAmount } from '../goal-figures';
+import { monthHeatmap } from './month-heatmap-cells';
+
+/**
+ * A month's reading as a small calendar, one cell per day, darker for more minutes. It is one
+ * image to assistive technology, with the month's totals as its text.
+ */
+@Component({
+  selector: 'll-month-heatmap',
+  template: `
+    <div class="grid" role="img" [attr.aria-label]="description()">
+      @for (weekday of weekdays; track $index) {
+        <span class="weekday" aria-hidden="true">{{ weekday }}</span>
+      }
+      @for (blank of blanks(); track $index) {
+        <span aria-hidden="true"></span>
+      }
+      @for (day of heatmap().days; track day.day) {
+        <span class="day level-{{ day.level }}" [attr.data-day]="day.day" aria-hidden="true">{{ day.date }}</span>
+      }
+    </div>
+    <p class="legend" aria-hidden="true">
+      Less
+      @for (level of [0, 1, 2, 3, 4]; track level) {
+        <span class="swatch level-{{ level }}"></span>
+      }
+      More
+    </p>
+  `,
+  styleUrl: './month-heatmap.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class MonthHeatmap {
+  /** The month, 'YYYY-MM'. */
+  readonly month = input.required<string>();
+  /** Minutes and pages per local day (more days than the month is fine). */
+  readonly log = input.required<readonly DailyLogEntry[]>();
+
+  protected readonly weekdays = ['M', 'T', 'W', 'T', 'F', 'S', 'S'];
+  protected readonly heatmap = computed(() => monthHeatmap(this.month(), this.log()));
+  protected readonly blanks = computed(() => Array.from({ length: this.heatmap().leading }));
+
+  /** The text alternative: the month's totals and its fullest day. */
+  protected readonly description = computed(() => {
+    const { readingDays, minutes, pages, busiest, days } = this.heatmap();
+    const name = formatDate(`${this.month()}-01`, 'LLLL yyyy', 'en');
+    if (readingDays === 0) return `Reading in ${name}: no reading logged yet.`;
+    const most = busiest ? ` The most on ${formatDate(busiest.day, 'd MMMM', 'en')}: ${goalAmount(busiest.minutes, 'minutes')}.` : '';
+    return `Reading in ${name}: ${readingDays} of ${days.length} days with reading, ${goalAmount(minutes, 'minutes')} and ${goalAmount(pages, 'pages')} in all.${most}`;
+  });
+}
