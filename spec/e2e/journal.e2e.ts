@@ -46,6 +46,7 @@ describe('The journal, offline', () => {
     expect(await seriousViolations(page)).toEqual([]);
 
     await page.getByRole('link', { name: 'The Lanternwright Trilogy' }).click();
+    await page.locator('ol.books li a').nth(2).waitFor();
     const order = await page.locator('ol.books li a').allTextContents();
     expect(order).toEqual(titles);
     expect(await seriousViolations(page)).toEqual([]);

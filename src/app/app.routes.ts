@@ -68,6 +68,16 @@ export const routes: Routes = [
             title: 'Edit reading · Lamplight',
             loadComponent: () => import('./features/library/reading-editor/reading-editor').then((m) => m.ReadingEditor),
           },
+          {
+            path: ':id/sessions/new',
+            title: 'A reading session · Lamplight',
+            loadComponent: () => import('./features/sessions/session-editor/session-editor').then((m) => m.SessionEditor),
+          },
+          {
+            path: ':id/sessions/:sessionId',
+            title: 'Edit session · Lamplight',
+            loadComponent: () => import('./features/sessions/session-editor/session-editor').then((m) => m.SessionEditor),
+          },
         ],
       },
       {

@@ -3,7 +3,7 @@ import { effect, inject, signal, type Signal } from '@angular/core';
 import type { Challenge } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../core/data/journal-store';
-import { NOW } from '../goals/reader-today';
+import { CLOCK } from '../../core/time/clock';
 
 /**
  * Finished challenges not yet celebrated are celebrated on this page, once: their `celebratedAt`
@@ -18,7 +18,7 @@ export function celebrateOnce(finished: Signal<readonly { readonly challenge: Ch
   readonly close: (id: string) => void;
 } {
   const store = inject(JournalStore);
-  const now = inject(NOW);
+  const now = inject(CLOCK);
   const showing = signal<ReadonlySet<string>>(new Set());
   const written = new Set<string>();
   effect(() => {
@@ -26,7 +26,7 @@ export function celebrateOnce(finished: Signal<readonly { readonly challenge: Ch
       if (!done || challenge.celebratedAt || written.has(challenge.id)) continue;
       written.add(challenge.id);
       showing.update((ids) => new Set([...ids, challenge.id]));
-      void store.write('challenges', challenge.id, { celebratedAt: now().toISOString() });
+      void store.write('challenges', challenge.id, { celebratedAt: new Date(now()).toISOString() });
     }
   });
   return {

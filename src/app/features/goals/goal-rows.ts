@@ -7,7 +7,7 @@ import type { DailyLogEntry } from '@shared/reading-log/log-session';
 import type { Book, Challenge, MonthPlan, Reading, Session, YearPlan } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../core/data/live-query';
-import { READER_TIME_ZONE } from '../../core/device/reader-time-zone';
+import { TIME_ZONE } from '../../core/time/time-zone';
 import { readerToday } from './reader-today';
 
 /** The rows goals and challenges read, not deleted. */
@@ -41,7 +41,7 @@ export interface GoalRecord {
  * context (a component's fields): the live query ends with the component.
  */
 export function goalRecord(): GoalRecord {
-  const timeZone = inject(READER_TIME_ZONE);
+  const timeZone = inject(TIME_ZONE);
   const rows = liveQuerySignal<GoalRowSet | null>(async (db) => {
     const all = async <T extends { deleted?: boolean | null }>(name: string) => ((await db.rows(name).toArray()) as unknown as T[]).filter((row) => !row.deleted);
     return {

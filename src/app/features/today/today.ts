@@ -1,10 +1,13 @@
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 
 import { Auth } from '../../core/auth/auth';
+import { InProgress } from './in-progress/in-progress';
+import { ReadingLog } from './reading-log/reading-log';
 
 /** The home page: what the reader is in the middle of today. */
 @Component({
   selector: 'll-today',
+  imports: [InProgress, ReadingLog],
   templateUrl: './today.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -8,8 +8,8 @@ import { forgetSession, READER, rememberSession } from '../../../core/auth/testi
 import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { READER_TIME_ZONE } from '../../../core/device/reader-time-zone';
-import { NOW } from '../reader-today';
+import { CLOCK } from '../../../core/time/clock';
+import { TIME_ZONE } from '../../../core/time/time-zone';
 
 /** Noon on 1 July 2026 in Los Angeles (PDT, UTC−7): the "now" of goal specs unless they say otherwise. */
 export const JULY_FIRST_NOON_LA = '2026-07-01T19:00:00.000Z';
@@ -29,8 +29,8 @@ export async function setUpGoalSpec(options: { timeZone?: string; now?: string }
     providers: [
       provideHttpClient(),
       provideRouter([{ path: '**', component: SpecLanding }]),
-      { provide: READER_TIME_ZONE, useValue: options.timeZone ?? 'America/Los_Angeles' },
-      { provide: NOW, useValue: () => new Date(options.now ?? JULY_FIRST_NOON_LA) },
+      { provide: TIME_ZONE, useValue: options.timeZone ?? 'America/Los_Angeles' },
+      { provide: CLOCK, useValue: () => new Date(options.now ?? JULY_FIRST_NOON_LA).getTime() },
     ],
   });
   const db = () => TestBed.inject(LocalJournal).db()!;

@@ -20,6 +20,7 @@ import { BookNotebooks } from '../../notebooks/book-notebooks/book-notebooks';
 import { BookStatus } from '../book-status';
 import { StarRating } from '../star-rating/star-rating';
 import { LabelChips } from '../../labels/label-chips/label-chips';
+import { BookReading } from '../../sessions/book-reading/book-reading';
 
 /** Everything the reader keeps about one book, on this device, together with what is linked to it. */
 interface BookDossier {
@@ -47,7 +48,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
 /** One book: its details, its readings with reviews, and its status history, live from this device. */
 @Component({
   selector: 'll-book-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips, BookCover, BookQuotes, BookNotebooks],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, StarRating, LabelChips, BookCover, BookQuotes, BookNotebooks, BookReading],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

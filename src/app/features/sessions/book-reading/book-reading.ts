@@ -1,0 +1,101 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { RouterLink } from '@angular/router';
+
+import { localDay } from '@shared/calendar/local-day';
+import type { Book, Session } from '@shared/sync/schema/collections';
+
+import { JournalStore } from '../../../core/data/journal-store';
+import { liveQuerySignal } from '../../../core/data/live-query';
+import { CLOCK } from '../../../core/time/clock';
+import { TIME_ZONE } from '../../../core/time/time-zone';
+import { bookForecast, bookProgress } from '../book-forecast';
+import { minutesLine, MOOD_LABELS, positionLine, progressLine } from '../book-position';
+import { newestFirst } from '../reading-sessions';
+
+/** One line of the session list. */
+interface SessionLine {
+  readonly id: string;
+  readonly when: string;
+  readonly minutes: string;
+  readonly span: string;
+  readonly mood: string;
+  readonly timer: boolean;
+}
+
+/**
+ * A book's reading: how far the reader is (in the book's own unit), the time left and when they
+ * should finish, and its sessions with edit and delete. Reads everything it needs itself.
+ */
+@Component({
+  selector: 'll-book-reading',
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule],
+  templateUrl: './book-reading.html',
+  styleUrl: './book-reading.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class BookReading {
+  /** The book whose reading this is. */
+  readonly book = input.required<Book>();
+
+  private readonly store = inject(JournalStore);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly timeZone = inject(TIME_ZONE);
+  private readonly now = inject(CLOCK);
+  private readonly whenFormat = new Intl.DateTimeFormat(inject(LOCALE_ID), {
+    dateStyle: 'medium',
+    timeStyle: 'short',
+    timeZone: this.timeZone,
+  });
+
+  private readonly allSessions = liveQuerySignal(
+    async (db) => ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted),
+    [] as Session[],
+  );
+  private readonly books = liveQuerySignal(async (db) => (await db.rows('books').toArray()) as Book[], [] as Book[]);
+
+  private readonly sessions = computed(() => newestFirst(this.allSessions().filter((s) => s.bookId === this.book().id)));
+  protected readonly progress = computed(() => {
+    const { position, end, fraction } = bookProgress(this.book(), this.sessions());
+    if (end === null || fraction === null) return null;
+    return { line: progressLine(position, end, this.book().format), percent: Math.round(fraction * 100) };
+  });
+  protected readonly forecast = computed(() => {
+    const book = this.book();
+    if (book.status === 'finished' || book.status === 'dnf') return null;
+    const today = localDay(new Date(this.now()).toISOString(), this.timeZone);
+    const forecast = bookForecast(book, this.allSessions(), this.books(), today, this.timeZone);
+    if (!forecast || forecast.minutesLeft === 0) return null;
+    return { ...forecast, timeLeft: minutesLine(forecast.minutesLeft) };
+  });
+  protected readonly lines = computed<SessionLine[]>(() =>
+    this.sessions().map((session) => ({
+      id: session.id,
+      when: session.startedAt ? this.whenFormat.format(new Date(session.startedAt)) : 'Some time',
+      minutes: session.activeMinutes == null ? '' : minutesLine(session.activeMinutes),
+      span: this.span(session),
+      mood: session.mood ? MOOD_LABELS[session.mood] : '',
+      timer: session.source === 'timer',
+    })),
+  );
+
+  private span(session: Session): string {
+    const format = session.format ?? this.book().format;
+    const { fromPosition: from, toPosition: to } = session;
+    if (from != null && to != null) return `${positionLine(from, format)} → ${positionLine(to, format)}`;
+    if (to != null) return `to ${positionLine(to, format)}`;
+    return '';
+  }
+
+  protected async remove(line: SessionLine): Promise<void> {
+    await this.store.remove('sessions', line.id);
+    this.snackBar
+      .open('Session deleted', 'Undo', { duration: 8000 })
+      .onAction()
+      .subscribe(() => void this.store.write('sessions', line.id, { deleted: false }));
+  }
+}

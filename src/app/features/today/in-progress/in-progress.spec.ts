@@ -1,0 +1,79 @@
+import { provideHttpClient } from '@angular/common/http';
+import { type ComponentFixture, TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import Dexie from 'dexie';
+
+import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
+import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
+import { JournalStore } from '../../../core/data/journal-store';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { CLOCK } from '../../../core/time/clock';
+import { TIME_ZONE } from '../../../core/time/time-zone';
+import { InProgress } from './in-progress';
+
+describe('InProgress', () => {
+  const NOW = Date.parse('2026-03-08T20:00:00Z'); // 13:00 PDT in Los Angeles
+  let fixture: ComponentFixture<InProgress>;
+  let store: JournalStore;
+  let userId: string;
+
+  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
+  const element = (): HTMLElement => fixture.nativeElement;
+  const lines = () => [...element().querySelectorAll('li')].map((li) => li.textContent?.replace(/\s+/g, ' ').trim());
+
+  async function until(check: () => unknown, what: string): Promise<void> {
+    for (let i = 0; i < 200; i++) {
+      await fixture.whenStable();
+      if (check()) return;
+      await new Promise((resolve) => setTimeout(resolve, 5));
+    }
+    throw new Error(`gave up waiting for ${what}`);
+  }
+
+  beforeEach(async () => {
+    userId = `in-progress-${crypto.randomUUID()}`;
+    rememberSession({ user: { ...READER, id: userId } });
+    TestBed.configureTestingModule({
+      providers: [
+        provideHttpClient(),
+        provideRouter([]),
+        { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
+        { provide: CLOCK, useValue: () => NOW },
+      ],
+    });
+    store = TestBed.inject(JournalStore);
+    await db().open();
+  });
+
+  afterEach(async () => {
+    TestBed.resetTestingModule();
+    await Dexie.delete(journalDbName(userId));
+    forgetSession();
+  });
+
+  it('lists the books being read with how far and when they should be finished', async () => {
+    const bookId = await store.create('books', { title: 'The Salt Road', format: 'print', pageCount: 300, status: 'reading' });
+    await store.create('books', { title: 'Harbour Lights', format: 'audiobook', status: 'reading' });
+    await store.create('books', { title: 'Waiting Its Turn', format: 'print', pageCount: 200, status: 'tbr' });
+    // 7 March, 19:00–20:00 PST: 60 minutes, pages 0 → 60.
+    await store.create('sessions', {
+      bookId,
+      format: 'print',
+      startedAt: '2026-03-08T03:00:00Z',
+      endedAt: '2026-03-08T04:00:00Z',
+      activeMinutes: 60,
+      fromPosition: 0,
+      toPosition: 60,
+    });
+    fixture = TestBed.createComponent(InProgress);
+    await until(() => lines().length === 2, 'the books');
+    // Brysbaert (2019) 238 wpm, 275 words a page: 240 pages in 277 minutes; 60 minutes over
+    // 7–8 March is 30 a day: 9.2, so 10 days from 8 March, today included.
+    expect(lines()).toEqual(['Harbour Lights · no finish date yet', 'The Salt Road · 20 % · finish around Mar 17, 2026']);
+  });
+
+  it('says so when nothing is in progress', async () => {
+    fixture = TestBed.createComponent(InProgress);
+    await until(() => element().textContent?.includes('Nothing in progress'), 'the empty list');
+  });
+});

@@ -1,0 +1,58 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { RouterLink } from '@angular/router';
+
+import { localDay } from '@shared/calendar/local-day';
+import type { Book, Session } from '@shared/sync/schema/collections';
+
+import { liveQuerySignal } from '../../../core/data/live-query';
+import { CLOCK } from '../../../core/time/clock';
+import { TIME_ZONE } from '../../../core/time/time-zone';
+import { bookForecast, bookProgress } from '../../sessions/book-forecast';
+
+/** One book being read, as the list shows it. */
+interface InProgressLine {
+  readonly id: string;
+  readonly title: string;
+  /** Whole percent through the book; null when its length is not known. */
+  readonly percent: number | null;
+  readonly finishDate: string | null;
+}
+
+/** The books the reader is reading now, each with when they should finish it. */
+@Component({
+  selector: 'll-in-progress',
+  imports: [DatePipe, RouterLink],
+  templateUrl: './in-progress.html',
+  styleUrl: './in-progress.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class InProgress {
+  private readonly timeZone = inject(TIME_ZONE);
+  private readonly now = inject(CLOCK);
+
+  private readonly data = liveQuerySignal(
+    async (db) => ({
+      sessions: ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted),
+      books: ((await db.rows('books').toArray()) as Book[]).filter((b) => !b.deleted),
+    }),
+    { sessions: [] as Session[], books: [] as Book[] },
+  );
+
+  protected readonly lines = computed<InProgressLine[]>(() => {
+    const { sessions, books } = this.data();
+    const today = localDay(new Date(this.now()).toISOString(), this.timeZone);
+    return books
+      .filter((book) => book.status === 'reading')
+      .sort((a, b) => (a.title ?? '').localeCompare(b.title ?? ''))
+      .map((book) => {
+        const fraction = bookProgress(book, sessions.filter((s) => s.bookId === book.id)).fraction;
+        return {
+          id: book.id,
+          title: book.title || 'Untitled',
+          percent: fraction === null ? null : Math.round(fraction * 100),
+          finishDate: bookForecast(book, sessions, books, today, this.timeZone)?.finishDate ?? null,
+        };
+      });
+  });
+}

@@ -1,0 +1,128 @@
+import { provideHttpClient } from '@angular/common/http';
+import { type ComponentFixture, TestBed } from '@angular/core/testing';
+import Dexie from 'dexie';
+
+import type { Session } from '@shared/sync/schema/collections';
+
+import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
+import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
+import { JournalStore } from '../../../core/data/journal-store';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { CLOCK } from '../../../core/time/clock';
+import { TIME_ZONE } from '../../../core/time/time-zone';
+import { ReadingLog } from './reading-log';
+
+/**
+ * The same session, 2026-03-08 07:30–08:00 UTC, seen from two zones. IANA tz database: Los
+ * Angeles is UTC−8 until 02:00 on 8 March 2026 (then UTC−7), so it is 23:30–00:00 on 7 March
+ * there; Tokyo is UTC+9, 16:30–17:00 on 8 March. "Now" is 12:00 UTC: 05:00 on 8 March in Los
+ * Angeles, 21:00 on 8 March in Tokyo.
+ */
+describe('ReadingLog', () => {
+  const NOW = Date.parse('2026-03-08T12:00:00Z');
+  let fixture: ComponentFixture<ReadingLog>;
+  let store: JournalStore;
+  let userId: string;
+
+  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
+  const element = (): HTMLElement => fixture.nativeElement;
+  const shown = (css: string) => element().querySelector(css)?.textContent?.trim();
+  const level = (day: string) => element().querySelector(`.heatmap [data-day="${day}"]`)?.getAttribute('data-level');
+
+  async function until(check: () => unknown, what: string): Promise<void> {
+    for (let i = 0; i < 200; i++) {
+      await fixture.whenStable();
+      if (check()) return;
+      await new Promise((resolve) => setTimeout(resolve, 5));
+    }
+    throw new Error(`gave up waiting for ${what}`);
+  }
+
+  function setUp(timeZone: string): void {
+    beforeEach(async () => {
+      userId = `log-${crypto.randomUUID()}`;
+      rememberSession({ user: { ...READER, id: userId } });
+      TestBed.configureTestingModule({
+        providers: [provideHttpClient(), { provide: TIME_ZONE, useValue: timeZone }, { provide: CLOCK, useValue: () => NOW }],
+      });
+      store = TestBed.inject(JournalStore);
+      await db().open();
+    });
+
+    afterEach(async () => {
+      TestBed.resetTestingModule();
+      await Dexie.delete(journalDbName(userId));
+      forgetSession();
+    });
+  }
+
+  const read = (bookId: string, startedAt: string, minutes: number, from: number, to: number, extra: Partial<Session> = {}) =>
+    store.create('sessions', {
+      bookId,
+      format: 'print',
+      startedAt,
+      endedAt: new Date(Date.parse(startedAt) + minutes * 60_000).toISOString(),
+      activeMinutes: minutes,
+      fromPosition: from,
+      toPosition: to,
+      ...extra,
+    });
+
+  async function showWithTheSession(): Promise<void> {
+    const bookId = await store.create('books', { title: 'The Salt Road', format: 'print', pageCount: 300 });
+    await read(bookId, '2026-03-08T07:30:00Z', 30, 0, 20);
+    fixture = TestBed.createComponent(ReadingLog);
+    await until(() => element().querySelector('.heatmap [data-level="3"]'), 'the log');
+  }
+
+  describe('in Los Angeles', () => {
+    setUp('America/Los_Angeles');
+
+    it('counts the session on 7 March: nothing yet today, and a streak still alive from yesterday', async () => {
+      await showWithTheSession();
+      expect(level('2026-03-07')).toBe('3'); // 30 minutes reach level 3 (HEATMAP_THRESHOLDS)
+      expect(level('2026-03-08')).toBe('0');
+      expect(shown('.today')).toBe('0 min · 0 pages');
+      expect(shown('.current-streak')).toBe('1 day');
+      expect(shown('.longest-streak')).toBe('1 day');
+    });
+
+    it('lays out 2026 as 365 days in Monday-to-Sunday columns, with a summary and month totals', async () => {
+      await showWithTheSession();
+      // 1 January 2026 was a Thursday (ISO 8601 week 2026-W01-4): three empty cells before it.
+      expect(element().querySelectorAll('.heatmap [data-day]').length).toBe(365);
+      expect(element().querySelectorAll('.heatmap .blank').length).toBe(3);
+      const heatmap = element().querySelector('.heatmap')!;
+      expect(heatmap.getAttribute('role')).toBe('img');
+      expect(heatmap.getAttribute('aria-label')).toBe('Reading in 2026: 1 day, 30 minutes in all. Month totals follow.');
+      const rows = [...element().querySelectorAll('table tbody tr')].map((row) => [...row.children].map((cell) => cell.textContent?.trim()));
+      expect(rows.length).toBe(12);
+      expect(rows[2]).toEqual(['March', '1', '30']);
+      expect(rows[1]).toEqual(['February', '0', '0']);
+    });
+
+    it('keeps streaks across days, and pages for print only', async () => {
+      const bookId = await store.create('books', { title: 'The Salt Road', format: 'print', pageCount: 300 });
+      const ebookId = await store.create('books', { title: 'Glass Orchard', format: 'ebook' });
+      // Local evenings 1–3 March (19:00 PST = 03:00 UTC the next day), then 5–8 March.
+      for (const day of ['02', '03', '04', '06', '07', '08']) await read(bookId, `2026-03-${day}T03:00:00Z`, 20, 0, 10);
+      await read(ebookId, '2026-03-08T11:00:00Z', 15, 10, 30, { format: 'ebook' }); // 04:00 PDT today: percent, not pages
+      fixture = TestBed.createComponent(ReadingLog);
+      await until(() => shown('.current-streak') === '4 days', 'the streak');
+      expect(shown('.longest-streak')).toBe('4 days');
+      expect(shown('.today')).toBe('15 min · 0 pages');
+    });
+  });
+
+  describe('in Tokyo', () => {
+    setUp('Asia/Tokyo');
+
+    it('counts the same session on 8 March, today', async () => {
+      await showWithTheSession();
+      expect(level('2026-03-08')).toBe('3');
+      expect(level('2026-03-07')).toBe('0');
+      expect(shown('.today')).toBe('30 min · 20 pages');
+      expect(shown('.current-streak')).toBe('1 day');
+    });
+  });
+});
