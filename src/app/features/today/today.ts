@@ -1,10 +1,12 @@
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 
 import { Auth } from '../../core/auth/auth';
+import { ReadingNow } from './reading-now/reading-now';
 
 /** The home page: what the reader is in the middle of today. */
 @Component({
   selector: 'll-today',
+  imports: [ReadingNow],
   templateUrl: './today.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
