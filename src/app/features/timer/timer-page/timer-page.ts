@@ -91,7 +91,11 @@ export class TimerPage {
     return latestSession(this.data().bookSessions, timer.bookId, { having: 'toPosition' })?.toPosition ?? timer.startPosition ?? null;
   });
   protected readonly progress = computed(() => progressLine(this.book(), this.position()));
-  protected readonly fraction = computed(() => progressFraction(this.book(), this.position()));
+  /** Whole percent through the book, or `null` when its length is unknown. */
+  protected readonly percent = computed(() => {
+    const fraction = progressFraction(this.book(), this.position());
+    return fraction === null ? null : Math.round(fraction * 100);
+  });
   protected readonly since = computed(() => {
     const startedAt = this.active()?.startedAt;
     return startedAt ? format(new Date(startedAt), 'HH:mm') : '';
