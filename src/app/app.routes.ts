@@ -154,6 +154,11 @@ export const routes: Routes = [
         ],
       },
       {
+        path: 'timer',
+        title: 'Reading timer · Lamplight',
+        loadComponent: () => import('./features/timer/timer-page/timer-page').then((m) => m.TimerPage),
+      },
+      {
         path: 'settings',
         title: 'Settings · Lamplight',
         loadComponent: () => import('./features/settings/settings').then((m) => m.Settings),

@@ -19,6 +19,7 @@ import { TabCoordination } from './core/pwa/tab-coordination';
 import { SyncStatus } from './core/sync/sync-status/sync-status';
 import { SignOutFlow } from './features/account/sign-out/sign-out-flow';
 import { QuoteCapture } from './features/quotes/quote-capture';
+import { TimerBar } from './features/timer/timer-bar/timer-bar';
 
 /** A place in the app the shell links to. */
 interface Destination {
@@ -30,7 +31,7 @@ interface Destination {
 /** The app shell: brand bar, main navigation and the routed page. */
 @Component({
   selector: 'll-root',
-  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbarModule, MatIconModule, MatButtonModule, MatMenuModule, SyncStatus],
+  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbarModule, MatIconModule, MatButtonModule, MatMenuModule, SyncStatus, TimerBar],
   templateUrl: './app.html',
   styleUrl: './app.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

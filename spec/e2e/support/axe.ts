@@ -3,6 +3,16 @@ import type { Page } from 'playwright-core';
 
 /** axe-core findings that block or seriously hinder someone (impact "serious" or "critical"). */
 export async function seriousViolations(page: Page): Promise<string[]> {
+  // Colours are measured as painted: let fade-ins (a field's error, a button's ripple) finish first.
+  // (Endless ones, such as a spinning sync icon, are left alone.)
+  await page.evaluate(() =>
+    Promise.all(
+      document
+        .getAnimations()
+        .filter((animation) => animation.effect?.getComputedTiming().endTime !== Infinity)
+        .map((animation) => animation.finished.catch(() => undefined)),
+    ),
+  );
   const { violations } = await new AxeBuilder({ page }).analyze();
   return violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')

@@ -6,7 +6,7 @@ import { DeviceSession } from '../data-access/entities/device-session.entity';
 import { RefreshToken } from '../data-access/entities/refresh-token.entity';
 import type { User } from '../data-access/entities/user.entity';
 import { signAccessToken } from './access-tokens';
-import { deviceNameFromUserAgent } from './device-name';
+import { deviceNameFromUserAgent } from '../../../shared/account/device-name';
 import { hashSecretToken, newSecretToken } from './secret-tokens';
 
 /** Readers stay signed in on a device for months of offline use; each refresh extends this. */

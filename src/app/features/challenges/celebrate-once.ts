@@ -18,7 +18,7 @@ export function celebrateOnce(finished: Signal<readonly { readonly challenge: Ch
   readonly close: (id: string) => void;
 } {
   const store = inject(JournalStore);
-  const now = inject(CLOCK);
+  const clock = inject(CLOCK);
   const showing = signal<ReadonlySet<string>>(new Set());
   const written = new Set<string>();
   effect(() => {
@@ -26,7 +26,7 @@ export function celebrateOnce(finished: Signal<readonly { readonly challenge: Ch
       if (!done || challenge.celebratedAt || written.has(challenge.id)) continue;
       written.add(challenge.id);
       showing.update((ids) => new Set([...ids, challenge.id]));
-      void store.write('challenges', challenge.id, { celebratedAt: new Date(now()).toISOString() });
+      void store.write('challenges', challenge.id, { celebratedAt: new Date(clock.now()).toISOString() });
     }
   });
   return {

@@ -7,5 +7,5 @@ import { TIME_ZONE } from '../../core/time/time-zone';
 
 /** The reader's local date, 'YYYY-MM-DD', in their time zone. Call in an injection context. */
 export function readerToday(): string {
-  return localDay(new Date(inject(CLOCK)()).toISOString(), inject(TIME_ZONE));
+  return localDay(new Date(inject(CLOCK).now()).toISOString(), inject(TIME_ZONE));
 }

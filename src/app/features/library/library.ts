@@ -20,6 +20,7 @@ import { queryLibrary, searchText, type LibraryQuery, type LibrarySortKey } from
 import { StarRating } from './star-rating/star-rating';
 import { LabelChips } from '../labels/label-chips/label-chips';
 import { LabelDirectory } from '../labels/label-directory';
+import { TimerStartButton } from '../timer/timer-start-button/timer-start-button';
 
 type View = 'table' | 'covers';
 const VIEW_KEY = 'lamplight.libraryView';
@@ -40,6 +41,7 @@ const VIEW_KEY = 'lamplight.libraryView';
     StarRating,
     LabelChips,
     BookCover,
+    TimerStartButton,
   ],
   templateUrl: './library.html',
   styleUrl: './library.scss',
@@ -71,7 +73,7 @@ export class Library {
     return this.found().slice(index * size, (index + 1) * size);
   });
 
-  protected readonly columns = ['cover', 'title', 'authors', 'format', 'status', 'rating'];
+  protected readonly columns = ['cover', 'title', 'authors', 'format', 'status', 'rating', 'timer'];
   protected readonly statuses = BOOK_STATUSES;
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly authorLine = authorLine;

@@ -8,7 +8,7 @@ import { forgetSession, READER, rememberSession } from '../../../core/auth/testi
 import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { CLOCK } from '../../../core/time/clock';
+import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 
 /** Noon on 1 July 2026 in Los Angeles (PDT, UTC−7): the "now" of goal specs unless they say otherwise. */
@@ -30,7 +30,7 @@ export async function setUpGoalSpec(options: { timeZone?: string; now?: string }
       provideHttpClient(),
       provideRouter([{ path: '**', component: SpecLanding }]),
       { provide: TIME_ZONE, useValue: options.timeZone ?? 'America/Los_Angeles' },
-      { provide: CLOCK, useValue: () => new Date(options.now ?? JULY_FIRST_NOON_LA).getTime() },
+      { provide: CLOCK, useValue: fixedClock(new Date(options.now ?? JULY_FIRST_NOON_LA).getTime()) },
     ],
   });
   const db = () => TestBed.inject(LocalJournal).db()!;

@@ -9,7 +9,7 @@ import { forgetSession, READER, rememberSession } from '../../../core/auth/testi
 import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { CLOCK } from '../../../core/time/clock';
+import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { BookReading } from './book-reading';
 
@@ -61,7 +61,7 @@ describe('BookReading', () => {
         provideHttpClient(),
         provideRouter([]),
         { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
-        { provide: CLOCK, useValue: () => NOW },
+        { provide: CLOCK, useValue: fixedClock(NOW) },
       ],
     });
     store = TestBed.inject(JournalStore);

@@ -45,7 +45,7 @@ export class BookReading {
   private readonly store = inject(JournalStore);
   private readonly snackBar = inject(MatSnackBar);
   private readonly timeZone = inject(TIME_ZONE);
-  private readonly now = inject(CLOCK);
+  private readonly clock = inject(CLOCK);
   private readonly whenFormat = new Intl.DateTimeFormat(inject(LOCALE_ID), {
     dateStyle: 'medium',
     timeStyle: 'short',
@@ -67,7 +67,7 @@ export class BookReading {
   protected readonly forecast = computed(() => {
     const book = this.book();
     if (book.status === 'finished' || book.status === 'dnf') return null;
-    const today = localDay(new Date(this.now()).toISOString(), this.timeZone);
+    const today = localDay(new Date(this.clock.now()).toISOString(), this.timeZone);
     const forecast = bookForecast(book, this.allSessions(), this.books(), today, this.timeZone);
     if (!forecast || forecast.minutesLeft === 0) return null;
     return { ...forecast, timeLeft: minutesLine(forecast.minutesLeft) };

@@ -49,7 +49,7 @@ export class SessionEditor {
   private readonly store = inject(JournalStore);
   private readonly router = inject(Router);
   private readonly followUp = inject(SessionFollowUp);
-  private readonly now = inject(CLOCK);
+  private readonly clock = inject(CLOCK);
 
   /** The book, from the route. */
   readonly id = input.required<string>();
@@ -94,7 +94,7 @@ export class SessionEditor {
 
   /** The half hour just gone, from where the reader last got to in this book. */
   private async newSession(bookId: string): Promise<SessionFormValue> {
-    const end = Math.floor(this.now() / 60_000) * 60_000;
+    const end = Math.floor(this.clock.now() / 60_000) * 60_000;
     const ownSessions = (await this.store.list('sessions')).filter((s) => s.bookId === bookId);
     const from = latestPosition(ownSessions)?.toPosition;
     return {
@@ -140,7 +140,7 @@ export class SessionEditor {
 
     const candidate = { ...this.stored, ...patch, id: sessionId };
     const others = await this.store.list('sessions');
-    const problems = { ...read.problems, ...sessionProblems(candidate, others, this.now()) };
+    const problems = { ...read.problems, ...sessionProblems(candidate, others, this.clock.now()) };
     if (Object.keys(problems).length > 0) return this.refuse(problems);
 
     this.saving.set(true);

@@ -7,7 +7,7 @@ import { forgetSession, READER, rememberSession } from '../../../core/auth/testi
 import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { CLOCK } from '../../../core/time/clock';
+import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { InProgress } from './in-progress';
 
@@ -19,7 +19,11 @@ describe('InProgress', () => {
 
   const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
   const element = (): HTMLElement => fixture.nativeElement;
-  const lines = () => [...element().querySelectorAll('li')].map((li) => li.textContent?.replace(/\s+/g, ' ').trim());
+  // The words of each line, without its timer button.
+  const lines = () =>
+    [...element().querySelectorAll('li')].map((li) =>
+      [...li.querySelectorAll(':scope > a, :scope > span')].map((part) => part.textContent).join(' ').replace(/\s+/g, ' ').trim(),
+    );
 
   async function until(check: () => unknown, what: string): Promise<void> {
     for (let i = 0; i < 200; i++) {
@@ -38,7 +42,7 @@ describe('InProgress', () => {
         provideHttpClient(),
         provideRouter([]),
         { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
-        { provide: CLOCK, useValue: () => NOW },
+        { provide: CLOCK, useValue: fixedClock(NOW) },
       ],
     });
     store = TestBed.inject(JournalStore);

@@ -9,6 +9,7 @@ import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { bookForecast, bookProgress } from '../../sessions/book-forecast';
+import { TimerStartButton } from '../../timer/timer-start-button/timer-start-button';
 
 /** One book being read, as the list shows it. */
 interface InProgressLine {
@@ -22,14 +23,14 @@ interface InProgressLine {
 /** The books the reader is reading now, each with when they should finish it. */
 @Component({
   selector: 'll-in-progress',
-  imports: [DatePipe, RouterLink],
+  imports: [DatePipe, RouterLink, TimerStartButton],
   templateUrl: './in-progress.html',
   styleUrl: './in-progress.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class InProgress {
   private readonly timeZone = inject(TIME_ZONE);
-  private readonly now = inject(CLOCK);
+  private readonly clock = inject(CLOCK);
 
   private readonly data = liveQuerySignal(
     async (db) => ({
@@ -41,7 +42,7 @@ export class InProgress {
 
   protected readonly lines = computed<InProgressLine[]>(() => {
     const { sessions, books } = this.data();
-    const today = localDay(new Date(this.now()).toISOString(), this.timeZone);
+    const today = localDay(new Date(this.clock.now()).toISOString(), this.timeZone);
     return books
       .filter((book) => book.status === 'reading')
       .sort((a, b) => (a.title ?? '').localeCompare(b.title ?? ''))

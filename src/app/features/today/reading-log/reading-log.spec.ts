@@ -8,7 +8,7 @@ import { forgetSession, READER, rememberSession } from '../../../core/auth/testi
 import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { CLOCK } from '../../../core/time/clock';
+import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { ReadingLog } from './reading-log';
 
@@ -43,7 +43,7 @@ describe('ReadingLog', () => {
       userId = `log-${crypto.randomUUID()}`;
       rememberSession({ user: { ...READER, id: userId } });
       TestBed.configureTestingModule({
-        providers: [provideHttpClient(), { provide: TIME_ZONE, useValue: timeZone }, { provide: CLOCK, useValue: () => NOW }],
+        providers: [provideHttpClient(), { provide: TIME_ZONE, useValue: timeZone }, { provide: CLOCK, useValue: fixedClock(NOW) }],
       });
       store = TestBed.inject(JournalStore);
       await db().open();

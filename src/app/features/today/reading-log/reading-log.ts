@@ -36,7 +36,7 @@ const weekday = (day: string) => (dayIndex(day) + 3) % 7;
 })
 export class ReadingLog {
   private readonly timeZone = inject(TIME_ZONE);
-  private readonly now = inject(CLOCK);
+  private readonly clock = inject(CLOCK);
   private readonly locale = inject(LOCALE_ID);
 
   private readonly data = liveQuerySignal(
@@ -49,7 +49,7 @@ export class ReadingLog {
   private readonly log = computed(() => dailyLog(logSessions(this.data().sessions, this.data().books), this.timeZone));
 
   protected readonly today = computed(() => {
-    const day = localDay(new Date(this.now()).toISOString(), this.timeZone);
+    const day = localDay(new Date(this.clock.now()).toISOString(), this.timeZone);
     const entry = this.log().find((e) => e.day === day);
     return { day, minutes: Math.round(entry?.minutes ?? 0), pages: Math.round(entry?.pages ?? 0) };
   });

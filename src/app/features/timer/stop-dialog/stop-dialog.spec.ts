@@ -1,0 +1,115 @@
+import { provideHttpClient } from '@angular/common/http';
+import { TestBed } from '@angular/core/testing';
+import { MatDialog } from '@angular/material/dialog';
+import { provideRouter } from '@angular/router';
+import Dexie from 'dexie';
+import { firstValueFrom } from 'rxjs';
+
+import type { Book, Session } from '@shared/sync/schema/collections';
+
+import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
+import { journalDbName } from '../../../core/data/journal-db';
+import { JournalStore } from '../../../core/data/journal-store';
+import { LocalJournal } from '../../../core/data/local-journal';
+import { CLOCK } from '../../../core/time/clock';
+import { ReadingTimer } from '../reading-timer';
+import { FakeClock } from '../testing/fake-clock';
+import { until } from '../testing/until';
+import { StopDialog, type StopDialogData } from './stop-dialog';
+
+const MINUTE = 60_000;
+
+describe('StopDialog', () => {
+  let userId: string;
+  let clock: FakeClock;
+  let store: JournalStore;
+
+  beforeEach(() => {
+    userId = `spec-${crypto.randomUUID()}`;
+    rememberSession({ user: { ...READER, id: userId } });
+    clock = new FakeClock(Date.parse('2026-03-08T20:14:00Z'));
+    TestBed.configureTestingModule({ providers: [provideRouter([]), provideHttpClient(), { provide: CLOCK, useValue: clock }] });
+    store = TestBed.inject(JournalStore);
+  });
+
+  afterEach(async () => {
+    TestBed.inject(MatDialog).closeAll();
+    TestBed.resetTestingModule();
+    await Dexie.delete(journalDbName(userId));
+    forgetSession();
+  });
+
+  /** Times 25 minutes of a book and stops, as the timer page does, then opens the form. */
+  async function stopped(book: Record<string, unknown>, previous?: Partial<Session>) {
+    const bookId = await store.create('books', { title: 'The Orchard Under Snow', ...book });
+    if (previous) await store.create('sessions', { bookId, startedAt: '2026-03-07T20:00:00.000Z', endedAt: '2026-03-07T20:30:00.000Z', ...previous });
+    const timer = TestBed.inject(ReadingTimer);
+    await timer.start(bookId);
+    clock.advance(25 * MINUTE);
+    const sessionId = (await timer.stop())!;
+    const ref = TestBed.inject(MatDialog).open<StopDialog, StopDialogData, boolean>(StopDialog, { data: { sessionId } });
+    const closed = firstValueFrom(ref.afterClosed());
+    await until(() => (TestBed.tick(), !!document.querySelector('ll-stop-dialog input')), 3000, 'the form');
+    await until(() => (TestBed.tick(), field('toPosition')?.value !== '' || !previous), 3000, 'the prefill');
+    return { bookId, sessionId, closed };
+  }
+
+  const field = (name: string) => document.querySelector<HTMLInputElement & HTMLSelectElement>(`ll-stop-dialog [formcontrolname="${name}"]`);
+  const dialogText = () => document.querySelector('ll-stop-dialog')?.textContent?.replace(/\s+/g, ' ') ?? '';
+  const click = (name: string) => Array.from(document.querySelectorAll<HTMLButtonElement>('ll-stop-dialog button')).find((b) => b.textContent!.trim() === name)!.click();
+  const type = (name: string, value: string) => {
+    const input = field(name)!;
+    input.value = value;
+    input.dispatchEvent(new Event(input.tagName === 'SELECT' ? 'change' : 'input'));
+  };
+  const outboxFor = async (rowId: string) => (await TestBed.inject(LocalJournal).db()!.outbox.toArray()).filter((c) => c.rowId === rowId);
+
+  it('opens prefilled from the previous session, writes only what changed, and marks a TBR book as reading', async () => {
+    const { bookId, sessionId, closed } = await stopped({ format: 'audiobook', audioMinutes: 665, status: 'tbr' }, { toPosition: 120, playbackSpeed: 1.25 });
+    expect(dialogText()).toContain('You listened for 25 minutes');
+    expect(field('toPosition')!.value).toBe('120');
+    expect(field('playbackSpeed')!.value).toBe('1.25');
+    expect(field('ebookLocation')).toBeNull(); // an audiobook has no ebook location
+    const before = (await outboxFor(sessionId)).length;
+
+    type('toPosition', '150');
+    type('mood', 'calm');
+    click('Save');
+
+    expect(await closed).toBeTrue();
+    const session = (await store.get('sessions', sessionId)) as Session;
+    expect(session).toEqual(jasmine.objectContaining({ toPosition: 150, playbackSpeed: 1.25, mood: 'calm', fromPosition: 120, activeMinutes: 25 }));
+    const written = (await outboxFor(sessionId)).slice(before).map((c) => c.field);
+    expect(written.sort()).toEqual(['mood', 'playbackSpeed', 'toPosition']); // the prefilled speed is new to this session
+    expect(((await store.get('books', bookId)) as Book).status).toBe('reading');
+  });
+
+  it('shows a message under the field for a page past the end, and saves nothing', async () => {
+    const { sessionId } = await stopped({ format: 'print', pageCount: 320, status: 'reading' }, { toPosition: 88 });
+    type('toPosition', '400');
+    click('Save');
+    await until(() => (TestBed.tick(), dialogText().includes('The book has 320 pages')), 3000, 'the message');
+    expect(((await store.get('sessions', sessionId)) as Session).toPosition ?? null).toBeNull();
+  });
+
+  it('asks “Mark it finished?” when the position is the end of the book, and marks it when told', async () => {
+    const { bookId, closed } = await stopped({ format: 'ebook', pageCount: 410, status: 'paused' }, { toPosition: 90 });
+    expect(field('ebookLocation')).not.toBeNull();
+    type('toPosition', '100');
+    click('Save');
+    await until(() => (TestBed.tick(), dialogText().includes('Mark it finished?')), 3000, 'the question');
+    click('Mark it finished');
+    expect(await closed).toBeTrue();
+    const book = (await store.get('books', bookId)) as Book;
+    expect(book.status).toBe('finished');
+    const history = (await store.list('bookStatusChanges')).filter((change) => change.bookId === bookId).map((change) => change.status);
+    expect(history).toEqual(jasmine.arrayWithExactContents(['reading', 'finished']));
+  });
+
+  it('loses nothing when skipped: the session was saved before the form opened', async () => {
+    const { sessionId, closed } = await stopped({ format: 'print', pageCount: 320, status: 'reading' });
+    click('Skip');
+    expect(await closed).toBeFalse();
+    expect(((await store.get('sessions', sessionId)) as Session).activeMinutes).toBe(25);
+  });
+});

@@ -1,0 +1,54 @@
+import { inject, Injectable } from '@angular/core';
+import { MatDialog } from '@angular/material/dialog';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { Router } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+
+import type { Book, Session } from '@shared/sync/schema/collections';
+
+import { JournalStore } from '../../core/data/journal-store';
+import { minutesWords } from './book-progress';
+import { ConfirmDialog, type ConfirmDialogData } from './confirm-dialog/confirm-dialog';
+import { ReadingTimer } from './reading-timer';
+
+/**
+ * Starting the timer from a start button: one timer per reader, so when another book's timer is
+ * active the reader is asked first, and saying yes stops it into a session. Then the timer page
+ * opens.
+ */
+@Injectable({ providedIn: 'root' })
+export class TimerStart {
+  private readonly timer = inject(ReadingTimer);
+  private readonly store = inject(JournalStore);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly router = inject(Router);
+
+  /** Starts timing `bookId` (or opens its timer when it already runs); `false` when the reader said no. */
+  async start(bookId: string, options: { targetMinutes?: number | null } = {}): Promise<boolean> {
+    const outcome = await this.timer.start(bookId, options);
+    if (!outcome.started && outcome.current.bookId !== bookId) {
+      const [current, next] = await Promise.all([this.titleOf(outcome.current.bookId), this.titleOf(bookId)]);
+      const data: ConfirmDialogData = {
+        title: 'A timer is already running',
+        message: `You are timing ${current}. Stop it and keep its time as a session, then start timing ${next}?`,
+        yes: 'Stop it and start',
+        no: 'Keep the current one',
+      };
+      const ref = this.dialog.open<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, { data, width: '440px' });
+      if (!(await firstValueFrom(ref.afterClosed()))) return false;
+      const replaced = await this.timer.start(bookId, { ...options, replace: true });
+      if (replaced.started && replaced.stoppedSessionId) {
+        const session = (await this.store.get('sessions', replaced.stoppedSessionId)) as Session | undefined;
+        this.snackBar.open(`Saved ${minutesWords(session?.activeMinutes)} of ${current}.`, 'OK', { duration: 6000 });
+      }
+    }
+    await this.router.navigateByUrl('/timer');
+    return true;
+  }
+
+  private async titleOf(bookId: string | null | undefined): Promise<string> {
+    const book = bookId ? ((await this.store.get('books', bookId)) as Book | undefined) : undefined;
+    return book?.title || 'another book';
+  }
+}
