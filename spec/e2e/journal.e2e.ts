@@ -7,7 +7,7 @@ import { waitForOfflineReady } from './support/service-worker';
 describe('The journal, offline', () => {
   const harness = useServerAndBrowser();
 
-  it('follows a series of three books with a label, suggests the next one, and keeps it all after a reload', async () => {
+  it('follows a series of three books with a label, keeps a quote with a page and a label and a notebook page from a template, and has it all after a reload', async () => {
     const { baseUrl } = harness.server;
     const reader = await registerThroughApi(baseUrl, 'Ottoline Varga');
     const context = await harness.browser.newContext();
@@ -39,7 +39,38 @@ describe('The journal, offline', () => {
     await page.getByLabel('Status of Wick and Ember').selectOption('finished');
     await page.getByText('Next in The Lanternwright Trilogy: The Glass Chimney').waitFor();
 
+    // A quote with a page and a label, captured from the book's page.
+    await page.getByRole('link', { name: 'Wick and Ember' }).click();
+    await page.getByRole('button', { name: 'Capture a quote' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Capture a quote' });
+    await dialog.getByLabel('The passage').fill('A wick remembers every flame it has carried.');
+    await dialog.getByRole('option', { name: /Comfort read/ }).click();
+    await dialog.getByLabel('Page', { exact: true }).fill('17');
+    await dialog.getByLabel('Page', { exact: true }).press('Enter');
+    await dialog.waitFor({ state: 'detached' });
+
+    // A notebook page started from one of the templates that come with the app.
+    await page.goto(`${baseUrl}/journal/notebooks`);
+    await page.getByLabel('Title', { exact: true }).fill('Lanternwright notes');
+    await page.getByRole('button', { name: 'Start notebook' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Lanternwright notes' }).waitFor();
+    await page.getByLabel('Start from').selectOption({ label: 'After a sitting' });
+    await page.getByRole('button', { name: 'Add a page' }).click();
+    await page.getByLabel('Page title').waitFor();
+    expect(await page.getByLabel('Page text').inputValue()).toContain('## Where I stopped');
+    await page.getByRole('button', { name: 'Save page', exact: true }).click();
+    await page.getByRole('status').filter({ hasText: 'Saved on this device.' }).waitFor();
+
+    // After a reload, still offline, everything is there.
     await page.reload();
+    await page.goto(`${baseUrl}/journal/quotes`);
+    const quote = page.locator('ll-quote-card').first();
+    await quote.waitFor();
+    expect(await quote.textContent()).toContain('p. 17');
+    expect(await quote.textContent()).toContain('Comfort read');
+    await page.goto(`${baseUrl}/journal/notebooks`);
+    await page.getByRole('link', { name: /Lanternwright notes/ }).click();
+    expect(await page.locator('body').textContent()).toContain('Where I stopped');
     await page.goto(`${baseUrl}/journal/series`);
     await page.getByText('1 of 3 read').waitFor();
     expect(await page.getByRole('link', { name: 'The Glass Chimney' }).count()).toBe(1);
