@@ -93,10 +93,11 @@ describe('Reading sessions and the daily log', () => {
     await log.locator('.current-streak').filter({ hasText: '2 days' }).waitFor();
     expect(await log.locator('.longest-streak').textContent()).toContain('2 days');
     expect(await log.locator('.today').textContent()).toContain('0 min · 0 pages');
-    const heatmap = page.getByRole('img', { name: /^Reading in \d{4}/ });
+    const heatmap = log.locator('ll-year-heatmap');
+    expect(await heatmap.locator('figcaption').textContent()).toMatch(/^\d+ of 36[56] days with reading in \d{4}/);
     expect(await heatmap.locator('[data-day]').count()).toBe(Number(today.slice(0, 4)) % 4 === 0 ? 366 : 365);
     for (const reading of [day(-2), day(-1)].filter((d) => d.slice(0, 4) === today.slice(0, 4))) {
-      expect(await heatmap.locator(`[data-day="${reading}"]`).getAttribute('data-level')).toBe('3'); // 45 and 30 min
+      expect(await heatmap.locator(`[data-day="${reading}"]`).getAttribute('class')).toContain('level-3'); // 45 and 30 min
     }
     expect(await textOf(page.locator('ll-in-progress li').first())).toContain(`The Salt Road · 20 % · finish around ${mediumDate(day(11))}`);
     expect(await seriousViolations(page)).toEqual([]);

@@ -154,6 +154,18 @@ export const routes: Routes = [
         ],
       },
       {
+        path: 'insights',
+        children: [
+          { path: '', title: 'Insights · Lamplight', loadComponent: () => import('./features/insights/insights-page/insights-page').then((m) => m.InsightsPage) },
+          {
+            path: ':year/review',
+            title: 'Year in review · Lamplight',
+            loadComponent: () => import('./features/insights/year-review/year-review').then((m) => m.YearReview),
+          },
+          { path: ':year', title: 'Insights · Lamplight', loadComponent: () => import('./features/insights/insights-page/insights-page').then((m) => m.InsightsPage) },
+        ],
+      },
+      {
         path: 'timer',
         title: 'Reading timer · Lamplight',
         loadComponent: () => import('./features/timer/timer-page/timer-page').then((m) => m.TimerPage),

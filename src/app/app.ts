@@ -51,6 +51,7 @@ export class App {
     { path: '/library', label: 'Library', icon: 'local_library' },
     { path: '/journal', label: 'Journal', icon: 'edit_note' },
     { path: '/goals', label: 'Goals', icon: 'flag' },
+    { path: '/insights', label: 'Insights', icon: 'insights' },
   ];
 
   constructor() {

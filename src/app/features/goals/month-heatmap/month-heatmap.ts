@@ -4,6 +4,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
 import { goalAmount } from '../goal-figures';
+import { HeatmapLegend } from '../heatmap-legend/heatmap-legend';
 import { monthHeatmap } from './month-heatmap-cells';
 
 /**
@@ -12,6 +13,7 @@ import { monthHeatmap } from './month-heatmap-cells';
  */
 @Component({
   selector: 'll-month-heatmap',
+  imports: [HeatmapLegend],
   template: `
     <div class="grid" role="img" [attr.aria-label]="description()">
       @for (weekday of weekdays; track $index) {
@@ -24,13 +26,7 @@ import { monthHeatmap } from './month-heatmap-cells';
         <span class="day level-{{ day.level }}" [attr.data-day]="day.day" aria-hidden="true">{{ day.date }}</span>
       }
     </div>
-    <p class="legend" aria-hidden="true">
-      Less
-      @for (level of [0, 1, 2, 3, 4]; track level) {
-        <span class="swatch level-{{ level }}"></span>
-      }
-      More
-    </p>
+    <ll-heatmap-legend />
   `,
   styleUrl: './month-heatmap.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
