@@ -1,4 +1,7 @@
 import { computed, DestroyRef, inject, Injectable, signal, type Signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import type { AbstractControl } from '@angular/forms';
+import { map, merge } from 'rxjs';
 
 /**
  * Knows whether anything on screen would be lost by a reload: a form with unsaved input, an open
@@ -18,5 +21,14 @@ export class UnsavedWork {
   track(source: Signal<boolean>): void {
     this.sources.update((list) => [...list, source]);
     inject(DestroyRef).onDestroy(() => this.sources.update((list) => list.filter((s) => s !== source)));
+  }
+
+  /**
+   * Tracks forms: unsaved while any of them is dirty. Follows `events`, which (unlike
+   * `valueChanges`) also fires when a save marks a form pristine. Call in an injection context.
+   */
+  trackForm(...forms: AbstractControl[]): void {
+    const dirty = () => forms.some((form) => form.dirty);
+    this.track(toSignal(merge(...forms.map((form) => form.events)).pipe(map(dirty)), { initialValue: dirty() }));
   }
 }

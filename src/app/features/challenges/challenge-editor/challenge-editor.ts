@@ -81,7 +81,7 @@ export class ChallengeEditor {
   protected readonly prompts = this.form.controls.prompts;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
   }
 
   protected addPrompt(): void {

@@ -7,7 +7,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
-import { map, startWith } from 'rxjs';
+import { startWith } from 'rxjs';
 
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
 import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, PROGRESS_UNITS, WISH_PRIORITIES, type Book, type Series } from '@shared/sync/schema/collections';
@@ -108,7 +108,7 @@ export class BookEditor {
 
   constructor() {
     // An update or another tab must not reload the page over unsaved input.
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
     effect(() => {
       const id = this.id();
       if (id) void this.load(id);

@@ -1,12 +1,10 @@
 import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 import { format } from 'date-fns';
-import { map } from 'rxjs';
 
 import { RECOMMEND_ANSWERS, type Book, type Reading } from '@shared/sync/schema/collections';
 
@@ -63,7 +61,7 @@ export class ReadingEditor {
   private original: ReadingFormValue = EMPTY_READING_FORM;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
     effect(() => void this.load(this.id(), this.readingId()));
   }
 

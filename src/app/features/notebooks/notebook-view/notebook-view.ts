@@ -9,7 +9,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 import { format } from 'date-fns';
 import { liveQuery } from 'dexie';
-import { combineLatest, from, map, of, switchMap } from 'rxjs';
+import { combineLatest, from, of, switchMap } from 'rxjs';
 
 import { lightPlainText, parseLightFormat } from '@shared/journal/light-format';
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
@@ -105,7 +105,7 @@ export class NotebookView {
   protected readonly fieldError = fieldError;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.detailsForm.events.pipe(map(() => this.detailsForm.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.detailsForm);
   }
 
   protected async addPage(): Promise<void> {

@@ -1,11 +1,9 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
-import { map } from 'rxjs';
 
 import { localDateTime } from '@shared/calendar/local-date-time';
 import { sessionProblems } from '@shared/reading/session-problems';
@@ -74,7 +72,7 @@ export class SessionEditor {
   private original: SessionFormValue = EMPTY_SESSION_FORM;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
     effect(() => void this.load(this.id(), this.sessionId()));
     this.followSpan();
   }
