@@ -2,7 +2,7 @@ import { Component, signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { FormControl, FormGroup } from '@angular/forms';
 
-import { UnsavedWork } from './unsaved-work';
+import { UNLOAD_EVENTS, UnsavedWork } from './unsaved-work';
 
 @Component({ selector: 'll-draft', template: '' })
 class Draft {
@@ -26,6 +26,38 @@ describe('UnsavedWork', () => {
     expect(unsaved.present()).toBeFalse();
     first.componentInstance.dirty.set(true);
     expect(unsaved.present()).toBeTrue();
+  });
+});
+
+describe('UnsavedWork and closing the tab', () => {
+  const page = new EventTarget();
+  beforeEach(() => TestBed.configureTestingModule({ providers: [{ provide: UNLOAD_EVENTS, useValue: page }] }));
+
+  /** What the browser sends before it unloads the page; cancelled means it asks the reader. */
+  function unloadIsStopped(): boolean {
+    const event = new Event('beforeunload', { cancelable: true });
+    page.dispatchEvent(event);
+    return event.defaultPrevented;
+  }
+
+  it('has the browser ask only while something is unsaved', () => {
+    const draft = TestBed.createComponent(Draft);
+    TestBed.tick();
+    expect(unloadIsStopped()).toBeFalse();
+
+    draft.componentInstance.dirty.set(true);
+    TestBed.tick();
+    expect(unloadIsStopped()).toBeTrue();
+
+    draft.componentInstance.dirty.set(false);
+    TestBed.tick();
+    expect(unloadIsStopped()).toBeFalse();
+
+    draft.componentInstance.dirty.set(true);
+    TestBed.tick();
+    draft.destroy();
+    TestBed.tick();
+    expect(unloadIsStopped()).toBeFalse();
   });
 });
 
