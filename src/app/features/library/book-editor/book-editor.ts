@@ -17,6 +17,7 @@ import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { LabelPicker } from '../../labels/label-picker/label-picker';
 import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
@@ -104,6 +105,8 @@ export class BookEditor {
   protected readonly copyLabels = COPY_LABELS;
   protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
   protected readonly fieldError = fieldError;
+  /** Cancel discards on purpose, so it leaves without asking. */
+  protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
   private original: BookFormValue = EMPTY_BOOK_FORM;
 
   constructor() {

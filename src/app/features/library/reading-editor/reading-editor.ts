@@ -11,6 +11,7 @@ import { RECOMMEND_ANSWERS, type Book, type Reading } from '@shared/sync/schema/
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore, type RowWrite } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { RECOMMEND_LABELS } from '../book-labels';
 import {
@@ -58,6 +59,8 @@ export class ReadingEditor {
   protected readonly answers = RECOMMEND_ANSWERS;
   protected readonly answerLabels = RECOMMEND_LABELS;
   protected readonly fieldError = fieldError;
+  /** Cancel discards on purpose, so it leaves without asking. */
+  protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
   private original: ReadingFormValue = EMPTY_READING_FORM;
 
   constructor() {

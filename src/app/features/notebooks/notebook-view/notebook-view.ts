@@ -22,6 +22,7 @@ import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { bookOptions } from '../notebook-data';
 import { Notebooks } from '../notebooks';
@@ -162,6 +163,7 @@ export class NotebookView {
 
   protected async removeNotebook(): Promise<void> {
     await this.notebooks.removeNotebook(this.id());
-    await this.router.navigate(['/journal/notebooks']);
+    // The reader chose to delete it, half-typed details and all.
+    await this.router.navigate(['/journal/notebooks'], { info: LEAVE_WITHOUT_ASKING });
   }
 }

@@ -12,6 +12,7 @@ import { SESSION_MOODS, type Book, type Session } from '@shared/sync/schema/coll
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { fieldError, showServerErrors } from '../../account/field-errors';
@@ -67,6 +68,8 @@ export class SessionEditor {
   protected readonly moods = SESSION_MOODS;
   protected readonly moodLabels = MOOD_LABELS;
   protected readonly fieldError = fieldError;
+  /** Cancel discards on purpose, so it leaves without asking. */
+  protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
 
   private stored: Session | undefined;
   private original: SessionFormValue = EMPTY_SESSION_FORM;
