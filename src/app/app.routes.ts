@@ -1,6 +1,7 @@
 import { Routes } from '@angular/router';
 
 import { adminGuard, signedInGuard, signedOutGuard } from './core/auth/auth-guards';
+import { unsavedWorkGuard } from './core/pwa/unsaved-work-guard';
 
 export const routes: Routes = [
   {
@@ -46,6 +47,7 @@ export const routes: Routes = [
           {
             path: 'new',
             title: 'Add a book · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/library/book-editor/book-editor').then((m) => m.BookEditor),
           },
           {
@@ -56,26 +58,31 @@ export const routes: Routes = [
           {
             path: ':id/edit',
             title: 'Edit book · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/library/book-editor/book-editor').then((m) => m.BookEditor),
           },
           {
             path: ':id/readings/new',
             title: 'A reading · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/library/reading-editor/reading-editor').then((m) => m.ReadingEditor),
           },
           {
             path: ':id/readings/:readingId',
             title: 'Edit reading · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/library/reading-editor/reading-editor').then((m) => m.ReadingEditor),
           },
           {
             path: ':id/sessions/new',
             title: 'A reading session · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/sessions/session-editor/session-editor').then((m) => m.SessionEditor),
           },
           {
             path: ':id/sessions/:sessionId',
             title: 'Edit session · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/sessions/session-editor/session-editor').then((m) => m.SessionEditor),
           },
         ],
@@ -92,6 +99,7 @@ export const routes: Routes = [
           {
             path: 'notebooks',
             title: 'Notebooks · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/notebooks/notebooks-page/notebooks-page').then((m) => m.NotebooksPage),
           },
           {
@@ -102,6 +110,7 @@ export const routes: Routes = [
           {
             path: 'series/:id',
             title: 'Series · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/series/series-page/series-page').then((m) => m.SeriesPage),
           },
           {
@@ -117,11 +126,13 @@ export const routes: Routes = [
           {
             path: 'notebooks/:id',
             title: 'Notebook · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/notebooks/notebook-view/notebook-view').then((m) => m.NotebookView),
           },
           {
             path: 'notebooks/:id/pages/:pageId',
             title: 'Notebook page · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/notebooks/page-editor/page-editor').then((m) => m.PageEditor),
           },
         ],
@@ -129,7 +140,7 @@ export const routes: Routes = [
       {
         path: 'goals',
         children: [
-          { path: '', title: 'Goals · Lamplight', loadComponent: () => import('./features/goals/goals-page/goals-page').then((m) => m.GoalsPage) },
+          { path: '', title: 'Goals · Lamplight', canDeactivate: [unsavedWorkGuard], loadComponent: () => import('./features/goals/goals-page/goals-page').then((m) => m.GoalsPage) },
           {
             path: 'challenges',
             title: 'Challenges · Lamplight',
@@ -138,6 +149,7 @@ export const routes: Routes = [
           {
             path: 'challenges/new',
             title: 'New challenge · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/challenges/challenge-editor/challenge-editor').then((m) => m.ChallengeEditor),
           },
           {
@@ -145,10 +157,11 @@ export const routes: Routes = [
             title: 'Challenge · Lamplight',
             loadComponent: () => import('./features/challenges/challenge-page/challenge-page').then((m) => m.ChallengePage),
           },
-          { path: ':year', title: 'Goals · Lamplight', loadComponent: () => import('./features/goals/goals-page/goals-page').then((m) => m.GoalsPage) },
+          { path: ':year', title: 'Goals · Lamplight', canDeactivate: [unsavedWorkGuard], loadComponent: () => import('./features/goals/goals-page/goals-page').then((m) => m.GoalsPage) },
           {
             path: ':year/:month',
             title: 'A month · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/goals/month-page/month-page').then((m) => m.MonthPage),
           },
         ],

@@ -16,6 +16,7 @@ import { CHALLENGE_KINDS, type Challenge } from '@shared/sync/schema/collections
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { readerToday } from '../../goals/reader-today';
 import { defaultChallengeName, KIND_LABELS } from '../challenge-labels';
 import { periodLine } from '../challenge-period';
@@ -78,10 +79,12 @@ export class ChallengeEditor {
     return `${weeks.length} weeks: ${periodLine({ periodStart: weeks[0].monday, periodEnd: weeks[weeks.length - 1].sunday })}`;
   });
   protected readonly problem = signal('');
+  /** Cancel discards on purpose, so it leaves without asking. */
+  protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
   protected readonly prompts = this.form.controls.prompts;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
   }
 
   protected addPrompt(): void {

@@ -1,6 +1,5 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -9,7 +8,6 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { map } from 'rxjs';
 
 import { booksFinishedIn } from '@shared/challenges/books-finished-in';
 import { challengeProgress } from '@shared/challenges/challenge-progress';
@@ -140,7 +138,7 @@ export class GoalsPage {
   protected readonly newGoalForm = inject(FormBuilder).nonNullable.group({ text: '' });
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.targetsForm.valueChanges.pipe(map(() => this.targetsForm.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.targetsForm);
     // Follow the stored targets (another device's edit) unless the reader is typing; a new year
     // starts afresh.
     let filledYear: number | null = null;

@@ -1,6 +1,5 @@
 import { DatePipe, formatDate } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -9,7 +8,6 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
-import { map } from 'rxjs';
 
 import { booksFinishedIn } from '@shared/challenges/books-finished-in';
 import { amountsInLog, monthPeriod } from '@shared/goals/amounts-in';
@@ -118,7 +116,7 @@ export class MonthPage {
   private original: TargetTexts = this.targetsForm.getRawValue();
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.targetsForm.valueChanges.pipe(map(() => this.targetsForm.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.targetsForm);
     let filledFor: string | null = null;
     effect(() => {
       const texts = targetTexts(this.plan());

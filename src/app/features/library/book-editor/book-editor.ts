@@ -7,7 +7,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
-import { map, startWith } from 'rxjs';
+import { startWith } from 'rxjs';
 
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
 import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, PROGRESS_UNITS, WISH_PRIORITIES, type Book, type Series } from '@shared/sync/schema/collections';
@@ -17,6 +17,7 @@ import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { LabelPicker } from '../../labels/label-picker/label-picker';
 import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
@@ -104,11 +105,13 @@ export class BookEditor {
   protected readonly copyLabels = COPY_LABELS;
   protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
   protected readonly fieldError = fieldError;
+  /** Cancel discards on purpose, so it leaves without asking. */
+  protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
   private original: BookFormValue = EMPTY_BOOK_FORM;
 
   constructor() {
     // An update or another tab must not reload the page over unsaved input.
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
     effect(() => {
       const id = this.id();
       if (id) void this.load(id);

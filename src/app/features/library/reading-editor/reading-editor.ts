@@ -1,18 +1,17 @@
 import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 import { format } from 'date-fns';
-import { map } from 'rxjs';
 
 import { RECOMMEND_ANSWERS, type Book, type Reading } from '@shared/sync/schema/collections';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore, type RowWrite } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { RECOMMEND_LABELS } from '../book-labels';
 import {
@@ -60,10 +59,12 @@ export class ReadingEditor {
   protected readonly answers = RECOMMEND_ANSWERS;
   protected readonly answerLabels = RECOMMEND_LABELS;
   protected readonly fieldError = fieldError;
+  /** Cancel discards on purpose, so it leaves without asking. */
+  protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
   private original: ReadingFormValue = EMPTY_READING_FORM;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
     effect(() => void this.load(this.id(), this.readingId()));
   }
 

@@ -3,6 +3,7 @@ import { Router } from '@angular/router';
 
 import { STARTER_TEMPLATES } from '@shared/journal/starter-templates';
 
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { Notebooks } from '../notebooks';
 import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
 import { NotebookView } from './notebook-view';
@@ -123,7 +124,8 @@ describe('NotebookView', () => {
     await until(() => textOf(element).includes('and its 3 pages, on every device?'), fixture);
     buttonNamed('Delete notebook').click();
     await until(() => navigate.calls.count() === 1, fixture);
-    expect(navigate).toHaveBeenCalledWith(['/journal/notebooks']);
+    // Deleting is meant: the way out does not ask about half-typed details.
+    expect(navigate).toHaveBeenCalledWith(['/journal/notebooks'], { info: LEAVE_WITHOUT_ASKING });
     expect(await notebooks.pagesOf(notebookId)).toEqual([]);
   });
 });

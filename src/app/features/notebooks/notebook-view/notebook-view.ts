@@ -9,7 +9,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 import { format } from 'date-fns';
 import { liveQuery } from 'dexie';
-import { combineLatest, from, map, of, switchMap } from 'rxjs';
+import { combineLatest, from, of, switchMap } from 'rxjs';
 
 import { lightPlainText, parseLightFormat } from '@shared/journal/light-format';
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
@@ -22,6 +22,7 @@ import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { bookOptions } from '../notebook-data';
 import { Notebooks } from '../notebooks';
@@ -105,7 +106,7 @@ export class NotebookView {
   protected readonly fieldError = fieldError;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.detailsForm.events.pipe(map(() => this.detailsForm.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.detailsForm);
   }
 
   protected async addPage(): Promise<void> {
@@ -162,6 +163,7 @@ export class NotebookView {
 
   protected async removeNotebook(): Promise<void> {
     await this.notebooks.removeNotebook(this.id());
-    await this.router.navigate(['/journal/notebooks']);
+    // The reader chose to delete it, half-typed details and all.
+    await this.router.navigate(['/journal/notebooks'], { info: LEAVE_WITHOUT_ASKING });
   }
 }

@@ -1,13 +1,11 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
-import { map } from 'rxjs';
 
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 
@@ -49,7 +47,7 @@ export class NotebooksPage {
   protected readonly fieldError = fieldError;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.form.events.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
     effect(() => {
       const book = this.book();
       if (book && !this.form.dirty) this.form.controls.bookId.setValue(book);

@@ -6,7 +6,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
-import { map, merge, startWith } from 'rxjs';
+import { startWith } from 'rxjs';
 
 import { TEMPLATE_PLACEHOLDERS } from '@shared/journal/instantiate-template';
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
@@ -61,9 +61,7 @@ export class PageEditor {
 
   constructor() {
     // Nothing typed here may be lost to an update reload or another tab's upgrade.
-    // `events` also fires when a save marks the form pristine, which valueChanges does not.
-    const dirty = merge(this.form.events, this.templateForm.events).pipe(map(() => this.form.dirty || this.templateForm.dirty));
-    inject(UnsavedWork).track(toSignal(dirty, { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form, this.templateForm);
     effect(() => void this.load(this.id(), this.pageId()));
   }
 

@@ -5,8 +5,6 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { toSignal } from '@angular/core/rxjs-interop';
-import { map } from 'rxjs';
 
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 import { ownTemplates, STARTER_TEMPLATES, type TemplateView } from '@shared/journal/starter-templates';
@@ -41,7 +39,7 @@ export class PageTemplates {
   protected readonly fieldError = fieldError;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.name.events.pipe(map(() => this.name.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.name);
   }
 
   protected startRenaming(template: TemplateView): void {

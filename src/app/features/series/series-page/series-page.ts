@@ -7,7 +7,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import { liveQuery } from 'dexie';
-import { combineLatest, from, map, of, switchMap } from 'rxjs';
+import { combineLatest, from, of, switchMap } from 'rxjs';
 
 import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-order';
 import type { Book, Series } from '@shared/sync/schema/collections';
@@ -65,7 +65,7 @@ export class SeriesPage {
   private original = this.form.getRawValue();
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
     // Fill the form once per series; later live updates must not wipe what the reader is typing.
     let filledFor: string | null = null;
     effect(() => {

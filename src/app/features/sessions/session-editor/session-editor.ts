@@ -1,11 +1,9 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
-import { map } from 'rxjs';
 
 import { localDateTime } from '@shared/calendar/local-date-time';
 import { sessionProblems } from '@shared/reading/session-problems';
@@ -14,6 +12,7 @@ import { SESSION_MOODS, type Book, type Session } from '@shared/sync/schema/coll
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { fieldError, showServerErrors } from '../../account/field-errors';
@@ -69,12 +68,14 @@ export class SessionEditor {
   protected readonly moods = SESSION_MOODS;
   protected readonly moodLabels = MOOD_LABELS;
   protected readonly fieldError = fieldError;
+  /** Cancel discards on purpose, so it leaves without asking. */
+  protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
 
   private stored: Session | undefined;
   private original: SessionFormValue = EMPTY_SESSION_FORM;
 
   constructor() {
-    inject(UnsavedWork).track(toSignal(this.form.valueChanges.pipe(map(() => this.form.dirty)), { initialValue: false }));
+    inject(UnsavedWork).trackForm(this.form);
     effect(() => void this.load(this.id(), this.sessionId()));
     this.followSpan();
   }
