@@ -18,6 +18,7 @@ import { mergeChanges, type FieldState } from '../shared/sync/merge-changes';
 import { createApp } from '../sync-server/src/app';
 import { loadConfig } from '../sync-server/src/config';
 import { createDataSource } from '../sync-server/src/data-access/data-source';
+import { migrate } from '../sync-server/src/data-access/migrate';
 import { SyncStore } from '../sync-server/src/data-access/sync-store';
 import { createSmtpMailer } from '../sync-server/src/domain/mailer';
 import { signAccessToken } from '../sync-server/src/domain/access-tokens';
@@ -77,7 +78,7 @@ async function main(): Promise<void> {
   const config = loadConfig({ ...process.env, LAMPLIGHT_JWT_SECRET: process.env['LAMPLIGHT_JWT_SECRET'] ?? 'bench-secret-bench-secret-bench-secret-0' });
   const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
-  await dataSource.runMigrations();
+  await migrate(dataSource);
   await dataSource.query(`CREATE TABLE IF NOT EXISTS bench_raw_books (
       user_id uuid NOT NULL REFERENCES users (id) ON DELETE CASCADE, id uuid NOT NULL, title text,
       authors text[], format text, status text, rating double precision, PRIMARY KEY (user_id, id))`);

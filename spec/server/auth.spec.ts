@@ -1,3 +1,5 @@
+import { createHash } from 'node:crypto';
+
 import type { Express } from 'express';
 import { SignJWT } from 'jose';
 import request from 'supertest';
@@ -92,6 +94,20 @@ describe('POST /api/auth/register', () => {
 describe('POST /api/auth/login', () => {
   let app: Express;
   beforeAll(async () => (app = await createTestApp()));
+
+  it('When a refresh token is issued, then PostgreSQL keeps only its SHA-256 digest', async () => {
+    const { refreshToken, user } = await registerReader(app);
+
+    const dataSource = await testDataSource();
+    const stored: { token_hash: string }[] = await dataSource.query(
+      'SELECT t.token_hash FROM refresh_tokens t JOIN device_sessions s ON s.id = t.session_id WHERE s.user_id = $1',
+      [user.id],
+    );
+    expect(stored.length).toBe(1);
+    expect(stored[0]!.token_hash).not.toContain(refreshToken);
+    // The digest as Node's own crypto module (OpenSSL) computes it, FIPS 180-4 SHA-256.
+    expect(stored[0]!.token_hash).toBe(createHash('sha256').update(refreshToken).digest('hex'));
+  });
 
   it('When the password is right, then it answers 200 with the user and a token pair', async () => {
     const email = uniqueEmail();

@@ -29,6 +29,18 @@ function startServerProcess(env: Record<string, string>): Promise<{ baseUrl: str
   });
 }
 
+/** What a server process needs: the test database and inbox, a spec secret, a low bcrypt cost. */
+async function serverEnv(): Promise<Record<string, string>> {
+  const { port } = await testInbox();
+  return {
+    DATABASE_URL: testDatabaseUrl(),
+    LAMPLIGHT_JWT_SECRET: 'spec-secret-that-is-at-least-32-characters-long',
+    LAMPLIGHT_BCRYPT_COST: '4',
+    SMTP_URL: `smtp://127.0.0.1:${port}`,
+    NODE_ENV: 'test',
+  };
+}
+
 async function signIn(baseUrl: string, email: string): Promise<string> {
   const res = await fetch(`${baseUrl}/api/auth/login`, {
     method: 'POST',
@@ -43,14 +55,7 @@ describe('Two server instances on one PostgreSQL (behind a load balancer)', () =
 
   it('When one device pushes to the first and another pulls from the second, then they converge', async () => {
     const config = await testConfig();
-    const { port } = await testInbox();
-    const env = {
-      DATABASE_URL: testDatabaseUrl(),
-      LAMPLIGHT_JWT_SECRET: 'spec-secret-that-is-at-least-32-characters-long',
-      LAMPLIGHT_BCRYPT_COST: '4',
-      SMTP_URL: `smtp://127.0.0.1:${port}`,
-      NODE_ENV: 'test',
-    };
+    const env = await serverEnv();
     const [first, second] = await Promise.all([startServerProcess(env), startServerProcess(env)]);
     expect(first.baseUrl).not.toBe(second.baseUrl);
     expect(config.databaseUrl).toBe(env.DATABASE_URL);
@@ -76,4 +81,31 @@ describe('Two server instances on one PostgreSQL (behind a load balancer)', () =
     expect(asObject(onLaptop.state)).toEqual(asObject(onTablet.state));
     expect(onTablet.state.get(`books/${row}/rating`)?.value).toBe(4);
   }, 60_000); // two Node processes start, connect and migrate: slow on a busy machine
+
+  it('When a server starts with LAMPLIGHT_ADMIN_EMAIL of an existing reader, then that reader is an admin', async () => {
+    const { port } = await testInbox();
+    const email = uniqueEmail('first-admin-at-start');
+    const env = {
+      DATABASE_URL: testDatabaseUrl(),
+      LAMPLIGHT_JWT_SECRET: 'spec-secret-that-is-at-least-32-characters-long',
+      LAMPLIGHT_BCRYPT_COST: '4',
+      SMTP_URL: `smtp://127.0.0.1:${port}`,
+      NODE_ENV: 'test',
+    };
+    const plain = await startServerProcess(env);
+    const registered = await fetch(`${plain.baseUrl}/api/auth/register`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email, password: GOOD_PASSWORD, displayName: 'Oda Rasmussen' }),
+    });
+    expect(((await registered.json()) as { user: { role: string } }).user.role).toBe('reader');
+
+    const withAdmin = await startServerProcess({ ...env, LAMPLIGHT_ADMIN_EMAIL: email });
+    const res = await fetch(`${withAdmin.baseUrl}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email, password: GOOD_PASSWORD }),
+    });
+    expect(((await res.json()) as { user: { role: string } }).user.role).toBe('admin');
+  }, 60_000);
 });

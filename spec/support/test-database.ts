@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
+import { migrate } from '../../sync-server/src/data-access/migrate';
 
 /**
  * The specs' real PostgreSQL database (scripts/test.mjs creates it fresh for every run and sets
@@ -18,7 +19,7 @@ export function testDataSource(): Promise<DataSource> {
   shared ??= (async () => {
     const dataSource = createDataSource(testDatabaseUrl());
     await dataSource.initialize();
-    await dataSource.runMigrations();
+    await migrate(dataSource);
     return dataSource;
   })();
   return shared;

@@ -13,6 +13,7 @@ import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
 import { uploadsRoutes } from './entry-points/uploads.routes';
+import { PostgresAttemptStore } from './data-access/attempt-store';
 import { SyncStore } from './data-access/sync-store';
 import { UploadStore } from './data-access/upload-store';
 import { healthRoutes } from './entry-points/health.routes';
@@ -46,7 +47,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.use('/api/health', healthRoutes(dataSource));
   app.use(
     '/api/auth',
-    authRoutes({ accounts, sessions, resets, attemptLimiter: attemptLimiter(config.authRateLimit), requireAuth: authenticated }),
+    authRoutes({ accounts, sessions, resets, attemptLimiter: attemptLimiter(config.authRateLimit, new PostgresAttemptStore(dataSource)), requireAuth: authenticated }),
   );
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);

@@ -3,6 +3,7 @@ import type { Server } from 'node:http';
 import { createApp } from './app';
 import { loadConfig } from './config';
 import { createDataSource } from './data-access/data-source';
+import { migrate } from './data-access/migrate';
 import { User } from './data-access/entities/user.entity';
 import { createSmtpMailer } from './domain/mailer';
 
@@ -11,7 +12,7 @@ async function main(): Promise<void> {
   const config = loadConfig();
   const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
-  await dataSource.runMigrations();
+  await migrate(dataSource);
   if (config.adminEmail) {
     await dataSource.getRepository(User).update({ email: config.adminEmail }, { role: 'admin' });
   }

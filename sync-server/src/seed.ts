@@ -1,5 +1,6 @@
 import { loadConfig } from './config';
 import { createDataSource } from './data-access/data-source';
+import { migrate } from './data-access/migrate';
 import { DEMO_ACCOUNTS, seedDemo } from './data-access/seed-demo';
 
 /** `node dist/node/sync-server/src/seed.js`: migrate, then add the demo accounts and library (idempotent). */
@@ -9,7 +10,7 @@ async function seed(): Promise<void> {
   await dataSource.initialize();
   let demoBooksAdded = 0;
   try {
-    await dataSource.runMigrations();
+    await migrate(dataSource);
     ({ demoBooksAdded } = await seedDemo(dataSource, config.bcryptCost));
   } finally {
     await dataSource.destroy();

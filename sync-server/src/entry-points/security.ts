@@ -1,5 +1,5 @@
 import type { RequestHandler } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { rateLimit, type Store } from 'express-rate-limit';
 import helmet from 'helmet';
 
 /**
@@ -36,10 +36,11 @@ export function securityHeaders(): RequestHandler {
 
 /**
  * Limits attempts per client address on sign-in, registration and reset routes. The count is
- * kept per server process; behind a load balancer each instance limits on its own.
+ * kept in `store` (PostgreSQL in the app), so instances behind a load balancer share it.
  */
-export function attemptLimiter(limitPer15Minutes: number): RequestHandler {
+export function attemptLimiter(limitPer15Minutes: number, store: Store): RequestHandler {
   return rateLimit({
+    store,
     windowMs: 15 * 60 * 1000,
     limit: limitPer15Minutes,
     standardHeaders: 'draft-8',

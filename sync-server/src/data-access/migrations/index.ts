@@ -6,6 +6,7 @@ import { Library1764979200000 } from './1764979200000-library';
 import { Journal1765065600000 } from './1765065600000-journal';
 import { Sessions1765152000000 } from './1765152000000-sessions';
 import { Goals1765238400000 } from './1765238400000-goals';
+import { AttemptCounts1765324800000 } from './1765324800000-attempt-counts';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   Journal1765065600000,
   Sessions1765152000000,
   Goals1765238400000,
+  AttemptCounts1765324800000,
 ];
