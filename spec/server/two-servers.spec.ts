@@ -29,13 +29,17 @@ function startServerProcess(env: Record<string, string>): Promise<{ baseUrl: str
   });
 }
 
-/** What a server process needs: the test database and inbox, a spec secret, a low bcrypt cost. */
+/**
+ * What a server process needs: the test database and inbox, a spec secret, a low bcrypt cost,
+ * and an attempt limit to speak of (attempts are counted in the shared database, by address).
+ */
 async function serverEnv(): Promise<Record<string, string>> {
   const { port } = await testInbox();
   return {
     DATABASE_URL: testDatabaseUrl(),
     LAMPLIGHT_JWT_SECRET: 'spec-secret-that-is-at-least-32-characters-long',
     LAMPLIGHT_BCRYPT_COST: '4',
+    LAMPLIGHT_AUTH_RATE_LIMIT: '100000',
     SMTP_URL: `smtp://127.0.0.1:${port}`,
     NODE_ENV: 'test',
   };
@@ -83,15 +87,8 @@ describe('Two server instances on one PostgreSQL (behind a load balancer)', () =
   }, 60_000); // two Node processes start, connect and migrate: slow on a busy machine
 
   it('When a server starts with LAMPLIGHT_ADMIN_EMAIL of an existing reader, then that reader is an admin', async () => {
-    const { port } = await testInbox();
     const email = uniqueEmail('first-admin-at-start');
-    const env = {
-      DATABASE_URL: testDatabaseUrl(),
-      LAMPLIGHT_JWT_SECRET: 'spec-secret-that-is-at-least-32-characters-long',
-      LAMPLIGHT_BCRYPT_COST: '4',
-      SMTP_URL: `smtp://127.0.0.1:${port}`,
-      NODE_ENV: 'test',
-    };
+    const env = await serverEnv();
     const plain = await startServerProcess(env);
     const registered = await fetch(`${plain.baseUrl}/api/auth/register`, {
       method: 'POST',
