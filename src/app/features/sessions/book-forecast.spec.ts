@@ -35,6 +35,13 @@ describe('bookForecast', () => {
     expect(forecast.finishDate).toBe('2026-12-08');
   });
 
+  it('uses the fiction rate for a novel', () => {
+    // Brysbaert (2019): 260 words a minute for fiction. 240 pages × 275 words / 260 = 253.8 minutes.
+    const novel = { ...book, genres: ['Fantasy'] };
+    const forecast = bookForecast(novel, two, [novel], '2026-12-01', 'UTC')!;
+    expect(forecast.minutesLeft).toBeCloseTo((240 * 275) / 260, 6);
+  });
+
   it('uses the reader’s own pace in the format, across their books, from the third session', () => {
     // Rates 45, 60 and 20 pages an hour; median 45. 240 pages at 45 an hour are 320 minutes;
     // 130 minutes over 3 days is 43.3 a day: 320 / 43.3 = 7.4, so 8 days from 1 December.

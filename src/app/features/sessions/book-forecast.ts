@@ -1,4 +1,5 @@
 import { fallbackPace } from '@shared/reading/fallback-pace';
+import { readingGenre } from '@shared/reading/reading-genre';
 import { forecastFinish, type Forecast } from '@shared/reading/forecast-finish';
 import type { Pace } from '@shared/reading/pace';
 import type { PaceSession } from '@shared/reading/pace-session';
@@ -65,10 +66,10 @@ export function bookForecast(
   const pace =
     personal ??
     (format === 'ebook'
-      ? fallbackPace({ format, pageCount: book.pageCount ?? undefined })
+      ? fallbackPace({ format, pageCount: book.pageCount ?? undefined, genre: readingGenre(book.genres) })
       : format === 'audiobook'
         ? fallbackPace({ format, playbackSpeed: latestPosition(own)?.playbackSpeed ?? undefined })
-        : fallbackPace({ format }));
+        : fallbackPace({ format, genre: readingGenre(book.genres) }));
   const minutesPerDay = usualMinutesPerDay(logSessions(sessions, books), today, timeZone);
   const forecast = forecastFinish({ remaining: end - position, pace, minutesPerDay, today, timeZone });
   return { ...forecast, paceFrom: personal ? 'personal' : 'typical', pace, minutesPerDay };
