@@ -155,6 +155,22 @@ describe('Covers', () => {
       expect((await db().covers.get(id))?.state).toBe('uploaded');
     });
 
+    it('counts as offline when the service worker answers 504 though the browser says online, until an upload goes through', async () => {
+      const { id, blob } = await pendingCover();
+      expect(covers.online()).toBeTrue();
+
+      const failed = covers.uploadPending();
+      // The Angular service worker's own answer with no network: 504 and no API error body.
+      (await sent('/api/uploads')).flush('', { status: 504, statusText: 'Gateway Timeout' });
+      await failed;
+      expect(covers.online()).toBeFalse();
+
+      const retried = covers.uploadPending();
+      (await sent('/api/uploads')).flush({ id, mediaType: 'image/webp', byteSize: blob.size });
+      await retried;
+      expect(covers.online()).toBeTrue();
+    });
+
     it('waits while the browser is offline, sending nothing', async () => {
       offline();
       const { id } = await pendingCover();

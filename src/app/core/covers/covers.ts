@@ -8,7 +8,7 @@ import { retryDelayMs } from '@shared/sync/sync-cycle';
 import { Auth } from '../auth/auth';
 import type { JournalDb, StoredCover } from '../data/journal-db';
 import { LocalJournal } from '../data/local-journal';
-import { readableError } from '../http/api-error-message';
+import { isUnreachable, readableError } from '../http/api-error-message';
 import { prepareCover } from './prepare-cover';
 import { sha256Hex } from './sha256-hex';
 
@@ -140,10 +140,14 @@ export class Covers {
     try {
       const ran = await this.withTabLock(db.userId, () => this.uploadEach(db));
       this.attempt = 0;
+      if (ran) this.onlineState.set(true);
       if (!ran) this.schedule(retryDelayMs(0)); // another tab is uploading; look again soon
     } catch (error) {
       // A refused sign-in waits for the reader (signing in again restarts us).
       if (error instanceof HttpErrorResponse && (error.status === 401 || error.status === 403)) return;
+      // No answer (or the service worker's 504): offline, whatever navigator.onLine says, as
+      // the sync status judges it too.
+      if (isUnreachable(error)) this.onlineState.set(false);
       this.schedule(retryDelayMs(this.attempt++));
     }
   }
