@@ -260,6 +260,20 @@ describe('Account, Settings and Accounts screens', () => {
       }
     });
 
+    it('puts the switch back and says why when a change is refused', async () => {
+      const reader = await registerThroughApi(base(), 'Casimir Llewellyn-Adeyemi');
+      await openAccountsAsAdmin();
+      const canSignIn = rowOf(reader.user.email).getByRole('switch', { name: 'Account of Casimir Llewellyn-Adeyemi can sign in' });
+      expect(await canSignIn.getAttribute('aria-checked')).toBe('true');
+      // The account goes away while the list is open.
+      await request(base()).delete('/api/auth/account').set('Authorization', `Bearer ${reader.accessToken}`).send({ password: reader.password }).expect(204);
+
+      await canSignIn.click();
+
+      await page.getByRole('alert').filter({ hasText: 'No such account' }).waitFor();
+      expect(await canSignIn.getAttribute('aria-checked')).toBe('true');
+    });
+
     it('lets no admin disable themselves or drop their own role', async () => {
       const me = await openAccountsAsAdmin();
       const myRow = rowOf(me.email);
