@@ -2,7 +2,7 @@ import { DatePipe, DecimalPipe } from '@angular/common';
 import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatSlideToggleModule } from '@angular/material/slide-toggle';
+import { MatSlideToggleModule, type MatSlideToggleChange } from '@angular/material/slide-toggle';
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
@@ -40,22 +40,25 @@ export class Accounts {
     }
   }
 
-  protected setEnabled(user: AdminUserView, enabled: boolean): Promise<void> {
-    return this.update(user, { disabled: !enabled });
+  protected async setEnabled(user: AdminUserView, toggled: MatSlideToggleChange): Promise<void> {
+    // The switch has already moved; its bound value has not, so a refusal must move it back itself.
+    if (!(await this.update(user, { disabled: !toggled.checked }))) toggled.source.checked = !toggled.checked;
   }
 
-  protected toggleAdmin(user: AdminUserView): Promise<void> {
-    return this.update(user, { role: user.role === 'admin' ? 'reader' : 'admin' });
+  protected async toggleAdmin(user: AdminUserView): Promise<void> {
+    await this.update(user, { role: user.role === 'admin' ? 'reader' : 'admin' });
   }
 
-  private async update(user: AdminUserView, change: Partial<Pick<AdminUserView, 'disabled' | 'role'>>): Promise<void> {
+  /** Resolves whether the server took the change. */
+  private async update(user: AdminUserView, change: Partial<Pick<AdminUserView, 'disabled' | 'role'>>): Promise<boolean> {
     try {
       const updated = await firstValueFrom(this.http.patch<AdminUserView>(`/api/admin/users/${user.id}`, change));
       this.users.update((list) => list.map((u) => (u.id === updated.id ? updated : u)));
       this.problem.set('');
+      return true;
     } catch (error) {
       this.problem.set(readableError(error).message);
-      this.users.update((list) => [...list]); // put the toggle back as it was
+      return false;
     }
   }
 }
