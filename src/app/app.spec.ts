@@ -8,20 +8,25 @@ import { App } from './app';
 import { routes } from './app.routes';
 import { forgetSession, rememberSession } from './core/auth/testing/session-fixtures';
 import { PAGE_RELOAD } from './core/pwa/page-reload';
+import { untilTicked } from './core/pwa/testing/leave-question';
+import { IPHONE_SAFARI, runAsInstalled } from './core/pwa/testing/pwa-fixtures';
+
+/** The shell as the app config sets it up, with the service worker off and no reloads. */
+function configureShell(): void {
+  TestBed.configureTestingModule({
+    imports: [App],
+    providers: [
+      provideRouter(routes),
+      provideHttpClient(),
+      provideServiceWorker('ngsw-worker.js', { enabled: false }),
+      { provide: PAGE_RELOAD, useValue: () => fail('the app tried to reload the page') },
+      { provide: MAT_ICON_DEFAULT_OPTIONS, useValue: { fontSet: 'material-symbols-outlined' } },
+    ],
+  });
+}
 
 describe('App shell', () => {
-  beforeEach(() => {
-    TestBed.configureTestingModule({
-      imports: [App],
-      providers: [
-        provideRouter(routes),
-        provideHttpClient(),
-        provideServiceWorker('ngsw-worker.js', { enabled: false }),
-        { provide: PAGE_RELOAD, useValue: () => fail('the app tried to reload the page') },
-        { provide: MAT_ICON_DEFAULT_OPTIONS, useValue: { fontSet: 'material-symbols-outlined' } },
-      ],
-    });
-  });
+  beforeEach(configureShell);
 
   afterEach(() => forgetSession());
 
@@ -51,6 +56,36 @@ describe('App shell', () => {
       'Add a book',
     ]);
     expect(items[1]?.getAttribute('href')).toBe('/library/new');
+  });
+
+  /** The account menu's items, by their text without the icon. */
+  async function accountMenuItems(element: HTMLElement): Promise<HTMLElement[]> {
+    element.querySelector<HTMLButtonElement>('button.account')!.click();
+    await untilTicked(() => document.querySelector('.mat-mdc-menu-panel') !== null, 'the account menu');
+    return Array.from(document.querySelectorAll<HTMLElement>('.mat-mdc-menu-panel [mat-menu-item]'));
+  }
+  const itemText = (item: HTMLElement) => item.textContent?.replace(item.querySelector('mat-icon')?.textContent ?? '', '').trim();
+
+  it('on an iPhone, offers Install Lamplight in the account menu and shows how to add it to the Home Screen', async () => {
+    spyOnProperty(navigator, 'userAgent').and.returnValue(IPHONE_SAFARI);
+    rememberSession();
+    const fixture = TestBed.createComponent(App);
+    await fixture.whenStable();
+
+    const install = (await accountMenuItems(fixture.nativeElement)).find((item) => itemText(item) === 'Install Lamplight')!;
+    install.click();
+    await untilTicked(() => document.querySelector('ll-install-help-dialog') !== null, 'the how-to');
+    expect(document.querySelector('ll-install-help-dialog h2')?.textContent).toBe('Add Lamplight to your Home Screen');
+  });
+
+  it('once installed, offers no Install Lamplight', async () => {
+    spyOnProperty(navigator, 'userAgent').and.returnValue(IPHONE_SAFARI);
+    runAsInstalled();
+    rememberSession();
+    const fixture = TestBed.createComponent(App);
+    await fixture.whenStable();
+
+    expect((await accountMenuItems(fixture.nativeElement)).map(itemText)).toEqual(['Settings', 'Sign out']);
   });
 
   it('with nobody signed in, shows no journal navigation', async () => {
