@@ -1,5 +1,6 @@
 import { provideHttpClient } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { MAT_ICON_DEFAULT_OPTIONS } from '@angular/material/icon';
 import { provideRouter } from '@angular/router';
 import { provideServiceWorker } from '@angular/service-worker';
@@ -9,7 +10,7 @@ import { routes } from './app.routes';
 import { forgetSession, rememberSession } from './core/auth/testing/session-fixtures';
 import { PAGE_RELOAD } from './core/pwa/page-reload';
 import { untilTicked } from './core/pwa/testing/leave-question';
-import { IPHONE_SAFARI, runAsInstalled } from './core/pwa/testing/pwa-fixtures';
+import { IPHONE_SAFARI, runAsInstalled, snackBarText } from './core/pwa/testing/pwa-fixtures';
 
 /** The shell as the app config sets it up, with the service worker off and no reloads. */
 function configureShell(): void {
@@ -100,5 +101,69 @@ describe('App shell', () => {
   it('sends an unknown address to the not-found page rather than a blank screen', () => {
     const fallback = routes.find((route) => route.path === '**');
     expect(fallback?.loadComponent).toBeDefined();
+  });
+});
+
+describe('App shell and this device’s storage', () => {
+  const ASKED = 'lamplight.storageAsked';
+
+  function browserAnswers(kept: boolean): jasmine.Spy {
+    spyOn(navigator.storage, 'persisted').and.resolveTo(false);
+    spyOn(navigator.storage, 'estimate').and.resolveTo({ usage: 0, quota: 0 });
+    return spyOn(navigator.storage, 'persist').and.resolveTo(kept);
+  }
+
+  beforeEach(() => {
+    localStorage.removeItem(ASKED);
+    configureShell();
+  });
+
+  afterEach(() => {
+    TestBed.inject(MatSnackBar).dismiss();
+    localStorage.removeItem(ASKED);
+    forgetSession();
+  });
+
+  it('after sign-in asks the browser to keep storage and says once on this device that it will', async () => {
+    const persist = browserAnswers(true);
+    rememberSession();
+    TestBed.createComponent(App);
+
+    await untilTicked(() => snackBarText() !== null, 'the storage message');
+    expect(persist).toHaveBeenCalledTimes(1);
+    expect(snackBarText()).toBe('Your browser will keep Lamplight’s storage, so your journal is not cleared to free space.');
+
+    // The next visit asks again (the answer can change) but does not say it again.
+    TestBed.inject(MatSnackBar).dismiss();
+    TestBed.resetTestingModule();
+    configureShell();
+    TestBed.createComponent(App);
+    await untilTicked(() => persist.calls.count() === 2, 'the second question');
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    TestBed.tick();
+    expect(snackBarText()).toBeNull();
+  });
+
+  it('says what a refusal means, with the two ways to keep the journal safe', async () => {
+    browserAnswers(false);
+    rememberSession();
+    TestBed.createComponent(App);
+
+    await untilTicked(() => snackBarText() !== null, 'the storage message');
+    expect(snackBarText()).toBe(
+      'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.',
+    );
+    expect(localStorage.getItem(ASKED)).toBe('true');
+  });
+
+  it('asks nothing before anyone signs in', async () => {
+    const persist = browserAnswers(true);
+    forgetSession();
+    const fixture = TestBed.createComponent(App);
+    await fixture.whenStable();
+    await new Promise((resolve) => setTimeout(resolve, 50));
+
+    expect(persist).not.toHaveBeenCalled();
+    expect(localStorage.getItem(ASKED)).toBeNull();
   });
 });
