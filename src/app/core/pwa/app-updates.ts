@@ -12,7 +12,7 @@ const CHECK_EVERY_MS = 30 * 60 * 1000;
 
 /**
  * New versions of Lamplight: when one is ready, offers a reload in a snackbar; when the running
- * version cannot continue ("unrecoverable"), says so and reloads. Neither ever reloads while a
+ * version cannot continue ("unrecoverable"), says so and reloads once the message has gone. Neither ever reloads while a
  * form holds unsaved input or a timer dialog is open: it waits until that is done.
  */
 @Injectable({ providedIn: 'root' })
@@ -33,10 +33,11 @@ export class AppUpdates {
       )
       .subscribe(() => this.offerReload());
     this.updates.unrecoverable.pipe(takeUntilDestroyed(destroyRef)).subscribe(() => {
-      this.snackBar.open('Lamplight has to reload to keep working. Your journal is safe on this device.', undefined, {
-        duration: 6000,
-      });
-      this.reloadWanted.set(true);
+      // Reload once the message has been read: reloading at once would take it away unseen.
+      this.snackBar
+        .open('Lamplight has to reload to keep working. Your journal is safe on this device.', undefined, { duration: 6000 })
+        .afterDismissed()
+        .subscribe(() => this.reloadWanted.set(true));
     });
     // Reload as soon as it is safe, once a reload is wanted.
     effect(() => {
