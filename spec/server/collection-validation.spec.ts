@@ -60,4 +60,45 @@ describe('Every synced collection validates each of its fields on push', () => {
       expect(res.body.applied).toBe(batch.length);
     });
   }
+
+  /**
+   * Values of the right JSON type that are still wrong. ISBN examples: ISO 2108 (978-0-306-40615-7
+   * is valid; the same digits ending 8 fail the check digit; an ISBN-10 is refused because the
+   * field stores ISBN-13 digits only).
+   */
+  const wellTypedButWrong: readonly { collection: string; field: string; value: unknown; reason: RegExp }[] = [
+    { collection: 'books', field: 'isbn', value: '9780306406158', reason: /books\.isbn/ },
+    { collection: 'books', field: 'isbn', value: '0306406152', reason: /books\.isbn/ },
+    { collection: 'books', field: 'isbn', value: '978-0-306-40615-7', reason: /books\.isbn/ },
+    { collection: 'books', field: 'rating', value: 4.25, reason: /books\.rating/ },
+    { collection: 'books', field: 'rating', value: 5.5, reason: /books\.rating/ },
+    { collection: 'books', field: 'pageCount', value: 0, reason: /books\.pageCount/ },
+    { collection: 'books', field: 'format', value: 'scroll', reason: /books\.format/ },
+    { collection: 'labels', field: 'colour', value: 'chartreuse', reason: /labels\.colour/ },
+    { collection: 'labels', field: 'icon', value: 'rocket', reason: /labels\.icon/ },
+    { collection: 'yearPlans', field: 'otherGoals', value: [{ id: 'g1', text: 'x'.repeat(301) }], reason: /at most 300 characters/ },
+    { collection: 'sessions', field: 'activeMinutes', value: 1201, reason: /sessions\.activeMinutes/ },
+  ];
+
+  for (const wrong of wellTypedButWrong) {
+    it(`When ${wrong.collection}.${wrong.field} gets ${JSON.stringify(wrong.value).slice(0, 40)}, then the batch is refused and nothing is stored`, async () => {
+      const row = randomUUID();
+      const good = fieldChange(row, 'deleted', false, { wall: Date.now() }, wrong.collection);
+      const res = await client.push([good, fieldChange(row, wrong.field, wrong.value, { wall: Date.now(), counter: 1 }, wrong.collection)]);
+
+      expect(res.status).toBe(400);
+      const problems = res.body.error?.details as { index: number; code: string; reason: string }[];
+      expect(problems.map((p) => p.index)).toEqual([1]);
+      expect(problems[0]!.reason).toMatch(wrong.reason);
+      const { state } = await client.pullAll();
+      expect([...state.keys()].some((key) => key.includes(row))).withContext('an invalid batch applies nothing').toBeFalse();
+    });
+  }
+
+  it('When books.isbn gets valid ISBN-13 digits, then it is stored', async () => {
+    const row = randomUUID();
+    const res = await client.push([fieldChange(row, 'isbn', '9780306406157', { wall: Date.now() })]);
+    expect(res.status).toBe(200);
+    expect((await client.pullAll()).state.get(`books/${row}/isbn`)?.value).toBe('9780306406157');
+  });
 });
