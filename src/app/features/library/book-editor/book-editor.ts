@@ -18,7 +18,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
 import { LabelPicker } from '../../labels/label-picker/label-picker';
 import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
 import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
@@ -48,7 +48,7 @@ export class BookEditor {
   readonly id = input<string>();
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
-    title: ['', [Validators.required, Validators.maxLength(500)]],
+    title: ['', [Validators.required, notBlank, Validators.maxLength(500)]],
     subtitle: ['', Validators.maxLength(500)],
     authors: [''],
     format: EMPTY_BOOK_FORM.format as BookFormValue['format'],
