@@ -218,6 +218,17 @@ describe('BookEditor', () => {
       expect(saved).toEqual(jasmine.objectContaining({ status: 'dnf', dnfProgress: 120, dnfUnit: 'page', dnfOn: '2026-03-14', dnfReason: 'The middle dragged' }));
     });
 
+    it('saves a DNF progress in percent, typed with a decimal comma', async () => {
+      fill('Title', 'Glass Harbour');
+      pick('Format', 'ebook');
+      await chooseDnf();
+      fill('Got as far as', '42,5'); // the field takes a decimal comma too
+      pick('Counted in', 'percent');
+      const saved = await saveNew();
+      expect(saved.dnfProgress).toBe(42.5);
+      expect(saved.dnfUnit).toBe('percent');
+    });
+
     it('refuses a DNF progress over 100,000, with the reason', async () => {
       fill('Title', 'Glass Harbour');
       await chooseDnf();
