@@ -260,4 +260,34 @@ describe('BookEditor', () => {
     });
   });
 
+  describe('finishing a book of a series', () => {
+    const SERIES = '00000000-0000-4000-8000-00000000b001';
+    const FIRST = '00000000-0000-4000-8000-00000000b011';
+    const SECOND = '00000000-0000-4000-8000-00000000b012';
+    const snackBar = () => document.querySelector('.mat-mdc-snack-bar-container');
+
+    beforeEach(async () => {
+      const inSeries = { format: 'print', seriesId: SERIES, deleted: false } as const;
+      await journal.store.write('series', SERIES, { name: 'The Lantern Isles', deleted: false });
+      await journal.store.write('books', FIRST, { ...inSeries, title: 'Tide of Salt', seriesPosition: 1, status: 'reading' });
+      await journal.store.write('books', SECOND, { ...inSeries, title: 'Tide of Glass', seriesPosition: 2, status: 'tbr' });
+    });
+
+    it('suggests the next unread book, as the quick status change does, and keeps the history', async () => {
+      await router.navigateByUrl(`/library/${FIRST}/edit`);
+      await untilTicked(() => titleInput()?.value === 'Tide of Salt', 'the book in the form');
+      pick('Status', 'finished');
+      named('button', 'Save').click();
+      await untilTicked(() => router.url === `/library/${FIRST}`, 'the book page');
+
+      await untilTicked(() => !!snackBar(), 'the suggestion');
+      expect(textOf(snackBar())).toContain('Next in The Lantern Isles: Tide of Glass');
+      expect(((await journal.store.get('books', FIRST)) as Book).status).toBe('finished');
+      const history = (await journal.store.list('bookStatusChanges')).filter((change) => change.bookId === FIRST);
+      expect(history.map((change) => change.status)).toEqual(['finished']);
+
+      named('.mat-mdc-snack-bar-container button', 'Open').click();
+      await untilTicked(() => router.url === `/library/${SECOND}`, 'the next book');
+    });
+  });
 });

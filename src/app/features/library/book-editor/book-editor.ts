@@ -21,6 +21,7 @@ import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
 import { LabelPicker } from '../../labels/label-picker/label-picker';
 import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
+import { BookStatus } from '../book-status';
 import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
 
@@ -30,6 +31,7 @@ const languageValidator = (control: AbstractControl<string>) =>
   !control.value?.trim() || /^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/.test(control.value.trim())
     ? null
     : { server: 'Use a language tag such as en, fr or pt-BR' };
+const optionalId = (value: string) => value.trim() || null;
 const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), Validators.min(min), Validators.max(max)];
 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
@@ -43,6 +45,7 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 export class BookEditor {
   private readonly store = inject(JournalStore);
   private readonly router = inject(Router);
+  private readonly bookStatus = inject(BookStatus);
 
   /** The book's id from the route; absent when adding a new book. */
   readonly id = input<string>();
@@ -144,18 +147,11 @@ export class BookEditor {
     const existing = this.id();
     const bookId = existing ?? crypto.randomUUID();
     const patch: Record<string, unknown> = existing ? changedFields(this.original, value) : { ...toFields(value), deleted: false };
-    const now = new Date().toISOString();
     const statusChanged = !existing || patch['status'] !== undefined;
-    if (statusChanged) patch['statusChangedAt'] = now;
     try {
-      await this.store.writeAll([
-        { collection: 'books', rowId: bookId, patch },
-        ...(statusChanged
-          ? [{ collection: 'bookStatusChanges' as const, rowId: crypto.randomUUID(), patch: { bookId, status: value.status, changedAt: now, deleted: false } }]
-          : []),
-      ]);
-      this.form.markAsPristine();
-      await this.router.navigate(['/library', bookId]);
+      // A status change goes the way of the library's quick change: the same rows, in one write
+      // with the other fields, then the same follow-up (the next book of a series).
+      await this.store.writeAll(statusChanged ? this.bookStatus.writes(bookId, value.status, new Date(), patch) : [{ collection: 'books', rowId: bookId, patch }]);
     } catch (error) {
       if (error instanceof InvalidFieldsError) {
         showServerErrors(this.form, error.fields);
@@ -163,6 +159,10 @@ export class BookEditor {
       } else {
         this.problem.set('This device could not save the book. Nothing you had saved before was changed.');
       }
+      return;
     }
+    this.form.markAsPristine();
+    await this.router.navigate(['/library', bookId]);
+    if (statusChanged) await this.bookStatus.afterChange(bookId, value.status, optionalId(value.seriesId));
   }
 }
