@@ -250,6 +250,33 @@ describe('BookEditor', () => {
       expect(saved).toEqual(jasmine.objectContaining({ copy: 'wishlist', wishPriority: 'high', wishWhere: 'The shop on Mill Lane', wishPriceNote: 'Wait for the paperback' }));
     });
 
+    it('does not let a field it has hidden stop the save, nor save what was typed there', async () => {
+      fill('Title', 'Moths of the Lower Fen');
+      fill('Page count', 'many');
+      await chooseDnf();
+      fill('Got as far as', '100001');
+      pick('Format', 'audiobook'); // hides Page count
+      pick('Status', 'reading'); // hides Did not finish
+      await untilTicked(() => !legends().includes('Did not finish') && labels().includes('Length in minutes'), 'the parts hidden');
+
+      const saved = await saveNew();
+      expect(saved).toEqual(jasmine.objectContaining({ format: 'audiobook', status: 'reading' }));
+      expect(saved.pageCount ?? null).toBeNull();
+      expect(saved.dnfProgress ?? null).toBeNull();
+    });
+
+    it('keeps what an edit has hidden as it was stored', async () => {
+      const bookId = await journal.store.create('books', { title: 'Glass Harbour', format: 'print', pageCount: 320, status: 'dnf', dnfProgress: 80, dnfUnit: 'page' });
+      await router.navigateByUrl(`/library/${bookId}/edit`);
+      await untilTicked(() => titleInput()?.value === 'Glass Harbour' && legends().includes('Did not finish'), 'the book in the form');
+      fill('Got as far as', '90');
+      pick('Status', 'reading');
+      pick('Format', 'audiobook');
+      named('button', 'Save').click();
+      await untilTicked(() => router.url === `/library/${bookId}`, 'the book page');
+      expect(await journal.store.get('books', bookId)).toEqual(jasmine.objectContaining({ status: 'reading', format: 'audiobook', pageCount: 320, dnfProgress: 80 }));
+    });
+
     it('saves an upcoming release date and the pre-order', async () => {
       fill('Title', 'The Ninth Lantern');
       fill('Release date', '2027-02-09');

@@ -32,6 +32,9 @@ const languageValidator = (control: AbstractControl<string>) =>
     ? null
     : { server: 'Use a language tag such as en, fr or pt-BR' };
 const optionalId = (value: string) => value.trim() || null;
+/** Fields shown only where they apply (the DNF and wishlist parts). */
+const DNF_FIELDS = ['dnfProgress', 'dnfUnit', 'dnfOn', 'dnfReason'] as const;
+const WISH_FIELDS = ['wishPriority', 'wishWhere', 'wishPriceNote'] as const;
 const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), Validators.min(min), Validators.max(max)];
 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
@@ -115,6 +118,9 @@ export class BookEditor {
   constructor() {
     // An update or another tab must not reload the page over unsaved input.
     inject(UnsavedWork).trackForm(this.form);
+    // A hidden field is disabled: it cannot stop a save with a reason the reader cannot see, and
+    // what it holds is not saved (see `save`).
+    effect(() => this.enableWhatApplies());
     effect(() => {
       const id = this.id();
       if (id) void this.load(id);
@@ -131,6 +137,21 @@ export class BookEditor {
     this.form.reset(this.original);
   }
 
+  private enableWhatApplies(): void {
+    this.applies(['audioMinutes'], this.audio());
+    this.applies(['pageCount'], !this.audio());
+    this.applies(DNF_FIELDS, this.dnf());
+    this.applies(WISH_FIELDS, this.wished());
+  }
+
+  private applies(names: readonly (keyof BookFormValue)[], shown: boolean): void {
+    for (const name of names) {
+      const control = this.form.controls[name];
+      if (shown) control.enable({ emitEvent: false });
+      else control.disable({ emitEvent: false });
+    }
+  }
+
   /** A scanned ISBN fills the field as if typed (dirty first, so unsaved work is tracked). */
   protected fillIsbn(isbn: string): void {
     this.form.controls.isbn.markAsDirty();
@@ -138,12 +159,14 @@ export class BookEditor {
   }
 
   protected async save(): Promise<void> {
+    this.enableWhatApplies(); // now, not at the next change detection
     this.form.markAllAsTouched();
     if (this.form.invalid) {
       this.problem.set('Some fields need attention.');
       return;
     }
-    const value = this.form.getRawValue();
+    // Hidden (disabled) fields keep what was loaded, or stay empty on a new book.
+    const value: BookFormValue = { ...this.original, ...this.form.value };
     const existing = this.id();
     const bookId = existing ?? crypto.randomUUID();
     const patch: Record<string, unknown> = existing ? changedFields(this.original, value) : { ...toFields(value), deleted: false };
