@@ -1,4 +1,12 @@
-import type { AbstractControl, FormGroup } from '@angular/forms';
+import type { AbstractControl, FormGroup, ValidationErrors } from '@angular/forms';
+
+/**
+ * With `Validators.required` (which draws the field's required marker): a value of spaces alone
+ * is blank too, since it is saved trimmed.
+ */
+export function notBlank(control: AbstractControl<string | null>): ValidationErrors | null {
+  return (control.value ?? '').trim() ? null : { required: true };
+}
 
 /** The message to show under a field for its first error, in the reader's words. */
 export function fieldError(control: AbstractControl | null, label: string): string {

@@ -5,13 +5,14 @@ import { Router } from '@angular/router';
 import { nextUnread, seriesBooks } from '@shared/journal/series-order';
 import type { Book, Series } from '@shared/sync/schema/collections';
 
-import { JournalStore } from '../../core/data/journal-store';
+import { JournalStore, type RowWrite } from '../../core/data/journal-store';
 
 /**
  * Changing a book's status: the book keeps its current status and when it changed, and every
  * change is added to the book's history as a row of its own, so changes made on two devices
  * offline both stay. Both are written in one transaction. Finishing a book of a series suggests
- * the next one to read.
+ * the next one to read. The book editor writes the same rows with its other fields
+ * ({@link BookStatus.writes}) and then calls {@link BookStatus.afterChange}.
  */
 @Injectable({ providedIn: 'root' })
 export class BookStatus {
@@ -23,12 +24,22 @@ export class BookStatus {
   async change(bookId: string, status: NonNullable<Book['status']>, at = new Date()): Promise<void> {
     const book = (await this.store.get('books', bookId)) as Book | undefined;
     if (book?.status === status) return;
+    await this.store.writeAll(this.writes(bookId, status, at));
+    await this.afterChange(bookId, status, book?.seriesId);
+  }
+
+  /** The rows of a status change: the book's status and when, and its history entry. */
+  writes(bookId: string, status: NonNullable<Book['status']>, at = new Date(), bookFields: Readonly<Record<string, unknown>> = {}): RowWrite[] {
     const changedAt = at.toISOString();
-    await this.store.writeAll([
-      { collection: 'books', rowId: bookId, patch: { status, statusChangedAt: changedAt } },
+    return [
+      { collection: 'books', rowId: bookId, patch: { ...bookFields, status, statusChangedAt: changedAt } },
       { collection: 'bookStatusChanges', rowId: crypto.randomUUID(), patch: { bookId, status, changedAt, deleted: false } },
-    ]);
-    if (status === 'finished' && book?.seriesId) await this.suggestNext(bookId, book.seriesId);
+    ];
+  }
+
+  /** After a status change is saved: finishing a book of a series suggests the next one. */
+  async afterChange(bookId: string, status: NonNullable<Book['status']>, seriesId: string | null | undefined): Promise<void> {
+    if (status === 'finished' && seriesId) await this.suggestNext(bookId, seriesId);
   }
 
   /** The next book of the series, offered in a snackbar. */

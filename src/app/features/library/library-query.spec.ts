@@ -2,12 +2,14 @@ import type { Book } from '@shared/sync/schema/collections';
 
 import { queryLibrary, searchText, type LibraryQuery } from './library-query';
 
+const COMFORT = '00000000-0000-4000-8000-00000000c001';
+const BUDDY = '00000000-0000-4000-8000-00000000c002';
 const book = (id: string, fields: Partial<Book>): Book => ({ id, deleted: false, ...fields });
 const shelf = [
   book('a', { title: 'Émile and the Salt Roads', authors: ['Priya Lindqvist'], status: 'reading', rating: 4, isbn: '9789295055124' }),
-  book('b', { title: 'A Harbour of Small Hours', authors: ['Tobias Avery'], status: 'finished', rating: 5, tags: ['winter'] }),
-  book('c', { title: 'The Copper Orchard', authors: ['Mina Achebe-Ross'], status: 'tbr' }),
-  book('d', { title: 'copper kettles', authors: ['Ana Zorrilla'], status: 'finished', rating: 2.5 }),
+  book('b', { title: 'A Harbour of Small Hours', authors: ['Tobias Avery'], status: 'finished', rating: 5, tags: ['winter'], labelIds: [COMFORT, BUDDY] }),
+  book('c', { title: 'The Copper Orchard', authors: ['Mina Achebe-Ross'], status: 'tbr', labelIds: [] }),
+  book('d', { title: 'copper kettles', authors: ['Ana Zorrilla'], status: 'finished', rating: 2.5, labelIds: [BUDDY] }),
 ];
 const index = new Map(shelf.map((b) => [b.id, searchText(b)]));
 const query = (overrides: Partial<LibraryQuery>): string[] =>
@@ -28,6 +30,15 @@ describe('queryLibrary', () => {
 
   it('filters by status', () => {
     expect(query({ status: 'finished' })).toEqual(['b', 'd']);
+  });
+
+  it('filters by a label, together with the status and the words typed', () => {
+    expect(query({ labelId: BUDDY })).toEqual(['b', 'd']);
+    expect(query({ labelId: COMFORT })).toEqual(['b']);
+    expect(query({ labelId: BUDDY, text: 'kettles' })).toEqual(['d']);
+    expect(query({ labelId: COMFORT, status: 'tbr' })).toEqual([]);
+    expect(query({ labelId: '00000000-0000-4000-8000-00000000c0ff' })).toEqual([]); // a label no book has
+    expect(query({ labelId: null })).toEqual(['b', 'd', 'a', 'c']); // any label, or none
   });
 
   it('sorts titles in a human way (Intl.Collator, base sensitivity) and authors by surname', () => {

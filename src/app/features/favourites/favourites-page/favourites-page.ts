@@ -77,8 +77,10 @@ export class FavouritesPage {
   protected async addFavourite(): Promise<void> {
     const { kind, bookId, quoteId, authorName, why } = this.form.getRawValue();
     const missing = kind === 'book' ? !bookId : kind === 'quote' ? !quoteId : !authorName.trim();
+    // Touched, so each field's own reason shows under it (a why that is too long, say).
+    this.form.markAllAsTouched();
     if (this.form.invalid || missing) {
-      this.problem.set(`Choose the ${kind} you love.`);
+      this.problem.set(missing ? `Choose the ${kind} you love.` : 'Some fields need attention.');
       return;
     }
     await this.store.create('favourites', {

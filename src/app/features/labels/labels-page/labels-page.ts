@@ -8,7 +8,7 @@ import { MatInputModule } from '@angular/material/input';
 import { LABEL_COLOURS, LABEL_ICONS, type Label } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { fieldError } from '../../account/field-errors';
+import { fieldError, notBlank } from '../../account/field-errors';
 import { LabelDirectory, type LabelView } from '../label-directory';
 
 /** Words for our colours and icons, so choices read well to everyone. */
@@ -39,7 +39,7 @@ export class LabelsPage {
   protected readonly fieldError = fieldError;
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
-    name: ['', [Validators.required, Validators.maxLength(40)]],
+    name: ['', [Validators.required, notBlank, Validators.maxLength(40)]],
     colour: 'amber' as NonNullable<Label['colour']>,
     icon: 'bookmark' as NonNullable<Label['icon']>,
   });

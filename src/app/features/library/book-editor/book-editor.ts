@@ -18,9 +18,10 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
 import { LabelPicker } from '../../labels/label-picker/label-picker';
 import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
+import { BookStatus } from '../book-status';
 import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
 
@@ -30,6 +31,10 @@ const languageValidator = (control: AbstractControl<string>) =>
   !control.value?.trim() || /^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/.test(control.value.trim())
     ? null
     : { server: 'Use a language tag such as en, fr or pt-BR' };
+const optionalId = (value: string) => value.trim() || null;
+/** Fields shown only where they apply (the DNF and wishlist parts). */
+const DNF_FIELDS = ['dnfProgress', 'dnfUnit', 'dnfOn', 'dnfReason'] as const;
+const WISH_FIELDS = ['wishPriority', 'wishWhere', 'wishPriceNote'] as const;
 const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), Validators.min(min), Validators.max(max)];
 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
@@ -43,12 +48,13 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 export class BookEditor {
   private readonly store = inject(JournalStore);
   private readonly router = inject(Router);
+  private readonly bookStatus = inject(BookStatus);
 
   /** The book's id from the route; absent when adding a new book. */
   readonly id = input<string>();
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
-    title: ['', [Validators.required, Validators.maxLength(500)]],
+    title: ['', [Validators.required, notBlank, Validators.maxLength(500)]],
     subtitle: ['', Validators.maxLength(500)],
     authors: [''],
     format: EMPTY_BOOK_FORM.format as BookFormValue['format'],
@@ -112,6 +118,9 @@ export class BookEditor {
   constructor() {
     // An update or another tab must not reload the page over unsaved input.
     inject(UnsavedWork).trackForm(this.form);
+    // A hidden field is disabled: it cannot stop a save with a reason the reader cannot see, and
+    // what it holds is not saved (see `save`).
+    effect(() => this.enableWhatApplies());
     effect(() => {
       const id = this.id();
       if (id) void this.load(id);
@@ -128,6 +137,21 @@ export class BookEditor {
     this.form.reset(this.original);
   }
 
+  private enableWhatApplies(): void {
+    this.applies(['audioMinutes'], this.audio());
+    this.applies(['pageCount'], !this.audio());
+    this.applies(DNF_FIELDS, this.dnf());
+    this.applies(WISH_FIELDS, this.wished());
+  }
+
+  private applies(names: readonly (keyof BookFormValue)[], shown: boolean): void {
+    for (const name of names) {
+      const control = this.form.controls[name];
+      if (shown) control.enable({ emitEvent: false });
+      else control.disable({ emitEvent: false });
+    }
+  }
+
   /** A scanned ISBN fills the field as if typed (dirty first, so unsaved work is tracked). */
   protected fillIsbn(isbn: string): void {
     this.form.controls.isbn.markAsDirty();
@@ -135,27 +159,22 @@ export class BookEditor {
   }
 
   protected async save(): Promise<void> {
+    this.enableWhatApplies(); // now, not at the next change detection
     this.form.markAllAsTouched();
     if (this.form.invalid) {
       this.problem.set('Some fields need attention.');
       return;
     }
-    const value = this.form.getRawValue();
+    // Hidden (disabled) fields keep what was loaded, or stay empty on a new book.
+    const value: BookFormValue = { ...this.original, ...this.form.value };
     const existing = this.id();
     const bookId = existing ?? crypto.randomUUID();
     const patch: Record<string, unknown> = existing ? changedFields(this.original, value) : { ...toFields(value), deleted: false };
-    const now = new Date().toISOString();
     const statusChanged = !existing || patch['status'] !== undefined;
-    if (statusChanged) patch['statusChangedAt'] = now;
     try {
-      await this.store.writeAll([
-        { collection: 'books', rowId: bookId, patch },
-        ...(statusChanged
-          ? [{ collection: 'bookStatusChanges' as const, rowId: crypto.randomUUID(), patch: { bookId, status: value.status, changedAt: now, deleted: false } }]
-          : []),
-      ]);
-      this.form.markAsPristine();
-      await this.router.navigate(['/library', bookId]);
+      // A status change goes the way of the library's quick change: the same rows, in one write
+      // with the other fields, then the same follow-up (the next book of a series).
+      await this.store.writeAll(statusChanged ? this.bookStatus.writes(bookId, value.status, new Date(), patch) : [{ collection: 'books', rowId: bookId, patch }]);
     } catch (error) {
       if (error instanceof InvalidFieldsError) {
         showServerErrors(this.form, error.fields);
@@ -163,6 +182,10 @@ export class BookEditor {
       } else {
         this.problem.set('This device could not save the book. Nothing you had saved before was changed.');
       }
+      return;
     }
+    this.form.markAsPristine();
+    await this.router.navigate(['/library', bookId]);
+    if (statusChanged) await this.bookStatus.afterChange(bookId, value.status, optionalId(value.seriesId));
   }
 }

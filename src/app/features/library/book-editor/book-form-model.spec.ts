@@ -57,4 +57,10 @@ describe('book form model', () => {
   it('stores an ISBN-10 as its ISBN-13 digits (ISBN Users’ Manual: 0-8436-1072-7 → 978-0-8436-1072-7)', () => {
     expect(toFields({ ...EMPTY_BOOK_FORM, isbn: '0-8436-1072-7' }).isbn).toBe('9780843610727');
   });
+
+  it('reads a decimal comma as the fields allow it (a place of 2,5 in a series, a DNF at 42,5 %)', () => {
+    const fields = toFields({ ...EMPTY_BOOK_FORM, seriesPosition: '2,5', dnfProgress: ' 42,5 ' });
+    expect(fields.seriesPosition).toBe(2.5);
+    expect(fields.dnfProgress).toBe(42.5);
+  });
 });

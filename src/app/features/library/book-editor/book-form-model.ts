@@ -104,7 +104,8 @@ export function toFormValue(book: Book): BookFormValue {
 }
 
 const optionalText = (value: string) => (value.trim() === '' ? null : value.trim());
-const optionalNumber = (value: string) => (value.trim() === '' ? null : Number(value));
+/** A decimal comma ("2,5") reads as a point: the editor's decimal fields accept either. */
+const optionalNumber = (value: string) => (value.trim() === '' ? null : Number(value.trim().replace(',', '.')));
 /** "Nell Ashby, Tomas Reyes" → ['Nell Ashby', 'Tomas Reyes']; repeated names once. */
 const splitList = (value: string) => [...new Set(value.split(/[,\n]/).map((item) => item.trim()).filter(Boolean))];
 

@@ -15,7 +15,7 @@ import type { Book, Series } from '@shared/sync/schema/collections';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError } from '../../account/field-errors';
+import { fieldError, notBlank } from '../../account/field-errors';
 import { STATUS_LABELS } from '../../library/book-labels';
 import { StarRating } from '../../library/star-rating/star-rating';
 
@@ -57,7 +57,7 @@ export class SeriesPage {
   protected readonly fieldError = fieldError;
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
-    name: ['', [Validators.required, Validators.maxLength(300)]],
+    name: ['', [Validators.required, notBlank, Validators.maxLength(300)]],
     plannedCount: ['', [Validators.pattern(/^\s*\d*\s*$/), Validators.min(1), Validators.max(500)]],
     rating: [''],
     review: ['', Validators.maxLength(20_000)],
