@@ -5,7 +5,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
-import { format } from 'date-fns';
 
 import { deterministicId } from '@shared/sync/deterministic-id';
 import { FAVOURITE_KINDS, type Book, type Favourite, type MonthPick, type Quote } from '@shared/sync/schema/collections';
@@ -13,6 +12,7 @@ import { FAVOURITE_KINDS, type Book, type Favourite, type MonthPick, type Quote 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { fieldError } from '../../account/field-errors';
+import { readerToday } from '../../goals/reader-today';
 
 const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'Book', author: 'Author', quote: 'Quote' };
 
@@ -43,8 +43,10 @@ export class FavouritesPage {
     this.data().favourites.map((favourite) => ({ favourite, subject: this.subject(favourite) })),
   );
 
+  /** The reader's local date (their time zone, the app's clock). */
+  private readonly today = readerToday();
   /** The year whose months are shown. */
-  protected readonly year = signal(new Date().getFullYear());
+  protected readonly year = signal(Number(this.today.slice(0, 4)));
   protected readonly months = computed(() => {
     const picks = new Map(this.data().picks.map((pick) => [pick.month, pick]));
     return Array.from({ length: 12 }, (_, n) => {
@@ -53,7 +55,7 @@ export class FavouritesPage {
       return { month, first: `${month}-01`, pick, book: pick?.bookId ? this.bookById().get(pick.bookId) : undefined };
     });
   });
-  protected readonly currentMonth = format(new Date(), 'yyyy-MM');
+  protected readonly currentMonth = this.today.slice(0, 7);
 
   protected readonly kinds = FAVOURITE_KINDS;
   protected readonly kindLabels = KIND_LABELS;

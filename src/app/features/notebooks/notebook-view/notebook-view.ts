@@ -23,7 +23,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
 import { bookOptions } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
@@ -100,7 +100,7 @@ export class NotebookView {
   protected readonly confirmingDelete = signal(false);
   protected readonly problem = signal('');
   protected readonly detailsForm = inject(FormBuilder).nonNullable.group({
-    title: ['', [Validators.required, Validators.maxLength(NOTEBOOK_LIMITS.notebookTitle)]],
+    title: ['', [Validators.required, notBlank, Validators.maxLength(NOTEBOOK_LIMITS.notebookTitle)]],
     bookId: [''],
   });
   protected readonly fieldError = fieldError;

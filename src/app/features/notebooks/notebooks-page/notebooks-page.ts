@@ -12,7 +12,7 @@ import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
 import { bookOptions, summarizeNotebooks, type BookOption, type NotebookSummary } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
@@ -40,7 +40,7 @@ export class NotebooksPage {
   protected readonly books = liveQuerySignal<BookOption[]>(async (db) => bookOptions(await db.rows('books').toArray()), []);
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
-    title: ['', [Validators.required, Validators.maxLength(NOTEBOOK_LIMITS.notebookTitle)]],
+    title: ['', [Validators.required, notBlank, Validators.maxLength(NOTEBOOK_LIMITS.notebookTitle)]],
     bookId: [''],
   });
   protected readonly problem = signal('');

@@ -15,7 +15,7 @@ import type { Notebook, NotebookPage } from '@shared/sync/schema/collections';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
 import { LightText } from '../light-text/light-text';
 import { clip } from '../notebook-data';
 import { Notebooks } from '../notebooks';
@@ -46,7 +46,7 @@ export class PageEditor {
     body: ['', Validators.maxLength(NOTEBOOK_LIMITS.pageBody)],
   });
   protected readonly templateForm = this.formBuilder.group({
-    name: ['', [Validators.required, Validators.maxLength(NOTEBOOK_LIMITS.templateName)]],
+    name: ['', [Validators.required, notBlank, Validators.maxLength(NOTEBOOK_LIMITS.templateName)]],
   });
   private readonly templateName = this.templateForm.controls.name;
   /** The body as typed, for the preview. */

@@ -12,7 +12,7 @@ import type { PageTemplate } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError } from '../../account/field-errors';
+import { fieldError, notBlank } from '../../account/field-errors';
 import { Notebooks } from '../notebooks';
 
 /** The reader's own page templates: rename or delete them. The starter ones are listed as they are. */
@@ -33,7 +33,7 @@ export class PageTemplates {
   protected readonly renaming = signal<string | null>(null);
   protected readonly name = new FormControl('', {
     nonNullable: true,
-    validators: [Validators.required, Validators.maxLength(NOTEBOOK_LIMITS.templateName)],
+    validators: [Validators.required, notBlank, Validators.maxLength(NOTEBOOK_LIMITS.templateName)],
   });
   protected readonly renameForm = new FormGroup({ name: this.name });
   protected readonly fieldError = fieldError;

@@ -14,7 +14,7 @@ import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
 import { LabelPicker } from '../../labels/label-picker/label-picker';
 import { authorLine } from '../../library/book-labels';
 import {
@@ -74,7 +74,7 @@ export class QuoteCaptureDialog {
   protected readonly choices = computed(() => bookOrder(this.books() ?? []));
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
-    text: ['', [Validators.required, Validators.maxLength(5_000)]],
+    text: ['', [Validators.required, notBlank, Validators.maxLength(5_000)]],
     bookId: [''],
     position: ['', (control: AbstractControl<string>) => this.checkPosition(control)],
     chapter: ['', Validators.maxLength(200)],

@@ -11,7 +11,7 @@ import type { Book, Series } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
-import { fieldError } from '../../account/field-errors';
+import { fieldError, notBlank } from '../../account/field-errors';
 
 /** Every series the reader follows, how far they are in each, and what comes next. */
 @Component({
@@ -43,7 +43,7 @@ export class SeriesList {
 
   protected readonly adding = signal(false);
   protected readonly form = inject(FormBuilder).nonNullable.group({
-    name: ['', [Validators.required, Validators.maxLength(300)]],
+    name: ['', [Validators.required, notBlank, Validators.maxLength(300)]],
     plannedCount: ['', [Validators.pattern(/^\s*\d*\s*$/), Validators.min(1), Validators.max(500)]],
   });
   protected readonly fieldError = fieldError;
