@@ -1,0 +1,78 @@
+import type { HttpTestingController, TestRequest } from '@angular/common/http/testing';
+
+import type { PullResponse } from '@shared/sync/field-change';
+
+/** The browser's own timer, kept before any spec installs jasmine.clock, so waits stay real. */
+const realSetTimeout = globalThis.setTimeout.bind(globalThis);
+
+/** A few real milliseconds for IndexedDB, the Web Lock and the interceptor to move on. */
+export const turn = (ms = 5) => new Promise<void>((resolve) => realSetTimeout(resolve, ms));
+
+/** Resolves once `check` holds; fails the spec with `what` (said when it gives up) if it never does. */
+export async function until(check: () => boolean | Promise<boolean>, what: string | (() => string)): Promise<void> {
+  for (let i = 0; i < 400; i++) {
+    if (await check()) return;
+    await turn();
+  }
+  throw new Error(`timed out waiting until ${typeof what === 'string' ? what : what()}`);
+}
+
+/** The request to `url` once it has been sent (Dexie reads, the tab lock and the token take a few turns). */
+export async function sent(backend: HttpTestingController, url: string): Promise<TestRequest> {
+  for (let i = 0; i < 400; i++) {
+    const [found] = backend.match((request) => request.url === url);
+    if (found) return found;
+    await turn();
+  }
+  throw new Error(`no request to ${url} was sent`);
+}
+
+/** Gives a sync that should not happen time to start, then checks that nothing was sent. */
+export async function expectNothingSent(backend: HttpTestingController): Promise<void> {
+  await turn(150);
+  expect(backend.match(() => true).map((request) => `${request.request.method} ${request.request.urlWithParams}`))
+    .withContext('requests sent')
+    .toEqual([]);
+}
+
+export const SERVER_TIME = '2026-03-14T09:05:00.000Z';
+
+/** A pull answer: these changes, then this cursor. */
+export function pullPage(cursor: string, changes: PullResponse['changes'] = [], hasMore = false): PullResponse {
+  return { changes, cursor, hasMore, serverTime: SERVER_TIME };
+}
+
+/** A pull answer with nothing new. */
+export const emptyPage = (cursor: string) => pullPage(cursor);
+
+export const pushed = (applied: number) => ({ applied, duplicates: 0, serverTime: SERVER_TIME });
+
+export const UNAUTHORIZED = { status: 401, statusText: 'Unauthorized' };
+export const SERVER_ERROR = { status: 500, statusText: 'Internal Server Error' };
+export const NO_NETWORK = { status: 0, statusText: '' };
+
+/** The server's answer when it will never take some changes of a push. */
+export function refusedBody(problems: readonly { index: number; code: string; reason: string }[]) {
+  return { error: { code: 'invalid_changes', message: 'Some changes were refused', details: problems } };
+}
+
+/**
+ * Holds this reader's sync lock as another tab would, until `release` is called. Resolves once
+ * the lock is granted.
+ */
+export async function otherTabSyncing(userId: string): Promise<{ release: () => Promise<void> }> {
+  let granted!: () => void;
+  let finish!: () => void;
+  const isGranted = new Promise<void>((resolve) => (granted = resolve));
+  const held = navigator.locks.request(`lamplight-sync-${userId}`, () => {
+    granted();
+    return new Promise<void>((resolve) => (finish = resolve));
+  });
+  await isGranted;
+  return {
+    release: async () => {
+      finish();
+      await held;
+    },
+  };
+}
