@@ -4,8 +4,9 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { RouterLink } from '@angular/router';
-import { format } from 'date-fns';
+import { format, isSameDay } from 'date-fns';
 
+import { CLOCK } from '../../time/clock';
 import { SyncEngine } from '../sync-engine';
 
 /** The shell's calm line about where the reader's words are: here, waiting, syncing, synced. */
@@ -18,6 +19,7 @@ import { SyncEngine } from '../sync-engine';
 })
 export class SyncStatus {
   protected readonly engine = inject(SyncEngine);
+  private readonly clock = inject(CLOCK);
 
   /** The icon and the short label shown in the bar. */
   protected readonly summary = computed(() => {
@@ -37,7 +39,10 @@ export class SyncStatus {
         if (pending > 0) return { icon: 'cloud_upload', label: waiting };
         if (rejected > 0) return { icon: 'report', label: `${rejected} ${rejected === 1 ? 'change' : 'changes'} refused` };
         const last = this.engine.lastSyncedAt();
-        return last ? { icon: 'cloud_done', label: `Synced ${format(new Date(last), 'HH:mm')}` } : { icon: 'save', label: 'Saved on this device' };
+        if (!last) return { icon: 'save', label: 'Saved on this device' };
+        // A time alone for today; with the day otherwise, so yesterday's sync does not read as today's.
+        const when = isSameDay(last, this.clock.now()) ? format(last, 'HH:mm') : format(last, 'd MMM, HH:mm');
+        return { icon: 'cloud_done', label: `Synced ${when}` };
       }
     }
   });
