@@ -230,8 +230,8 @@ describe('Account, Settings and Accounts screens', () => {
       const canSignIn = row.getByRole('switch', { name: 'Account of Tamsin Okonjo can sign in' });
       expect(await canSignIn.getAttribute('aria-checked')).toBe('true');
 
-      await canSignIn.click();
-      await page.waitForResponse((res) => res.url().includes(`/api/admin/users/${reader.user.id}`) && res.ok());
+      // Listening before the click: the answer can come back before a later wait would start.
+      await Promise.all([page.waitForResponse((res) => res.url().includes(`/api/admin/users/${reader.user.id}`) && res.ok()), canSignIn.click()]);
       expect(await canSignIn.getAttribute('aria-checked')).toBe('false');
 
       const readerContext = await harness.browser.newContext();
@@ -244,8 +244,8 @@ describe('Account, Settings and Accounts screens', () => {
         await page.reload();
         await rowOf(reader.user.email).waitFor();
         expect(await canSignIn.getAttribute('aria-checked')).toBe('false');
-        await canSignIn.click();
-        await page.waitForResponse((res) => res.url().includes(`/api/admin/users/${reader.user.id}`) && res.ok());
+        // Listening before the click: the answer can come back before a later wait would start.
+        await Promise.all([page.waitForResponse((res) => res.url().includes(`/api/admin/users/${reader.user.id}`) && res.ok()), canSignIn.click()]);
         expect(await canSignIn.getAttribute('aria-checked')).toBe('true');
 
         await row.getByRole('button', { name: 'Make admin' }).click();
