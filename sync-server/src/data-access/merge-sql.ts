@@ -3,7 +3,10 @@ import { columnName } from '../../../shared/sync/schema/field';
 
 /**
  * SQL that merges a batch of row pieces into one collection's table with the per-field
- * last-writer-wins rule of shared/sync/merge.ts, set-based, in one statement.
+ * last-writer-wins rule of shared/sync/merge.ts, set-based, in one statement. Only `fields`
+ * (those the batch touches; all by default) are read and compared: a device's batch touches a
+ * few of a book's forty fields, and the others keep their values (or stay NULL in a new row)
+ * without a clock comparison each.
  *
  * Input `$2` is a JSON array with one object per row: `id`, the new value of each field the batch
  * touches (keyed by column name) and `clocks` (field → HLC) for those fields only. A field's
@@ -13,8 +16,7 @@ import { columnName } from '../../../shared/sync/schema/field';
  * whatever the database's locale. The statement answers how many field values won; the caller
  * holds the user's advisory lock, so the clocks read in `decided` are still current.
  */
-export function mergeSql(spec: CollectionSpec): string {
-  const fields = Object.keys(spec.fields);
+export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Object.keys(spec.fields)): string {
   const column = (field: string) => columnName(field);
   const recordColumns = fields.map((field) => `${column(field)} ${spec.fields[field]!.sqlType}`).join(', ');
   const beats = (field: string, incoming: string, stored: string) =>

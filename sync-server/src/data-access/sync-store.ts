@@ -7,16 +7,26 @@ import { COLLECTIONS, collectionSpec } from '../../../shared/sync/schema/collect
 import { mergeSql, pullSql } from './merge-sql';
 
 const SPECS = Object.values(COLLECTIONS);
-/** Per collection: its merge statement (prepared once per connection) and its columns by field. */
-const MERGES = new Map(
-  SPECS.map((spec) => [
-    spec.name,
-    {
-      statement: { name: `lamplight_merge_${spec.table}`, text: mergeSql(spec) },
-      columns: new Map(Object.keys(spec.fields).map((field) => [field, columnName(field)])),
-    },
-  ]),
-);
+/** Per collection: its columns by field. */
+const COLUMNS = new Map(SPECS.map((spec) => [spec.name, new Map(Object.keys(spec.fields).map((field) => [field, columnName(field)]))]));
+/**
+ * Merge statements by collection and the fields a batch touches, each prepared once per
+ * connection. Devices send a handful of field sets (a title edit, a status change, a new book),
+ * so few are made; past the cap, statements still run, unprepared and uncached.
+ */
+const MERGES = new Map<string, { name?: string; text: string }>();
+const MAX_PREPARED_MERGES = 200;
+
+function mergeStatement(collection: string, fields: readonly string[]): { name?: string; text: string } {
+  const key = `${collection}:${fields.join(',')}`;
+  let statement = MERGES.get(key);
+  if (!statement) {
+    const text = mergeSql(collectionSpec(collection)!, fields);
+    statement = MERGES.size < MAX_PREPARED_MERGES ? { name: `lamplight_merge_${MERGES.size}`, text } : { text };
+    if (statement.name) MERGES.set(key, statement);
+  }
+  return statement;
+}
 const PULL_SQL = pullSql(SPECS);
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
@@ -62,14 +72,18 @@ export class SyncStore {
       rows.set(change.rowId, row);
       // One statement may not touch a row twice: reduce the batch to one winner per field first.
       if (wins(change.hlc, row.clocks[change.field])) {
-        row[MERGES.get(change.collection)!.columns.get(change.field)!] = change.value;
+        row[COLUMNS.get(change.collection)!.get(change.field)!] = change.value;
         row.clocks[change.field] = change.hlc;
       }
     }
     const applied = await this.inUserTransaction(userId, async (client) => {
       let won = 0;
       for (const [collection, rows] of byCollection) {
-        const { statement } = MERGES.get(collection)!;
+        const touched = new Set<string>();
+        for (const row of rows.values()) for (const field of Object.keys(row.clocks)) touched.add(field);
+        // In the schema's order, so the same fields always make the same statement.
+        const fields = Object.keys(collectionSpec(collection)!.fields).filter((field) => touched.has(field));
+        const statement = mergeStatement(collection, fields);
         const result = await client.query({ ...statement, values: [userId, JSON.stringify([...rows.values()])] });
         won += Number(result.rows[0]?.['won'] ?? 0);
       }
