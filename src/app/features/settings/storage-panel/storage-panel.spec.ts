@@ -75,6 +75,6 @@ describe('StoragePanel (Settings › This device)', () => {
     const panel = await settled(TestBed.createComponent(StoragePanel));
 
     expect(caution(panel)).toContain('changes still waiting exist only here. Lamplight is installed on this device, which helps.');
-    expect(estimate(panel)).toBe('In use on this device: 2.0 MiB');
+    expect(estimate(panel)).toBe('In use on this device: 2.0 MiB.');
   });
 });
