@@ -155,6 +155,7 @@ export const routes: Routes = [
           {
             path: 'challenges/:id',
             title: 'Challenge · Lamplight',
+            canDeactivate: [unsavedWorkGuard],
             loadComponent: () => import('./features/challenges/challenge-page/challenge-page').then((m) => m.ChallengePage),
           },
           { path: ':year', title: 'Goals · Lamplight', canDeactivate: [unsavedWorkGuard], loadComponent: () => import('./features/goals/goals-page/goals-page').then((m) => m.GoalsPage) },

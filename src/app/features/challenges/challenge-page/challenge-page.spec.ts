@@ -45,6 +45,32 @@ describe('ChallengePage', () => {
     expect(counted()).toEqual(['Harrow Light', 'The Quiet Orchard', 'Salt and Lanterns']);
   });
 
+  it('renames the challenge, writing only its name, and refuses a blank one', async () => {
+    const id = await store.create('challenges', { name: 'Twenty-five', kind: 'count', target: 25, ...year });
+    await open(id);
+    const button = (label: string) => Array.from(element().querySelectorAll('button')).find((b) => textOf(b) === label)!;
+
+    button('Rename').click();
+    await fixture.whenStable();
+    const input = element().querySelector<HTMLInputElement>('form.rename input')!;
+    expect(input.value).toBe('Twenty-five');
+    input.value = '   ';
+    input.dispatchEvent(new Event('input'));
+    button('Save name').click();
+    await fixture.whenStable();
+    expect(textOf(element().querySelector('mat-error'))).toBe('Name is required');
+    expect(((await db().rows('challenges').get(id)) as Challenge).name).toBe('Twenty-five');
+
+    input.value = '  A year of twenty-five ';
+    input.dispatchEvent(new Event('input'));
+    button('Save name').click();
+    await until(fixture, () => textOf(element().querySelector('h1')) === 'A year of twenty-five', 'the new name');
+    const stored = (await db().rows('challenges').get(id)) as Challenge;
+    expect(stored.name).toBe('A year of twenty-five');
+    expect(stored.target).toBe(25);
+    expect(textOf(element().querySelector('.line'))).toBe('3 of 25 books');
+  });
+
   it('files titles past a leading article, and suggests TBR books for open letters', async () => {
     const id = await store.create('challenges', { name: 'A to Z', kind: 'alphabet', alphabetBy: 'title', ...year });
     await open(id);

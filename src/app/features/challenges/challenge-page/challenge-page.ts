@@ -1,6 +1,6 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
-import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -15,6 +15,8 @@ import type { WeekState } from '@shared/challenges/weekly-challenge-progress';
 import type { Challenge } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
+import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { fieldError, notBlank } from '../../account/field-errors';
 import { goalRecord } from '../../goals/goal-rows';
 import { OneAtATime } from '../../goals/one-at-a-time';
 import { celebrateOnce } from '../celebrate-once';
@@ -124,10 +126,40 @@ export class ChallengePage {
     [...(this.record.rows()?.books ?? [])].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')),
   );
   protected readonly newPromptForm = inject(FormBuilder).nonNullable.group({ text: '' });
+  protected readonly renaming = signal(false);
+  protected readonly renameForm = inject(FormBuilder).nonNullable.group({
+    name: ['', [Validators.required, notBlank, Validators.maxLength(200)]],
+  });
+  protected readonly fieldError = fieldError;
 
   protected readonly kindLabels = KIND_LABELS;
   protected readonly weekStates = WEEK_STATES;
   protected readonly promptStates = PROMPT_STATES;
+
+  constructor() {
+    inject(UnsavedWork).trackForm(this.renameForm);
+  }
+
+  protected startRename(): void {
+    this.renameForm.reset({ name: this.challenge()?.name ?? '' });
+    this.renaming.set(true);
+  }
+
+  protected cancelRename(): void {
+    this.renameForm.reset();
+    this.renaming.set(false);
+  }
+
+  /** Writes only the name; the challenge's books and progress stay as they are. */
+  protected async saveName(): Promise<void> {
+    if (this.renameForm.invalid) {
+      this.renameForm.markAllAsTouched();
+      return;
+    }
+    await this.store.write('challenges', this.id(), { name: this.renameForm.getRawValue().name.trim() });
+    this.renameForm.markAsPristine();
+    this.renaming.set(false);
+  }
 
   protected closeCelebration(): void {
     this.celebration.close(this.id());
