@@ -12,6 +12,17 @@ describe('booksFinishedIn', () => {
     expect(booksFinishedIn(books, { start: '2026-01-01', end: '2026-12-31' }).map((entry) => entry.id)).toEqual(['a', 'b', 'c']);
   });
 
+  it('counts a book finished twice in the period once, on its latest finish there (our rule)', () => {
+    const books = [book('a', '2025-06-01'), book('a', '2026-02-10'), book('a', '2026-09-30'), book('b', '2026-05-05')];
+    expect(booksFinishedIn(books, { start: '2026-01-01', end: '2026-12-31' }).map((entry) => [entry.id, entry.finishedOn])).toEqual([
+      ['b', '2026-05-05'],
+      ['a', '2026-09-30'],
+    ]);
+    // A re-read counts again in a later period.
+    expect(booksFinishedIn(books, { start: '2025-01-01', end: '2025-12-31' }).map((entry) => entry.finishedOn)).toEqual(['2025-06-01']);
+    expect(booksFinishedIn(books, { start: '2026-02-01', end: '2026-02-28' }).map((entry) => entry.finishedOn)).toEqual(['2026-02-10']);
+  });
+
   it('agrees with comparing time values, for any dates', () => {
     // Reference: ECMA-262 Date.parse of a date-only ISO string is UTC midnight of that day.
     const day = fc.date({ min: new Date('1900-01-01T00:00:00Z'), max: new Date('2100-12-31T00:00:00Z'), noInvalidDate: true }).map((date) => date.toISOString().slice(0, 10));

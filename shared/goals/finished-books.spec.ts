@@ -17,16 +17,22 @@ const book = (id: string, fields: Partial<GoalBookRow> = {}): GoalBookRow => ({
 const days = (list: { id: string; finishedOn: string }[]) => list.map((entry) => [entry.id, entry.finishedOn]);
 
 describe('finishedBooks', () => {
-  it('dates a book by its latest reading, whatever order the readings come in', () => {
+  it('dates a book by each of its readings, whatever order the readings come in', () => {
     const readings: GoalReadingRow[] = [
       { bookId: 'a', finishedOn: '2025-04-02' },
       { bookId: 'a', finishedOn: '2026-03-15' }, // the re-read: latest
       { bookId: 'a', finishedOn: '2024-11-30' },
       { bookId: 'a', finishedOn: null }, // a reading under way
     ];
-    // The status change (a later day) is only a fallback: the reading's own date wins.
+    // The status change (a later day) is only a fallback: the readings' own dates win. One entry
+    // per finish, so the 2026 re-read counts in 2026 and the first reading in its own year.
     const finished = finishedBooks([book('a', { statusChangedAt: '2026-05-01T10:00:00Z' })], readings, 'UTC');
-    expect(finished).toEqual([{ id: 'a', title: 'Tidewater a', authors: ['Ada Okafor'], status: 'finished', finishedOn: '2026-03-15' }]);
+    expect(days(finished)).toEqual([
+      ['a', '2024-11-30'],
+      ['a', '2025-04-02'],
+      ['a', '2026-03-15'],
+    ]);
+    expect(finished[2]).toEqual({ id: 'a', title: 'Tidewater a', authors: ['Ada Okafor'], status: 'finished', finishedOn: '2026-03-15' });
   });
 
   it('falls back on the local day of the status change, in the reader’s zone', () => {

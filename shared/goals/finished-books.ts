@@ -27,16 +27,16 @@ export interface FinishedBook extends ChallengeBook {
 }
 
 /**
- * The reader's finished books, each with the day it was finished, earliest first (ties by id).
+ * The reader's finished books, one entry per finish, each with the day it was finished, earliest
+ * first (ties by id).
  *
- * The day is the latest `finishedOn` of the book's readings. A book marked finished without a
- * reading that has a date (the library's quick status change) counts on the local day, in
- * `timeZone`, of its `statusChangedAt`. A book with a dated reading counts as finished even while
- * it is being read again or was later set aside: the reader did finish it, and starting a re-read
- * should not take a book off their year. Deleted books and readings are left out, and so is a
- * finished book with no date at all.
- *
- * One entry per book: a book read twice counts once, on its latest finish.
+ * The days are the `finishedOn` of the book's readings: a book read in 2025 and again in 2026
+ * has an entry in each year (`booksFinishedIn` then counts a book once per period, on its latest
+ * finish there). A book marked finished without a reading that has a date (the library's quick
+ * status change) counts on the local day, in `timeZone`, of its `statusChangedAt`. A book with a
+ * dated reading counts as finished even while it is being read again or was later set aside: the
+ * reader did finish it, and starting a re-read should not take a book off their year. Deleted
+ * books and readings are left out, and so is a finished book with no date at all.
  *
  * @throws RangeError for an unknown time zone or an unreadable `statusChangedAt`.
  * @example
@@ -55,30 +55,32 @@ export function finishedBooks(
 }
 
 /**
- * Every book of the library (deleted ones left out, order kept) as challenges see it: the
- * finished ones, by the rule of `finishedBooks`, with status 'finished' and their day; the rest
- * with their own status ('tbr', 'reading', …) and no day. Prompt challenges need the unfinished
- * books too (a prompt can be planned with one), and alphabet challenges suggest from the TBR.
+ * Every book of the library (deleted ones left out, order kept) as challenges see it: a finished
+ * book once per finish (by the rule of `finishedBooks`), with status 'finished' and its day; the
+ * rest once, with their own status ('tbr', 'reading', …) and no day. Prompt challenges need the
+ * unfinished books too (a prompt can be planned with one), and alphabet challenges suggest from
+ * the TBR.
  *
  * @throws RangeError for an unknown time zone or an unreadable `statusChangedAt`.
  */
 export function challengeBooks(books: readonly GoalBookRow[], readings: readonly GoalReadingRow[], timeZone: string): ChallengeBook[] {
-  const latestReading = new Map<string, string>();
+  const finishDays = new Map<string, Set<string>>();
   for (const reading of readings) {
     if (reading.deleted || !reading.bookId || !reading.finishedOn) continue;
-    const before = latestReading.get(reading.bookId);
-    // Same-shaped ISO 8601 dates sort as text in time order (RFC 3339 §5.1).
-    if (before === undefined || reading.finishedOn > before) latestReading.set(reading.bookId, reading.finishedOn);
+    const days = finishDays.get(reading.bookId) ?? new Set<string>();
+    days.add(reading.finishedOn);
+    finishDays.set(reading.bookId, days);
   }
 
   return books
     .filter((book) => !book.deleted)
-    .map((book): ChallengeBook => {
-      const finishedOn =
-        latestReading.get(book.id) ??
-        (book.status === 'finished' && book.statusChangedAt ? localDay(book.statusChangedAt, timeZone) : undefined);
+    .flatMap((book): ChallengeBook[] => {
       const common = { id: book.id, title: book.title ?? '', authors: book.authors ?? [] };
-      return finishedOn === undefined ? { ...common, status: book.status ?? '' } : { ...common, status: 'finished', finishedOn };
+      // Same-shaped ISO 8601 dates sort as text in time order (RFC 3339 §5.1).
+      const days = [...(finishDays.get(book.id) ?? [])].sort();
+      if (days.length === 0 && book.status === 'finished' && book.statusChangedAt) days.push(localDay(book.statusChangedAt, timeZone));
+      if (days.length === 0) return [{ ...common, status: book.status ?? '' }];
+      return days.map((finishedOn) => ({ ...common, status: 'finished', finishedOn }));
     });
 }
 

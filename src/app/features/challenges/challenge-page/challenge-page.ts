@@ -9,6 +9,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 
+import { booksFinishedIn } from '@shared/challenges/books-finished-in';
 import { challengeProgress } from '@shared/challenges/challenge-progress';
 import type { PromptState } from '@shared/challenges/prompt-challenge-progress';
 import type { WeekState } from '@shared/challenges/weekly-challenge-progress';
@@ -86,7 +87,12 @@ export class ChallengePage {
   );
   protected readonly celebrating = computed(() => this.celebration.showing().has(this.id()));
 
-  private readonly finishDay = computed(() => new Map(this.record.finished().map((book) => [book.id, book.finishedOn])));
+  /** When each book was finished inside the challenge's period (its latest finish there). */
+  private readonly finishDay = computed(() => {
+    const challenge = this.challenge();
+    const period = { start: challenge?.periodStart ?? '0001-01-01', end: challenge?.periodEnd ?? '9999-12-31' };
+    return new Map(booksFinishedIn(this.record.finished(), period).map((book) => [book.id, book.finishedOn]));
+  });
   /** The books that counted, in the order the challenge counted them. */
   protected readonly counted = computed(() =>
     [...new Set(this.progress()?.progress.counted ?? [])].map((id) => ({ id, title: this.title(id), finishedOn: this.finishDay().get(id) })),

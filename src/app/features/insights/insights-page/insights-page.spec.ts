@@ -59,6 +59,19 @@ describe('InsightsPage', () => {
     expect(summary('Pace')).toBe('45 pages an hour across 2026, all in May.');
   });
 
+  it('counts a book re-read this year in this year, and its first reading in its own year', async () => {
+    // Evening Tide was finished on 31 December 2025 (seed.ts); a reading dated 10 April 2026 is a re-read.
+    await store.write('readings', '00000000-0000-4000-8000-0000000000b1', { bookId: BOOK.eve, startedOn: '2025-12-01', finishedOn: '2025-12-31', deleted: false });
+    await store.write('readings', '00000000-0000-4000-8000-0000000000b2', { bookId: BOOK.eve, startedOn: '2026-04-01', finishedOn: '2026-04-10', deleted: false });
+    await open();
+    await until(fixture, () => summary('Month by month').startsWith('4 books'), 'the re-read');
+    expect(summary('Month by month')).toBe('4 books in 2026; the most in January: 1 book.');
+
+    await open('2025');
+    await until(fixture, () => summary('Month by month').includes('December'), '2025');
+    expect(summary('Month by month')).toBe('1 book in 2025; the most in December: 1 book.');
+  });
+
   it('shows an earlier year, and refuses a route that is no year', async () => {
     await open('2025');
     expect(textOf(element().querySelector('h1'))).toBe('Insights for 2025');
