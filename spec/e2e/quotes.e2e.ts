@@ -47,6 +47,9 @@ describe('Quotes', () => {
     await page.getByRole('button', { name: 'Add', exact: true }).click();
     await page.getByRole('menuitem', { name: 'Capture a quote' }).click();
     await dialog.waitFor();
+    // The dialog puts focus in the passage once it has opened; typing elsewhere before that
+    // (on a slow machine) would see focus moved mid-word.
+    await page.waitForFunction(() => document.activeElement?.tagName === 'TEXTAREA');
     await dialog.getByLabel('The passage').fill('Reeds keep the time, and the time keeps nothing.');
     await dialog.getByLabel('Book').selectOption({ label: 'The Fen Hours — Ines Roa' });
     await dialog.getByLabel('Audio position').fill('1:02:30');
