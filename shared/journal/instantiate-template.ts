@@ -1,3 +1,5 @@
+import { MONTH_NAMES } from '../calendar/month-names';
+
 /** What a new page is about, for filling a template's placeholders. */
 export interface TemplateContext {
   /** The reader's calendar date today, 'YYYY-MM-DD' (ISO 8601). */
@@ -24,7 +26,6 @@ export interface InstantiatedPage {
 
 /** English weekday names, Sunday first, as `Date.prototype.getUTCDay` counts. */
 const WEEKDAYS = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'] as const;
-const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'] as const;
 
 /** Every placeholder a template may hold, with what it becomes (shown to the reader as help). */
 export const TEMPLATE_PLACEHOLDERS = [
@@ -59,7 +60,7 @@ export function placeholderValues(context: TemplateContext): Record<PlaceholderN
   return {
     date: context.today,
     weekday: WEEKDAYS[instant.getUTCDay()]!,
-    month: MONTHS[month - 1]!,
+    month: MONTH_NAMES[month - 1]!,
     year: match[1]!,
     book: context.bookTitle ?? '',
     author: (context.bookAuthors ?? []).join(', '),

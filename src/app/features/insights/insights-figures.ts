@@ -1,3 +1,4 @@
+import { MONTH_NAMES, SHORT_MONTH_NAMES } from '@shared/calendar/month-names';
 import type { Amounts } from '@shared/goals/amounts-in';
 import type { GoalUnit } from '@shared/goals/goal-unit';
 import type { FormatSplit } from '@shared/insights/format-split';
@@ -8,8 +9,6 @@ import type { TopTerms } from '@shared/insights/top-terms';
 import { goalAmount, UNIT_LABELS } from '../goals/goal-figures';
 import type { ChartModel } from './chart-model';
 
-const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-const MONTH_NAMES = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
 const FORMAT_LABELS = { print: 'Print', ebook: 'Ebook', audiobook: 'Audiobook' } as const;
 
 const whole = (value: number) => value.toLocaleString('en', { maximumFractionDigits: 0 });
@@ -29,7 +28,7 @@ export function monthlyChart(months: readonly Amounts[], unit: GoalUnit, year: n
     total === 0
       ? `No ${unit} logged in ${year} yet.`
       : `${goalAmount(total, unit)} in ${year}; the most in ${MONTH_NAMES[most]}: ${goalAmount(values[most], unit)}.`;
-  return { kind: 'bar', labels: MONTHS, series: [{ label: UNIT_LABELS[unit], values }], summary };
+  return { kind: 'bar', labels: SHORT_MONTH_NAMES, series: [{ label: UNIT_LABELS[unit], values }], summary };
 }
 
 /** Finished books by format, as a ring. */
@@ -93,7 +92,7 @@ export function paceChart(months: readonly MonthPace[], year: number): ChartMode
   }
   return {
     kind: 'line',
-    labels: MONTHS,
+    labels: SHORT_MONTH_NAMES,
     series: [{ label: 'Pages per hour', values: months.map((month) => month.pagesPerHour) }],
     summary,
     format: whole,

@@ -3,6 +3,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 
+import { MONTH_NAMES } from '@shared/calendar/month-names';
 import { formatSplit } from '@shared/insights/format-split';
 import { yearReview } from '@shared/insights/year-review';
 import { deterministicId } from '@shared/sync/deterministic-id';
@@ -14,8 +15,6 @@ import { formatsChart } from '../insights-figures';
 import { insightsYear } from '../insights-year';
 import { YearHeatmap } from '../year-heatmap/year-heatmap';
 import { saveAsPng } from './save-as-png';
-
-const MONTH_NAMES = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
 
 /**
  * The reader's year on one card: the totals, the best and highest rated books, the busiest
