@@ -13,6 +13,10 @@ import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
 import { uploadsRoutes } from './entry-points/uploads.routes';
+import { catalogueRoutes, readerLimiter } from './entry-points/catalogue.routes';
+import { Catalogue } from './domain/catalogue/catalogue';
+import { SruProvider } from './domain/catalogue/sru-provider';
+import { CatalogueCache } from './data-access/catalogue-cache';
 import { PostgresAttemptStore } from './data-access/attempt-store';
 import { SyncStore } from './data-access/sync-store';
 import { UploadStore } from './data-access/upload-store';
@@ -54,6 +58,13 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.use('/api/devices', devicesRoutes(sessions));
   app.use('/api/sync', syncRoutes(new SyncStore(dataSource)));
   app.use('/api/uploads', uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
+  app.use(
+    '/api/catalogue',
+    catalogueRoutes(
+      new Catalogue(config.catalogueUrls.map((url) => new SruProvider(url, config.catalogueTimeoutMs)), new CatalogueCache(dataSource)),
+      readerLimiter(config.catalogueRateLimit, new PostgresAttemptStore(dataSource, 'catalogue')),
+    ),
+  );
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);
 

@@ -26,7 +26,16 @@ export interface ServerConfig {
   readonly authRateLimit: number;
   /** Largest cover image accepted by `POST /api/uploads`, in bytes. */
   readonly uploadMaxBytes: number;
+  /** SRU base URLs of the library catalogues, asked in this order. */
+  readonly catalogueUrls: readonly string[];
+  /** How long one catalogue may take to answer. */
+  readonly catalogueTimeoutMs: number;
+  /** Catalogue look-ups allowed per reader per minute. */
+  readonly catalogueRateLimit: number;
 }
+
+/** The local catalogue that `npm start` runs (sync-server/src/local-catalogue/). */
+export const LOCAL_CATALOGUE_URL = 'http://127.0.0.1:41500/sru';
 
 /** Covers are resized on the device to at most 600 px tall, so 2 MiB leaves plenty of room. */
 const DEFAULT_UPLOAD_MAX_BYTES = 2 * 1024 * 1024;
@@ -56,6 +65,13 @@ const environmentSchema = z
       .min(1024, 'must be at least 1024 bytes')
       .max(16 * 1024 * 1024, 'must be at most 16 MiB (16777216 bytes)')
       .default(DEFAULT_UPLOAD_MAX_BYTES),
+    LAMPLIGHT_CATALOGUE_URLS: z
+      .string()
+      .default(LOCAL_CATALOGUE_URL)
+      .transform((value) => value.split(/[\s,]+/).filter(Boolean))
+      .pipe(z.array(z.url({ protocol: /^https?$/, error: 'each catalogue must be an http:// or https:// URL' }))),
+    LAMPLIGHT_CATALOGUE_TIMEOUT_MS: z.coerce.number().int().min(100).max(30_000).default(3000),
+    LAMPLIGHT_CATALOGUE_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
@@ -90,5 +106,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     devMailDir: production || !values.LAMPLIGHT_DEV_MAIL_DIR ? null : path.resolve(values.LAMPLIGHT_DEV_MAIL_DIR),
     authRateLimit: values.LAMPLIGHT_AUTH_RATE_LIMIT,
     uploadMaxBytes: values.LAMPLIGHT_UPLOAD_MAX_BYTES,
+    catalogueUrls: values.LAMPLIGHT_CATALOGUE_URLS,
+    catalogueTimeoutMs: values.LAMPLIGHT_CATALOGUE_TIMEOUT_MS,
+    catalogueRateLimit: values.LAMPLIGHT_CATALOGUE_RATE_LIMIT,
   };
 }
