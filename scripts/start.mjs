@@ -1,5 +1,6 @@
 // `npm start`: from a fresh clone to a running Lamplight at http://127.0.0.1:8080/ with demo data,
-// plus the development mail inbox that catches account e-mail (read it on Admin › Mail).
+// plus the development mail inbox that catches account e-mail (read it on Admin › Mail) and the
+// local library catalogue (SRU, invented records) that "Fill in from the catalogue" asks.
 import { spawn } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
@@ -35,6 +36,9 @@ const env = {
   LAMPLIGHT_DEV_SMTP_PORT: smtpPort,
   SMTP_URL: process.env.SMTP_URL ?? `smtp://127.0.0.1:${smtpPort}`,
 };
+// With no catalogues configured, the server asks the local one (LAMPLIGHT_LOCAL_CATALOGUE_PORT).
+const cataloguePort = process.env.LAMPLIGHT_LOCAL_CATALOGUE_PORT ?? '41500';
+if (!process.env.LAMPLIGHT_CATALOGUE_URLS) env.LAMPLIGHT_CATALOGUE_URLS = `http://127.0.0.1:${cataloguePort}/sru`;
 
 console.log('Demo accounts (invented people):');
 run('node', ['dist/node/sync-server/src/seed.js'], { env });
@@ -42,6 +46,10 @@ run('node', ['dist/node/sync-server/src/seed.js'], { env });
 const children = [];
 const inbox = process.env.SMTP_URL ? null : spawn('node', ['dist/node/sync-server/src/dev-inbox/main.js'], { cwd: root, stdio: 'inherit', env });
 if (inbox) children.push(inbox);
+const catalogue = process.env.LAMPLIGHT_CATALOGUE_URLS
+  ? null
+  : spawn('node', ['dist/node/sync-server/src/local-catalogue/main.js'], { cwd: root, stdio: 'inherit', env: { ...env, LAMPLIGHT_LOCAL_CATALOGUE_PORT: cataloguePort } });
+if (catalogue) children.push(catalogue);
 const server = spawn('node', ['dist/node/sync-server/src/main.js'], { cwd: root, stdio: 'inherit', env });
 children.push(server);
 
@@ -50,6 +58,7 @@ process.on('SIGINT', () => {});
 process.on('SIGTERM', () => children.forEach((child) => child.kill('SIGTERM')));
 server.on('exit', (code) => {
   inbox?.kill('SIGTERM');
+  catalogue?.kill('SIGTERM');
   console.log('PostgreSQL keeps running; stop it with: npm run db -- stop');
   process.exit(code ?? 0);
 });

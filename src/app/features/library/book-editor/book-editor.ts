@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, viewChild } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators, type AbstractControl } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -7,7 +7,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
-import { startWith } from 'rxjs';
+import { map, startWith } from 'rxjs';
 
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
 import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, PROGRESS_UNITS, WISH_PRIORITIES, type Book, type Series } from '@shared/sync/schema/collections';
@@ -19,6 +19,7 @@ import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
+import { CatalogueFill, CatalogueSearch, FILLABLE_FIELDS, PendingLookups, type FillInResult, type FillValues } from '../../catalogue';
 import { LabelPicker } from '../../labels/label-picker/label-picker';
 import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
 import { BookStatus } from '../book-status';
@@ -40,7 +41,7 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
 @Component({
   selector: 'll-book-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, LabelPicker, IsbnScanButton, CoverPicker],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, LabelPicker, IsbnScanButton, CoverPicker, CatalogueFill, CatalogueSearch],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -49,6 +50,7 @@ export class BookEditor {
   private readonly store = inject(JournalStore);
   private readonly router = inject(Router);
   private readonly bookStatus = inject(BookStatus);
+  private readonly pendingLookups = inject(PendingLookups);
 
   /** The book's id from the route; absent when adding a new book. */
   readonly id = input<string>();
@@ -114,6 +116,11 @@ export class BookEditor {
   /** Cancel discards on purpose, so it leaves without asking. */
   protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
   private original: BookFormValue = EMPTY_BOOK_FORM;
+  /** What the catalogue may fill, as the form holds it now (hidden fields included). */
+  protected readonly fillable = toSignal(this.form.valueChanges.pipe(startWith(null), map(() => this.fillableNow())), { requireSync: true });
+  private readonly catalogueFill = viewChild(CatalogueFill);
+  /** An ISBN the catalogue could not be asked about (offline): its book page asks later. */
+  protected queuedIsbn: string | null = null;
 
   constructor() {
     // An update or another tab must not reload the page over unsaved input.
@@ -152,10 +159,28 @@ export class BookEditor {
     }
   }
 
-  /** A scanned ISBN fills the field as if typed (dirty first, so unsaved work is tracked). */
+  /** A scanned ISBN fills the field as if typed (dirty first, so unsaved work is tracked), then asks the catalogue. */
   protected fillIsbn(isbn: string): void {
     this.form.controls.isbn.markAsDirty();
     this.form.controls.isbn.setValue(isbn);
+    void this.catalogueFill()?.lookUp(isbn);
+  }
+
+  private fillableNow(): FillValues {
+    const raw = this.form.getRawValue();
+    return Object.fromEntries(FILLABLE_FIELDS.map((field) => [field, raw[field]])) as FillValues;
+  }
+
+  /** The values the reader took from the catalogue, as if typed. */
+  protected fillFromCatalogue(values: FillInResult): void {
+    for (const field of FILLABLE_FIELDS) {
+      const value = values[field];
+      if (value === undefined) continue;
+      const control = this.form.controls[field] as AbstractControl<string>;
+      control.setValue(value);
+      control.markAsDirty();
+      control.markAsTouched();
+    }
   }
 
   protected async save(): Promise<void> {
@@ -184,6 +209,7 @@ export class BookEditor {
       }
       return;
     }
+    if (this.queuedIsbn && normalizeIsbn(value.isbn) === this.queuedIsbn) this.pendingLookups.add(bookId, this.queuedIsbn);
     this.form.markAsPristine();
     await this.router.navigate(['/library', bookId]);
     if (statusChanged) await this.bookStatus.afterChange(bookId, value.status, optionalId(value.seriesId));

@@ -17,6 +17,7 @@ import { BookQuotes } from '../../quotes/book-quotes/book-quotes';
 import { QuoteCapture } from '../../quotes/quote-capture';
 import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
 import { BookNotebooks } from '../../notebooks/book-notebooks/book-notebooks';
+import { CatalogueOffer } from '../../catalogue';
 import { BookStatus } from '../book-status';
 import { StarRating } from '../star-rating/star-rating';
 import { LabelChips } from '../../labels/label-chips/label-chips';
@@ -61,6 +62,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
     BookNotebooks,
     BookReading,
     TimerStartButton,
+    CatalogueOffer,
   ],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',

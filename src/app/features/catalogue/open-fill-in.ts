@@ -1,0 +1,16 @@
+import { inject, Injectable } from '@angular/core';
+import { MatDialog } from '@angular/material/dialog';
+import { firstValueFrom } from 'rxjs';
+
+import { FillInDialog, type FillInData, type FillInResult } from './fill-in-dialog/fill-in-dialog';
+
+/** Opens "Details from the catalogue" and answers the fields the reader chose (empty when none). */
+@Injectable({ providedIn: 'root' })
+export class OpenFillIn {
+  private readonly dialog = inject(MatDialog);
+
+  async choose(data: FillInData): Promise<FillInResult> {
+    const ref = this.dialog.open<FillInDialog, FillInData, FillInResult>(FillInDialog, { data, width: '560px', maxWidth: '95vw', autoFocus: 'first-tabbable' });
+    return (await firstValueFrom(ref.afterClosed())) ?? {};
+  }
+}
