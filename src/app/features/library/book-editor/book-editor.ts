@@ -166,9 +166,11 @@ export class BookEditor {
     void this.catalogueFill()?.lookUp(isbn);
   }
 
+  /** A new book's untouched default (format "Print") counts as empty: the reader did not choose it. */
   private fillableNow(): FillValues {
     const raw = this.form.getRawValue();
-    return Object.fromEntries(FILLABLE_FIELDS.map((field) => [field, raw[field]])) as FillValues;
+    const untouchedDefault = (field: (typeof FILLABLE_FIELDS)[number]) => !this.id() && this.form.controls[field].pristine && raw[field] === EMPTY_BOOK_FORM[field];
+    return Object.fromEntries(FILLABLE_FIELDS.map((field) => [field, untouchedDefault(field) ? '' : raw[field]])) as FillValues;
   }
 
   /** The values the reader took from the catalogue, as if typed. */
