@@ -183,6 +183,13 @@ describe('/api/catalogue', () => {
       expect(res.body.error.message).toContain('Unsupported index');
     });
 
+    it('When a record smuggles in a NUL as a character reference, then it is dropped and the answer is stored (PostgreSQL refuses NUL)', async () => {
+      const record = recordXml(HARD_CASES.audiobook.isbn13).replace('The orchard under snow', 'The orchard&#0; under snow');
+      const res = await failing({ body: sruRecords([record]) });
+      expect(res.status).toBe(200);
+      expect(res.body.books[0].title).toBe('The orchard under snow');
+    });
+
     it('When it escapes its records as a string (recordXMLEscaping=string), then they are read all the same', async () => {
       const res = await failing({ body: sruRecords([recordXml(HARD_CASES.audiobook.isbn13)], true) });
       expect(res.status).toBe(200);

@@ -44,12 +44,14 @@ export function createXmlParser(): XMLParser {
 type XmlNode = Record<string, unknown>;
 
 const asNodes = (value: unknown): XmlNode[] => (Array.isArray(value) ? value : value == null ? [] : [value]).map((item) => (typeof item === 'object' && item ? (item as XmlNode) : { '#text': item }));
-/** An element's text: a bare string, or `#text` beside attributes. */
+/** Control characters and lone surrogates (a character reference can smuggle them in): PostgreSQL refuses NUL. */
+const UNSTORABLE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
+
+/** An element's text: a bare string, or `#text` beside attributes, without unstorable characters. */
 export const textOf = (node: unknown): string => {
   if (node == null) return '';
-  if (typeof node !== 'object') return String(node);
-  const text = (node as XmlNode)['#text'];
-  return text == null ? '' : String(text);
+  const text = typeof node !== 'object' ? node : (node as XmlNode)['#text'];
+  return text == null ? '' : String(text).replace(UNSTORABLE, '');
 };
 const attribute = (node: XmlNode, name: string) => String(node[`@_${name}`] ?? '');
 
