@@ -11,6 +11,8 @@ export class OpenFillIn {
 
   async choose(data: FillInData): Promise<FillInResult> {
     const ref = this.dialog.open<FillInDialog, FillInData, FillInResult>(FillInDialog, { data, width: '560px', maxWidth: '95vw', autoFocus: 'first-tabbable' });
-    return (await firstValueFrom(ref.afterClosed())) ?? {};
+    const chosen: unknown = await firstValueFrom(ref.afterClosed());
+    // Cancel (mat-dialog-close) closes with '', Escape with undefined: both mean "nothing".
+    return typeof chosen === 'object' && chosen !== null ? (chosen as FillInResult) : {};
   }
 }
