@@ -1,6 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
 
-import { HARD_CASES } from '../../sync-server/src/local-catalogue/invented-records';
+import { HARD_CASES, inventedIsbn13 } from '../../sync-server/src/local-catalogue/invented-records';
 import { startLocalCatalogue, type RunningCatalogue } from '../../sync-server/src/local-catalogue/sru-server';
 import { startTestServer, type RunningServer } from '../support/test-server';
 import { seriousViolations } from './support/axe';
@@ -28,7 +28,7 @@ describe('Filling in a book from the catalogue', () => {
     await catalogue?.close();
   });
 
-  it('adds a book by ISBN online: the match fills the empty fields and asks before replacing the typed title', async () => {
+  it('adds a book by ISBN online: the match fills the empty fields and asks before replacing the typed title; no match is said plainly; search shows year and format', async () => {
     const reader = await registerThroughApi(server.baseUrl, 'Rosalind Achterberg');
     const context = await browser.newContext();
     const page = await context.newPage();
@@ -61,6 +61,15 @@ describe('Filling in a book from the catalogue', () => {
     expect(facts['Format']).toBe('Audiobook');
     expect(await page.locator('article.book .authors').textContent()).toContain('Halvard Nyström');
 
+    // No match: said plainly, and the book saves as typed.
+    await page.goto(`${server.baseUrl}/library/new`);
+    await page.getByLabel('Title', { exact: true }).fill('A book no catalogue knows');
+    await page.getByLabel('ISBN', { exact: true }).fill(inventedIsbn13(8888));
+    await page.getByRole('button', { name: 'Fill in from the catalogue' }).click();
+    await page.getByRole('status').filter({ hasText: 'The catalogue has no book with this ISBN' }).waitFor();
+    await page.getByRole('button', { name: 'Save', exact: true }).click();
+    expect((await bookFacts(page))['Title']).toBe('A book no catalogue knows');
+
     // Search by title where a book is added: results show year and format.
     await page.goto(`${server.baseUrl}/library/new`);
     await page.getByLabel('Title or author').fill('grammar of rivers');
@@ -74,7 +83,7 @@ describe('Filling in a book from the catalogue', () => {
     await context.close();
   });
 
-  it('offline, saves the book as typed and queues the look-up; back online, the book page offers the match', async () => {
+  it('offline, saves the book as typed and queues the look-up; back online, the book page offers the match; with the catalogue down, says so and saves', async () => {
     const reader = await registerThroughApi(server.baseUrl, 'Teodor Lindgren-Ashe');
     const context = await browser.newContext();
     const page = await context.newPage();
@@ -104,6 +113,17 @@ describe('Filling in a book from the catalogue', () => {
     expect(facts['Title']).toBe('Tidal notes');
     expect(facts['Length']).toContain('412');
     expect(await page.getByRole('heading', { name: 'We found details for this ISBN' }).count()).toBe(0);
+
+    // The catalogue goes down: a clear message, and the book still saves.
+    await catalogue.close();
+    await page.goto(`${server.baseUrl}/library/new`);
+    await page.getByLabel('Title', { exact: true }).fill('Letters, typed by hand');
+    // An ISBN no spec looks up while the catalogue is up, so no cached answer stands in.
+    await page.getByLabel('ISBN', { exact: true }).fill(HARD_CASES.nonLatin.greek);
+    await page.getByRole('button', { name: 'Fill in from the catalogue' }).click();
+    await page.getByRole('status').filter({ hasText: 'The catalogue can’t be reached just now' }).waitFor();
+    await page.getByRole('button', { name: 'Save', exact: true }).click();
+    expect((await bookFacts(page))['Title']).toBe('Letters, typed by hand');
     await context.close();
   });
 });

@@ -215,6 +215,17 @@ describe('/api/catalogue', () => {
       expect(res.body.books.map((book: { title: string }) => book.title)).toContain('A grammar of rivers');
     });
 
+    it('When a catalogue does not support the CQL relation "all" (SRU diagnostic 19), then the search is asked again with "="', async () => {
+      const strict = await stub({
+        body: (url) => (url.searchParams.get('query')!.includes(' all ') ? sruDiagnostic(19, 'Unsupported relation', 'all') : sruRecords([recordXml(HARD_CASES.qualified.isbn13)])),
+      });
+      const strictApp = await appWith([strict.url]);
+      const { accessToken } = await registerReader(strictApp);
+      const res = await request(strictApp).get('/api/catalogue/search').query({ title: 'salt and lantern' }).set(bearer(accessToken)).expect(200);
+      expect(strict.requests.map((url) => url.searchParams.get('query'))).toEqual(['dc.title all "salt and lantern"', 'dc.title = "salt and lantern"']);
+      expect(res.body.books[0].title).toBe('Salt and lantern');
+    });
+
     it('When nothing matches, then it answers 200 with no books', async () => {
       const res = await request(app).get('/api/catalogue/search').query({ title: 'zzyzx quillwort', author: 'Nobody' }).set(bearer(token)).expect(200);
       expect(res.body.books).toEqual([]);

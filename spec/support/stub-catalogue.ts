@@ -4,7 +4,7 @@ import type { AddressInfo } from 'node:net';
 /**
  * A stand-in for a remote library catalogue that misbehaves on purpose (slow, broken XML, SRU
  * diagnostics): the third-party service, not any part of Lamplight. It answers every request
- * with `body` after `delayMs` and counts the requests.
+ * with `body` (or what `body(url)` gives) after `delayMs` and counts the requests.
  */
 export interface StubCatalogue {
   readonly url: string;
@@ -12,13 +12,14 @@ export interface StubCatalogue {
   close(): Promise<void>;
 }
 
-export async function startStubCatalogue(answer: { body: string; delayMs?: number; status?: number }): Promise<StubCatalogue> {
+export async function startStubCatalogue(answer: { body: string | ((request: URL) => string); delayMs?: number; status?: number }): Promise<StubCatalogue> {
   const requests: URL[] = [];
   const server: Server = createServer((req, res) => {
-    requests.push(new URL(req.url ?? '/', 'http://stub'));
+    const url = new URL(req.url ?? '/', 'http://stub');
+    requests.push(url);
     setTimeout(() => {
       res.writeHead(answer.status ?? 200, { 'Content-Type': 'application/sru+xml; charset=utf-8' });
-      res.end(answer.body);
+      res.end(typeof answer.body === 'function' ? answer.body(url) : answer.body);
     }, answer.delayMs ?? 0);
   });
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));

@@ -7,6 +7,8 @@ export class CatalogueError extends Error {
   constructor(
     readonly failure: CatalogueFailure,
     message: string,
+    /** For `diagnostic`: the SRU diagnostic's URI, e.g. info:srw/diagnostic/1/19. */
+    readonly diagnosticUri?: string,
   ) {
     super(message);
     this.name = 'CatalogueError';

@@ -9,6 +9,8 @@ import { readSruResponse } from './sru-response';
 const MAX_RESPONSE_BYTES = 4 * 1024 * 1024;
 const SEARCH_RECORDS = 10;
 const ISBN_RECORDS = 5;
+/** SRU Diagnostics List: "Unsupported relation". */
+const UNSUPPORTED_RELATION = 'info:srw/diagnostic/1/19';
 
 /**
  * A catalogue that speaks SRU 2.0 (OASIS searchRetrieve Part 3): searchRetrieve over HTTP GET
@@ -34,8 +36,16 @@ export class SruProvider implements CatalogueProvider {
   }
 
   async search(title: string | null, author: string | null): Promise<CatalogueBook[]> {
-    const clauses = [title ? `dc.title all ${cqlTerm(title)}` : null, author ? `dc.creator all ${cqlTerm(author)}` : null].filter(Boolean);
-    const records = await this.searchRetrieve(clauses.join(' and '), SEARCH_RECORDS);
+    const query = (relation: string) =>
+      [title ? `dc.title ${relation} ${cqlTerm(title)}` : null, author ? `dc.creator ${relation} ${cqlTerm(author)}` : null].filter(Boolean).join(' and ');
+    let records;
+    try {
+      records = await this.searchRetrieve(query('all'), SEARCH_RECORDS);
+    } catch (error) {
+      // Diagnostic 19, "Unsupported relation": a catalogue without `all` still knows `=`.
+      if (!(error instanceof CatalogueError && error.diagnosticUri === UNSUPPORTED_RELATION)) throw error;
+      records = await this.searchRetrieve(query('='), SEARCH_RECORDS);
+    }
     return records.map((record) => marcToBook(record)).filter((book) => book.title);
   }
 
@@ -51,7 +61,7 @@ export class SruProvider implements CatalogueProvider {
     const result = readSruResponse(xml);
     if (result.records.length === 0 && result.diagnostics.length > 0) {
       const first = result.diagnostics[0]!;
-      throw new CatalogueError('diagnostic', `The catalogue could not run the search: ${first.message || first.uri}${first.details ? ` (${first.details})` : ''}`);
+      throw new CatalogueError('diagnostic', `The catalogue could not run the search: ${first.message || first.uri}${first.details ? ` (${first.details})` : ''}`, first.uri);
     }
     return result.records;
   }
