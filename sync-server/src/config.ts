@@ -2,6 +2,8 @@ import path from 'node:path';
 
 import * as z from 'zod';
 
+import { LOG_LEVELS, type LogLevel } from './observability/logger';
+
 /** Settings the server reads from the environment, validated once at start-up (fail fast). */
 export interface ServerConfig {
   readonly host: string;
@@ -26,6 +28,14 @@ export interface ServerConfig {
   readonly authRateLimit: number;
   /** Largest cover image accepted by `POST /api/uploads`, in bytes. */
   readonly uploadMaxBytes: number;
+  /** Proxies whose X-Forwarded-For is believed (Express `trust proxy`); empty: none. */
+  readonly trustProxy: readonly string[];
+  /** Level of the JSON request and server log on stdout. */
+  readonly logLevel: LogLevel;
+  /** Bearer token that opens `GET /metrics` from anywhere; without it, loopback only. */
+  readonly metricsToken: string | null;
+  /** DATABASE_URL goes through a transaction-mode pooler (PgBouncer): no named prepared statements. */
+  readonly dbTransactionPooling: boolean;
 }
 
 /** Covers are resized on the device to at most 600 px tall, so 2 MiB leaves plenty of room. */
@@ -56,6 +66,14 @@ const environmentSchema = z
       .min(1024, 'must be at least 1024 bytes')
       .max(16 * 1024 * 1024, 'must be at most 16 MiB (16777216 bytes)')
       .default(DEFAULT_UPLOAD_MAX_BYTES),
+    // Loopback by default, as before; the hardening work makes this an explicit list of proxies.
+    LAMPLIGHT_TRUST_PROXY: z
+      .string()
+      .default('loopback')
+      .transform((value) => value.split(',').map((entry) => entry.trim()).filter((entry) => entry !== '')),
+    LAMPLIGHT_LOG_LEVEL: z.enum(LOG_LEVELS, { error: `must be one of ${LOG_LEVELS.join(', ')}` }).default('info'),
+    LAMPLIGHT_METRICS_TOKEN: z.string().min(32, 'LAMPLIGHT_METRICS_TOKEN must be at least 32 characters').optional(),
+    LAMPLIGHT_DB_TRANSACTION_POOLING: z.enum(['true', 'false'], { error: 'must be true or false' }).default('false'),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
@@ -90,5 +108,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     devMailDir: production || !values.LAMPLIGHT_DEV_MAIL_DIR ? null : path.resolve(values.LAMPLIGHT_DEV_MAIL_DIR),
     authRateLimit: values.LAMPLIGHT_AUTH_RATE_LIMIT,
     uploadMaxBytes: values.LAMPLIGHT_UPLOAD_MAX_BYTES,
+    trustProxy: values.LAMPLIGHT_TRUST_PROXY,
+    logLevel: values.LAMPLIGHT_LOG_LEVEL,
+    metricsToken: values.LAMPLIGHT_METRICS_TOKEN ?? null,
+    dbTransactionPooling: values.LAMPLIGHT_DB_TRANSACTION_POOLING === 'true',
   };
 }
