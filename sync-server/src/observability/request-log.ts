@@ -61,7 +61,7 @@ export function requestLog(logger: Logger): RequestHandler {
     },
     customLogLevel(req: IncomingMessage, res: ServerResponse, err?: Error) {
       if (err || res.statusCode >= 500) return 'error';
-      return PROBES.has((req as Request).path) ? 'debug' : 'info';
+      return PROBES.has((req as Request).originalUrl.split('?')[0]!) ? 'debug' : 'info';
     },
     customSuccessMessage: (req: IncomingMessage, res: ServerResponse) => `${req.method} ${routeLabel(res)} ${res.statusCode}`,
     customErrorMessage: (req: IncomingMessage, res: ServerResponse) => `${req.method} ${routeLabel(res)} ${res.statusCode}`,
