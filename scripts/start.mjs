@@ -1,22 +1,9 @@
 // `npm start`: from a fresh clone to a running Lamplight at http://127.0.0.1:8080/ with demo data,
 // plus the development mail inbox that catches account e-mail (read it on Admin › Mail).
 import { spawn } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 
-import { bin, databaseUrl, ensureDependencies, root, run, startDatabase } from './lib.mjs';
-
-/** The token-signing secret: from the environment, else one generated once and kept in .data/. */
-function jwtSecret() {
-  if (process.env.LAMPLIGHT_JWT_SECRET) return process.env.LAMPLIGHT_JWT_SECRET;
-  const file = path.join(root, '.data', 'jwt-secret');
-  if (!existsSync(file)) {
-    mkdirSync(path.dirname(file), { recursive: true });
-    writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
-  }
-  return readFileSync(file, 'utf8').trim();
-}
+import { bin, databaseUrl, ensureDependencies, jwtSecret, root, run, startDatabase } from './lib.mjs';
 
 ensureDependencies();
 startDatabase();

@@ -2,7 +2,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 
-import { ensureDebianProgram, stopChild, waitForOk } from './processes';
+import { requireProgram, stopChild, waitForOk } from './processes';
 
 export const NGINX = '/usr/sbin/nginx';
 const TEMPLATE = path.resolve(__dirname, '../../../../deploy/nginx.conf');
@@ -45,7 +45,7 @@ export interface RunningNginx {
 
 /** Writes the config, checks it with `nginx -t`, runs nginx in the foreground, waits for it to proxy. */
 export async function startNginx(options: NginxOptions, readyPath = '/api/health'): Promise<RunningNginx> {
-  ensureDebianProgram(NGINX, 'nginx');
+  requireProgram(NGINX, 'nginx');
   mkdirSync(path.join(options.prefix, 'temp'), { recursive: true });
   const configFile = path.join(options.prefix, 'nginx.conf');
   writeFileSync(configFile, renderNginxConfig(options));

@@ -4,7 +4,7 @@ import { createConnection } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 
-import { ensureDebianProgram, stopChild } from './processes';
+import { requireProgram, stopChild } from './processes';
 
 export const PGBOUNCER = '/usr/sbin/pgbouncer';
 const TEMPLATE = path.resolve(__dirname, '../../../../deploy/pgbouncer.ini');
@@ -25,7 +25,7 @@ export interface RunningPgBouncer {
  * URL's user and password (PgBouncer logs in to PostgreSQL with them over SCRAM).
  */
 export async function startPgBouncer(directUrl: string, port: number, poolSize = 20): Promise<RunningPgBouncer> {
-  ensureDebianProgram(PGBOUNCER, 'pgbouncer');
+  requireProgram(PGBOUNCER, 'pgbouncer');
   const target = new URL(directUrl);
   const user = decodeURIComponent(target.username);
   const password = decodeURIComponent(target.password);

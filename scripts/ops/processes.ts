@@ -1,22 +1,16 @@
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import type { ChildProcess } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { createServer } from 'node:net';
 
 /**
- * Makes sure a Debian package's program is there: installs it with apt-get when we are root,
- * otherwise stops with the command to run. (npm test and start:cluster need nginx and pgbouncer.)
+ * Stops with a clear message when a Debian package's program is missing. `npm test` and
+ * `npm run start:cluster` install nginx and pgbouncer first when run as root (scripts/lib.mjs).
  */
-export function ensureDebianProgram(program: string, debianPackage: string): void {
+export function requireProgram(program: string, debianPackage: string): void {
   if (existsSync(program)) return;
-  if (process.getuid?.() !== 0) {
-    throw new Error(`${program} is missing. Install Debian's ${debianPackage}: sudo apt-get install -y ${debianPackage}`);
-  }
-  console.log(`Installing Debian's ${debianPackage} (apt-get)…`);
-  const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
-  for (const args of [['update', '-qq'], ['install', '-y', '-qq', debianPackage]]) {
-    const result = spawnSync('apt-get', args, { stdio: 'inherit', env });
-    if (result.status !== 0) throw new Error(`apt-get ${args.join(' ')} failed (exit ${result.status})`);
-  }
+  throw new Error(
+    `${program} is missing. Install Debian's ${debianPackage} (apt-get install -y ${debianPackage}); npm test and npm run start:cluster do it when run as root.`,
+  );
 }
 
 /** A loopback port nobody listens on right now (the kernel's pick). */
@@ -59,5 +53,3 @@ export function stopChild(child: ChildProcess, graceMs = 5000): Promise<void> {
     child.kill('SIGTERM');
   });
 }
-
-export { spawn };
