@@ -9,7 +9,7 @@ import { freePort, stopChild } from './processes';
 
 const MAIN = path.resolve(__dirname, '../../sync-server/src/main.js');
 const DEFAULT_UPLOAD_MAX_BYTES = 2 * 1024 * 1024;
-/** Log lines kept per instance for specs to read. */
+/** Log lines kept per instance for specs to read (at least this many, at most twice). */
 const KEPT_LINES = 5000;
 
 export interface Instance {
@@ -68,8 +68,11 @@ export async function startCluster(options: ClusterOptions): Promise<RunningClus
       ...(pgBouncer ? { LAMPLIGHT_DB_TRANSACTION_POOLING: 'true' } : {}),
     };
     const ports = options.instancePorts ?? Array.from({ length: count }, () => 0);
-    const instances = await Promise.all(ports.map((port, index) => startInstance(`instance-${index + 1}`, port, env, options.echo ?? false)));
+    const starts = await Promise.allSettled(ports.map((port, index) => startInstance(`instance-${index + 1}`, port, env, options.echo ?? false)));
+    const instances = starts.flatMap((start) => (start.status === 'fulfilled' ? [start.value] : []));
     started.push(...instances.map((instance) => ({ stop: () => stopChild(instance.child) })));
+    const failed = starts.find((start) => start.status === 'rejected');
+    if (failed) throw failed.reason;
 
     const nginx = await startNginx({
       prefix: options.prefix ?? mkdtempSync(path.join(tmpdir(), 'lamplight-nginx-')),
@@ -97,22 +100,28 @@ async function stopAll(started: { stop(): Promise<void> }[]): Promise<void> {
 }
 
 /** Starts one server process and resolves once it says where it listens. */
-function startInstance(name: string, port: number, env: Record<string, string | undefined>, echo: boolean): Promise<Instance> {
+export function startInstance(name: string, port: number, env: Record<string, string | undefined>, echo: boolean): Promise<Instance> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, [MAIN], { env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'inherit'] });
     const lines: string[] = [];
     let partial = '';
-    const timer = setTimeout(() => reject(new Error(`${name} did not start within 60 s`)), 60_000);
+    let listening = false;
+    const timer = setTimeout(() => {
+      child.kill('SIGKILL');
+      reject(new Error(`${name} did not start within 60 s`));
+    }, 60_000);
     child.stdout!.on('data', (chunk: Buffer) => {
       if (echo) process.stdout.write(chunk);
       const text = partial + chunk.toString();
       const complete = text.split('\n');
       partial = complete.pop() ?? '';
+      lines.push(...complete);
+      if (lines.length > 2 * KEPT_LINES) lines.splice(0, lines.length - KEPT_LINES);
+      if (listening) return;
       for (const line of complete) {
-        lines.push(line);
-        if (lines.length > KEPT_LINES) lines.shift();
         const match = /running at http:\/\/[^:]+:(\d+)\//.exec(line);
         if (match) {
+          listening = true;
           clearTimeout(timer);
           resolve({ name, port: Number(match[1]), child, lines });
         }

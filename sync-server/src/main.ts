@@ -24,7 +24,9 @@ async function main(): Promise<void> {
   const server: Server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
-    logger.info({ port }, `Lamplight is running at http://${config.host}:${port}/`);
+    // Said at info even when the log level is higher: scripts starting instances wait for it.
+    const announce = config.logLevel === 'silent' ? logger : logger.child({}, { level: 'info' });
+    announce.info({ port }, `Lamplight is running at http://${config.host}:${port}/`);
   });
   server.on('error', (err) => {
     logger.fatal(`Could not listen on ${config.host}:${config.port}: ${err.message}`);
