@@ -1,11 +1,19 @@
 // `npm start`: from a fresh clone to a running Lamplight at http://127.0.0.1:8080/ with demo data,
 // plus the development mail inbox that catches account e-mail (read it on Admin › Mail).
+// `npm run start:cluster` (`--cluster [--pgbouncer]`): the same, served as an operator runs it:
+// Debian's nginx on 127.0.0.1:8080 (deploy/nginx.conf) in front of three server instances
+// (scripts/ops/run-cluster.ts), through PgBouncer with --pgbouncer. nginx and pgbouncer are
+// installed when missing and we are root.
 import { spawn } from 'node:child_process';
 import path from 'node:path';
 
-import { bin, databaseUrl, ensureDependencies, jwtSecret, root, run, startDatabase } from './lib.mjs';
+import { bin, databaseUrl, ensureDebianPackage, ensureDependencies, jwtSecret, root, run, startDatabase } from './lib.mjs';
 
+const cluster = process.argv.includes('--cluster');
+const withPgBouncer = cluster && process.argv.includes('--pgbouncer');
 ensureDependencies();
+if (cluster) ensureDebianPackage('/usr/sbin/nginx', 'nginx');
+if (withPgBouncer) ensureDebianPackage('/usr/sbin/pgbouncer', 'pgbouncer');
 startDatabase();
 
 console.log('Building the server and the app (production)…');
@@ -21,6 +29,8 @@ const env = {
   LAMPLIGHT_DEV_MAIL_DIR: process.env.LAMPLIGHT_DEV_MAIL_DIR ?? path.join(root, '.data', 'mail'),
   LAMPLIGHT_DEV_SMTP_PORT: smtpPort,
   SMTP_URL: process.env.SMTP_URL ?? `smtp://127.0.0.1:${smtpPort}`,
+  // Links in e-mails point at nginx, not at one instance.
+  ...(cluster ? { LAMPLIGHT_PUBLIC_URL: process.env.LAMPLIGHT_PUBLIC_URL ?? `http://${process.env.LAMPLIGHT_CLUSTER_LISTEN ?? '127.0.0.1:8080'}` } : {}),
 };
 
 console.log('Demo accounts (invented people):');
@@ -29,7 +39,8 @@ run('node', ['dist/node/sync-server/src/seed.js'], { env });
 const children = [];
 const inbox = process.env.SMTP_URL ? null : spawn('node', ['dist/node/sync-server/src/dev-inbox/main.js'], { cwd: root, stdio: 'inherit', env });
 if (inbox) children.push(inbox);
-const server = spawn('node', ['dist/node/sync-server/src/main.js'], { cwd: root, stdio: 'inherit', env });
+const serve = cluster ? ['dist/node/scripts/ops/run-cluster.js', ...(withPgBouncer ? ['--pgbouncer'] : [])] : ['dist/node/sync-server/src/main.js'];
+const server = spawn('node', serve, { cwd: root, stdio: 'inherit', env });
 children.push(server);
 
 // Ctrl-C reaches the children too (same process group); wait for the server to close cleanly.

@@ -1,4 +1,4 @@
-// The cluster of `npm run start:cluster` (scripts/start-cluster.mjs builds and seeds first):
+// The cluster of `npm run start:cluster` (scripts/start.mjs --cluster builds and seeds first):
 // nginx on LAMPLIGHT_CLUSTER_LISTEN (127.0.0.1:8080) in front of server instances on
 // LAMPLIGHT_CLUSTER_PORTS (8081,8082,8083), through PgBouncer on LAMPLIGHT_PGBOUNCER_PORT (6432)
 // when run with --pgbouncer. Ctrl-C stops them all; PostgreSQL keeps running.
