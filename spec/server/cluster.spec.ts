@@ -110,6 +110,17 @@ describe('Three instances behind nginx, through PgBouncer', () => {
     expect(JSON.parse(logged!.line).req.ip).toBe('127.0.0.1');
   });
 
+  it('When a body is larger than any the server takes, then nginx refuses it with the server\'s JSON 413', async () => {
+    const res = await fetch(`${running().baseUrl}/api/uploads`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/octet-stream' },
+      body: new Uint8Array(2 * 1024 * 1024 + 65 * 1024), // over LAMPLIGHT_UPLOAD_MAX_BYTES + the multipart allowance
+    });
+
+    expect(res.status).toBe(413);
+    expect(await res.json()).toEqual({ error: { code: 'too_large', message: 'Request body is too large', details: null } });
+  });
+
   it('When one instance is killed with kill -9 while two devices push, then no acknowledged write is lost and both carry on', async () => {
     const { baseUrl, instances } = running();
     const email = uniqueEmail('kill-nine');

@@ -98,9 +98,11 @@ const jobQueueDepth = new Gauge({
 /** Refreshes the gauges that need a query; called before each scrape. */
 export async function refreshQueryGauges(dataSource: DataSource): Promise<void> {
   jobQueueDepth.reset();
+  const [table] = await dataSource.query(`SELECT to_regclass('pgboss.job') IS NOT NULL AS present`);
+  if (!table?.present) return;
   const rows: { queue: string; state: string; jobs: string }[] = await dataSource.query(
     `SELECT name AS queue, state::text AS state, count(*) AS jobs FROM pgboss.job
      WHERE state IN ('created', 'retry', 'active') GROUP BY 1, 2`,
-  ).catch(() => []); // no pgboss schema yet
+  );
   for (const row of rows) jobQueueDepth.set({ queue: row.queue, state: row.state }, Number(row.jobs));
 }
