@@ -23,7 +23,7 @@ export interface NginxOptions {
 
 /** deploy/nginx.conf with its placeholders filled in. */
 export function renderNginxConfig(options: NginxOptions): string {
-  const servers = options.upstreams.map((address) => `    server ${address} max_fails=1 fail_timeout=10s;`).join('\n');
+  const servers = options.upstreams.map((address) => `    server ${address} max_fails=3 fail_timeout=10s;`).join('\n');
   const values: Record<string, string> = {
     PREFIX: options.prefix,
     LISTEN: options.listen,

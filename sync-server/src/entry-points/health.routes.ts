@@ -12,6 +12,7 @@ const DB_PROBE_TIMEOUT_MS = 2000;
 export function healthRoutes(dataSource: DataSource): { health: Router; ready: Router } {
   const health = Router();
   health.get('/', (_req, res) => {
+    res.setHeader('Cache-Control', 'no-store');
     res.json({ status: 'ok' });
   });
 
@@ -20,6 +21,7 @@ export function healthRoutes(dataSource: DataSource): { health: Router; ready: R
     const db = await withTimeout(probeDatabase(dataSource));
     const migrations = db === 'ok' ? await withTimeout(probeMigrations(dataSource)) : 'unknown';
     const isReady = db === 'ok' && migrations === 'ok';
+    res.setHeader('Cache-Control', 'no-store');
     res.status(isReady ? 200 : 503).json({ status: isReady ? 'ready' : 'not_ready', db, migrations });
   });
   return { health, ready };
