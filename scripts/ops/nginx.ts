@@ -1,11 +1,10 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 
-import { requireProgram, stopChild, waitForOk } from './processes';
+import { fillTemplate, requireProgram, stopChild, waitForOk } from './processes';
 
 export const NGINX = '/usr/sbin/nginx';
-const TEMPLATE = path.resolve(__dirname, '../../../../deploy/nginx.conf');
 
 /** Room for the multipart envelope around an upload at its size limit. */
 const MULTIPART_SLACK_BYTES = 64 * 1024;
@@ -30,11 +29,7 @@ export function renderNginxConfig(options: NginxOptions): string {
     UPSTREAM_SERVERS: servers,
     BODY_LIMIT: String(options.uploadMaxBytes + MULTIPART_SLACK_BYTES),
   };
-  return readFileSync(TEMPLATE, 'utf8').replace(/\{\{([A-Z_]+)\}\}/g, (_, name: string) => {
-    const value = values[name];
-    if (value === undefined) throw new Error(`deploy/nginx.conf: no value for {{${name}}}`);
-    return value;
-  });
+  return fillTemplate('nginx.conf', values);
 }
 
 export interface RunningNginx {

@@ -1,13 +1,12 @@
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { chownSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { chownSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { createConnection } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 
-import { requireProgram, stopChild } from './processes';
+import { fillTemplate, requireProgram, stopChild } from './processes';
 
 export const PGBOUNCER = '/usr/sbin/pgbouncer';
-const TEMPLATE = path.resolve(__dirname, '../../../../deploy/pgbouncer.ini');
 /** PgBouncer will not run as root; it switches to the user that owns the PostgreSQL cluster. */
 const RUN_AS_WHEN_ROOT = 'postgres';
 
@@ -37,8 +36,7 @@ export async function startPgBouncer(directUrl: string, port: number, poolSize =
     POOL_SIZE: String(poolSize),
     DIR: dir,
   };
-  const ini = readFileSync(TEMPLATE, 'utf8').replace(/\{\{([A-Z_]+)\}\}/g, (_, name: string) => values[name] ?? `{{${name}}}`);
-  writeFileSync(path.join(dir, 'pgbouncer.ini'), ini);
+  writeFileSync(path.join(dir, 'pgbouncer.ini'), fillTemplate('pgbouncer.ini', values));
   const quote = (text: string) => `"${text.replace(/"/g, '""')}"`;
   writeFileSync(path.join(dir, 'userlist.txt'), `${quote(user)} ${quote(password)}\n`, { mode: 0o600 });
 

@@ -1,5 +1,6 @@
 import type { ChildProcess } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
+import path from 'node:path';
 import { createServer } from 'node:net';
 
 /**
@@ -51,5 +52,15 @@ export function stopChild(child: ChildProcess, graceMs = 5000): Promise<void> {
       resolve();
     });
     child.kill('SIGTERM');
+  });
+}
+
+/** A file of deploy/ with its `{{NAME}}` placeholders filled in; a placeholder without a value is an error. */
+export function fillTemplate(name: string, values: Record<string, string>): string {
+  const file = path.resolve(__dirname, '../../../../deploy', name);
+  return readFileSync(file, 'utf8').replace(/\{\{([A-Z_]+)\}\}/g, (_, key: string) => {
+    const value = values[key];
+    if (value === undefined) throw new Error(`deploy/${name}: no value for {{${key}}}`);
+    return value;
   });
 }
