@@ -1,5 +1,5 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 
@@ -74,8 +74,11 @@ export async function startCluster(options: ClusterOptions): Promise<RunningClus
     const failed = starts.find((start) => start.status === 'rejected');
     if (failed) throw failed.reason;
 
+    const prefix = options.prefix ?? mkdtempSync(path.join(tmpdir(), 'lamplight-nginx-'));
+    // A temporary prefix is removed when the cluster stops, right after nginx (stops run in reverse).
+    if (!options.prefix) started.push({ stop: async () => rmSync(prefix, { recursive: true, force: true }) });
     const nginx = await startNginx({
-      prefix: options.prefix ?? mkdtempSync(path.join(tmpdir(), 'lamplight-nginx-')),
+      prefix,
       listen: options.listen ?? `127.0.0.1:${await freePort()}`,
       upstreams: instances.map((instance) => `127.0.0.1:${instance.port}`),
       uploadMaxBytes: Number(env['LAMPLIGHT_UPLOAD_MAX_BYTES'] ?? DEFAULT_UPLOAD_MAX_BYTES),

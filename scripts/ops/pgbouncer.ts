@@ -1,5 +1,5 @@
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { chownSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { chownSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createConnection } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -55,7 +55,11 @@ export async function startPgBouncer(directUrl: string, port: number, poolSize =
 
   const databaseUrl = new URL(directUrl);
   databaseUrl.port = String(port);
-  return { child, databaseUrl: databaseUrl.toString(), dir, stop: () => stopChild(child) };
+  const stop = async () => {
+    await stopChild(child);
+    rmSync(dir, { recursive: true, force: true });
+  };
+  return { child, databaseUrl: databaseUrl.toString(), dir, stop };
 }
 
 async function waitForPort(port: number, child: ChildProcess, dir: string): Promise<void> {
