@@ -1,6 +1,6 @@
 import { execFileSync } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
-import { mkdtempSync, readdirSync } from 'node:fs';
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 
@@ -43,6 +43,7 @@ describe('scripts/backup.sh and scripts/restore.sh', () => {
     await dataSource.initialize();
     const config = await testConfig({ DATABASE_URL: url });
     const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
+    const dir = mkdtempSync(path.join(tmpdir(), 'lamplight-backups-'));
     try {
       await migrate(dataSource);
       const app = createApp({ config, dataSource, mailer });
@@ -55,7 +56,6 @@ describe('scripts/backup.sh and scripts/restore.sh', () => {
       expect(before['uploads']).toMatch(/^1 rows/);
       expect(before['books']).toMatch(/^2 rows/);
 
-      const dir = mkdtempSync(path.join(tmpdir(), 'lamplight-backups-'));
       const env = { LAMPLIGHT_BACKUP_DIR: dir, LAMPLIGHT_BACKUP_KEEP: '2' };
       for (let n = 0; n < 3; n++) sh('scripts/backup.sh', [url], env);
       const files = readdirSync(dir).sort();
@@ -71,6 +71,7 @@ describe('scripts/backup.sh and scripts/restore.sh', () => {
       expect(await fingerprint(dataSource)).toEqual(before);
     } finally {
       mailer.close();
+      rmSync(dir, { recursive: true, force: true });
       if (dataSource.isInitialized) await dataSource.destroy();
     }
   }, 60_000);
