@@ -107,7 +107,7 @@ describe('Three instances behind nginx, through PgBouncer', () => {
     const { requestId } = await signIn(email);
 
     const logged = await logLineOf(requestId);
-    expect(JSON.parse(logged!.line).req.ip).toBe('127.0.0.1');
+    expect(JSON.parse(logged!.line).req.network).toBe('127.0.0.0/24'); // not 203.0.113.0/24
   });
 
   it('When a body is larger than any the server takes, then nginx refuses it with the server\'s JSON 413', async () => {

@@ -6,7 +6,7 @@ import request from 'supertest';
 import { createApp } from '../../sync-server/src/app';
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
 import { createSmtpMailer } from '../../sync-server/src/domain/mailer';
-import { createLogger, userIdHash } from '../../sync-server/src/observability/logger';
+import { addressNetwork, createLogger, userIdHash } from '../../sync-server/src/observability/logger';
 import { bearer, GOOD_PASSWORD, registerReader, uniqueEmail } from '../support/accounts';
 import { fieldChange } from '../support/sync-client';
 import { testDatabaseUrl, testDataSource } from '../support/test-database';
@@ -56,6 +56,15 @@ describe('Request logs (pino)', () => {
     } finally {
       close();
     }
+  });
+
+  it('When a client address is logged, then only its network is (IPv4 /24, IPv6 /48)', () => {
+    // Documentation addresses: RFC 5737 (203.0.113.0/24) and RFC 3849 (2001:db8::/32).
+    expect(addressNetwork('203.0.113.77')).toBe('203.0.113.0/24');
+    expect(addressNetwork('::ffff:203.0.113.77')).toBe('203.0.113.0/24');
+    expect(addressNetwork('2001:db8:abcd:12:34::1')).toBe('2001:db8:abcd::/48');
+    expect(addressNetwork('2001:db8::7')).toBe('2001:db8:0::/48');
+    expect(addressNetwork('not an address')).toBeUndefined();
   });
 
   it('When the level is warn, then ordinary requests write nothing', async () => {

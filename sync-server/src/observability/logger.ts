@@ -1,4 +1,5 @@
 import { createHash } from 'node:crypto';
+import { isIPv4, isIPv6 } from 'node:net';
 
 import pino, { type DestinationStream, type Logger } from 'pino';
 
@@ -52,4 +53,20 @@ export function createLogger(level: LogLevel, destination?: DestinationStream): 
  */
 export function userIdHash(userId: string): string {
   return createHash('sha256').update(`lamplight-log:${userId}`).digest('hex').slice(0, 16);
+}
+
+/**
+ * A client address cut to its network (IPv4 /24, IPv6 /48), as privacy-minded analytics do: enough
+ * to see where traffic comes from and to tell a proxy from a client, not to single out a reader.
+ */
+export function addressNetwork(address: string | undefined): string | undefined {
+  if (!address) return undefined;
+  const plain = address.startsWith('::ffff:') ? address.slice(7) : address;
+  if (isIPv4(plain)) return `${plain.split('.').slice(0, 3).join('.')}.0/24`;
+  if (isIPv6(plain)) {
+    const [head = ''] = plain.split('::');
+    const groups = head.split(':').filter((group) => group !== '');
+    return `${[...groups.slice(0, 3), ...Array(Math.max(0, 3 - groups.length)).fill('0')].join(':')}::/48`;
+  }
+  return undefined;
 }

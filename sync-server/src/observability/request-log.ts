@@ -5,7 +5,7 @@ import type { Request, RequestHandler, Response } from 'express';
 import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 
-import { userIdHash } from './logger';
+import { addressNetwork, userIdHash } from './logger';
 import { httpDuration } from './metrics';
 
 /** A request id from the proxy (nginx's `$request_id`) is kept when it looks like one. */
@@ -30,8 +30,8 @@ function routeOf(req: Request): string {
 const routeLabel = (res: ServerResponse): string => ((res as Response).locals?.['route'] as string | undefined) ?? 'unmatched';
 
 /**
- * One JSON line per request (pino-http): request id, method, route pattern, status, time, and a
- * hash of the caller's user id. Headers, bodies and query strings are never logged, so no
+ * One JSON line per request (pino-http): request id, method, route pattern, status, time, the
+ * client's network (not its full address) and a hash of the caller's user id. Headers, bodies and query strings are never logged, so no
  * password, token, e-mail or journal text can reach the log. Also times each request for
  * `lamplight_http_request_duration_seconds`.
  */
@@ -47,7 +47,7 @@ export function requestLog(logger: Logger): RequestHandler {
       return id;
     },
     serializers: {
-      req: (req: Request) => ({ id: req.id, method: req.method, path: req.path, ip: req.ip }),
+      req: (req: Request) => ({ id: req.id, method: req.method, path: req.path, network: addressNetwork(req.ip) }),
       res: (res: ServerResponse) => ({ status: res.statusCode }),
       err: (err: Error) => ({ type: err.name }),
     },
