@@ -31,9 +31,9 @@ const routeLabel = (res: ServerResponse): string => ((res as Response).locals?.[
 
 /**
  * One JSON line per request (pino-http): request id, method, route pattern, status, time, the
- * client's network (not its full address) and a hash of the caller's user id. Headers, bodies and query strings are never logged, so no
- * password, token, e-mail or journal text can reach the log. Also times each request for
- * `lamplight_http_request_duration_seconds`.
+ * client's network (not its full address) and a hash of the caller's user id. Headers, bodies
+ * and query strings are never logged, so no password, token, e-mail or journal text can reach
+ * the log. Also times each request for `lamplight_http_request_duration_seconds`.
  */
 export function requestLog(logger: Logger): RequestHandler {
   const logRequest = pinoHttp({
