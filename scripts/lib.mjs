@@ -1,7 +1,8 @@
 // Small helpers shared by scripts/start.mjs and scripts/test.mjs. Node built-ins only: these run
 // before `npm ci` on a fresh machine.
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, statSync } from 'node:fs';
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -50,3 +51,28 @@ export function databaseUrl(name) {
 }
 
 export const bin = (name) => path.join(root, 'node_modules', '.bin', name);
+
+/**
+ * Installs a Debian package when its program is missing and we are root (apt-get); otherwise
+ * stops with the command to run.
+ */
+export function ensureDebianPackage(program, debianPackage) {
+  if (existsSync(program)) return;
+  if (process.getuid?.() !== 0) {
+    throw new Error(`${program} is missing. Install Debian's ${debianPackage}: sudo apt-get install -y ${debianPackage}`);
+  }
+  console.log(`Installing Debian's ${debianPackage} (apt-get)…`);
+  run('apt-get', ['update', '-qq']);
+  run('apt-get', ['install', '-y', '-qq', debianPackage], { env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
+}
+
+/** The token-signing secret: from the environment, else one generated once and kept in .data/. */
+export function jwtSecret() {
+  if (process.env.LAMPLIGHT_JWT_SECRET) return process.env.LAMPLIGHT_JWT_SECRET;
+  const file = path.join(root, '.data', 'jwt-secret');
+  if (!existsSync(file)) {
+    mkdirSync(path.dirname(file), { recursive: true });
+    writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
+  }
+  return readFileSync(file, 'utf8').trim();
+}

@@ -1,25 +1,20 @@
 // `npm start`: from a fresh clone to a running Lamplight at http://127.0.0.1:8080/ with demo data,
 // plus the development mail inbox that catches account e-mail (read it on Admin › Mail) and the
 // local library catalogue (SRU, invented records) that "Fill in from the catalogue" asks.
+// `npm run start:cluster` (`--cluster [--pgbouncer]`): the same, served as an operator runs it:
+// Debian's nginx on 127.0.0.1:8080 (deploy/nginx.conf) in front of three server instances
+// (scripts/ops/run-cluster.ts), through PgBouncer with --pgbouncer. nginx and pgbouncer are
+// installed when missing and we are root.
 import { spawn } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 
-import { bin, databaseUrl, ensureDependencies, root, run, startDatabase } from './lib.mjs';
+import { bin, databaseUrl, ensureDebianPackage, ensureDependencies, jwtSecret, root, run, startDatabase } from './lib.mjs';
 
-/** The token-signing secret: from the environment, else one generated once and kept in .data/. */
-function jwtSecret() {
-  if (process.env.LAMPLIGHT_JWT_SECRET) return process.env.LAMPLIGHT_JWT_SECRET;
-  const file = path.join(root, '.data', 'jwt-secret');
-  if (!existsSync(file)) {
-    mkdirSync(path.dirname(file), { recursive: true });
-    writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
-  }
-  return readFileSync(file, 'utf8').trim();
-}
-
+const cluster = process.argv.includes('--cluster');
+const withPgBouncer = cluster && process.argv.includes('--pgbouncer');
 ensureDependencies();
+if (cluster) ensureDebianPackage('/usr/sbin/nginx', 'nginx');
+if (withPgBouncer) ensureDebianPackage('/usr/sbin/pgbouncer', 'pgbouncer');
 startDatabase();
 
 console.log('Building the server and the app (production)…');
@@ -35,6 +30,8 @@ const env = {
   LAMPLIGHT_DEV_MAIL_DIR: process.env.LAMPLIGHT_DEV_MAIL_DIR ?? path.join(root, '.data', 'mail'),
   LAMPLIGHT_DEV_SMTP_PORT: smtpPort,
   SMTP_URL: process.env.SMTP_URL ?? `smtp://127.0.0.1:${smtpPort}`,
+  // Links in e-mails point at nginx, not at one instance.
+  ...(cluster ? { LAMPLIGHT_PUBLIC_URL: process.env.LAMPLIGHT_PUBLIC_URL ?? `http://${process.env.LAMPLIGHT_CLUSTER_LISTEN ?? '127.0.0.1:8080'}` } : {}),
 };
 // With no catalogues configured, the server asks the local one (LAMPLIGHT_LOCAL_CATALOGUE_PORT).
 const cataloguePort = process.env.LAMPLIGHT_LOCAL_CATALOGUE_PORT ?? '41500';
@@ -50,7 +47,8 @@ const catalogue = process.env.LAMPLIGHT_CATALOGUE_URLS
   ? null
   : spawn('node', ['dist/node/sync-server/src/local-catalogue/main.js'], { cwd: root, stdio: 'inherit', env: { ...env, LAMPLIGHT_LOCAL_CATALOGUE_PORT: cataloguePort } });
 if (catalogue) children.push(catalogue);
-const server = spawn('node', ['dist/node/sync-server/src/main.js'], { cwd: root, stdio: 'inherit', env });
+const serve = cluster ? ['dist/node/scripts/ops/run-cluster.js', ...(withPgBouncer ? ['--pgbouncer'] : [])] : ['dist/node/sync-server/src/main.js'];
+const server = spawn('node', serve, { cwd: root, stdio: 'inherit', env });
 children.push(server);
 
 // Ctrl-C reaches the children too (same process group); wait for the server to close cleanly.

@@ -4,24 +4,17 @@ import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 
-import { bin, databaseUrl, ensureDependencies, run, runStatus, startDatabase } from './lib.mjs';
+import { bin, databaseUrl, ensureDebianPackage, ensureDependencies, run, runStatus, startDatabase } from './lib.mjs';
 
 const TEST_DB = 'lamplight_test';
 const CHROMIUM = '/usr/bin/chromium';
 
-function ensureChromium() {
-  if (existsSync(CHROMIUM)) return;
-  if (process.getuid?.() !== 0) {
-    throw new Error(`${CHROMIUM} is missing. Install Debian's Chromium: sudo apt-get install -y chromium`);
-  }
-  console.log("Installing Debian's chromium (apt-get)…");
-  run('apt-get', ['update', '-qq']);
-  run('apt-get', ['install', '-y', '-qq', 'chromium'], { env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
-}
-
 const started = Date.now();
 ensureDependencies();
-ensureChromium();
+ensureDebianPackage(CHROMIUM, 'chromium');
+// The cluster and PgBouncer server specs run Debian's nginx and pgbouncer as our own processes.
+ensureDebianPackage('/usr/sbin/nginx', 'nginx');
+ensureDebianPackage('/usr/sbin/pgbouncer', 'pgbouncer');
 startDatabase();
 run('bash', ['scripts/db.sh', 'fresh-db', TEST_DB]);
 

@@ -8,16 +8,8 @@ import { startTcpProxy } from '../support/tcp-proxy';
 import { testDatabaseUrl } from '../support/test-database';
 import { createTestApp, testConfig } from '../support/test-server';
 
-describe('GET /api/health', () => {
-  it('When PostgreSQL answers, then it reports ok for the server and the database', async () => {
-    const app = await createTestApp();
-
-    const res = await request(app).get('/api/health').expect(200);
-
-    expect(res.body).toEqual({ status: 'ok', db: 'ok' });
-  });
-
-  it('When PostgreSQL becomes unreachable, then it answers 503 with db: down', async () => {
+describe('GET /api/ready', () => {
+  it('When PostgreSQL becomes unreachable, then it answers 503 with db: down while /api/health stays 200', async () => {
     const target = new URL(testDatabaseUrl());
     const proxy = await startTcpProxy(target.hostname, Number(target.port));
     const viaProxy = new URL(target);
@@ -29,12 +21,13 @@ describe('GET /api/health', () => {
     const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
     const app = createApp({ config, dataSource, mailer });
     try {
-      await request(app).get('/api/health').expect(200);
+      await request(app).get('/api/ready').expect(200);
 
       await proxy.cut();
-      const res = await request(app).get('/api/health').expect(503);
+      const res = await request(app).get('/api/ready').expect(503);
 
-      expect(res.body).toEqual({ status: 'degraded', db: 'down' });
+      expect(res.body).toEqual({ status: 'not_ready', db: 'down', migrations: 'unknown' });
+      await request(app).get('/api/health').expect(200);
     } finally {
       mailer.close();
       await dataSource.destroy().catch(() => undefined);

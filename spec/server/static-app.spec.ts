@@ -41,4 +41,15 @@ describe('Serving the built app', () => {
 
     expect(res.body.error.code).toBe('not_found');
   });
+
+  it('When a missing file with an extension is asked for, then it is a 404, not the app page', async () => {
+    const app = await createTestApp({ LAMPLIGHT_APP_DIR: appDir });
+
+    const res = await request(app).get('/favicon-missing.png').expect(404);
+
+    expect(res.text).not.toContain('<title>Lamplight</title>');
+    expect((await request(app).get('/assets/old-bundle-ZZZZZZZZ.js').expect(404)).text).toBe('Not found');
+    // Client routes (no extension) still get the app.
+    expect((await request(app).get('/goals/2026').expect(200)).text).toContain('<title>Lamplight</title>');
+  });
 });

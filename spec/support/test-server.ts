@@ -40,6 +40,7 @@ export async function testConfig(overrides: Record<string, string> = {}): Promis
     LAMPLIGHT_DEV_MAIL_DIR: dir,
     LAMPLIGHT_PUBLIC_URL: 'http://127.0.0.1:8080',
     NODE_ENV: 'test',
+    LAMPLIGHT_LOG_LEVEL: process.env['LAMPLIGHT_LOG_LEVEL'] ?? 'silent',
     ...overrides,
   });
 }

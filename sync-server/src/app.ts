@@ -1,4 +1,5 @@
 import express, { type Express } from 'express';
+import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 
 import type { ServerConfig } from './config';
@@ -18,25 +19,32 @@ import { Catalogue } from './domain/catalogue/catalogue';
 import { SruProvider } from './domain/catalogue/sru-provider';
 import { CatalogueCache } from './data-access/catalogue-cache';
 import { PostgresAttemptStore } from './data-access/attempt-store';
-import { SyncStore } from './data-access/sync-store';
 import { UploadStore } from './data-access/upload-store';
 import { healthRoutes } from './entry-points/health.routes';
 import { requireAdmin, requireAuth } from './entry-points/require-auth';
 import { attemptLimiter, securityHeaders } from './entry-points/security';
 import { staticApp } from './entry-points/static-app';
+import { metricsRoutes } from './entry-points/metrics.routes';
+import { robotsTxt } from './entry-points/robots';
 import { apiNotFound, errorHandler } from './errors';
+import { createLogger } from './observability/logger';
+import { MeasuredSyncStore } from './observability/measured-sync-store';
+import { trackPool } from './observability/metrics';
+import { requestLog } from './observability/request-log';
 
 export interface AppDependencies {
   readonly config: ServerConfig;
   readonly dataSource: DataSource;
   readonly mailer: Mailer;
+  /** The process's logger (main.ts makes one); a new one at `config.logLevel` otherwise. */
+  readonly logger?: Logger;
 }
 
 /**
  * Builds the Express app without listening, so specs can run it in-process. CORS stays closed:
  * the app and the API share one origin, so no Access-Control-* headers are ever sent.
  */
-export function createApp({ config, dataSource, mailer }: AppDependencies): Express {
+export function createApp({ config, dataSource, mailer, logger = createLogger(config.logLevel) }: AppDependencies): Express {
   const sessions = new DeviceSessions(dataSource, config.jwtSecret);
   const accounts = new Accounts(dataSource, config, sessions, mailer);
   const resets = new PasswordResets(dataSource, config, sessions, mailer);
@@ -44,11 +52,18 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
 
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // Only these proxies' X-Forwarded-For is believed, so attempt limits count real client addresses.
+  app.set('trust proxy', config.trustProxy.length > 0 ? [...config.trustProxy] : false);
+  trackPool(dataSource);
+  app.use(requestLog(logger));
   app.use(securityHeaders());
 
+  app.use(metricsRoutes(dataSource, config.metricsToken));
+  app.get('/robots.txt', robotsTxt);
   app.use('/api', express.json({ limit: '64kb' }));
-  app.use('/api/health', healthRoutes(dataSource));
+  const probes = healthRoutes(dataSource);
+  app.use('/api/health', probes.health);
+  app.use('/api/ready', probes.ready);
   app.use(
     '/api/auth',
     authRoutes({ accounts, sessions, resets, attemptLimiter: attemptLimiter(config.authRateLimit, new PostgresAttemptStore(dataSource)), requireAuth: authenticated }),
@@ -56,7 +71,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
-  app.use('/api/sync', syncRoutes(new SyncStore(dataSource)));
+  app.use('/api/sync', syncRoutes(new MeasuredSyncStore(dataSource, { namedStatements: !config.dbTransactionPooling })));
   app.use('/api/uploads', uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
   app.use(
     '/api/catalogue',

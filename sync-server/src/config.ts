@@ -2,6 +2,8 @@ import path from 'node:path';
 
 import * as z from 'zod';
 
+import { LOG_LEVELS, type LogLevel } from './observability/logger';
+
 /** Settings the server reads from the environment, validated once at start-up (fail fast). */
 export interface ServerConfig {
   readonly host: string;
@@ -32,6 +34,14 @@ export interface ServerConfig {
   readonly catalogueTimeoutMs: number;
   /** Catalogue look-ups allowed per reader per minute. */
   readonly catalogueRateLimit: number;
+  /** Proxies whose X-Forwarded-For is believed (Express `trust proxy`); empty: none. */
+  readonly trustProxy: readonly string[];
+  /** Level of the JSON request and server log on stdout. */
+  readonly logLevel: LogLevel;
+  /** Bearer token that opens `GET /metrics` from anywhere; without it, loopback only. */
+  readonly metricsToken: string | null;
+  /** DATABASE_URL goes through a transaction-mode pooler (PgBouncer): no named prepared statements. */
+  readonly dbTransactionPooling: boolean;
 }
 
 /** The local catalogue that `npm start` runs (sync-server/src/local-catalogue/). */
@@ -72,6 +82,14 @@ const environmentSchema = z
       .pipe(z.array(z.url({ protocol: /^https?$/, error: 'each catalogue must be an http:// or https:// URL' }))),
     LAMPLIGHT_CATALOGUE_TIMEOUT_MS: z.coerce.number().int().min(100).max(30_000).default(3000),
     LAMPLIGHT_CATALOGUE_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
+    // Loopback by default, as before; the hardening work makes this an explicit list of proxies.
+    LAMPLIGHT_TRUST_PROXY: z
+      .string()
+      .default('loopback')
+      .transform((value) => value.split(',').map((entry) => entry.trim()).filter((entry) => entry !== '')),
+    LAMPLIGHT_LOG_LEVEL: z.enum(LOG_LEVELS, { error: `must be one of ${LOG_LEVELS.join(', ')}` }).default('info'),
+    LAMPLIGHT_METRICS_TOKEN: z.string().min(32, 'LAMPLIGHT_METRICS_TOKEN must be at least 32 characters').optional(),
+    LAMPLIGHT_DB_TRANSACTION_POOLING: z.enum(['true', 'false'], { error: 'must be true or false' }).default('false'),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
@@ -109,5 +127,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     catalogueUrls: values.LAMPLIGHT_CATALOGUE_URLS,
     catalogueTimeoutMs: values.LAMPLIGHT_CATALOGUE_TIMEOUT_MS,
     catalogueRateLimit: values.LAMPLIGHT_CATALOGUE_RATE_LIMIT,
+    trustProxy: values.LAMPLIGHT_TRUST_PROXY,
+    logLevel: values.LAMPLIGHT_LOG_LEVEL,
+    metricsToken: values.LAMPLIGHT_METRICS_TOKEN ?? null,
+    dbTransactionPooling: values.LAMPLIGHT_DB_TRANSACTION_POOLING === 'true',
   };
 }

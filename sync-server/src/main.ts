@@ -6,10 +6,12 @@ import { createDataSource } from './data-access/data-source';
 import { migrate } from './data-access/migrate';
 import { User } from './data-access/entities/user.entity';
 import { createSmtpMailer } from './domain/mailer';
+import { createLogger } from './observability/logger';
 
 /** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
 async function main(): Promise<void> {
   const config = loadConfig();
+  const logger = createLogger(config.logLevel);
   const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
   await migrate(dataSource);
@@ -18,14 +20,16 @@ async function main(): Promise<void> {
   }
 
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
-  const app = createApp({ config, dataSource, mailer });
+  const app = createApp({ config, dataSource, mailer, logger });
   const server: Server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
-    console.log(`Lamplight is running at http://${config.host}:${port}/`);
+    // Said at info even when the log level is higher: scripts starting instances wait for it.
+    const announce = config.logLevel === 'silent' ? logger : logger.child({}, { level: 'info' });
+    announce.info({ port }, `Lamplight is running at http://${config.host}:${port}/`);
   });
   server.on('error', (err) => {
-    console.error(`Could not listen on ${config.host}:${config.port}: ${err.message}`);
+    logger.fatal(`Could not listen on ${config.host}:${config.port}: ${err.message}`);
     process.exit(1);
   });
 
@@ -33,7 +37,7 @@ async function main(): Promise<void> {
   const stop = (signal: string) => {
     if (stopping) return;
     stopping = true;
-    console.log(`\n${signal}: stopping Lamplight…`);
+    logger.info(`${signal}: stopping Lamplight`);
     server.close(() => {
       mailer.close();
       void dataSource.destroy().finally(() => process.exit(0));

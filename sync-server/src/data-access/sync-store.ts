@@ -51,7 +51,15 @@ export interface PulledPage {
 
 /** The server's side of sync: merging pushed changes and reading them back, per user. */
 export class SyncStore {
-  constructor(private readonly dataSource: DataSource) {}
+  /**
+   * `namedStatements: false` sends merge statements unnamed (a parse on every push), for a
+   * transaction-mode pooler such as PgBouncer, where the next transaction may run on a server
+   * connection that never saw the prepared statement.
+   */
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly options: { readonly namedStatements?: boolean } = {},
+  ) {}
 
   /**
    * Applies a validated batch in one transaction and answers how many changes took effect.
@@ -84,7 +92,8 @@ export class SyncStore {
         // In the schema's order, so the same fields always make the same statement.
         const fields = Object.keys(collectionSpec(collection)!.fields).filter((field) => touched.has(field));
         const statement = mergeStatement(collection, fields);
-        const result = await client.query({ ...statement, values: [userId, JSON.stringify([...rows.values()])] });
+        const text = this.options.namedStatements === false ? { text: statement.text } : statement;
+        const result = await client.query({ ...text, values: [userId, JSON.stringify([...rows.values()])] });
         won += Number(result.rows[0]?.['won'] ?? 0);
       }
       return won;

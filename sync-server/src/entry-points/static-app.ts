@@ -6,8 +6,13 @@ import express, { Router } from 'express';
 /**
  * Serves the built Angular app from the same origin as the API. Hashed bundles are cached for a
  * year; `index.html` and the service worker files are always revalidated so updates are seen.
- * Any other non-API path falls back to `index.html` for the client router.
+ * Any other non-API path falls back to `index.html` for the client router, except a path that
+ * names a file (it has an extension): a missing file is a 404, not the app's page, so crawlers,
+ * browsers and auditors see what is really missing.
  */
+/** The last path segment has an extension (`main-XYZ.js`, `favicon.ico`); client routes never do. */
+const FILE_NAME = /\/[^/]*\.[A-Za-z0-9]{1,8}$/;
+
 export function staticApp(appDir: string): Router {
   const root = path.resolve(appDir);
   const indexFile = path.join(root, 'index.html');
@@ -30,6 +35,10 @@ export function staticApp(appDir: string): Router {
   );
   router.get('/{*splat}', (req, res, next) => {
     if (req.path.startsWith('/api/') || req.path === '/api') return next();
+    if (FILE_NAME.test(req.path)) {
+      res.status(404).type('text/plain').send('Not found');
+      return;
+    }
     res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(indexFile);
   });
