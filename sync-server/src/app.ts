@@ -18,7 +18,7 @@ import { SyncStore } from './data-access/sync-store';
 import { UploadStore } from './data-access/upload-store';
 import { healthRoutes } from './entry-points/health.routes';
 import { requireAdmin, requireAuth } from './entry-points/require-auth';
-import { attemptLimiter, securityHeaders } from './entry-points/security';
+import { attemptLimiter, noStore, readerLimiter, securityHeaders } from './entry-points/security';
 import { staticApp } from './entry-points/static-app';
 import { apiNotFound, errorHandler } from './errors';
 
@@ -40,9 +40,11 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
 
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For is believed only from the proxies named in LAMPLIGHT_TRUST_PROXY (none by default).
+  app.set('trust proxy', config.trustProxy.length > 0 ? [...config.trustProxy] : false);
   app.use(securityHeaders());
 
+  app.use('/api', noStore);
   app.use('/api', express.json({ limit: '64kb' }));
   app.use('/api/health', healthRoutes(dataSource));
   app.use(
@@ -52,8 +54,8 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
-  app.use('/api/sync', syncRoutes(new SyncStore(dataSource)));
-  app.use('/api/uploads', uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
+  app.use('/api/sync', readerLimiter('sync', config.syncRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'sync')), syncRoutes(new SyncStore(dataSource)));
+  app.use('/api/uploads', readerLimiter('upload', config.uploadRateLimit, 10 * 60_000, new PostgresAttemptStore(dataSource, 'upload'), ['POST']), uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);
 

@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import path from 'node:path';
 
 import * as z from 'zod';
@@ -26,6 +27,30 @@ export interface ServerConfig {
   readonly authRateLimit: number;
   /** Largest cover image accepted by `POST /api/uploads`, in bytes. */
   readonly uploadMaxBytes: number;
+  /** Cover storage per reader, in bytes (the sum of the covers they own). */
+  readonly uploadQuotaBytes: number;
+  /** Proxies whose X-Forwarded-For is believed (Express `trust proxy`); empty: none. */
+  readonly trustProxy: readonly string[];
+  /** Threads that hash passwords, and sign-ins allowed to wait for one before a 503. */
+  readonly hashThreads: number;
+  readonly hashQueue: number;
+  /** Sync requests per reader per minute, and uploads per reader per 10 minutes. */
+  readonly syncRateLimit: number;
+  readonly uploadRateLimit: number;
+}
+
+/** Generous for covers of a few hundred KB each: several thousand books. */
+const DEFAULT_UPLOAD_QUOTA_BYTES = 200 * 1024 * 1024;
+
+/** `trust proxy` accepts these names, IP addresses and CIDR ranges (proxy-addr). */
+const PROXY_NAMES = new Set(['loopback', 'linklocal', 'uniquelocal']);
+function isProxyEntry(entry: string): boolean {
+  if (PROXY_NAMES.has(entry)) return true;
+  const [address, bits, ...rest] = entry.split('/');
+  const version = isIP(address ?? '');
+  if (version === 0 || rest.length > 0) return false;
+  if (bits === undefined) return true;
+  return /^\d{1,3}$/.test(bits) && Number(bits) <= (version === 4 ? 32 : 128);
 }
 
 /** Covers are resized on the device to at most 600 px tall, so 2 MiB leaves plenty of room. */
@@ -56,6 +81,16 @@ const environmentSchema = z
       .min(1024, 'must be at least 1024 bytes')
       .max(16 * 1024 * 1024, 'must be at most 16 MiB (16777216 bytes)')
       .default(DEFAULT_UPLOAD_MAX_BYTES),
+    LAMPLIGHT_UPLOAD_QUOTA_BYTES: z.coerce.number().int().min(1024).default(DEFAULT_UPLOAD_QUOTA_BYTES),
+    LAMPLIGHT_TRUST_PROXY: z
+      .string()
+      .default('')
+      .transform((value) => value.split(',').map((entry) => entry.trim()).filter((entry) => entry !== ''))
+      .refine((entries) => entries.every(isProxyEntry), 'must be a comma-separated list of IP addresses, CIDR ranges or loopback/linklocal/uniquelocal'),
+    LAMPLIGHT_HASH_THREADS: z.coerce.number().int().min(1).max(16).default(1),
+    LAMPLIGHT_HASH_QUEUE: z.coerce.number().int().min(1).max(10_000).default(32),
+    LAMPLIGHT_SYNC_RATE_LIMIT: z.coerce.number().int().min(1).default(600),
+    LAMPLIGHT_UPLOAD_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
@@ -90,5 +125,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     devMailDir: production || !values.LAMPLIGHT_DEV_MAIL_DIR ? null : path.resolve(values.LAMPLIGHT_DEV_MAIL_DIR),
     authRateLimit: values.LAMPLIGHT_AUTH_RATE_LIMIT,
     uploadMaxBytes: values.LAMPLIGHT_UPLOAD_MAX_BYTES,
+    uploadQuotaBytes: values.LAMPLIGHT_UPLOAD_QUOTA_BYTES,
+    trustProxy: values.LAMPLIGHT_TRUST_PROXY,
+    hashThreads: values.LAMPLIGHT_HASH_THREADS,
+    hashQueue: values.LAMPLIGHT_HASH_QUEUE,
+    syncRateLimit: values.LAMPLIGHT_SYNC_RATE_LIMIT,
+    uploadRateLimit: values.LAMPLIGHT_UPLOAD_RATE_LIMIT,
   };
 }

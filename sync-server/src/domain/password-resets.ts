@@ -39,7 +39,7 @@ export class PasswordResets {
 
   /** Sets the new password and signs the reader out everywhere. */
   async confirm(token: string, newPassword: string): Promise<void> {
-    const passwordHash = await hashPassword(newPassword, this.config.bcryptCost);
+    const passwordHash = await hashPassword(newPassword, this.config.bcryptCost, this.config);
     const done = await this.dataSource.transaction(async (manager) => {
       // Marking it used in the statement that finds it makes a second use impossible. (A CTE,
       // because TypeORM returns plain rows only for SELECT.)
