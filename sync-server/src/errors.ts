@@ -65,7 +65,8 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return;
   }
   const caller = res.locals['caller'] as { userId?: string } | undefined;
-  logServerError(err, { method: req.method, route: `${req.baseUrl}${(req.route as { path?: string } | undefined)?.path ?? ''}`, user: caller?.userId });
+  // The path holds ids only; the query string and body are never logged.
+  logServerError(err, { method: req.method, path: req.originalUrl.split('?')[0]!.slice(0, 200), user: caller?.userId });
   const body: ApiErrorBody = { error: { code: 'internal', message: 'Something went wrong on the server', details: null } };
   res.status(500).json(body);
 };

@@ -6,6 +6,7 @@ import { createDataSource } from './data-access/data-source';
 import { migrate } from './data-access/migrate';
 import { User } from './data-access/entities/user.entity';
 import { createSmtpMailer } from './domain/mailer';
+import { closePasswordPools } from './domain/passwords';
 
 /** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
 async function main(): Promise<void> {
@@ -36,7 +37,7 @@ async function main(): Promise<void> {
     console.log(`\n${signal}: stopping Lamplight…`);
     server.close(() => {
       mailer.close();
-      void dataSource.destroy().finally(() => process.exit(0));
+      void Promise.allSettled([dataSource.destroy(), closePasswordPools()]).finally(() => process.exit(0));
     });
     server.closeAllConnections();
   };
