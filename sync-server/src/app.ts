@@ -55,7 +55,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
   app.use('/api/sync', readerLimiter('sync', config.syncRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'sync')), syncRoutes(new SyncStore(dataSource)));
-  app.use('/api/uploads', readerLimiter('upload', config.uploadRateLimit, 10 * 60_000, new PostgresAttemptStore(dataSource, 'upload'), ['POST']), uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
+  app.use('/api/uploads', readerLimiter('upload', config.uploadRateLimit, 10 * 60_000, new PostgresAttemptStore(dataSource, 'upload'), ['POST']), uploadsRoutes(new Uploads(new UploadStore(dataSource), config.uploadQuotaBytes), config.uploadMaxBytes));
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);
 
