@@ -68,6 +68,14 @@ export const deleteAccountInput = z.object({
 
 export const resetRequestInput = z.object({ email });
 
+/** The signed token of an e-mail confirmation link (a compact JWS, RFC 7515 §7.1). */
+export const verifyEmailInput = z.object({
+  token: z
+    .string({ error: 'token is required' })
+    .max(2000, 'token is too long')
+    .regex(/^[A-Za-z0-9_-]+\.[A-Za-z0-9_-]+\.[A-Za-z0-9_-]+$/, 'token is malformed'),
+});
+
 export const resetConfirmInput = z
   .object({ token: z.string({ error: 'The link is incomplete' }).min(20).max(200), newPassword })
   .superRefine(refinePassword('newPassword'));

@@ -69,7 +69,7 @@ describe('POST /api/auth/register', () => {
     await request(app).post('/api/auth/login').send({ email, password: `${prefix}one` }).expect(200);
   });
 
-  it('When an account registers, then a welcome e-mail reaches its address over SMTP', async () => {
+  it('When an account registers, then a welcome e-mail reaches its address over SMTP, without the chosen name', async () => {
     const { inbox } = await testInbox();
     const email = uniqueEmail('welcome');
 
@@ -77,7 +77,8 @@ describe('POST /api/auth/register', () => {
     const mail = await inbox.waitFor((m) => m.to.includes(email));
 
     expect(mail.subject).toBe('Welcome to Lamplight');
-    expect(mail.text).toContain('Hello Tove Lindqvist');
+    expect(mail.text).not.toContain('Tove Lindqvist');
+    expect(mail.text).toContain('/verify-email#token=');
     expect(mail.text).toContain('never share your address');
   });
 

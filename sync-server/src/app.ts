@@ -5,6 +5,7 @@ import type { ServerConfig } from './config';
 import { Accounts } from './domain/accounts';
 import { AdminUsers } from './domain/admin-users';
 import { DeviceSessions } from './domain/device-sessions';
+import { EmailVerification } from './domain/email-verification';
 import type { Mailer } from './domain/mailer';
 import { PasswordResets } from './domain/password-resets';
 import { Uploads } from './domain/uploads';
@@ -34,7 +35,8 @@ export interface AppDependencies {
  */
 export function createApp({ config, dataSource, mailer }: AppDependencies): Express {
   const sessions = new DeviceSessions(dataSource, config.jwtSecret);
-  const accounts = new Accounts(dataSource, config, sessions, mailer);
+  const verification = new EmailVerification(dataSource, config, mailer);
+  const accounts = new Accounts(dataSource, config, sessions, mailer, verification);
   const resets = new PasswordResets(dataSource, config, sessions, mailer);
   const authenticated = requireAuth(dataSource, config.jwtSecret);
 
@@ -49,7 +51,16 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.use('/api/health', healthRoutes(dataSource));
   app.use(
     '/api/auth',
-    authRoutes({ accounts, sessions, resets, attemptLimiter: attemptLimiter(config.authRateLimit, new PostgresAttemptStore(dataSource)), requireAuth: authenticated }),
+    authRoutes({
+      accounts,
+      sessions,
+      resets,
+      verification,
+      attemptLimiter: attemptLimiter(config.authRateLimit, new PostgresAttemptStore(dataSource)),
+      // Three fresh confirmation links an hour per reader: enough for a lost mail, useless for spam.
+      verifyMailLimiter: readerLimiter('confirmation e-mail', 3, 3600_000, new PostgresAttemptStore(dataSource, 'verify-mail')),
+      requireAuth: authenticated,
+    }),
   );
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);

@@ -9,6 +9,7 @@ import { PasswordFailures } from '../data-access/password-failures';
 import { ownedUploadIds, removeOrphanedUploads } from '../data-access/upload-store';
 import { welcomeMail } from './account-mail';
 import type { DeviceSessions } from './device-sessions';
+import type { EmailVerification } from './email-verification';
 import type { Mailer } from './mailer';
 import { hashPassword, verifyPassword } from './passwords';
 
@@ -43,6 +44,7 @@ export class Accounts {
     private readonly config: ServerConfig,
     private readonly sessions: DeviceSessions,
     private readonly mailer: Mailer,
+    private readonly verification: EmailVerification,
   ) {
     this.failures = new PasswordFailures(dataSource);
   }
@@ -83,7 +85,8 @@ export class Accounts {
     }
     const tokens = await this.sessions.start(user, userAgent, input.deviceName);
     // The welcome note must not hold up or fail the registration.
-    this.mailer.send(welcomeMail(user.email, user.displayName, this.config.publicUrl)).catch((err: unknown) => {
+    const welcome = this.verification.link(user).then((link) => this.mailer.send(welcomeMail(user.email, link, this.config.publicUrl)));
+    welcome.catch((err: unknown) => {
       console.warn(`welcome e-mail to user ${user.id} not sent: ${describeError(err)}`);
     });
     return { user: publicUser(user), ...tokens };

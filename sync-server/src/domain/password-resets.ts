@@ -34,7 +34,8 @@ export class PasswordResets {
     });
     // In the fragment, the token is never sent to a server in a request line or a Referer.
     const link = `${this.config.publicUrl}/reset-password#token=${token}`;
-    await this.mailer.send(passwordResetMail(user.email, user.displayName, link));
+    // The display name is someone's own words: only to an address its owner has confirmed.
+    await this.mailer.send(passwordResetMail(user.email, user.emailVerifiedAt ? user.displayName : null, link));
   }
 
   /** Sets the new password and signs the reader out everywhere. */
