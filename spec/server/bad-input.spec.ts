@@ -143,10 +143,11 @@ describe('Bad ids and bodies', () => {
             }
             return withJson.status < 500 && withRaw.status < 500;
           }),
-          { numRuns: 12 },
+          { numRuns: 8 },
         );
       }
       expect(fifth).toEqual([]);
-    });
+      // Bounded: about 30 routes × 8 runs × 2 requests; seconds alone, longer on a busy machine.
+    }, 180_000);
   });
 });

@@ -1,7 +1,8 @@
 import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 
+import { sentRequest } from '../http/testing/sent-request';
 import { Auth } from './auth';
 import { SESSION_STORAGE_KEY, type StoredSession } from './stored-session';
 import { forgetSession, rememberSession, tokenExpiringIn } from './testing/session-fixtures';
@@ -17,24 +18,10 @@ describe('Auth token rotation', () => {
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
   const stored = () => JSON.parse(localStorage.getItem(SESSION_STORAGE_KEY) ?? 'null') as StoredSession | null;
 
-  /** Refresh requests sent so far (the Web Lock and storage take a few turns). */
-  async function refreshes(count: number): Promise<TestRequest[]> {
-    for (let i = 0; i < 100; i++) {
-      const found = backend.match('/api/auth/refresh');
-      if (found.length >= count) return found;
-      for (const request of found) pending.push(request);
-      await turn();
-    }
-    throw new Error(`expected ${count} refresh request(s)`);
-  }
-  let pending: TestRequest[] = [];
-  async function nextRefresh(): Promise<TestRequest> {
-    if (pending.length === 0) pending = await refreshes(1);
-    return pending.shift()!;
-  }
+  /** The next refresh request once sent (the Web Lock and storage take a few turns). */
+  const nextRefresh = () => sentRequest(backend, '/api/auth/refresh');
 
   beforeEach(() => {
-    pending = [];
     TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting()] });
     backend = TestBed.inject(HttpTestingController);
   });
@@ -95,8 +82,7 @@ describe('Auth token rotation', () => {
 
     const a = tabA.freshAccessToken();
     const b = tabB.freshAccessToken();
-    const [only] = await refreshes(1);
-    only!.flush(pair);
+    (await nextRefresh()).flush(pair);
 
     expect(await a).toBe(pair.accessToken);
     expect(await b).toBe(pair.accessToken);

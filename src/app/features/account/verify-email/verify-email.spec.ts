@@ -1,23 +1,17 @@
 import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 
 import { forgetSession, rememberSession } from '../../../core/auth/testing/session-fixtures';
+import { sentRequest } from '../../../core/http/testing/sent-request';
 import { VerifyEmail } from './verify-email';
 
 describe('VerifyEmail', () => {
   let backend: HttpTestingController;
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
 
-  async function sent(url: string): Promise<TestRequest> {
-    for (let i = 0; i < 100; i++) {
-      const [found] = backend.match(url);
-      if (found) return found;
-      await turn();
-    }
-    throw new Error(`no request to ${url} was sent`);
-  }
+  const sent = (url: string) => sentRequest(backend, url);
 
   function open(hash: string): HTMLElement {
     history.replaceState(null, '', `${location.pathname}${hash}`);
