@@ -62,6 +62,20 @@ describe('POST /api/uploads reads the image, not just its first bytes', () => {
     expect(res.body.error.details.file).toBe('it holds web-page markup');
   });
 
+  it('When HTML sits in a WebP metadata chunk (XMP), then it is refused', async () => {
+    // RFC 9649 §2.7: a chunk is a FourCC, a little-endian size, the data, and a pad byte if odd.
+    const xmp = Buffer.from(HTML.length % 2 ? `${HTML} ` : HTML, 'latin1');
+    const header = Buffer.alloc(8);
+    header.write('XMP ', 0, 'latin1');
+    header.writeUInt32LE(xmp.length, 4);
+    const withXmp = Buffer.concat([WEBP, header, xmp]);
+    withXmp.writeUInt32LE(withXmp.length - 8, 4);
+
+    const res = await upload(app, token, withXmp, 'cover.webp').expect(400);
+
+    expect(res.body.error.details.file).toBe('it holds web-page markup');
+  });
+
   it('When a PNG chunk is damaged, then its CRC gives it away and it is refused', async () => {
     const damaged = png();
     damaged[damaged.length - 20]! ^= 0xff; // a byte of the IDAT data

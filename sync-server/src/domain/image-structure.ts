@@ -7,8 +7,9 @@ import type { UploadMediaType } from '../../../shared/api/upload';
  * null. The point is that nothing hides in or after the image: every PNG chunk has its CRC and
  * the file ends at IEND; a JPEG's segments are whole and the file ends at EOI; a WebP's RIFF
  * size is the file's and its chunks fill it exactly. A file built to be both an image and an
- * HTML page (a polyglot) needs bytes outside that structure or markup inside a text chunk;
- * `hasMarkup` catches the latter.
+ * HTML page (a polyglot) needs bytes outside that structure or markup inside a metadata chunk
+ * (a PNG text chunk, a JPEG comment, a WebP XMP chunk); the walkers refuse both. Compressed pixel
+ * data is not searched: it is never read as text, and random bytes would sometimes match.
  */
 export function structureProblem(mediaType: UploadMediaType, bytes: Buffer): string | null {
   if (mediaType === 'image/png') return pngProblem(bytes);
@@ -16,11 +17,10 @@ export function structureProblem(mediaType: UploadMediaType, bytes: Buffer): str
   return webpProblem(bytes);
 }
 
-/** HTML that a browser would act on, anywhere in the bytes (XMP metadata's own tags do not match). */
+/** HTML that a browser would act on (XMP metadata's own tags, such as `<x:xmpmeta`, do not match). */
 const MARKUP = /<(?:script|html|head|body|iframe|frame|svg|object|embed|img|style|meta|link|form|title|!doctype)[\s>/]/i;
-export function hasMarkup(bytes: Buffer): boolean {
-  return MARKUP.test(bytes.toString('latin1'));
-}
+export const MARKUP_PROBLEM = 'it holds web-page markup';
+const hasMarkup = (bytes: Buffer) => MARKUP.test(bytes.toString('latin1'));
 
 /** W3C PNG Specification (Third Edition) §5.2–5.6: signature, then length/type/data/CRC chunks, IHDR first, IEND last. */
 function pngProblem(bytes: Buffer): string | null {
@@ -38,6 +38,7 @@ function pngProblem(bytes: Buffer): string | null {
     if (first && (type !== 'IHDR' || length !== 13)) return 'the PNG does not start with its header chunk';
     first = false;
     if (type === 'IDAT') sawImageData = true;
+    else if (hasMarkup(bytes.subarray(offset + 8, offset + 8 + length))) return MARKUP_PROBLEM;
     offset = end;
     if (type === 'IEND') {
       if (!sawImageData) return 'the PNG has no image data';
@@ -66,6 +67,7 @@ function jpegProblem(bytes: Buffer): string | null {
     const length = bytes.readUInt16BE(offset);
     if (length < 2 || offset + length > bytes.length) return 'a JPEG segment runs past the end of the file';
     if (marker >= 0xc0 && marker <= 0xcf && marker !== 0xc4 && marker !== 0xc8 && marker !== 0xcc) sawFrame = true;
+    if (hasMarkup(bytes.subarray(offset + 2, offset + length))) return MARKUP_PROBLEM;
     offset += length;
     if (marker === 0xda) {
       sawScan = true;
@@ -108,6 +110,8 @@ function webpProblem(bytes: Buffer): string | null {
       sawImage = true;
     }
     if (type === 'ANMF') sawImage = true;
+    const pixels = type === 'VP8 ' || type === 'VP8L' || type === 'ALPH' || type === 'ANMF';
+    if (!pixels && hasMarkup(bytes.subarray(data, data + size))) return MARKUP_PROBLEM;
     offset = end;
   }
   return sawImage ? null : 'the WebP has no image data';

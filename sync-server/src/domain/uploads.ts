@@ -6,7 +6,7 @@ import { imageSize } from 'image-size';
 import { UPLOAD_MEDIA_TYPES, type UploadMediaType, type UploadView } from '../../../shared/api/upload';
 import type { StoredUpload, UploadStore } from '../data-access/upload-store';
 import { AppError } from '../errors';
-import { hasMarkup, structureProblem } from './image-structure';
+import { structureProblem } from './image-structure';
 
 /**
  * The largest cover accepted, either way round: far beyond what a cover needs (the app resizes
@@ -81,5 +81,4 @@ function checkImage(mediaType: UploadMediaType, bytes: Buffer): void {
   }
   const problem = structureProblem(mediaType, bytes);
   if (problem) throw refused(problem);
-  if (hasMarkup(bytes)) throw refused('it holds web-page markup');
 }
