@@ -48,6 +48,25 @@ describe('Server logs hold codes and ids, never values', () => {
   });
 });
 
+describe('Security events in the log', () => {
+  it('When a refresh token is presented again after the grace window, then the revocation is logged with ids, not the token', async () => {
+    const app = await createTestApp();
+    const signedIn = await registerReader(app);
+    await request(app).post('/api/auth/refresh').send({ refreshToken: signedIn.refreshToken }).expect(200);
+    await (await testDataSource()).query(`UPDATE refresh_tokens SET used_at = used_at - interval '1 hour' WHERE used_at IS NOT NULL AND session_id IN (SELECT id FROM device_sessions WHERE user_id = $1)`, [signedIn.user.id]);
+    const logged: string[] = [];
+    spyOn(console, 'warn').and.callFake((...args: unknown[]) => logged.push(args.map(String).join(' ')));
+
+    await request(app).post('/api/auth/refresh').send({ refreshToken: signedIn.refreshToken }).expect(401);
+
+    expect(logged.length).toBe(1);
+    expect(logged[0]).toContain('device session revoked');
+    expect(logged[0]).toContain(signedIn.user.id);
+    expect(logged[0]).not.toContain(signedIn.refreshToken);
+    expect(logged[0]).not.toContain(signedIn.user.email);
+  });
+});
+
 describe('Cache-Control on private answers', () => {
   it('When tokens, the account or a pull page are answered, then they say no-store (RFC 9111 §5.2.2.5)', async () => {
     const app = await createTestApp();

@@ -25,6 +25,17 @@ export function logServerError(err: unknown, context: Record<string, string | un
   console.error(`server error${ids ? ` [${ids}]` : ''}: ${describeError(err)}`);
 }
 
+/**
+ * A security event worth an operator's eye (OWASP Logging Cheat Sheet: authentication and
+ * session-management failures), named and with ids only: never an address, password or token.
+ */
+export function logSecurityEvent(event: string, ids: Record<string, string | number | undefined> = {}): void {
+  const fields = Object.entries(ids)
+    .filter(([, value]) => value !== undefined)
+    .map(([key, value]) => `${key}=${value}`);
+  console.warn(`security: ${event}${fields.length > 0 ? ` [${fields.join(' ')}]` : ''}`);
+}
+
 interface DatabaseFields {
   readonly code: string;
   readonly table?: unknown;

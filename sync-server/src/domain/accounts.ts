@@ -3,7 +3,7 @@ import type { DataSource } from 'typeorm';
 import type { AccountUser, LoginInput, RegisterInput, SignedIn } from '../../../shared/account/account-input';
 import type { ServerConfig } from '../config';
 import { AppError } from '../errors';
-import { describeError } from '../safe-log';
+import { describeError, logSecurityEvent } from '../safe-log';
 import { User } from '../data-access/entities/user.entity';
 import { PasswordFailures } from '../data-access/password-failures';
 import { ownedUploadIds, removeOrphanedUploads } from '../data-access/upload-store';
@@ -58,8 +58,12 @@ export class Accounts {
     const wait = await this.failures.secondsToWait(key);
     if (wait > 0) throw tooManyWrongPasswords(wait);
     const right = await verifyPassword(password, hash, this.config);
-    if (right) await this.failures.succeed(key);
-    else await this.failures.fail(key);
+    if (right) {
+      await this.failures.succeed(key);
+    } else if ((await this.failures.fail(key)) > 0) {
+      // The e-mail is not logged: the user id when the key names one, else only that it was a sign-in.
+      logSecurityEvent('wrong passwords: backoff started', key.startsWith('user:') ? { user: key.slice(5) } : { for: 'sign-in' });
+    }
     return right;
   }
 

@@ -2,6 +2,7 @@ import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 
 import type { TokenPair } from '../../../shared/account/account-input';
 import { AppError } from '../errors';
+import { logSecurityEvent } from '../safe-log';
 import { DeviceSession } from '../data-access/entities/device-session.entity';
 import { RefreshToken } from '../data-access/entities/refresh-token.entity';
 import type { User } from '../data-access/entities/user.entity';
@@ -74,6 +75,7 @@ export class DeviceSessions {
           return { pair: await this.pairFor(session.id, user, successor, token.usedAt) };
         }
         await manager.update(DeviceSession, { id: session.id }, { revokedAt: new Date() });
+        logSecurityEvent('refresh token presented again; device session revoked', { user: user.id, session: session.id });
         return { error: 'reused' };
       }
       if (token.expiresAt.getTime() <= Date.now()) return { error: 'expired' };
