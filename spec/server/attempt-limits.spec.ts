@@ -1,7 +1,9 @@
+import { randomUUID } from 'node:crypto';
+
 import request from 'supertest';
 
 import { loadConfig } from '../../sync-server/src/config';
-import { FREE_FAILURES, MAX_WAIT_SECONDS, waitAfter } from '../../sync-server/src/data-access/password-failures';
+import { FREE_FAILURES, MAX_WAIT_SECONDS, PasswordFailures, waitAfter } from '../../sync-server/src/data-access/password-failures';
 import { GOOD_PASSWORD, bearer, registerReader, uniqueEmail } from '../support/accounts';
 import { testDataSource } from '../support/test-database';
 import { createTestApp } from '../support/test-server';
@@ -78,6 +80,21 @@ describe('Wrong passwords per account', () => {
     for (let i = 1; i <= FREE_FAILURES; i++) await request(app).post('/api/auth/login').send({ email, password: WRONG }).expect(401);
 
     await request(app).post('/api/auth/login').send({ email, password: WRONG }).expect(429);
+  });
+
+  it('When a day passes without a wrong password, then the count starts again and old rows are removed', async () => {
+    const failures = new PasswordFailures(await testDataSource());
+    const key = `spec:${randomUUID()}`;
+    for (let i = 1; i <= FREE_FAILURES; i++) await failures.fail(key);
+    expect(await failures.secondsToWait(key)).toBeGreaterThan(0);
+    const db = await testDataSource();
+    const before: { n: number }[] = await db.query('SELECT count(*)::int AS n FROM password_failures');
+    await db.query(`UPDATE password_failures SET updated_at = now() - interval '25 hours', locked_until = NULL`);
+
+    expect(await failures.fail(key)).toBe(0); // counted afresh: the first wrong password of a new day
+    const after: { n: number }[] = await db.query('SELECT count(*)::int AS n FROM password_failures');
+    expect(after[0]!.n).toBe(1);
+    expect(before[0]!.n).toBeGreaterThanOrEqual(1);
   });
 
   it('When a stolen access token guesses the current password, then password change and deletion are held back by user id', async () => {

@@ -37,7 +37,9 @@ export class PasswordFailures {
   /** Counts a wrong password and starts the wait it earns; answers that wait in seconds. */
   async fail(key: string): Promise<number> {
     const rows: { failures: number }[] = await this.dataSource.query(
-      `INSERT INTO password_failures AS f (key, failures, updated_at) VALUES ($1, 1, now())
+      // Rows forgotten a day ago go as new failures come, so guesses at many addresses do not pile up.
+      `WITH forgotten AS (DELETE FROM password_failures WHERE updated_at < now() - make_interval(secs => $2) AND key <> $1)
+       INSERT INTO password_failures AS f (key, failures, updated_at) VALUES ($1, 1, now())
        ON CONFLICT (key) DO UPDATE SET
          failures = CASE WHEN f.updated_at < now() - make_interval(secs => $2) THEN 1 ELSE f.failures + 1 END,
          updated_at = now()

@@ -15,6 +15,7 @@ export class Hardening1765411215000 implements MigrationInterface {
         locked_until timestamptz,
         updated_at timestamptz NOT NULL
       )`);
+    await queryRunner.query('CREATE INDEX password_failures_updated_idx ON password_failures (updated_at)');
     await queryRunner.query('ALTER TABLE users ADD COLUMN email_verified_at timestamptz');
     await queryRunner.query('ALTER TABLE refresh_tokens ADD COLUMN grace_used_at timestamptz');
   }
