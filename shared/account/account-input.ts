@@ -11,13 +11,22 @@ const email = z
   .toLowerCase()
   .pipe(z.email({ error: 'Enter an e-mail address like name@example.com' }).max(254, 'E-mail is too long'));
 
+/**
+ * Control characters and lone UTF-16 surrogates are not text a person types, and PostgreSQL
+ * refuses NUL in text (SQLSTATE 22021), so names with them are refused here, with a reason.
+ */
+const NOT_PLAIN_TEXT = /[\u0000-\u001f\u007f]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
+const PLAIN_TEXT_MESSAGE = 'Use letters, digits, spaces and punctuation only';
+const isPlainText = (value: string) => !NOT_PLAIN_TEXT.test(value);
+
 const displayName = z
   .string({ error: 'Name is required' })
   .trim()
   .min(1, 'Name is required')
-  .max(DISPLAY_NAME_MAX_LENGTH, `Use at most ${DISPLAY_NAME_MAX_LENGTH} characters`);
+  .max(DISPLAY_NAME_MAX_LENGTH, `Use at most ${DISPLAY_NAME_MAX_LENGTH} characters`)
+  .refine(isPlainText, PLAIN_TEXT_MESSAGE);
 
-const deviceName = z.string().trim().min(1).max(80).optional();
+const deviceName = z.string().trim().min(1).max(80).refine(isPlainText, PLAIN_TEXT_MESSAGE).optional();
 
 /** A new password, checked against the shared policy (NIST SP 800-63B-4). */
 const newPassword = z.string({ error: 'Password is required' });
@@ -59,12 +68,20 @@ export const deleteAccountInput = z.object({
 
 export const resetRequestInput = z.object({ email });
 
+/** The signed token of an e-mail confirmation link (a compact JWS, RFC 7515 §7.1). */
+export const verifyEmailInput = z.object({
+  token: z
+    .string({ error: 'token is required' })
+    .max(2000, 'token is too long')
+    .regex(/^[A-Za-z0-9_-]+\.[A-Za-z0-9_-]+\.[A-Za-z0-9_-]+$/, 'token is malformed'),
+});
+
 export const resetConfirmInput = z
   .object({ token: z.string({ error: 'The link is incomplete' }).min(20).max(200), newPassword })
   .superRefine(refinePassword('newPassword'));
 
 export const renameDeviceInput = z.object({
-  name: z.string({ error: 'Name is required' }).trim().min(1, 'Name is required').max(80, 'Use at most 80 characters'),
+  name: z.string({ error: 'Name is required' }).trim().min(1, 'Name is required').max(80, 'Use at most 80 characters').refine(isPlainText, PLAIN_TEXT_MESSAGE),
 });
 
 export const adminUserUpdateInput = z

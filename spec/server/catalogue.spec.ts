@@ -248,7 +248,7 @@ describe('/api/catalogue', () => {
       expect((await lookUp(busy.accessToken)).status).toBe(200);
       expect((await lookUp(busy.accessToken)).status).toBe(200);
       const refused = await lookUp(busy.accessToken);
-      expect([refused.status, refused.body.error.code]).toEqual([429, 'too_many_attempts']);
+      expect([refused.status, refused.body.error.code]).toEqual([429, 'too_many_requests']);
       expect((await lookUp(other.accessToken)).status).toBe(200);
     });
   });

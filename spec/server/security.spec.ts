@@ -37,11 +37,11 @@ describe('Security headers and limits', () => {
   });
 
   // Client addresses are from TEST-NET-2 and -3 (RFC 5737, reserved for documentation), sent as
-  // a proxy would (the app trusts X-Forwarded-For from loopback): every spec shares one database,
+  // a proxy would (these apps trust X-Forwarded-For from loopback): every spec shares one database,
   // so the counts must not be 127.0.0.1's.
 
   it('When sign-in is attempted too often from one address, then it answers 429', async () => {
-    const app = await createTestApp({ LAMPLIGHT_AUTH_RATE_LIMIT: '3' });
+    const app = await createTestApp({ LAMPLIGHT_AUTH_RATE_LIMIT: '3', LAMPLIGHT_TRUST_PROXY: 'loopback' });
     const { user } = await registerReader(await createTestApp());
     const from = `203.0.113.${(process.pid % 200) + 1}`;
     await resetAttempts(from);
@@ -57,7 +57,7 @@ describe('Security headers and limits', () => {
   });
 
   it('When registration and password resets come too often from one address, then they answer 429 too', async () => {
-    const app = await createTestApp({ LAMPLIGHT_AUTH_RATE_LIMIT: '2' });
+    const app = await createTestApp({ LAMPLIGHT_AUTH_RATE_LIMIT: '2', LAMPLIGHT_TRUST_PROXY: 'loopback' });
     const from = `203.0.113.${(process.pid % 200) + 40}`;
     await resetAttempts(from);
     const register = () =>
@@ -72,8 +72,8 @@ describe('Security headers and limits', () => {
   });
 
   it('When attempts go to two server instances on one database, then they count together, and no address is stored', async () => {
-    const first = await createTestApp({ LAMPLIGHT_AUTH_RATE_LIMIT: '2' });
-    const second = await createTestApp({ LAMPLIGHT_AUTH_RATE_LIMIT: '2' });
+    const first = await createTestApp({ LAMPLIGHT_AUTH_RATE_LIMIT: '2', LAMPLIGHT_TRUST_PROXY: 'loopback' });
+    const second = await createTestApp({ LAMPLIGHT_AUTH_RATE_LIMIT: '2', LAMPLIGHT_TRUST_PROXY: 'loopback' });
     const from = '198.51.100.' + ((process.pid % 200) + 20);
     await resetAttempts(from);
     const attempt = (app: typeof first) =>

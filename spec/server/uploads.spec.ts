@@ -196,7 +196,8 @@ describe('/api/uploads', () => {
       expect(malformed.body).toEqual(unknown.body);
       expect(upperCase.body).toEqual(unknown.body);
       expect(theirs.headers['etag']).not.toBe(`"${id}"`);
-      expect(theirs.headers['cache-control']).toBeUndefined();
+      // Not the owner's long-lived caching: the API's default no-store.
+      expect(theirs.headers['cache-control']).toBe('no-store');
     });
 
     it('When a reader reads an upload, then it may be cached for good, and If-None-Match answers 304 without the bytes', async () => {

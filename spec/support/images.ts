@@ -57,3 +57,24 @@ export const WEBP = Buffer.from(
   'UklGRjACAABXRUJQVlA4WAoAAAAgAAAAAwAABQAASUNDUMgBAAAAAAHIAAAAAAQwAABtbnRyUkdCIFhZWiAH4AABAAEAAAAAAABhY3NwAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAQAA9tYAAQAAAADTLQAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAlkZXNjAAAA8AAAACRyWFlaAAABFAAAABRnWFlaAAABKAAAABRiWFlaAAABPAAAABR3dHB0AAABUAAAABRyVFJDAAABZAAAAChnVFJDAAABZAAAAChiVFJDAAABZAAAAChjcHJ0AAABjAAAADxtbHVjAAAAAAAAAAEAAAAMZW5VUwAAAAgAAAAcAHMAUgBHAEJYWVogAAAAAAAAb6IAADj1AAADkFhZWiAAAAAAAABimQAAt4UAABjaWFlaIAAAAAAAACSgAAAPhAAAts9YWVogAAAAAAAA9tYAAQAAAADTLXBhcmEAAAAAAAQAAAACZmYAAPKnAAANWQAAE9AAAApbAAAAAAAAAABtbHVjAAAAAAAAAAEAAAAMZW5VUwAAACAAAAAcAEcAbwBvAGcAbABlACAASQBuAGMALgAgADIAMAAxADZWUDggQgAAADACAJ0BKgQABgABQCYlqAJ0ugDK/wPQBW1AAP6yP//JBG/+pUn/hf4r8cEk1uNbhaWH+wfzpRtyE25eqPkux0AAAA==',
   'base64',
 );
+
+/**
+ * A PNG whose header claims width × height while its image data is a few bytes: the chunk
+ * structure is whole (every CRC right, IEND last), so only the dimensions can refuse it. This is
+ * how a 30000 × 30000 "decompression bomb" stays small on disk.
+ */
+export function pngClaiming(width: number, height: number): Buffer {
+  const header = Buffer.alloc(13);
+  header.writeUInt32BE(width, 0);
+  header.writeUInt32BE(height, 4);
+  header[8] = 8;
+  header[9] = 2;
+  return Buffer.concat([PNG_SIGNATURE, chunk('IHDR', header), chunk('IDAT', deflateSync(Buffer.alloc(64))), chunk('IEND', Buffer.alloc(0))]);
+}
+
+/** A PNG with a text chunk of our choosing (W3C PNG §11.3.3.3 tEXt), every CRC right. */
+export function pngWithText(text: string): Buffer {
+  const plain = png();
+  const iend = plain.length - 12;
+  return Buffer.concat([plain.subarray(0, iend), chunk('tEXt', Buffer.from(`Comment\0${text}`, 'latin1')), plain.subarray(iend)]);
+}

@@ -36,6 +36,8 @@ export async function testConfig(overrides: Record<string, string> = {}): Promis
     LAMPLIGHT_JWT_SECRET: 'spec-secret-that-is-at-least-32-characters-long',
     LAMPLIGHT_BCRYPT_COST: '4',
     LAMPLIGHT_AUTH_RATE_LIMIT: '100000',
+    LAMPLIGHT_SYNC_RATE_LIMIT: '100000',
+    LAMPLIGHT_UPLOAD_RATE_LIMIT: '100000',
     SMTP_URL: `smtp://127.0.0.1:${port}`,
     LAMPLIGHT_DEV_MAIL_DIR: dir,
     LAMPLIGHT_PUBLIC_URL: 'http://127.0.0.1:8080',

@@ -27,6 +27,11 @@ export const routes: Routes = [
     loadComponent: () => import('./features/account/reset-password/reset-password').then((m) => m.ResetPassword),
   },
   {
+    path: 'verify-email',
+    title: 'Confirm your e-mail address · Lamplight',
+    loadComponent: () => import('./features/account/verify-email/verify-email').then((m) => m.VerifyEmail),
+  },
+  {
     path: '',
     canMatch: [signedInGuard],
     children: [

@@ -6,6 +6,7 @@ import type { ServerConfig } from './config';
 import { Accounts } from './domain/accounts';
 import { AdminUsers } from './domain/admin-users';
 import { DeviceSessions } from './domain/device-sessions';
+import { EmailVerification } from './domain/email-verification';
 import type { Mailer } from './domain/mailer';
 import { PasswordResets } from './domain/password-resets';
 import { Uploads } from './domain/uploads';
@@ -14,7 +15,7 @@ import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
 import { uploadsRoutes } from './entry-points/uploads.routes';
-import { catalogueRoutes, readerLimiter } from './entry-points/catalogue.routes';
+import { catalogueRoutes } from './entry-points/catalogue.routes';
 import { Catalogue } from './domain/catalogue/catalogue';
 import { SruProvider } from './domain/catalogue/sru-provider';
 import { CatalogueCache } from './data-access/catalogue-cache';
@@ -22,7 +23,7 @@ import { PostgresAttemptStore } from './data-access/attempt-store';
 import { UploadStore } from './data-access/upload-store';
 import { healthRoutes } from './entry-points/health.routes';
 import { requireAdmin, requireAuth } from './entry-points/require-auth';
-import { attemptLimiter, securityHeaders } from './entry-points/security';
+import { attemptLimiter, noStore, readerLimiter, securityHeaders } from './entry-points/security';
 import { staticApp } from './entry-points/static-app';
 import { metricsRoutes } from './entry-points/metrics.routes';
 import { robotsTxt } from './entry-points/robots';
@@ -46,7 +47,8 @@ export interface AppDependencies {
  */
 export function createApp({ config, dataSource, mailer, logger = createLogger(config.logLevel) }: AppDependencies): Express {
   const sessions = new DeviceSessions(dataSource, config.jwtSecret);
-  const accounts = new Accounts(dataSource, config, sessions, mailer);
+  const verification = new EmailVerification(dataSource, config, mailer);
+  const accounts = new Accounts(dataSource, config, sessions, mailer, verification);
   const resets = new PasswordResets(dataSource, config, sessions, mailer);
   const authenticated = requireAuth(dataSource, config.jwtSecret);
 
@@ -57,6 +59,7 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   trackPool(dataSource);
   app.use(requestLog(logger));
   app.use(securityHeaders());
+  app.use('/api', noStore);
 
   app.use(metricsRoutes(dataSource, config.metricsToken));
   app.get('/robots.txt', robotsTxt);
@@ -66,18 +69,35 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   app.use('/api/ready', probes.ready);
   app.use(
     '/api/auth',
-    authRoutes({ accounts, sessions, resets, attemptLimiter: attemptLimiter(config.authRateLimit, new PostgresAttemptStore(dataSource)), requireAuth: authenticated }),
+    authRoutes({
+      accounts,
+      sessions,
+      resets,
+      verification,
+      attemptLimiter: attemptLimiter(config.authRateLimit, new PostgresAttemptStore(dataSource)),
+      // Three fresh confirmation links an hour per reader: enough for a lost mail, useless for spam.
+      verifyMailLimiter: readerLimiter('confirmation e-mail', 3, 3600_000, new PostgresAttemptStore(dataSource, 'verify-mail')),
+      requireAuth: authenticated,
+    }),
   );
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
-  app.use('/api/sync', syncRoutes(new MeasuredSyncStore(dataSource, { namedStatements: !config.dbTransactionPooling })));
-  app.use('/api/uploads', uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
+  app.use(
+    '/api/sync',
+    readerLimiter('sync', config.syncRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'sync')),
+    syncRoutes(new MeasuredSyncStore(dataSource, { namedStatements: !config.dbTransactionPooling })),
+  );
+  app.use(
+    '/api/uploads',
+    readerLimiter('upload', config.uploadRateLimit, 10 * 60_000, new PostgresAttemptStore(dataSource, 'upload'), ['POST']),
+    uploadsRoutes(new Uploads(new UploadStore(dataSource), config.uploadQuotaBytes), config.uploadMaxBytes),
+  );
   app.use(
     '/api/catalogue',
     catalogueRoutes(
       new Catalogue(config.catalogueUrls.map((url) => new SruProvider(url, config.catalogueTimeoutMs)), new CatalogueCache(dataSource)),
-      readerLimiter(config.catalogueRateLimit, new PostgresAttemptStore(dataSource, 'catalogue')),
+      readerLimiter('catalogue look-up', config.catalogueRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'catalogue')),
     ),
   );
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));

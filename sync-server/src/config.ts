@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import path from 'node:path';
 
 import * as z from 'zod';
@@ -34,14 +35,36 @@ export interface ServerConfig {
   readonly catalogueTimeoutMs: number;
   /** Catalogue look-ups allowed per reader per minute. */
   readonly catalogueRateLimit: number;
-  /** Proxies whose X-Forwarded-For is believed (Express `trust proxy`); empty: none. */
-  readonly trustProxy: readonly string[];
   /** Level of the JSON request and server log on stdout. */
   readonly logLevel: LogLevel;
   /** Bearer token that opens `GET /metrics` from anywhere; without it, loopback only. */
   readonly metricsToken: string | null;
   /** DATABASE_URL goes through a transaction-mode pooler (PgBouncer): no named prepared statements. */
   readonly dbTransactionPooling: boolean;
+  /** Cover storage per reader, in bytes (the sum of the covers they own). */
+  readonly uploadQuotaBytes: number;
+  /** Proxies whose X-Forwarded-For is believed (Express `trust proxy`); empty: none. */
+  readonly trustProxy: readonly string[];
+  /** Threads that hash passwords, and sign-ins allowed to wait for one before a 503. */
+  readonly hashThreads: number;
+  readonly hashQueue: number;
+  /** Sync requests per reader per minute, and uploads per reader per 10 minutes. */
+  readonly syncRateLimit: number;
+  readonly uploadRateLimit: number;
+}
+
+/** Generous for covers of a few hundred KB each: several thousand books. */
+const DEFAULT_UPLOAD_QUOTA_BYTES = 200 * 1024 * 1024;
+
+/** `trust proxy` accepts these names, IP addresses and CIDR ranges (proxy-addr). */
+const PROXY_NAMES = new Set(['loopback', 'linklocal', 'uniquelocal']);
+function isProxyEntry(entry: string): boolean {
+  if (PROXY_NAMES.has(entry)) return true;
+  const [address, bits, ...rest] = entry.split('/');
+  const version = isIP(address ?? '');
+  if (version === 0 || rest.length > 0) return false;
+  if (bits === undefined) return true;
+  return /^\d{1,3}$/.test(bits) && Number(bits) <= (version === 4 ? 32 : 128);
 }
 
 /** The local catalogue that `npm start` runs (sync-server/src/local-catalogue/). */
@@ -82,14 +105,19 @@ const environmentSchema = z
       .pipe(z.array(z.url({ protocol: /^https?$/, error: 'each catalogue must be an http:// or https:// URL' }))),
     LAMPLIGHT_CATALOGUE_TIMEOUT_MS: z.coerce.number().int().min(100).max(30_000).default(3000),
     LAMPLIGHT_CATALOGUE_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
-    // Loopback by default, as before; the hardening work makes this an explicit list of proxies.
-    LAMPLIGHT_TRUST_PROXY: z
-      .string()
-      .default('loopback')
-      .transform((value) => value.split(',').map((entry) => entry.trim()).filter((entry) => entry !== '')),
     LAMPLIGHT_LOG_LEVEL: z.enum(LOG_LEVELS, { error: `must be one of ${LOG_LEVELS.join(', ')}` }).default('info'),
     LAMPLIGHT_METRICS_TOKEN: z.string().min(32, 'LAMPLIGHT_METRICS_TOKEN must be at least 32 characters').optional(),
     LAMPLIGHT_DB_TRANSACTION_POOLING: z.enum(['true', 'false'], { error: 'must be true or false' }).default('false'),
+    LAMPLIGHT_UPLOAD_QUOTA_BYTES: z.coerce.number().int().min(1024).default(DEFAULT_UPLOAD_QUOTA_BYTES),
+    LAMPLIGHT_TRUST_PROXY: z
+      .string()
+      .default('')
+      .transform((value) => value.split(',').map((entry) => entry.trim()).filter((entry) => entry !== ''))
+      .refine((entries) => entries.every(isProxyEntry), 'must be a comma-separated list of IP addresses, CIDR ranges or loopback/linklocal/uniquelocal'),
+    LAMPLIGHT_HASH_THREADS: z.coerce.number().int().min(1).max(16).default(1),
+    LAMPLIGHT_HASH_QUEUE: z.coerce.number().int().min(1).max(10_000).default(32),
+    LAMPLIGHT_SYNC_RATE_LIMIT: z.coerce.number().int().min(1).default(600),
+    LAMPLIGHT_UPLOAD_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
@@ -127,9 +155,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     catalogueUrls: values.LAMPLIGHT_CATALOGUE_URLS,
     catalogueTimeoutMs: values.LAMPLIGHT_CATALOGUE_TIMEOUT_MS,
     catalogueRateLimit: values.LAMPLIGHT_CATALOGUE_RATE_LIMIT,
-    trustProxy: values.LAMPLIGHT_TRUST_PROXY,
     logLevel: values.LAMPLIGHT_LOG_LEVEL,
     metricsToken: values.LAMPLIGHT_METRICS_TOKEN ?? null,
     dbTransactionPooling: values.LAMPLIGHT_DB_TRANSACTION_POOLING === 'true',
+    uploadQuotaBytes: values.LAMPLIGHT_UPLOAD_QUOTA_BYTES,
+    trustProxy: values.LAMPLIGHT_TRUST_PROXY,
+    hashThreads: values.LAMPLIGHT_HASH_THREADS,
+    hashQueue: values.LAMPLIGHT_HASH_QUEUE,
+    syncRateLimit: values.LAMPLIGHT_SYNC_RATE_LIMIT,
+    uploadRateLimit: values.LAMPLIGHT_UPLOAD_RATE_LIMIT,
   };
 }

@@ -7,6 +7,7 @@ import { migrate } from './data-access/migrate';
 import { User } from './data-access/entities/user.entity';
 import { createSmtpMailer } from './domain/mailer';
 import { createLogger } from './observability/logger';
+import { closePasswordPools } from './domain/passwords';
 
 /** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
 async function main(): Promise<void> {
@@ -40,7 +41,7 @@ async function main(): Promise<void> {
     logger.info(`${signal}: stopping Lamplight`);
     server.close(() => {
       mailer.close();
-      void dataSource.destroy().finally(() => process.exit(0));
+      void Promise.allSettled([dataSource.destroy(), closePasswordPools()]).finally(() => process.exit(0));
     });
     server.closeAllConnections();
   };

@@ -2,6 +2,7 @@ import { loadConfig } from './config';
 import { createDataSource } from './data-access/data-source';
 import { migrate } from './data-access/migrate';
 import { DEMO_ACCOUNTS, seedDemo } from './data-access/seed-demo';
+import { closePasswordPools } from './domain/passwords';
 
 /** `node dist/node/sync-server/src/seed.js`: migrate, then add the demo accounts and library (idempotent). */
 async function seed(): Promise<void> {
@@ -13,7 +14,7 @@ async function seed(): Promise<void> {
     await migrate(dataSource);
     ({ demoBooksAdded } = await seedDemo(dataSource, config.bcryptCost));
   } finally {
-    await dataSource.destroy();
+    await Promise.allSettled([dataSource.destroy(), closePasswordPools()]);
   }
   for (const account of DEMO_ACCOUNTS) {
     console.log(`  ${account.role.padEnd(6)}  ${account.email}  password: ${account.password}`);

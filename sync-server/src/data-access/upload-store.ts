@@ -21,17 +21,27 @@ export class UploadStore {
 
   /**
    * Stores the image unless it is already stored, and makes the reader an owner, in one
-   * transaction. Answers whether the reader became an owner just now (false: they had
-   * uploaded it before).
+   * transaction. Answers 'added' when the reader became an owner just now, 'known' when they
+   * had uploaded it before, and 'quota_full' (storing nothing) when it would take the covers
+   * they own beyond `quotaBytes`. Uploads of one reader take turns on a transaction-scoped
+   * advisory lock, so two at once cannot both slip under the quota.
    */
-  async save(userId: string, upload: { id: string; mediaType: UploadMediaType; bytes: Buffer }): Promise<boolean> {
+  async save(userId: string, upload: { id: string; mediaType: UploadMediaType; bytes: Buffer }, quotaBytes: number): Promise<'added' | 'known' | 'quota_full'> {
     return this.dataSource.transaction(async (manager) => {
+      await manager.query(`SELECT pg_advisory_xact_lock(hashtextextended('upload-quota:' || $1, 0))`, [userId]);
+      const usage: { owned: boolean; used: string }[] = await manager.query(
+        `SELECT bool_or(u.id = $2) AS owned, coalesce(sum(u.byte_size), 0) AS used
+           FROM upload_owners o JOIN uploads u ON u.id = o.upload_id WHERE o.user_id = $1`,
+        [userId, upload.id],
+      );
+      if (usage[0]?.owned) return 'known';
+      if (Number(usage[0]?.used ?? 0) + upload.bytes.length > quotaBytes) return 'quota_full';
       await storeOnce(manager, upload);
       const owned: unknown[] = await manager.query(
         'INSERT INTO upload_owners (upload_id, user_id) VALUES ($1, $2) ON CONFLICT DO NOTHING RETURNING upload_id',
         [upload.id, userId],
       );
-      return owned.length > 0;
+      return owned.length > 0 ? 'added' : 'known';
     });
   }
 

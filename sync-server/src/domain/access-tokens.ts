@@ -16,14 +16,18 @@ export interface AccessClaims {
   readonly role: Role;
 }
 
-export function signAccessToken(claims: AccessClaims, secret: Uint8Array): Promise<string> {
+/**
+ * Signs an access token. HS256 is deterministic, so the same claims and `issuedAt` (seconds) give
+ * the same token: a refresh retried within the grace window gets back exactly the pair it missed.
+ */
+export function signAccessToken(claims: AccessClaims, secret: Uint8Array, issuedAt = Math.floor(Date.now() / 1000)): Promise<string> {
   return new SignJWT({ sid: claims.sessionId, role: claims.role })
     .setProtectedHeader({ alg: 'HS256', typ: 'JWT' })
     .setSubject(claims.userId)
     .setIssuer(TOKEN_ISSUER)
     .setAudience(TOKEN_AUDIENCE)
-    .setIssuedAt()
-    .setExpirationTime(`${ACCESS_TOKEN_SECONDS}s`)
+    .setIssuedAt(issuedAt)
+    .setExpirationTime(issuedAt + ACCESS_TOKEN_SECONDS)
     .sign(secret);
 }
 

@@ -3,15 +3,30 @@ import type { DataSource } from 'typeorm';
 import type { AccountUser, LoginInput, RegisterInput, SignedIn } from '../../../shared/account/account-input';
 import type { ServerConfig } from '../config';
 import { AppError } from '../errors';
+import { describeError, logSecurityEvent } from '../safe-log';
 import { User } from '../data-access/entities/user.entity';
+import { PasswordFailures } from '../data-access/password-failures';
 import { ownedUploadIds, removeOrphanedUploads } from '../data-access/upload-store';
 import { welcomeMail } from './account-mail';
 import type { DeviceSessions } from './device-sessions';
+import type { EmailVerification } from './email-verification';
 import type { Mailer } from './mailer';
 import { hashPassword, verifyPassword } from './passwords';
 
 /** The same answer for an unknown e-mail and a wrong password, so neither can be probed. */
 const SIGN_IN_REFUSED = new AppError(401, 'invalid_credentials', 'E-mail or password is not right');
+
+/** 429 while an account (or a signed-in reader) must wait after wrong passwords. */
+function tooManyWrongPasswords(seconds: number): AppError {
+  const minutes = Math.ceil(seconds / 60);
+  return new AppError(
+    429,
+    'too_many_attempts',
+    `Too many wrong passwords; try again in ${minutes === 1 ? 'a minute' : `${minutes} minutes`}`,
+    undefined,
+    { 'Retry-After': String(seconds) },
+  );
+}
 
 /** A hash to compare against when the e-mail is unknown, so both paths take as long. */
 let decoyHash: Promise<string> | undefined;
@@ -22,12 +37,35 @@ export function publicUser(user: User): AccountUser {
 
 /** Registration, sign-in, password change and account deletion. */
 export class Accounts {
+  private readonly failures: PasswordFailures;
+
   constructor(
     private readonly dataSource: DataSource,
     private readonly config: ServerConfig,
     private readonly sessions: DeviceSessions,
     private readonly mailer: Mailer,
-  ) {}
+    private readonly verification: EmailVerification,
+  ) {
+    this.failures = new PasswordFailures(dataSource);
+  }
+
+  /**
+   * Checks a password under the per-key backoff: refuses at once while `key` must wait, counts
+   * a wrong password, clears the count on a right one. Unknown e-mails count too, so the wait
+   * says nothing about whether an account exists.
+   */
+  private async checkPassword(key: string, password: string, hash: string): Promise<boolean> {
+    const wait = await this.failures.secondsToWait(key);
+    if (wait > 0) throw tooManyWrongPasswords(wait);
+    const right = await verifyPassword(password, hash, this.config);
+    if (right) {
+      await this.failures.succeed(key);
+    } else if ((await this.failures.fail(key)) > 0) {
+      // The e-mail is not logged: the user id when the key names one, else only that it was a sign-in.
+      logSecurityEvent('wrong passwords: backoff started', key.startsWith('user:') ? { user: key.slice(5) } : { for: 'sign-in' });
+    }
+    return right;
+  }
 
   private get users() {
     return this.dataSource.getRepository(User);
@@ -37,7 +75,7 @@ export class Accounts {
     if (await this.users.existsBy({ email: input.email })) {
       throw new AppError(409, 'email_taken', 'An account already uses this e-mail', { email: 'An account already uses this e-mail' });
     }
-    const passwordHash = await hashPassword(input.password, this.config.bcryptCost);
+    const passwordHash = await hashPassword(input.password, this.config.bcryptCost, this.config);
     const role = input.email === this.config.adminEmail ? 'admin' : 'reader';
     let user: User;
     try {
@@ -51,20 +89,21 @@ export class Accounts {
     }
     const tokens = await this.sessions.start(user, userAgent, input.deviceName);
     // The welcome note must not hold up or fail the registration.
-    this.mailer.send(welcomeMail(user.email, user.displayName, this.config.publicUrl)).catch((err: unknown) => {
-      console.warn(`welcome e-mail to user ${user.id} not sent: ${(err as Error).message}`);
+    const welcome = this.verification.link(user).then((link) => this.mailer.send(welcomeMail(user.email, link, this.config.publicUrl)));
+    welcome.catch((err: unknown) => {
+      console.warn(`welcome e-mail to user ${user.id} not sent: ${describeError(err)}`);
     });
     return { user: publicUser(user), ...tokens };
   }
 
   async login(input: LoginInput, userAgent?: string): Promise<SignedIn> {
     const user = await this.users.findOneBy({ email: input.email });
-    if (!user) {
-      decoyHash ??= hashPassword('decoy password for unknown e-mails', this.config.bcryptCost);
-      await verifyPassword(input.password, await decoyHash);
-      throw SIGN_IN_REFUSED;
-    }
-    if (!(await verifyPassword(input.password, user.passwordHash))) throw SIGN_IN_REFUSED;
+    decoyHash ??= hashPassword('decoy password for unknown e-mails', this.config.bcryptCost, this.config).catch((err: unknown) => {
+      decoyHash = undefined;
+      throw err;
+    });
+    const hash = user?.passwordHash ?? (await decoyHash);
+    if (!(await this.checkPassword(`account:${input.email}`, input.password, hash)) || !user) throw SIGN_IN_REFUSED;
     if (user.disabledAt) throw new AppError(403, 'account_disabled', 'This account is disabled; ask an admin to enable it');
     const tokens = await this.sessions.start(user, userAgent, input.deviceName);
     return { user: publicUser(user), ...tokens };
@@ -79,10 +118,10 @@ export class Accounts {
   /** Changes the password and signs out every other device (a common precaution). */
   async changePassword(userId: string, sessionId: string, currentPassword: string, newPassword: string): Promise<void> {
     const user = await this.find(userId);
-    if (!(await verifyPassword(currentPassword, user.passwordHash))) {
+    if (!(await this.checkPassword(`user:${userId}`, currentPassword, user.passwordHash))) {
       throw new AppError(400, 'invalid_input', 'The current password is not right', { currentPassword: 'The current password is not right' });
     }
-    const passwordHash = await hashPassword(newPassword, this.config.bcryptCost);
+    const passwordHash = await hashPassword(newPassword, this.config.bcryptCost, this.config);
     await this.dataSource.transaction(async (manager) => {
       await manager.update(User, { id: userId }, { passwordHash });
       await this.sessions.revokeAll(manager, userId, sessionId);
@@ -95,7 +134,7 @@ export class Accounts {
    */
   async deleteAccount(userId: string, password: string): Promise<void> {
     const user = await this.find(userId);
-    if (!(await verifyPassword(password, user.passwordHash))) {
+    if (!(await this.checkPassword(`user:${userId}`, password, user.passwordHash))) {
       throw new AppError(400, 'invalid_input', 'The password is not right', { password: 'The password is not right' });
     }
     await this.dataSource.transaction(async (manager) => {

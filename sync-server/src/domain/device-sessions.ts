@@ -2,15 +2,23 @@ import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 
 import type { TokenPair } from '../../../shared/account/account-input';
 import { AppError } from '../errors';
+import { logSecurityEvent } from '../safe-log';
 import { DeviceSession } from '../data-access/entities/device-session.entity';
 import { RefreshToken } from '../data-access/entities/refresh-token.entity';
 import type { User } from '../data-access/entities/user.entity';
 import { signAccessToken } from './access-tokens';
 import { deviceNameFromUserAgent } from '../../../shared/account/device-name';
-import { hashSecretToken, newSecretToken } from './secret-tokens';
+import { hashSecretToken, newSecretToken, successorToken } from './secret-tokens';
 
 /** Readers stay signed in on a device for months of offline use; each refresh extends this. */
 export const REFRESH_TOKEN_DAYS = 90;
+
+/**
+ * How long after a rotation the previous refresh token may be presented once more, and get the
+ * same new pair: a client whose answer was lost on the way retries with the token it still
+ * holds (RFC 9700 §4.14.2 allows such a grace period). After it, or a second time, reuse is theft.
+ */
+export const REFRESH_GRACE_SECONDS = 45;
 
 const refreshExpiry = () => new Date(Date.now() + REFRESH_TOKEN_DAYS * 24 * 3600 * 1000);
 
@@ -37,8 +45,11 @@ export class DeviceSessions {
   }
 
   /**
-   * Exchanges a refresh token for a new pair. A token that was already exchanged means two
-   * parties hold it (one of them perhaps an attacker), so the whole family is revoked.
+   * Exchanges a refresh token for a new pair. The new refresh token is derived from the old one
+   * (an HMAC under a server key), so within the grace window the old token can be answered with
+   * the very same pair without storing any token in clear. A token presented again outside that
+   * window, or twice within it, or after its successor was used, means two parties hold it (one
+   * perhaps an attacker), so the whole family is revoked.
    */
   async rotate(refreshToken: string): Promise<TokenPair> {
     const tokenHash = hashSecretToken(refreshToken);
@@ -56,17 +67,25 @@ export class DeviceSessions {
       const { session } = token;
       const user = session.user!;
       if (session.revokedAt) return { error: 'revoked' };
+      if (user.disabledAt) return { error: 'disabled' };
+      const successor = successorToken(refreshToken, this.jwtSecret);
       if (token.usedAt) {
+        if (await this.withinGrace(manager, token, successor)) {
+          await manager.update(RefreshToken, { id: token.id }, { graceUsedAt: new Date() });
+          return { pair: await this.pairFor(session.id, user, successor, token.usedAt) };
+        }
         await manager.update(DeviceSession, { id: session.id }, { revokedAt: new Date() });
+        logSecurityEvent('refresh token presented again; device session revoked', { user: user.id, session: session.id });
         return { error: 'reused' };
       }
       if (token.expiresAt.getTime() <= Date.now()) return { error: 'expired' };
-      if (user.disabledAt) return { error: 'disabled' };
 
-      await manager.update(RefreshToken, { id: token.id }, { usedAt: new Date() });
+      const usedAt = new Date(Math.floor(Date.now() / 1000) * 1000);
+      await manager.update(RefreshToken, { id: token.id }, { usedAt });
       await manager.update(DeviceSession, { id: session.id }, { lastSeenAt: new Date() });
       await manager.update('users', { id: user.id }, { lastSeenAt: new Date() });
-      return { pair: await this.issue(manager, session.id, user) };
+      await manager.insert(RefreshToken, { sessionId: session.id, tokenHash: hashSecretToken(successor), expiresAt: refreshExpiry() });
+      return { pair: await this.pairFor(session.id, user, successor, usedAt) };
     });
     if ('pair' in outcome) return outcome.pair;
     if (outcome.error === 'disabled') throw new AppError(403, 'account_disabled', 'This account is disabled');
@@ -77,6 +96,19 @@ export class DeviceSessions {
       expired: 'This sign-in has expired; sign in again',
     } as const;
     throw new AppError(401, `refresh_${outcome.error}`, messages[outcome.error]);
+  }
+
+  /** Whether a rotated token may be answered once more: recently rotated, not yet retried, successor unused. */
+  private async withinGrace(manager: EntityManager, token: RefreshToken, successor: string): Promise<boolean> {
+    if (token.graceUsedAt || !token.usedAt || token.usedAt.getTime() < Date.now() - REFRESH_GRACE_SECONDS * 1000) return false;
+    const next = await manager.findOne(RefreshToken, { where: { tokenHash: hashSecretToken(successor) }, lock: { mode: 'pessimistic_write' } });
+    return next !== null && next.usedAt === null;
+  }
+
+  /** The pair a rotation at `rotatedAt` answers; the same every time it is asked for. */
+  private async pairFor(sessionId: string, user: User, refreshToken: string, rotatedAt: Date): Promise<TokenPair> {
+    const accessToken = await signAccessToken({ userId: user.id, sessionId, role: user.role }, this.jwtSecret, Math.floor(rotatedAt.getTime() / 1000));
+    return { accessToken, refreshToken };
   }
 
   /** Ends a device session and every refresh token it issued. */

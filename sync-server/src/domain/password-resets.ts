@@ -34,12 +34,13 @@ export class PasswordResets {
     });
     // In the fragment, the token is never sent to a server in a request line or a Referer.
     const link = `${this.config.publicUrl}/reset-password#token=${token}`;
-    await this.mailer.send(passwordResetMail(user.email, user.displayName, link));
+    // The display name is someone's own words: only to an address its owner has confirmed.
+    await this.mailer.send(passwordResetMail(user.email, user.emailVerifiedAt ? user.displayName : null, link));
   }
 
   /** Sets the new password and signs the reader out everywhere. */
   async confirm(token: string, newPassword: string): Promise<void> {
-    const passwordHash = await hashPassword(newPassword, this.config.bcryptCost);
+    const passwordHash = await hashPassword(newPassword, this.config.bcryptCost, this.config);
     const done = await this.dataSource.transaction(async (manager) => {
       // Marking it used in the statement that finds it makes a second use impossible. (A CTE,
       // because TypeORM returns plain rows only for SELECT.)

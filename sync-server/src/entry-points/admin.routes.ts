@@ -4,12 +4,13 @@ import { adminUserUpdateInput } from '../../../shared/account/account-input';
 import type { AdminUsers } from '../domain/admin-users';
 import { readCaughtMail } from '../dev-inbox/caught-mail';
 import { AppError } from '../errors';
-import { parseInput } from './parse-input';
+import { parseInput, uuidParam } from './parse-input';
 import { callerOf } from './require-auth';
 
 /** `/api/admin` (behind requireAuth and requireAdmin). */
 export function adminRoutes(adminUsers: AdminUsers, devMailDir: string | null): Router {
   const router = Router();
+  router.param('id', uuidParam('No such account'));
 
   router.get('/users', async (_req, res) => {
     res.json(await adminUsers.list());

@@ -8,9 +8,12 @@ import {
   registerInput,
   resetConfirmInput,
   resetRequestInput,
+  verifyEmailInput,
 } from '../../../shared/account/account-input';
 import { publicUser, type Accounts } from '../domain/accounts';
 import type { DeviceSessions } from '../domain/device-sessions';
+import type { EmailVerification } from '../domain/email-verification';
+import { describeError } from '../safe-log';
 import type { PasswordResets } from '../domain/password-resets';
 import { parseInput } from './parse-input';
 import { callerOf } from './require-auth';
@@ -19,13 +22,16 @@ export interface AuthRouteDeps {
   readonly accounts: Accounts;
   readonly sessions: DeviceSessions;
   readonly resets: PasswordResets;
+  readonly verification: EmailVerification;
+  /** Per-reader limit on fresh confirmation links (after requireAuth). */
+  readonly verifyMailLimiter: RequestHandler;
   /** Rate limiter for the routes people could hammer: sign-in, registration, resets. */
   readonly attemptLimiter: RequestHandler;
   readonly requireAuth: RequestHandler;
 }
 
 /** `/api/auth`: accounts, tokens and password resets. */
-export function authRoutes({ accounts, sessions, resets, attemptLimiter, requireAuth }: AuthRouteDeps): Router {
+export function authRoutes({ accounts, sessions, resets, verification, verifyMailLimiter, attemptLimiter, requireAuth }: AuthRouteDeps): Router {
   const router = Router();
 
   router.post('/register', attemptLimiter, async (req, res) => {
@@ -46,7 +52,7 @@ export function authRoutes({ accounts, sessions, resets, attemptLimiter, require
   router.post('/password-reset/request', attemptLimiter, async (req, res) => {
     const { email } = parseInput(resetRequestInput, req.body);
     // Not awaited, and the same answer either way: nothing here tells whether the address exists.
-    resets.request(email).catch((err: unknown) => console.warn(`reset e-mail not sent: ${(err as Error).message}`));
+    resets.request(email).catch((err: unknown) => console.warn(`reset e-mail not sent: ${describeError(err)}`));
     res.status(202).json({ message: 'If an account uses that address, a link to choose a new password is on its way.' });
   });
 
@@ -54,6 +60,18 @@ export function authRoutes({ accounts, sessions, resets, attemptLimiter, require
     const { token, newPassword } = parseInput(resetConfirmInput, req.body);
     await resets.confirm(token, newPassword);
     res.status(204).end();
+  });
+
+  /** The link from a welcome or confirmation mail; it works without signing in (another device). */
+  router.post('/verify-email', attemptLimiter, async (req, res) => {
+    const { token } = parseInput(verifyEmailInput, req.body);
+    await verification.confirm(token);
+    res.json({ verified: true });
+  });
+
+  router.post('/verify-email/send', requireAuth, verifyMailLimiter, async (_req, res) => {
+    const outcome = await verification.resend(callerOf(res).userId);
+    res.status(outcome === 'sent' ? 202 : 200).json({ verified: outcome === 'already_verified' });
   });
 
   router.post('/logout', requireAuth, async (_req, res) => {

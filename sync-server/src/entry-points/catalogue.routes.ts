@@ -1,5 +1,4 @@
 import { Router, type RequestHandler } from 'express';
-import { rateLimit, type Store } from 'express-rate-limit';
 import * as z from 'zod';
 
 import type { CatalogueAnswer, CatalogueErrorCode } from '../../../shared/api/catalogue';
@@ -8,7 +7,6 @@ import type { Catalogue } from '../domain/catalogue/catalogue';
 import { CatalogueError, type CatalogueFailure } from '../domain/catalogue/catalogue-provider';
 import { AppError } from '../errors';
 import { parseInput } from './parse-input';
-import { callerOf } from './require-auth';
 
 /** Control characters and lone surrogates: no catalogue search needs them, and PostgreSQL refuses NUL. */
 const UNREADABLE = /[\u0000-\u001f\u007f]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
@@ -45,21 +43,6 @@ async function askCatalogue(question: () => Promise<CatalogueAnswer>): Promise<C
     if (error instanceof CatalogueError) throw new AppError(502, FAILURE_CODES[error.failure], error.message);
     throw error;
   }
-}
-
-/** Look-ups per signed-in reader per minute, counted in PostgreSQL so every instance shares them. */
-export function readerLimiter(limitPerMinute: number, store: Store): RequestHandler {
-  return rateLimit({
-    store,
-    windowMs: 60_000,
-    limit: limitPerMinute,
-    keyGenerator: (_req, res) => callerOf(res).userId,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, res) => {
-      res.status(429).json({ error: { code: 'too_many_attempts', message: 'Too many catalogue look-ups; wait a minute and try again', details: null } });
-    },
-  });
 }
 
 /**

@@ -4,7 +4,7 @@ import { renameDeviceInput, type DeviceSessionView } from '../../../shared/accou
 import type { DeviceSession } from '../data-access/entities/device-session.entity';
 import type { DeviceSessions } from '../domain/device-sessions';
 import { AppError } from '../errors';
-import { parseInput } from './parse-input';
+import { parseInput, uuidParam } from './parse-input';
 import { callerOf } from './require-auth';
 
 function view(session: DeviceSession, currentSessionId: string): DeviceSessionView {
@@ -20,6 +20,7 @@ function view(session: DeviceSession, currentSessionId: string): DeviceSessionVi
 /** `/api/devices`: the reader's signed-in devices (behind requireAuth). */
 export function devicesRoutes(sessions: DeviceSessions): Router {
   const router = Router();
+  router.param('id', uuidParam('No such device'));
 
   router.get('/', async (_req, res) => {
     const caller = callerOf(res);

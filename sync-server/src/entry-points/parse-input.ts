@@ -1,3 +1,4 @@
+import type { RequestParamHandler } from 'express';
 import type { z } from 'zod';
 
 import { AppError } from '../errors';
@@ -15,4 +16,17 @@ export function parseInput<Schema extends z.ZodType>(schema: Schema, input: unkn
     details[key] ??= issue.message;
   }
   throw new AppError(400, 'invalid_input', 'Some fields need attention', details);
+}
+
+/** The form PostgreSQL's `uuid` type prints, which is the only form our ids take. */
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * For `router.param`: an id that cannot be a uuid cannot name anything, so it is a 404 (the
+ * same answer as an unknown id), before any query that would choke on it.
+ */
+export function uuidParam(notFoundMessage: string): RequestParamHandler {
+  return (_req, _res, next, value: unknown) => {
+    next(typeof value === 'string' && UUID.test(value) ? undefined : new AppError(404, 'not_found', notFoundMessage));
+  };
 }

@@ -1,5 +1,7 @@
 import type { RequestHandler } from 'express';
 import { rateLimit, type Store } from 'express-rate-limit';
+
+import { callerOf } from './require-auth';
 import helmet from 'helmet';
 
 /**
@@ -45,6 +47,8 @@ export function attemptLimiter(limitPer15Minutes: number, store: Store): Request
     limit: limitPer15Minutes,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    // X-Forwarded-For from an untrusted peer is ignored on purpose (LAMPLIGHT_TRUST_PROXY).
+    validate: { xForwardedForHeader: false },
     handler: (_req, res) => {
       res.status(429).json({
         error: { code: 'too_many_attempts', message: 'Too many attempts; wait a few minutes and try again', details: null },
@@ -52,3 +56,31 @@ export function attemptLimiter(limitPer15Minutes: number, store: Store): Request
     },
   });
 }
+
+/**
+ * Limits requests per signed-in reader (after requireAuth), whichever address or device they
+ * come from; counted in PostgreSQL like the attempt limit, so every instance shares the count.
+ */
+export function readerLimiter(what: string, limit: number, windowMs: number, store: Store, methods?: readonly string[]): RequestHandler {
+  const limiter = rateLimit({
+    store,
+    windowMs,
+    limit,
+    keyGenerator: (_req, res) => callerOf(res).userId,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    validate: { xForwardedForHeader: false },
+    handler: (_req, res) => {
+      res.status(429).json({
+        error: { code: 'too_many_requests', message: `Too many ${what} requests from this account; wait a minute and try again`, details: null },
+      });
+    },
+  });
+  return methods ? (req, res, next) => (methods.includes(req.method) ? limiter(req, res, next) : next()) : limiter;
+}
+
+/** Token, account and pull answers must not be kept by any cache (RFC 9111 §5.2.2.5). */
+export const noStore: RequestHandler = (_req, res, next) => {
+  res.set('Cache-Control', 'no-store');
+  next();
+};

@@ -5,7 +5,7 @@ import { catchError, from, switchMap, throwError } from 'rxjs';
 import { Auth } from './auth';
 
 /** API routes that must go without a bearer token. */
-const PUBLIC_ROUTES = /^\/api\/(health|auth\/(login|register|refresh|password-reset\/.*))$/;
+const PUBLIC_ROUTES = /^\/api\/(health|auth\/(login|register|refresh|verify-email|password-reset\/.*))$/;
 
 const withBearer = (req: HttpRequest<unknown>, token: string | null) =>
   token ? req.clone({ setHeaders: { Authorization: `Bearer ${token}` } }) : req;

@@ -140,6 +140,27 @@ describe('Covers', () => {
       );
     });
 
+    it('when the reader’s cover storage is full, keeps the cover on this device with the server’s plain reason', async () => {
+      const { id } = await pendingCover();
+      const full = 'Your cover storage is full (200 MB); covers already saved stay as they are';
+
+      const round = covers.uploadPending();
+      (await sent('/api/uploads')).flush(apiError('quota_full', full), { status: 413, statusText: 'Content Too Large' });
+      await round;
+
+      expect(await db().covers.get(id)).toEqual(jasmine.objectContaining({ state: 'refused', problem: full }));
+    });
+
+    it('when uploads come too fast for the server (429), keeps the cover pending to try again later', async () => {
+      const { id } = await pendingCover();
+
+      const round = covers.uploadPending();
+      (await sent('/api/uploads')).flush(apiError('too_many_requests', 'Too many upload requests'), { status: 429, statusText: 'Too Many Requests' });
+      await round;
+
+      expect((await db().covers.get(id))?.state).toBe('pending');
+    });
+
     it('keeps a cover pending when the server cannot be reached, and uploads it on a later round', async () => {
       const { id, blob } = await pendingCover();
 

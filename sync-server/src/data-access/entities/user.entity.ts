@@ -20,6 +20,10 @@ export class User {
   @Column({ type: 'text', default: 'reader' })
   role: Role;
 
+  /** Set when the reader opened the signed link mailed to this address (null: not yet). */
+  @Column({ name: 'email_verified_at', type: 'timestamptz', nullable: true })
+  emailVerifiedAt: Date | null;
+
   @Column({ name: 'disabled_at', type: 'timestamptz', nullable: true })
   disabledAt: Date | null;
 
