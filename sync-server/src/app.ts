@@ -12,6 +12,8 @@ import { adminRoutes } from './entry-points/admin.routes';
 import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
+import { syncEventsRoutes } from './entry-points/sync-events.routes';
+import { SyncListener } from './data-access/sync-notifications';
 import { uploadsRoutes } from './entry-points/uploads.routes';
 import { PostgresAttemptStore } from './data-access/attempt-store';
 import { SyncStore } from './data-access/sync-store';
@@ -52,6 +54,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
+  app.use('/api/sync/events', syncEventsRoutes(dataSource, new SyncListener(config.syncEvents.listenDatabaseUrl), config.syncEvents));
   app.use('/api/sync', syncRoutes(new SyncStore(dataSource)));
   app.use('/api/uploads', uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));

@@ -26,6 +26,8 @@ export interface ServerConfig {
   readonly authRateLimit: number;
   /** Largest cover image accepted by `POST /api/uploads`, in bytes. */
   readonly uploadMaxBytes: number;
+  /** Live updates: where the one LISTEN connection goes (a session, not a transaction pooler) and the heartbeat. */
+  readonly syncEvents: { readonly listenDatabaseUrl: string; readonly heartbeatMs: number };
 }
 
 /** Covers are resized on the device to at most 600 px tall, so 2 MiB leaves plenty of room. */
@@ -56,6 +58,8 @@ const environmentSchema = z
       .min(1024, 'must be at least 1024 bytes')
       .max(16 * 1024 * 1024, 'must be at most 16 MiB (16777216 bytes)')
       .default(DEFAULT_UPLOAD_MAX_BYTES),
+    LAMPLIGHT_LISTEN_DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'must be a postgres:// URL').optional(),
+    LAMPLIGHT_SYNC_HEARTBEAT_MS: z.coerce.number().int().min(100).max(120_000).default(25_000),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
@@ -90,5 +94,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     devMailDir: production || !values.LAMPLIGHT_DEV_MAIL_DIR ? null : path.resolve(values.LAMPLIGHT_DEV_MAIL_DIR),
     authRateLimit: values.LAMPLIGHT_AUTH_RATE_LIMIT,
     uploadMaxBytes: values.LAMPLIGHT_UPLOAD_MAX_BYTES,
+    syncEvents: { listenDatabaseUrl: values.LAMPLIGHT_LISTEN_DATABASE_URL ?? values.DATABASE_URL, heartbeatMs: values.LAMPLIGHT_SYNC_HEARTBEAT_MS },
   };
 }
