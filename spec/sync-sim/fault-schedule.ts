@@ -158,11 +158,11 @@ export async function runSchedule(schedule: Schedule, server: SimServer, startMs
       await d.settle();
     }
   }
-  return check(devices, await fullState(server, now), network.trace);
+  return checkOutcome(devices, await fullState(server, now), network.trace);
 }
 
 /** The server's state as a fresh device would see it: every page from the start, folded. */
-async function fullState(server: SimServer, nowMs: number): Promise<FieldState> {
+export async function fullState(server: SimServer, nowMs: number): Promise<FieldState> {
   let state: FieldState = new Map();
   let since: string | undefined;
   for (;;) {
@@ -175,7 +175,8 @@ async function fullState(server: SimServer, nowMs: number): Promise<FieldState> 
   }
 }
 
-function check(devices: readonly SimDevice[], server: FieldState, trace: readonly TraceEntry[]): Outcome {
+/** The checks after a final sync: acknowledged writes kept (or beaten by a greater clock), devices equal to the server, refusals only for invalid changes. */
+export function checkOutcome(devices: readonly SimDevice[], server: FieldState, trace: readonly TraceEntry[]): Outcome {
   const holds = (change: { collection: string; rowId: string; field: string; value: unknown; hlc: string }) => {
     const stored = server.get(`${change.collection}/${change.rowId}/${change.field}`);
     return stored !== undefined && (stored.hlc > change.hlc || (stored.hlc === change.hlc && isDeepStrictEqual(stored.value, change.value)));

@@ -42,6 +42,8 @@ export class SimDevice {
   /** Errors a cycle ended with that no network fault explains (a 5xx, a refusal without details…). */
   readonly unexpected: string[] = [];
   skewMs = 0;
+  /** Whether the last cycle that ended ran to its end (pushed everything, pulled to the last page). */
+  lastCycleOk = false;
   private epoch = 0;
   private clock: HlcClock;
   private cycle: Promise<void> | null = null;
@@ -82,8 +84,9 @@ export class SimDevice {
     if (this.cycle) return;
     const epoch = this.epoch;
     const cycle = runSyncCycle(this.ports(epoch), this.options.batchSize).then(
-      () => undefined,
+      () => void (this.lastCycleOk = true),
       (error: unknown) => {
+        this.lastCycleOk = false;
         if (!(error instanceof NetworkError)) this.unexpected.push(error instanceof Error ? error.message : String(error));
       },
     );

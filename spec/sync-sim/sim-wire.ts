@@ -21,14 +21,16 @@ export class HttpSimServer implements SimServer {
   constructor(
     private readonly baseUrl: () => string,
     private readonly accessToken: string,
+    private readonly timeoutMs = 30_000,
   ) {}
 
   async handle(request: SimRequest): Promise<SimResponse> {
     const headers = { 'content-type': 'application/json', authorization: `Bearer ${this.accessToken}` };
+    const signal = AbortSignal.timeout(this.timeoutMs);
     const res =
       request.kind === 'push'
-        ? await fetch(`${this.baseUrl()}/api/sync/push`, { method: 'POST', headers, body: JSON.stringify(request.body) })
-        : await fetch(`${this.baseUrl()}/api/sync/pull?${new URLSearchParams({ ...(request.since ? { since: request.since } : {}), limit: String(request.limit) })}`, { headers });
+        ? await fetch(`${this.baseUrl()}/api/sync/push`, { method: 'POST', headers, body: JSON.stringify(request.body), signal })
+        : await fetch(`${this.baseUrl()}/api/sync/pull?${new URLSearchParams({ ...(request.since ? { since: request.since } : {}), limit: String(request.limit) })}`, { headers, signal });
     const text = await res.text();
     return { status: res.status, body: text ? JSON.parse(text) : null };
   }
