@@ -116,7 +116,7 @@ export class SyncListener {
   }
 
   private async open(): Promise<void> {
-    const client = new pg.Client({ connectionString: this.databaseUrl, application_name: 'lamplight-sync-listener' });
+    const client = new pg.Client({ connectionString: this.databaseUrl, application_name: 'lamplight-sync-listener', connectionTimeoutMillis: 5000 });
     client.on('notification', (message) => {
       const poke = parsePoke(message.payload);
       if (poke) for (const subscriber of this.subscribers.get(poke.userId) ?? []) subscriber(poke.seq);

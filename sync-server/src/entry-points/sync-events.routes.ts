@@ -58,6 +58,10 @@ export function syncEventsRoutes(dataSource: DataSource, listener: SyncListener,
     } catch {
       throw new AppError(503, 'unavailable', 'Live updates are unavailable right now; sync still works');
     }
+    if (req.socket.destroyed) {
+      unsubscribe(); // the device went away while we subscribed: 'close' has fired already
+      return;
+    }
     res.status(200).set({
       'Content-Type': 'text/event-stream; charset=utf-8',
       // no-transform: proxies and compression middleware leave the stream alone.
