@@ -15,11 +15,11 @@ interface TransactionClient {
  * Queues a poke for every instance, inside the push's own transaction: PostgreSQL delivers a
  * NOTIFY only when its transaction commits (and drops it on rollback), so a poke can never
  * arrive before the change it announces is visible to a pull. The payload is the reader and the
- * sequence this transaction reached (`currval` is per session, so it is ours; it is at least
- * every sequence the reader has stored now), used as the stream's event id.
+ * sequence's last value, which is at least every sequence this transaction (and so the reader,
+ * whose pushes take turns) has taken; it becomes the stream's event id.
  */
 export async function notifyPushed(client: TransactionClient, userId: string): Promise<void> {
-  await client.query({ text: `SELECT pg_notify('${SYNC_CHANNEL}', $1::text || ':' || currval('sync_seq'))`, values: [userId] });
+  await client.query({ text: `SELECT pg_notify('${SYNC_CHANNEL}', $1::text || ':' || (SELECT last_value FROM sync_seq))`, values: [userId] });
 }
 
 /** A notification's payload read back; `null` for anything that is not ours. */
