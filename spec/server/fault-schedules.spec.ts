@@ -37,7 +37,7 @@ describe('Fault schedules (simulated devices, network and crashes)', () => {
     // The schedules did real work: many confirmed writes and requests to check.
     expect(totals.acknowledged).toBeGreaterThan(1000);
     expect(totals.requests).toBeGreaterThan(3000);
-  });
+  }, 60_000); // a few seconds here; room for a busy machine
 
   it('When the server forgets one change of a batch, then the checks find a schedule that shows it (and shrink it)', async () => {
     /** A broken server: answers 200 for a push of two or more changes but drops the last one. */
@@ -52,7 +52,7 @@ describe('Fault schedules (simulated devices, network and crashes)', () => {
     const { details } = await schedulesHold(() => new ForgetfulServer(), 300);
     expect(details.failed).toBeTrue();
     expect(String(details.errorInstance)).toMatch(/"lostAcknowledged":[1-9]/);
-  });
+  }, 60_000);
 
   it('When a pull page loses its last change, then the checks find divergent devices', async () => {
     class LeakyPullServer extends ServerModel {
@@ -65,7 +65,7 @@ describe('Fault schedules (simulated devices, network and crashes)', () => {
     const { details } = await schedulesHold(() => new LeakyPullServer(), 300);
     expect(details.failed).toBeTrue();
     expect(String(details.errorInstance)).toMatch(/"divergent":[1-9]/);
-  });
+  }, 60_000);
 });
 
 describe('The in-memory server model against the real server (same schedules, real PostgreSQL)', () => {
