@@ -68,10 +68,14 @@ describe('Fault schedules (simulated devices, network and crashes)', () => {
   }, 60_000);
 });
 
-describe('The in-memory server model against the real server (same schedules, real PostgreSQL)', () => {
+describe('The in-memory server model against the real server (same schedules, two instances, real PostgreSQL)', () => {
   let server: RunningServer;
-  beforeAll(async () => (server = await startTestServer()));
-  afterAll(() => server.close());
+  let other: RunningServer;
+  beforeAll(async () => ([server, other] = await Promise.all([startTestServer(), startTestServer()])));
+  afterAll(async () => {
+    await server.close();
+    await other.close();
+  });
 
   /** Answers as the devices see them: cursors are each server's own, the rest must match. */
   const comparable = (request: SimRequest, response: SimResponse) => {
@@ -87,7 +91,9 @@ describe('The in-memory server model against the real server (same schedules, re
     for (const [n, schedule] of schedules.entries()) {
       const reader = await registerReader(server.app);
       const startMs = Date.now(); // the real server checks clocks against its own time
-      const real: Outcome = await runSchedule(schedule, new HttpSimServer(() => server.baseUrl, reader.accessToken), startMs);
+      // Requests alternate between two instances on the one database, as behind a load balancer.
+      let turn = 0;
+      const real: Outcome = await runSchedule(schedule, new HttpSimServer(() => [server, other][turn++ % 2]!.baseUrl, reader.accessToken), startMs);
       const model: Outcome = await runSchedule(schedule, new ServerModel(), startMs);
 
       expect(isClean(real)).withContext(`schedule ${n} on the real server: ${JSON.stringify(summary(real))}`).toBeTrue();
