@@ -13,7 +13,7 @@ import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
 import { syncEventsRoutes } from './entry-points/sync-events.routes';
-import { SyncListener } from './data-access/sync-notifications';
+import { SyncListener } from './data-access/sync-listener';
 import { uploadsRoutes } from './entry-points/uploads.routes';
 import { PostgresAttemptStore } from './data-access/attempt-store';
 import { SyncStore } from './data-access/sync-store';

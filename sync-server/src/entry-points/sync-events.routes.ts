@@ -2,7 +2,8 @@ import { Router, type Request, type Response } from 'express';
 import { decodeJwt } from 'jose';
 import type { DataSource } from 'typeorm';
 
-import { latestSeq, type SyncListener } from '../data-access/sync-notifications';
+import type { SyncListener } from '../data-access/sync-listener';
+import { latestSeq } from '../data-access/sync-notifications';
 import { AppError } from '../errors';
 import { callerOf } from './require-auth';
 
