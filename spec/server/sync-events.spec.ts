@@ -139,6 +139,19 @@ describe('Live sync events across two server instances', () => {
     expect(listeners.length).toBeGreaterThanOrEqual(1);
   });
 
+  it('When a reader already has 20 streams on an instance, then another is refused with 429 and the others stay open', async () => {
+    const reader = await registerReader(first.app);
+    const open20 = await Promise.all(Array.from({ length: 20 }, () => open(second.baseUrl, reader.accessToken)));
+    expect(open20.map((s) => s.status)).toEqual(Array(20).fill(200));
+    await Promise.all(open20.map((s) => s.nextSync(0)));
+    expect((await open(second.baseUrl, reader.accessToken)).status).toBe(429);
+    // Another instance counts its own streams.
+    expect((await open(first.baseUrl, reader.accessToken)).status).toBe(200);
+    open20[0]!.close();
+    await new Promise((resolve) => setTimeout(resolve, 200));
+    expect((await open(second.baseUrl, reader.accessToken)).status).toBe(200);
+  });
+
   it('When many streams are open on one instance, then it still uses one listening connection', async () => {
     const readers = await Promise.all([registerReader(first.app), registerReader(first.app)]);
     for (const reader of readers) for (let n = 0; n < 5; n++) await open(second.baseUrl, reader.accessToken);
