@@ -14,6 +14,8 @@ import { adminRoutes } from './entry-points/admin.routes';
 import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
+import { syncEventsRoutes } from './entry-points/sync-events.routes';
+import { SyncListener } from './data-access/sync-listener';
 import { uploadsRoutes } from './entry-points/uploads.routes';
 import { catalogueRoutes } from './entry-points/catalogue.routes';
 import { Catalogue } from './domain/catalogue/catalogue';
@@ -83,6 +85,7 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
+  app.use('/api/sync/events', syncEventsRoutes(dataSource, new SyncListener(config.syncEvents.listenDatabaseUrl), config.syncEvents));
   app.use(
     '/api/sync',
     readerLimiter('sync', config.syncRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'sync')),

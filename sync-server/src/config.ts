@@ -51,6 +51,8 @@ export interface ServerConfig {
   /** Sync requests per reader per minute, and uploads per reader per 10 minutes. */
   readonly syncRateLimit: number;
   readonly uploadRateLimit: number;
+  /** Live updates: where the one LISTEN connection goes (a session, not a transaction pooler) and the heartbeat. */
+  readonly syncEvents: { readonly listenDatabaseUrl: string; readonly heartbeatMs: number };
 }
 
 /** Generous for covers of a few hundred KB each: several thousand books. */
@@ -118,6 +120,8 @@ const environmentSchema = z
     LAMPLIGHT_HASH_QUEUE: z.coerce.number().int().min(1).max(10_000).default(32),
     LAMPLIGHT_SYNC_RATE_LIMIT: z.coerce.number().int().min(1).default(600),
     LAMPLIGHT_UPLOAD_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
+    LAMPLIGHT_LISTEN_DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'must be a postgres:// URL').optional(),
+    LAMPLIGHT_SYNC_HEARTBEAT_MS: z.coerce.number().int().min(100).max(120_000).default(25_000),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
@@ -164,5 +168,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     hashQueue: values.LAMPLIGHT_HASH_QUEUE,
     syncRateLimit: values.LAMPLIGHT_SYNC_RATE_LIMIT,
     uploadRateLimit: values.LAMPLIGHT_UPLOAD_RATE_LIMIT,
+    syncEvents: { listenDatabaseUrl: values.LAMPLIGHT_LISTEN_DATABASE_URL ?? values.DATABASE_URL, heartbeatMs: values.LAMPLIGHT_SYNC_HEARTBEAT_MS },
   };
 }

@@ -5,6 +5,7 @@ import { wins } from '../../../shared/sync/merge';
 import { columnName } from '../../../shared/sync/schema/field';
 import { COLLECTIONS, collectionSpec } from '../../../shared/sync/schema/collections';
 import { mergeSql, pullSql } from './merge-sql';
+import { notifyPushed } from './sync-notifications';
 
 const SPECS = Object.values(COLLECTIONS);
 /** Per collection: its columns by field. */
@@ -96,6 +97,7 @@ export class SyncStore {
         const result = await client.query({ ...text, values: [userId, JSON.stringify([...rows.values()])] });
         won += Number(result.rows[0]?.['won'] ?? 0);
       }
+      if (won > 0) await notifyPushed(client, userId); // live updates: delivered on commit only
       return won;
     });
     return { applied, duplicates: changes.length - applied };

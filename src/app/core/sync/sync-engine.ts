@@ -11,6 +11,7 @@ import { JournalStore } from '../data/journal-store';
 import { liveQuerySignal } from '../data/live-query';
 import { LocalJournal } from '../data/local-journal';
 import { DexieSyncPorts } from './dexie-sync-ports';
+import { SyncEvents } from './sync-events';
 
 /** What the engine is doing right now. */
 export type SyncPhase = 'idle' | 'syncing' | 'offline' | 'needs-sign-in' | 'retrying';
@@ -54,6 +55,7 @@ export class SyncEngine {
     effect(() => {
       if (this.journal.db() && !this.auth.needsSignIn()) this.schedule(0);
     });
+    inject(SyncEvents).connect(() => void this.syncNow()); // another device pushed: pull now
     inject(JournalStore)
       .localWrites.pipe(debounceTime(WRITE_DEBOUNCE_MS), takeUntilDestroyed(destroyRef))
       .subscribe(() => this.schedule(0));

@@ -1,0 +1,107 @@
+import { Router, type Request, type Response } from 'express';
+import { decodeJwt } from 'jose';
+import type { DataSource } from 'typeorm';
+
+import type { SyncListener } from '../data-access/sync-listener';
+import { latestSeq } from '../data-access/sync-notifications';
+import { AppError } from '../errors';
+import { callerOf } from './require-auth';
+
+/** A reader rarely has more than a few tabs and devices open; past this, a stream is refused. */
+export const MAX_STREAMS_PER_READER = 20;
+/** Clients (and EventSource) wait this long before reconnecting after the stream ends. */
+const RETRY_MS = 3000;
+
+export interface SyncEventsOptions {
+  /** A comment line this often keeps proxies and NATs from closing an idle stream. */
+  readonly heartbeatMs: number;
+}
+
+/**
+ * `GET /api/sync/events` (behind requireAuth): a Server-Sent Events stream that pokes the device
+ * to pull whenever any device of the same reader pushed, through any server instance.
+ *
+ * Authentication is the ordinary `Authorization: Bearer` header: the app reads the stream with
+ * `fetch`, not `EventSource` (which cannot send headers), so no token ever sits in a URL (where
+ * proxies and logs keep it) and no ticket needs storing for whichever instance the load balancer
+ * picks. The stream ends when the access token expires; the client reconnects with a fresh one,
+ * so a revoked device loses its stream within one token lifetime.
+ *
+ * Events: `event: sync`, `id:` the reader's sequence the poke announces, `data: {"seq":N}`. On
+ * connect the current sequence is sent unless `Last-Event-ID` shows the device saw it already.
+ */
+export function syncEventsRoutes(dataSource: DataSource, listener: SyncListener, options: SyncEventsOptions): Router {
+  const router = Router();
+
+  router.get('/', async (req: Request, res: Response) => {
+    const { userId } = callerOf(res);
+    if (listener.streamsOf(userId) >= MAX_STREAMS_PER_READER) {
+      throw new AppError(429, 'too_many_streams', `At most ${MAX_STREAMS_PER_READER} live streams per reader; close one first`);
+    }
+    const lastEventId = parseLastEventId(req.get('last-event-id'));
+    let lastSent = lastEventId ?? -1;
+    let open = true;
+    let sending = Promise.resolve();
+
+    // A poke with no sequence (after the listener reconnected) reads the latest one itself.
+    const poke = (seq: number | null) => {
+      sending = sending.then(async () => {
+        const next = seq ?? (await latestSeq(dataSource, userId).catch(() => null));
+        if (!open || next === null || next <= lastSent) return;
+        lastSent = next;
+        res.write(`event: sync\nid: ${next}\ndata: ${JSON.stringify({ seq: next })}\n\n`);
+      });
+    };
+
+    let unsubscribe: () => void;
+    try {
+      unsubscribe = await listener.subscribe(userId, poke);
+    } catch {
+      throw new AppError(503, 'unavailable', 'Live updates are unavailable right now; sync still works');
+    }
+    if (req.socket.destroyed) {
+      unsubscribe(); // the device went away while we subscribed: 'close' has fired already
+      return;
+    }
+    res.status(200).set({
+      'Content-Type': 'text/event-stream; charset=utf-8',
+      // no-transform: proxies and compression middleware leave the stream alone.
+      'Cache-Control': 'no-cache, no-store, no-transform',
+      // nginx would otherwise buffer the response and hold pokes back.
+      'X-Accel-Buffering': 'no',
+      Connection: 'keep-alive',
+    });
+    res.flushHeaders();
+    res.socket?.setNoDelay(true);
+    res.write(`retry: ${RETRY_MS}\n\n`);
+
+    const heartbeat = setInterval(() => res.write(`: heartbeat ${new Date().toISOString()}\n\n`), options.heartbeatMs);
+    const expiry = setTimeout(() => res.end(), msUntilTokenExpiry(req));
+    const finish = () => {
+      if (!open) return;
+      open = false;
+      clearInterval(heartbeat);
+      clearTimeout(expiry);
+      unsubscribe();
+    };
+    res.on('close', finish);
+    res.on('error', finish);
+
+    // LISTEN is active now: whatever committed before is covered by this read, after it by pokes.
+    poke(null);
+  });
+
+  return router;
+}
+
+/** `Last-Event-ID` as a sequence; anything else counts as absent (a fresh start, never an error). */
+function parseLastEventId(header: string | undefined): number | undefined {
+  return header !== undefined && /^\d{1,15}$/.test(header.trim()) ? Number(header.trim()) : undefined;
+}
+
+/** requireAuth has verified the token already; its `exp` says how long this stream may live. */
+function msUntilTokenExpiry(req: Request): number {
+  const token = /^Bearer (.+)$/.exec(req.get('authorization') ?? '')?.[1];
+  const exp = token ? decodeJwt(token).exp : undefined;
+  return exp === undefined ? 0 : Math.max(0, exp * 1000 - Date.now());
+}
