@@ -1,3 +1,5 @@
+import type { OrSetState } from './or-set';
+
 /**
  * One change to one field of one row: the unit the outbox keeps, the client pushes and the
  * server merges. `id` is unique per change so a re-sent batch is applied once.
@@ -16,8 +18,12 @@ export interface PulledChange {
   readonly collection: string;
   readonly rowId: string;
   readonly field: string;
+  /** For a set field, its current elements (what an older app applies as a whole list). */
   readonly value: unknown;
+  /** The field's clock: for a set field, the greatest clock it has seen. */
   readonly hlc: string;
+  /** Set fields only: the per-element state, joined into the device's own. */
+  readonly state?: OrSetState;
 }
 
 export interface PushRequest {

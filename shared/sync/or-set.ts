@@ -24,9 +24,15 @@ export interface OrSetEntry {
 
 const maxClock = (x: string | undefined, y: string | undefined) => (x === undefined ? y : y === undefined || x >= y ? x : y);
 
+/** Sets an own property even for keys such as `__proto__` (a tag may be any text). */
+function setOwn<T>(target: Record<string, T>, key: string, value: T): void {
+  Object.defineProperty(target, key, { value, enumerable: true, writable: true, configurable: true });
+}
+const own = <T>(record: Readonly<Record<string, T>>, key: string): T | undefined => (Object.hasOwn(record, key) ? record[key] : undefined);
+
 function joinClocks(x: Readonly<Record<string, string>> = {}, y: Readonly<Record<string, string>> = {}): Record<string, string> {
   const out: Record<string, string> = { ...x };
-  for (const [node, clock] of Object.entries(y)) out[node] = maxClock(out[node], clock)!;
+  for (const [node, clock] of Object.entries(y)) setOwn(out, node, maxClock(own(out, node), clock)!);
   return out;
 }
 
@@ -36,8 +42,8 @@ export function joinOrSet(x: OrSetState | null | undefined, y: OrSetState | null
   if (!y) return x;
   const out: Record<string, OrSetEntry> = { ...x };
   for (const [element, entry] of Object.entries(y)) {
-    const mine = Object.hasOwn(out, element) ? out[element] : undefined;
-    out[element] = mine ? { a: joinClocks(mine.a, entry.a), r: joinClocks(mine.r, entry.r) } : { a: { ...entry.a }, r: { ...entry.r } };
+    const mine = own(out, element);
+    setOwn(out, element, mine ? { a: joinClocks(mine.a, entry.a), r: joinClocks(mine.r, entry.r) } : { a: { ...entry.a }, r: { ...entry.r } });
   }
   return out;
 }
@@ -46,7 +52,7 @@ export function joinOrSet(x: OrSetState | null | undefined, y: OrSetState | null
 function firstLiveAdd(entry: OrSetEntry): string | null {
   let first: string | null = null;
   for (const [node, clock] of Object.entries(entry.a)) {
-    const removed = entry.r[node];
+    const removed = own(entry.r, node);
     if ((removed === undefined || clock > removed) && (first === null || clock < first)) first = clock;
   }
   return first;
@@ -72,16 +78,32 @@ export function orSetElements(state: OrSetState | null | undefined): string[] {
  * app's whole-list push ("set to exactly this", read against the server's state) both go
  * through here.
  */
-export function orSetDelta(state: OrSetState | null | undefined, next: readonly string[], hlc: string): OrSetState {
+export function orSetDelta(
+  state: OrSetState | null | undefined,
+  next: readonly string[],
+  hlc: string,
+  options: { onlySeenBefore?: boolean } = {},
+): OrSetState {
   const node = parseHlc(hlc)?.node;
   if (!node) throw new RangeError(`Not a clock: ${hlc}`);
   const current = new Set(orSetElements(state));
   const wanted = new Set(next);
   const delta: Record<string, OrSetEntry> = {};
-  for (const element of wanted) if (!current.has(element)) delta[element] = { a: { [node]: hlc }, r: {} };
-  for (const element of current) if (!wanted.has(element)) delta[element] = { a: {}, r: { ...state![element]!.a } };
+  for (const element of wanted) if (!current.has(element)) setOwn(delta, element, { a: { [node]: hlc }, r: {} });
+  for (const element of current) {
+    if (wanted.has(element)) continue;
+    // An older app's list was written at `hlc`: it cannot have seen adds made after it.
+    const seen = Object.entries(own(state!, element)!.a).filter(([, clock]) => !options.onlySeenBefore || clock < hlc);
+    if (seen.length > 0) setOwn(delta, element, { a: {}, r: Object.fromEntries(seen) });
+  }
   return delta;
 }
+
+/** A plain list written at one clock, as a state: how lists kept before sets merged per element are read. */
+export const orSetFromList = (list: readonly string[], hlc: string): OrSetState => orSetDelta(null, list, hlc);
+
+/** Whether a state has nothing in it (a delta that changes nothing). */
+export const isEmptyOrSet = (state: OrSetState): boolean => Object.keys(state).length === 0;
 
 /** Every clock a state mentions, greatest first: the field's clock is the greatest of them. */
 export function greatestClock(state: OrSetState): string | null {

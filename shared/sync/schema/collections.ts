@@ -1,7 +1,7 @@
 import * as z from 'zod';
 
 import { defineCollection, type RowOf } from './collection';
-import { field } from './field';
+import { field, type FieldSpec } from './field';
 
 export const BOOK_FORMATS = ['print', 'ebook', 'audiobook'] as const;
 export const BOOK_STATUSES = ['tbr', 'reading', 'paused', 'finished', 'dnf'] as const;
@@ -325,4 +325,10 @@ export type CollectionName = keyof typeof COLLECTIONS;
 
 export function collectionSpec(name: string) {
   return Object.hasOwn(COLLECTIONS, name) ? COLLECTIONS[name as CollectionName] : undefined;
+}
+
+/** The spec of one field of a collection, or `undefined` (own properties only: `__proto__` is no field). */
+export function fieldSpecOf(collection: string, field: string): FieldSpec | undefined {
+  const fields: Readonly<Record<string, FieldSpec>> | undefined = collectionSpec(collection)?.fields;
+  return fields && Object.hasOwn(fields, field) ? fields[field] : undefined;
 }

@@ -2,8 +2,10 @@ import type { DataSource } from 'typeorm';
 
 import type { FieldChange, PulledChange } from '../../../shared/sync/field-change';
 import { wins } from '../../../shared/sync/merge';
-import { columnName } from '../../../shared/sync/schema/field';
-import { COLLECTIONS, collectionSpec } from '../../../shared/sync/schema/collections';
+import { setDeltaOf } from '../../../shared/sync/merge-set';
+import { joinOrSet, type OrSetState } from '../../../shared/sync/or-set';
+import { columnName, type FieldSpec } from '../../../shared/sync/schema/field';
+import { COLLECTIONS, collectionSpec, fieldSpecOf } from '../../../shared/sync/schema/collections';
 import { mergeSql, pullSql } from './merge-sql';
 
 const SPECS = Object.values(COLLECTIONS);
@@ -35,10 +37,14 @@ interface PgClient {
   query(config: { name?: string; text: string; values?: unknown[] } | string): Promise<{ rows: Record<string, unknown>[] }>;
 }
 
-/** One row's pieces from a batch: the winning value (by column) and clock of each field it touches. */
+/**
+ * One row's pieces from a batch: the winning value (by column) and clock of each field it
+ * touches, and for set fields the joined delta.
+ */
 interface RowPieces {
   id: string;
   clocks: Record<string, string>;
+  sets: Record<string, OrSetState>;
   [column: string]: unknown;
 }
 
@@ -64,19 +70,8 @@ export class SyncStore {
    * Such changes are counted as `duplicates`, like any change that arrived after a newer value.
    */
   async push(userId: string, changes: readonly FieldChange[]): Promise<{ applied: number; duplicates: number }> {
-    const byCollection = new Map<string, Map<string, RowPieces>>();
-    for (const change of changes) {
-      const rows = byCollection.get(change.collection) ?? new Map<string, RowPieces>();
-      byCollection.set(change.collection, rows);
-      const row = rows.get(change.rowId) ?? { id: change.rowId, clocks: {} };
-      rows.set(change.rowId, row);
-      // One statement may not touch a row twice: reduce the batch to one winner per field first.
-      if (wins(change.hlc, row.clocks[change.field])) {
-        row[COLUMNS.get(change.collection)!.get(change.field)!] = change.value;
-        row.clocks[change.field] = change.hlc;
-      }
-    }
     const applied = await this.inUserTransaction(userId, async (client) => {
+      const byCollection = reduceBatch(changes, await storedSetStates(client, userId, changes));
       let won = 0;
       for (const [collection, rows] of byCollection) {
         const touched = new Set<string>();
@@ -144,11 +139,62 @@ export class SyncStore {
 
 }
 
+/**
+ * Reduces a batch to one piece per row: one statement may not touch a row twice. A
+ * last-writer-wins field keeps its winner; a set field joins its deltas, and an older app's whole
+ * list becomes a delta against the stored state (and what the batch did before it).
+ */
+function reduceBatch(changes: readonly FieldChange[], stored: ReadonlyMap<string, OrSetState>): Map<string, Map<string, RowPieces>> {
+  const byCollection = new Map<string, Map<string, RowPieces>>();
+  for (const change of changes) {
+    const rows = byCollection.get(change.collection) ?? new Map<string, RowPieces>();
+    byCollection.set(change.collection, rows);
+    const row = rows.get(change.rowId) ?? { id: change.rowId, clocks: {}, sets: {} };
+    rows.set(change.rowId, row);
+    if (fieldSpecOf(change.collection, change.field)?.kind === 'set') {
+      const before = joinOrSet(stored.get(storedKey(change.collection, change.rowId, change.field)), row.sets[change.field]);
+      row.sets[change.field] = joinOrSet(row.sets[change.field], setDeltaOf(before, change));
+      if (wins(change.hlc, row.clocks[change.field])) row.clocks[change.field] = change.hlc;
+    } else if (wins(change.hlc, row.clocks[change.field])) {
+      row[COLUMNS.get(change.collection)!.get(change.field)!] = change.value;
+      row.clocks[change.field] = change.hlc;
+    }
+  }
+  return byCollection;
+}
+
+const storedKey = (collection: string, rowId: string, field: string) => `${collection}/${rowId}/${field}`;
+
+/** The stored states of set fields that a batch writes whole lists to (older apps), read under the user's lock. */
+async function storedSetStates(client: PgClient, userId: string, changes: readonly FieldChange[]): Promise<Map<string, OrSetState>> {
+  const rowsByCollection = new Map<string, Set<string>>();
+  for (const change of changes) {
+    if (!Array.isArray(change.value) || fieldSpecOf(change.collection, change.field)?.kind !== 'set') continue;
+    rowsByCollection.set(change.collection, (rowsByCollection.get(change.collection) ?? new Set()).add(change.rowId));
+  }
+  const states = new Map<string, OrSetState>();
+  for (const [collection, rowIds] of rowsByCollection) {
+    const { rows } = await client.query({
+      text: `SELECT id, sets FROM ${collectionSpec(collection)!.table} WHERE user_id = $1 AND id = ANY($2::uuid[])`,
+      values: [userId, [...rowIds]],
+    });
+    for (const row of rows) {
+      for (const [field, state] of Object.entries(row['sets'] as Record<string, OrSetState>)) states.set(storedKey(collection, row['id'] as string, field), state);
+    }
+  }
+  return states;
+}
+
 function rowFields(collection: string, row: Record<string, unknown>): PulledChange[] {
   const spec = collectionSpec(collection)!;
   const clocks = row['clocks'] as Record<string, string>;
+  const sets = (row['sets'] ?? {}) as Record<string, OrSetState>;
   const rowId = row['id'] as string;
-  return Object.keys(spec.fields)
-    .filter((field) => clocks[field] !== undefined)
-    .map((field) => ({ collection, rowId, field, value: row[columnName(field)] ?? null, hlc: clocks[field]! }));
+  return Object.entries(spec.fields as Record<string, FieldSpec>)
+    .filter(([field]) => clocks[field] !== undefined)
+    .map(([field, fieldSpec]) => {
+      const value = row[columnName(field)] ?? null;
+      const hlc = clocks[field]!;
+      return fieldSpec.kind === 'set' ? { collection, rowId, field, value, hlc, state: sets[field] ?? {} } : { collection, rowId, field, value, hlc };
+    });
 }

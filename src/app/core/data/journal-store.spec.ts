@@ -102,5 +102,24 @@ describe('JournalStore (IndexedDB through Dexie)', () => {
     // The receive rule: the device's clock moved past what it saw.
     expect((await db().meta.get('clock'))!.value > newer).toBeTrue();
   });
-});
 
+  it('writes a set field as a delta, and a pulled state from another device keeps this device\'s unsynced tag', async () => {
+    const id = await store.create('books', { title: 'Fern Letters', tags: ['signed'] });
+    await store.write('books', id, { tags: ['signed', 'reread'] });
+    const [, delta] = (await db().outbox.toArray()).filter((change) => change.field === 'tags');
+    expect(Object.keys(delta!.value as object)).toEqual(['reread']); // only what changed
+    const ports = new DexieSyncPorts(db(), TestBed.inject(HttpClient));
+    const otherClock = formatHlc({ wall: Date.now() + 1000, counter: 0, node: 'laptop' });
+
+    await ports.apply({
+      changes: [
+        { collection: 'books', rowId: id, field: 'tags', value: ['book club'], hlc: otherClock, state: { 'book club': { a: { laptop: otherClock }, r: {} } } },
+      ],
+      cursor: 'x',
+      hasMore: false,
+      serverTime: new Date().toISOString(),
+    });
+
+    expect([...((await db().rows('books').get(id))?.['tags'] as string[])].sort()).toEqual(['book club', 'reread', 'signed']);
+  });
+});

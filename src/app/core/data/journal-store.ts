@@ -3,9 +3,11 @@ import { Subject } from 'rxjs';
 
 import { HlcClock } from '@shared/sync/hlc';
 import { emptyRow, type LocalRow } from '@shared/sync/local-row';
+import { currentSetState, mergeSetField } from '@shared/sync/merge-set';
+import { isEmptyOrSet, orSetDelta } from '@shared/sync/or-set';
 import { validatePatch } from '@shared/sync/validate-patch';
 import type { CollectionName } from '@shared/sync/schema/collections';
-import { COLLECTIONS } from '@shared/sync/schema/collections';
+import { COLLECTIONS, fieldSpecOf } from '@shared/sync/schema/collections';
 import type { PatchOf, RowOf } from '@shared/sync/schema/collection';
 
 import { deviceId } from '../device/device-id';
@@ -62,6 +64,18 @@ export class JournalStore {
         hlc ??= new HlcClock(deviceId(), Date.now, (await db.meta.get('clock'))?.value).tick();
         const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
         for (const [field, value] of fields) {
+          if (fieldSpecOf(collection, field)?.kind === 'set') {
+            // Sent as a delta (what was added, which adds were removed), so other devices' edits stay.
+            const current = { value: row[field], hlc: row._hlc[field], state: row._sets?.[field] };
+            const delta = orSetDelta(currentSetState(current), value as string[], hlc);
+            if (isEmptyOrSet(delta)) continue; // the same elements in another order
+            const merged = mergeSetField(current, { value: delta, hlc });
+            next[field] = merged.value;
+            next['_sets'] = { ...(next['_sets'] as object), [field]: merged.state };
+            (next['_hlc'] as Record<string, string>)[field] = hlc;
+            outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value: delta, hlc });
+            continue;
+          }
           next[field] = value;
           (next['_hlc'] as Record<string, string>)[field] = hlc;
           outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value, hlc });
