@@ -32,8 +32,14 @@ export interface PushRequest {
 }
 
 export interface PushResponse {
+  /** Changes that took effect. */
   readonly applied: number;
+  /** Changes the server already had (a re-send). */
   readonly duplicates: number;
+  /** Changes that lost to a write with a greater clock (another device's, usually). */
+  readonly superseded: number;
+  /** The superseded changes by id, with the clock that beat each. */
+  readonly overwritten: readonly { readonly id: string; readonly by: string }[];
   readonly serverTime: string;
 }
 
@@ -49,6 +55,8 @@ export interface PullResponse {
 export const MAX_PUSH_CHANGES = 1000;
 export const MAX_PUSH_BYTES = 1024 * 1024;
 export const MAX_PULL_LIMIT = 5000;
+/** A pull page holds about this much JSON at most (always at least one row). */
+export const MAX_PULL_BYTES = 2 * 1024 * 1024;
 
 /** Why one change of a refused batch was refused. */
 export interface ChangeProblem {

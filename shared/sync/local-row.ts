@@ -47,7 +47,7 @@ export function applyPulled(row: LocalRow, changes: readonly Pick<PulledChange, 
       continue;
     }
     const current = (clocks ?? row._hlc)[change.field];
-    if (!wins(change.hlc, current)) continue;
+    if (!wins(change.hlc, current, change.value, (next ?? row)[change.field])) continue;
     next ??= { ...row };
     clocks ??= { ...row._hlc };
     next[change.field] = change.value;

@@ -51,6 +51,12 @@ export async function runSyncCycle(ports: SyncPorts, batchSize = 500): Promise<C
     if (outcome.kind === 'applied') {
       await ports.acknowledge(batch);
       pushed += batch.length;
+    } else if (outcome.kind === 'refused' && outcome.problems.length === 0 && batch.length > 1) {
+      // Refused without saying which change (the database's own check): halve to find it.
+      size = Math.max(1, Math.floor(batch.length / 2));
+    } else if (outcome.kind === 'refused' && outcome.problems.length === 0) {
+      await ports.setAside([{ change: batch[0]!, problem: { index: 0, code: 'unstorable', reason: 'The server cannot store this change' } }]);
+      refused++;
     } else if (outcome.kind === 'refused') {
       const setAside = outcome.problems.filter((p) => batch[p.index]).map((problem) => ({ change: batch[problem.index]!, problem }));
       if (setAside.length === 0) throw new Error('The server refused a batch without saying which change');

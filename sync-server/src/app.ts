@@ -43,7 +43,9 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.set('trust proxy', 'loopback');
   app.use(securityHeaders());
 
-  app.use('/api', express.json({ limit: '64kb' }));
+  const smallJson = express.json({ limit: '64kb' });
+  // /api/sync parses its own bodies with the sync contract's limits, once the caller is known.
+  app.use('/api', (req, res, next) => (req.path.startsWith('/sync/') ? next() : smallJson(req, res, next)));
   app.use('/api/health', healthRoutes(dataSource));
   app.use(
     '/api/auth',
@@ -52,7 +54,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
-  app.use('/api/sync', syncRoutes(new SyncStore(dataSource)));
+  app.use('/api/sync', syncRoutes(new SyncStore(dataSource), config.jwtSecret));
   app.use('/api/uploads', uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);

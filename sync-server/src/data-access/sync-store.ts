@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 
-import type { FieldChange, PulledChange } from '../../../shared/sync/field-change';
+import { MAX_PULL_BYTES, type FieldChange, type PulledChange } from '../../../shared/sync/field-change';
 import { wins } from '../../../shared/sync/merge';
 import { setDeltaOf } from '../../../shared/sync/merge-set';
 import { joinOrSet, type OrSetState } from '../../../shared/sync/or-set';
@@ -48,6 +48,15 @@ interface RowPieces {
   [column: string]: unknown;
 }
 
+/** What a push did with each change (see {@link classify}). */
+export interface PushResult {
+  readonly applied: number;
+  readonly duplicates: number;
+  readonly superseded: number;
+  /** The superseded changes, with the clock that beat each. */
+  readonly overwritten: { readonly id: string; readonly by: string }[];
+}
+
 export interface PulledPage {
   readonly changes: PulledChange[];
   /** The sequence to continue after. */
@@ -69,10 +78,10 @@ export class SyncStore {
    * change sent again finds its own clock (or a later one) already stored and changes nothing.
    * Such changes are counted as `duplicates`, like any change that arrived after a newer value.
    */
-  async push(userId: string, changes: readonly FieldChange[]): Promise<{ applied: number; duplicates: number }> {
-    const applied = await this.inUserTransaction(userId, async (client) => {
+  async push(userId: string, changes: readonly FieldChange[]): Promise<PushResult> {
+    return this.inUserTransaction(userId, async (client) => {
       const byCollection = reduceBatch(changes, await storedSetStates(client, userId, changes));
-      let won = 0;
+      const before = new Map<string, { c: Record<string, string>; g: (string | null)[] }>();
       for (const [collection, rows] of byCollection) {
         const touched = new Set<string>();
         for (const row of rows.values()) for (const field of Object.keys(row.clocks)) touched.add(field);
@@ -80,11 +89,11 @@ export class SyncStore {
         const fields = Object.keys(collectionSpec(collection)!.fields).filter((field) => touched.has(field));
         const statement = mergeStatement(collection, fields);
         const result = await client.query({ ...statement, values: [userId, JSON.stringify([...rows.values()])] });
-        won += Number(result.rows[0]?.['won'] ?? 0);
+        const stored = (result.rows[0]?.['before'] ?? {}) as Record<string, { c: Record<string, string>; g: (string | null)[] }>;
+        for (const [rowId, entry] of Object.entries(stored)) before.set(`${collection}/${rowId}`, entry);
       }
-      return won;
+      return classify(changes, byCollection, before);
     });
-    return { applied, duplicates: changes.length - applied };
   }
 
   /**
@@ -116,27 +125,32 @@ export class SyncStore {
    * sequence order. Whole rows, not just the fields that changed: a row's older fields may not
    * have reached this cursor's holder yet (the row can move past a page boundary while they
    * page), and sending current values again is harmless to an idempotent merge. Pages end on
-   * whole rows.
+   * whole rows, hold at most `limit` fields and about `maxBytes` of JSON; the first row always
+   * fits, so paging always moves on.
    */
-  async pull(userId: string, sinceSeq: number, limit: number): Promise<PulledPage> {
-    const rows: { collection: string; seq: string; row: Record<string, unknown> }[] = await this.dataSource.query(PULL_SQL, [
+  async pull(userId: string, sinceSeq: number, limit: number, maxBytes = MAX_PULL_BYTES): Promise<PulledPage> {
+    // Every row has at least one field, so `limit` rows always fill a page; one more tells whether more remain.
+    const rows: { c: number; seq: string; keys: string; row: Record<string, unknown> }[] = await this.dataSource.query(PULL_SQL, [
       userId,
       sinceSeq,
       limit + 1,
+      maxBytes,
     ]);
     const changes: PulledChange[] = [];
     let lastSeq = sinceSeq;
     let taken = 0;
-    for (const { collection, seq, row } of rows) {
-      const pieces = rowFields(collection, row);
-      if (taken > 0 && changes.length + pieces.length > limit) break;
+    let bytes = 0;
+    for (const { c, seq, row } of rows) {
+      const pieces = rowFields(SPECS[c]!.name, row);
+      const size = Buffer.byteLength(JSON.stringify(pieces));
+      if (taken > 0 && (changes.length + pieces.length > limit || bytes + size > maxBytes)) break;
       changes.push(...pieces);
+      bytes += size;
       lastSeq = Number(seq);
       taken++;
     }
-    return { changes, lastSeq, hasMore: taken < rows.length };
+    return { changes, lastSeq, hasMore: taken < Number(rows[0]?.keys ?? 0) };
   }
-
 }
 
 /**
@@ -155,12 +169,42 @@ function reduceBatch(changes: readonly FieldChange[], stored: ReadonlyMap<string
       const before = joinOrSet(stored.get(storedKey(change.collection, change.rowId, change.field)), row.sets[change.field]);
       row.sets[change.field] = joinOrSet(row.sets[change.field], setDeltaOf(before, change));
       if (wins(change.hlc, row.clocks[change.field])) row.clocks[change.field] = change.hlc;
-    } else if (wins(change.hlc, row.clocks[change.field])) {
+    } else if (wins(change.hlc, row.clocks[change.field], change.value, row[COLUMNS.get(change.collection)!.get(change.field)!])) {
       row[COLUMNS.get(change.collection)!.get(change.field)!] = change.value;
       row.clocks[change.field] = change.hlc;
     }
   }
   return byCollection;
+}
+
+/**
+ * Sorts a pushed batch: a change is a duplicate when the server already had its clock (a re-send,
+ * or a set change that added nothing new), superseded when a greater clock — stored, or later in
+ * the same batch — won its field, and applied otherwise.
+ */
+function classify(
+  changes: readonly FieldChange[],
+  byCollection: ReadonlyMap<string, ReadonlyMap<string, RowPieces>>,
+  before: ReadonlyMap<string, { c: Record<string, string>; g: (string | null)[] }>,
+): PushResult {
+  let applied = 0;
+  let duplicates = 0;
+  const overwritten: { id: string; by: string }[] = [];
+  for (const change of changes) {
+    const stored = before.get(`${change.collection}/${change.rowId}`);
+    const storedClock = stored?.c[change.field];
+    if (fieldSpecOf(change.collection, change.field)?.kind === 'set') {
+      if (!stored || stored.g.includes(change.field)) applied++;
+      else duplicates++;
+      continue;
+    }
+    const batchClock = byCollection.get(change.collection)!.get(change.rowId)!.clocks[change.field]!;
+    const winner = storedClock !== undefined && storedClock > batchClock ? storedClock : batchClock;
+    if (change.hlc < winner) overwritten.push({ id: change.id, by: winner });
+    else if (change.hlc === storedClock) duplicates++;
+    else applied++;
+  }
+  return { applied, duplicates, superseded: overwritten.length, overwritten };
 }
 
 const storedKey = (collection: string, rowId: string, field: string) => `${collection}/${rowId}/${field}`;
