@@ -6,6 +6,7 @@ import { MAX_PULL_BYTES } from '../../shared/sync/field-change';
 import { COLLECTIONS } from '../../shared/sync/schema/collections';
 import type { FieldSpec } from '../../shared/sync/schema/field';
 import { pullSql } from '../../sync-server/src/data-access/merge-sql';
+import { compressApi } from '../../sync-server/src/entry-points/compress-api';
 import { registerReader } from '../support/accounts';
 import { MemoryDevice } from '../support/memory-device';
 import { fieldChange, SyncClient } from '../support/sync-client';
@@ -162,5 +163,34 @@ describe('Sync sizes and limits', () => {
     for (const sort of nodes.filter((node) => node['Node Type'] === 'Sort')) {
       expect(sort['Actual Rows']).withContext('a sort of more than the page of keys').toBeLessThanOrEqual(limit * Object.keys(COLLECTIONS).length);
     }
+  });
+
+  it('gzips API answers for clients that accept it, and leaves an event stream uncompressed', async () => {
+    const { client, accessToken } = await reader();
+    for (let n = 0; n < 20; n++) await client.push([fieldChange(randomUUID(), 'title', `A fairly ordinary title ${n}`, { wall: NOW })]);
+    const { createServer, request } = await import('node:http');
+    const res = await fetch(`${server.baseUrl}/api/sync/pull`, { headers: { authorization: `Bearer ${accessToken}`, 'accept-encoding': 'gzip' } });
+    expect(res.headers.get('content-encoding')).toBe('gzip');
+    expect((await res.json()).changes.length).toBe(20);
+
+    // A stand-in stream route behind the same middleware (the live-updates route is another change).
+    const express = (await import('express')).default;
+    const app = express();
+    app.use(compressApi());
+    app.get('/events', (_req, res) => {
+      res.setHeader('Content-Type', 'text/event-stream');
+      res.end('data: '.padEnd(4000, 'x') + '\n\n');
+    });
+    const http = createServer(app).listen(0, '127.0.0.1');
+    await new Promise((resolve) => http.once('listening', resolve));
+    const port = (http.address() as { port: number }).port;
+    const encoding = await new Promise<string | undefined>((resolve) =>
+      request({ port, host: '127.0.0.1', path: '/events', headers: { 'accept-encoding': 'gzip' } }, (answer) => {
+        answer.resume();
+        resolve(answer.headers['content-encoding']);
+      }).end(),
+    );
+    http.close();
+    expect(encoding).toBeUndefined();
   });
 });

@@ -9,6 +9,7 @@ import type { Mailer } from './domain/mailer';
 import { PasswordResets } from './domain/password-resets';
 import { Uploads } from './domain/uploads';
 import { adminRoutes } from './entry-points/admin.routes';
+import { compressApi } from './entry-points/compress-api';
 import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
@@ -43,6 +44,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.set('trust proxy', 'loopback');
   app.use(securityHeaders());
 
+  app.use('/api', compressApi());
   const smallJson = express.json({ limit: '64kb' });
   // /api/sync parses its own bodies with the sync contract's limits, once the caller is known.
   app.use('/api', (req, res, next) => (req.path.startsWith('/sync/') ? next() : smallJson(req, res, next)));
