@@ -129,6 +129,10 @@ fresh_db() {
   is_running || start
   psql_admin -c "DROP DATABASE IF EXISTS \"$name\" WITH (FORCE)"
   psql_admin -c "CREATE DATABASE \"$name\" OWNER $app_role"
+  # A twin whose default collation is not C (ICU en-US), for specs that check SQL does not depend on it.
+  psql_admin -c "DROP DATABASE IF EXISTS \"${name}_icu\" WITH (FORCE)" >/dev/null
+  psql_admin -c "CREATE DATABASE \"${name}_icu\" OWNER $app_role TEMPLATE template0 LOCALE_PROVIDER icu ICU_LOCALE 'en-US' LOCALE 'C.UTF-8'" >/dev/null 2>&1 ||
+    say "no ICU here: ${name}_icu not made (its spec stays pending)"
 }
 
 case "${1:-}" in

@@ -1,3 +1,5 @@
+import type { OrSetState } from './or-set';
+
 /**
  * One change to one field of one row: the unit the outbox keeps, the client pushes and the
  * server merges. `id` is unique per change so a re-sent batch is applied once.
@@ -16,8 +18,12 @@ export interface PulledChange {
   readonly collection: string;
   readonly rowId: string;
   readonly field: string;
+  /** For a set field, its current elements (what an older app applies as a whole list). */
   readonly value: unknown;
+  /** The field's clock: for a set field, the greatest clock it has seen. */
   readonly hlc: string;
+  /** Set fields only: the per-element state, joined into the device's own. */
+  readonly state?: OrSetState;
 }
 
 export interface PushRequest {
@@ -26,8 +32,14 @@ export interface PushRequest {
 }
 
 export interface PushResponse {
+  /** Changes that took effect. */
   readonly applied: number;
+  /** Changes the server already had (a re-send). */
   readonly duplicates: number;
+  /** Changes that lost to a write with a greater clock (another device's, usually). */
+  readonly superseded: number;
+  /** The superseded changes by id, with the clock that beat each. */
+  readonly overwritten: readonly { readonly id: string; readonly by: string }[];
   readonly serverTime: string;
 }
 
@@ -43,6 +55,8 @@ export interface PullResponse {
 export const MAX_PUSH_CHANGES = 1000;
 export const MAX_PUSH_BYTES = 1024 * 1024;
 export const MAX_PULL_LIMIT = 5000;
+/** A pull page holds about this much JSON at most (always at least one row). */
+export const MAX_PULL_BYTES = 2 * 1024 * 1024;
 
 /** Why one change of a refused batch was refused. */
 export interface ChangeProblem {

@@ -1,5 +1,7 @@
 import type { PulledChange } from './field-change';
 import { wins } from './merge';
+import { mergeSetField } from './merge-set';
+import type { OrSetState } from './or-set';
 
 /**
  * A row as a device keeps it: its field values plus, under `_hlc`, the clock of each field's
@@ -8,6 +10,8 @@ import { wins } from './merge';
 export interface LocalRow {
   readonly id: string;
   readonly _hlc: Readonly<Record<string, string>>;
+  /** Set fields' per-element states (shared/sync/or-set.ts); the field itself holds the elements. */
+  readonly _sets?: Readonly<Record<string, OrSetState>>;
   readonly [field: string]: unknown;
 }
 
@@ -23,16 +27,32 @@ export const emptyRow = (id: string): LocalRow => ({ id, _hlc: {} });
  * applyPulled({ id: 'r', _hlc: { title: '…:00002:a' }, title: 'Mine' }, [{ field: 'title', value: 'Old', hlc: '…:00001:b', … }])
  * // unchanged: the local title is newer
  */
-export function applyPulled(row: LocalRow, changes: readonly Pick<PulledChange, 'field' | 'value' | 'hlc'>[]): LocalRow {
+export function applyPulled(row: LocalRow, changes: readonly Pick<PulledChange, 'field' | 'value' | 'hlc' | 'state'>[]): LocalRow {
   let next: Record<string, unknown> | null = null;
   let clocks: Record<string, string> | null = null;
+  let sets: Record<string, OrSetState> | null = null;
   for (const change of changes) {
+    if (change.state) {
+      // A set field: join the states, so this device's unsynced adds and removes stay.
+      const source = next ?? row;
+      const current = { value: source[change.field], hlc: (clocks ?? row._hlc)[change.field], state: (sets ?? row._sets)?.[change.field] };
+      const merged = mergeSetField(current, change);
+      if (JSON.stringify(merged.state) === JSON.stringify(current.state) && merged.hlc === current.hlc) continue;
+      next ??= { ...row };
+      clocks ??= { ...row._hlc };
+      sets ??= { ...row._sets };
+      next[change.field] = merged.value;
+      clocks[change.field] = merged.hlc;
+      sets[change.field] = merged.state;
+      continue;
+    }
     const current = (clocks ?? row._hlc)[change.field];
-    if (!wins(change.hlc, current)) continue;
+    if (!wins(change.hlc, current, change.value, (next ?? row)[change.field])) continue;
     next ??= { ...row };
     clocks ??= { ...row._hlc };
     next[change.field] = change.value;
     clocks[change.field] = change.hlc;
   }
-  return next ? ({ ...next, id: row.id, _hlc: clocks! } as LocalRow) : row;
+  if (!next) return row;
+  return { ...next, id: row.id, _hlc: clocks!, ...(sets ? { _sets: sets } : {}) } as LocalRow;
 }

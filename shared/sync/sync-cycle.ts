@@ -20,6 +20,11 @@ export interface SyncPorts {
   nextBatch(limit: number): Promise<readonly QueuedChange[]>;
   /** The server has them: drop them from the outbox. */
   acknowledge(changes: readonly QueuedChange[]): Promise<void>;
+  /**
+   * The server found their clocks ahead of its own (this device's date is wrong): stamp them
+   * again from the corrected time, keeping their order, and keep them in the outbox.
+   */
+  restamp(changes: readonly QueuedChange[]): Promise<void>;
   /** The server refused them for good: move them aside with the reason, out of the outbox. */
   setAside(refused: readonly { change: QueuedChange; problem: ChangeProblem }[]): Promise<void>;
   push(changes: readonly FieldChange[]): Promise<PushOutcome>;
@@ -37,13 +42,15 @@ export interface CycleReport {
 
 /**
  * One sync: push the outbox in batches until it is empty, then pull from the last cursor until
- * there is no more. Refused changes are set aside (and the rest of their batch re-sent); a batch
- * the server finds too large is halved; one change too large on its own is set aside.
+ * there is no more. Refused changes are set aside (and the rest of their batch re-sent), except
+ * clocks ahead of the server's, which are stamped again and re-sent; a batch the server finds
+ * too large, or refuses without naming a change, is halved; one such change alone is set aside.
  */
 export async function runSyncCycle(ports: SyncPorts, batchSize = 500): Promise<CycleReport> {
   let size = Math.min(batchSize, MAX_PUSH_CHANGES);
   let pushed = 0;
   let refused = 0;
+  let restamps = 0;
   for (;;) {
     const batch = await ports.nextBatch(size);
     if (batch.length === 0) break;
@@ -51,6 +58,16 @@ export async function runSyncCycle(ports: SyncPorts, batchSize = 500): Promise<C
     if (outcome.kind === 'applied') {
       await ports.acknowledge(batch);
       pushed += batch.length;
+    } else if (outcome.kind === 'refused' && outcome.problems.length === 0 && batch.length > 1) {
+      // Refused without saying which change (the database's own check): halve to find it.
+      size = Math.max(1, Math.floor(batch.length / 2));
+    } else if (outcome.kind === 'refused' && outcome.problems.length === 0) {
+      await ports.setAside([{ change: batch[0]!, problem: { index: 0, code: 'unstorable', reason: 'The server cannot store this change' } }]);
+      refused++;
+    } else if (outcome.kind === 'refused' && outcome.problems.some((p) => p.code === 'clock_ahead' && batch[p.index])) {
+      // Never set aside for a clock problem: stamp again from the server's time and push again.
+      if (++restamps > 3) throw new Error('This device\'s clock could not be brought in line with the server; trying again later');
+      await ports.restamp(outcome.problems.filter((p) => p.code === 'clock_ahead' && batch[p.index]).map((p) => batch[p.index]!));
     } else if (outcome.kind === 'refused') {
       const setAside = outcome.problems.filter((p) => batch[p.index]).map((problem) => ({ change: batch[problem.index]!, problem }));
       if (setAside.length === 0) throw new Error('The server refused a batch without saying which change');

@@ -1,5 +1,7 @@
 import { parseHlc, MAX_CLOCK_AHEAD_MS } from './hlc';
 import type { ChangeProblem } from './field-change';
+import { setDeltaProblem } from './merge-set';
+import { unstorableText } from './storable-text';
 import { collectionSpec } from './schema/collections';
 
 /** Lower-case, as crypto.randomUUID() writes them and PostgreSQL returns them. */
@@ -24,6 +26,12 @@ export function validateChange(change: unknown, index: number, nowMs: number): C
   if (!clock) return problem('invalid_change', 'hlc must be a clock like 001764633600000:00000:<node>', id);
   if (clock.wall > nowMs + MAX_CLOCK_AHEAD_MS) {
     return problem('clock_ahead', 'hlc is more than 24 hours ahead of the server clock; check the device date', id);
+  }
+  const textProblem = unstorableText(value);
+  if (textProblem) return problem('invalid_value', `${spec.name}.${String(field)} ${textProblem}`, id);
+  if (fieldSpec.kind === 'set' && !Array.isArray(value)) {
+    const setProblem = setDeltaProblem(value, fieldSpec.elements!, hlc as string);
+    return setProblem ? problem('invalid_value', `${spec.name}.${String(field)} ${setProblem}`, id) : null;
   }
   const parsed = fieldSpec.schema.safeParse(value);
   if (!parsed.success) return problem('invalid_value', `${spec.name}.${String(field)} ${parsed.error.issues[0]?.message ?? 'is not valid'}`, id);

@@ -1,5 +1,6 @@
 import type { CollectionSpec } from './schema/collection';
 import type { FieldSpec } from './schema/field';
+import { unstorableText } from './storable-text';
 
 /**
  * What is wrong with each field of a local edit, by field name; empty when it may be written.
@@ -19,6 +20,10 @@ export function validatePatch(spec: CollectionSpec, patch: Readonly<Record<strin
     }
     const parsed = field.schema.safeParse(value);
     if (!parsed.success) problems[name] = parsed.error.issues[0]?.message ?? 'is not valid';
+    else {
+      const textProblem = unstorableText(value);
+      if (textProblem) problems[name] = textProblem;
+    }
   }
   return problems;
 }

@@ -4,7 +4,7 @@ import { SYNCED_ENTITIES } from '../../sync-server/src/data-access/entities';
 import { testDataSource } from '../support/test-database';
 
 /** Columns every synced table has besides its fields. */
-const SYNC_COLUMNS = ['user_id', 'id', 'clocks', 'seq'];
+const SYNC_COLUMNS = ['user_id', 'id', 'clocks', 'sets', 'seq'];
 
 /** information_schema's name for each of our column types. */
 const INFORMATION_SCHEMA_TYPE: Record<SqlType, string> = {

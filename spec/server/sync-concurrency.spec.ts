@@ -82,8 +82,8 @@ describe('Sync under concurrency', () => {
           seen.push(first.status, second.status);
           // Whichever copy came second changed nothing: each change took effect at most once.
           expect(Math.min(first.body.applied, second.body.applied)).toBe(0);
-          expect(first.body.applied + first.body.duplicates).toBe(batch.length);
-          expect(second.body.applied + second.body.duplicates).toBe(batch.length);
+          expect(first.body.applied + first.body.duplicates + first.body.superseded).toBe(batch.length);
+          expect(second.body.applied + second.body.duplicates + second.body.superseded).toBe(batch.length);
         }
         return seen;
       }),

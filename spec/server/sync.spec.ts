@@ -41,7 +41,7 @@ describe('/api/sync', () => {
       const { state } = await client.pullAll();
 
       expect(pushed.status).toBe(200);
-      expect(pushed.body).toEqual({ applied: 3, duplicates: 0, serverTime: jasmine.stringMatching(/^\d{4}-\d\d-\d\dT/) });
+      expect(pushed.body).toEqual({ applied: 3, duplicates: 0, superseded: 0, overwritten: [], serverTime: jasmine.stringMatching(/^\d{4}-\d\d-\d\dT/) });
       expect(asObject(state)).toEqual(asObject(mergeChanges(new Map(), changes)));
     });
 
@@ -60,15 +60,17 @@ describe('/api/sync', () => {
       expect(after.changes).toEqual([]); // nothing new since the first push
     });
 
-    it('When an older clock arrives after a newer one, then the older value loses', async () => {
+    it('When an older clock arrives after a newer one, then the older value loses and is reported superseded, not duplicate', async () => {
       const { client } = await newReader();
       const row = randomUUID();
-      await client.push([fieldChange(row, 'title', 'Newer title', { wall: NOW + 10 })]);
+      const newer = fieldChange(row, 'title', 'Newer title', { wall: NOW + 10, node: 'laptop' });
+      await client.push([newer]);
 
-      const late = await client.push([fieldChange(row, 'title', 'Older title', { wall: NOW })]);
+      const older = fieldChange(row, 'title', 'Older title', { wall: NOW });
+      const late = await client.push([older]);
       const { state } = await client.pullAll();
 
-      expect(late.body).toEqual(jasmine.objectContaining({ applied: 0, duplicates: 1 })); // it changed nothing
+      expect(late.body).toEqual(jasmine.objectContaining({ applied: 0, duplicates: 0, superseded: 1, overwritten: [{ id: older.id, by: newer.hlc }] }));
       expect(state.get(`books/${row}/title`)?.value).toBe('Newer title');
     });
 

@@ -1,4 +1,5 @@
 import type { ChangeProblem, FieldChange, PullResponse } from '../../shared/sync/field-change';
+import { restampClocks } from '../../shared/sync/device-clock';
 import { HlcClock } from '../../shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '../../shared/sync/local-row';
 import { runSyncCycle, type PushOutcome, type QueuedChange, type SyncPorts } from '../../shared/sync/sync-cycle';
@@ -141,6 +142,18 @@ export class SimDevice {
         const done = new Set(changes.map((c) => c.seq));
         durable.outbox = durable.outbox.filter((c) => !done.has(c.seq));
         for (const change of changes) this.acknowledged.add(change.id);
+      },
+      // As the app does after `clock_ahead`: new clocks in the same order, on the outbox and the rows.
+      restamp: async (changes) => {
+        alive();
+        const renamed = restampClocks(changes.map((c) => c.hlc), this.node, () => this.now() + this.skewMs, durable.lastClock);
+        durable.outbox = durable.outbox.map((c) => ({ ...c, hlc: renamed.get(c.hlc) ?? c.hlc }));
+        for (const [key, row] of durable.rows) {
+          const clocks = Object.fromEntries(Object.entries(row._hlc).map(([field, hlc]) => [field, renamed.get(hlc) ?? hlc]));
+          durable.rows.set(key, { ...row, _hlc: clocks });
+        }
+        durable.lastClock = [...renamed.values()].at(-1) ?? durable.lastClock;
+        this.clock = this.restoreClock();
       },
       setAside: async (refused) => {
         alive();

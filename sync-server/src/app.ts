@@ -11,6 +11,7 @@ import type { Mailer } from './domain/mailer';
 import { PasswordResets } from './domain/password-resets';
 import { Uploads } from './domain/uploads';
 import { adminRoutes } from './entry-points/admin.routes';
+import { compressApi } from './entry-points/compress-api';
 import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
@@ -65,7 +66,10 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
 
   app.use(metricsRoutes(dataSource, config.metricsToken));
   app.get('/robots.txt', robotsTxt);
-  app.use('/api', express.json({ limit: '64kb' }));
+  app.use('/api', compressApi());
+  const smallJson = express.json({ limit: '64kb' });
+  // /api/sync parses its own bodies with the sync contract's limits, once the caller is known.
+  app.use('/api', (req, res, next) => (req.path.startsWith('/sync/') ? next() : smallJson(req, res, next)));
   const probes = healthRoutes(dataSource);
   app.use('/api/health', probes.health);
   app.use('/api/ready', probes.ready);
@@ -85,11 +89,11 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
-  app.use('/api/sync/events', syncEventsRoutes(dataSource, new SyncListener(config.syncEvents.listenDatabaseUrl), config.syncEvents));
+  app.use('/api/sync/events', syncEventsRoutes(dataSource, new SyncListener(config.syncEvents.listenDatabaseUrl), config.syncEvents, config.jwtSecret));
   app.use(
     '/api/sync',
     readerLimiter('sync', config.syncRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'sync')),
-    syncRoutes(new MeasuredSyncStore(dataSource, { namedStatements: !config.dbTransactionPooling })),
+    syncRoutes(new MeasuredSyncStore(dataSource, { namedStatements: !config.dbTransactionPooling }), config.jwtSecret),
   );
   app.use(
     '/api/uploads',

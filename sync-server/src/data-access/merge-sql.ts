@@ -8,52 +8,109 @@ import { columnName } from '../../../shared/sync/schema/field';
  * few of a book's forty fields, and the others keep their values (or stay NULL in a new row)
  * without a clock comparison each.
  *
- * Input `$2` is a JSON array with one object per row: `id`, the new value of each field the batch
- * touches (keyed by column name) and `clocks` (field → HLC) for those fields only. A field's
+ * Input `$2` is a JSON array with one object per row: `id`, the new value of each last-writer-wins
+ * field the batch touches (keyed by column name), `clocks` (field → HLC) for every touched field
+ * and `sets` (set field → the delta to join, shared/sync/or-set.ts). A set field's column is
+ * recomputed from its joined state by `lamplight_orset_elements`. A field's
  * value is taken when its clock is greater than the stored one; an absent field has no clock and
  * keeps its value. Rows where nothing wins are not written at all (a re-sent batch costs a read).
  * Clocks compare with COLLATE "C", byte for byte, exactly as JavaScript compares strings,
- * whatever the database's locale. The statement answers how many field values won; the caller
- * holds the user's advisory lock, so the clocks read in `decided` are still current.
+ * whatever the database's locale. The statement answers, for each row that existed, its clocks
+ * before the merge (`c`) and the set fields that grew (`g`), so the caller can tell applied,
+ * duplicate and superseded changes apart; it holds the user's advisory lock, so they are current.
  */
 export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Object.keys(spec.fields)): string {
   const column = (field: string) => columnName(field);
-  const recordColumns = fields.map((field) => `${column(field)} ${spec.fields[field]!.sqlType}`).join(', ');
+  const isSet = (field: string) => spec.fields[field]!.kind === 'set';
+  const lww = fields.filter((field) => !isSet(field));
+  const sets = fields.filter(isSet);
+  const recordColumns = [...lww.map((field) => `${column(field)} ${spec.fields[field]!.sqlType}`), 'clocks jsonb', 'sets jsonb'].join(', ');
   const beats = (field: string, incoming: string, stored: string) =>
     `coalesce((${incoming}->>'${field}') COLLATE "C" > coalesce(${stored}->>'${field}', '') COLLATE "C", false)`;
-  const anyWins = (incoming: string, stored: string) => fields.map((field) => beats(field, incoming, stored)).join(' OR ');
-  const newer = (field: string) => beats(field, 'excluded.clocks', 't.clocks');
+  const joined = (field: string, incoming: string, stored: string) => `lamplight_orset_join(${stored}->'${field}', ${incoming}->'${field}')`;
+  // A set field wins when the delta adds something its stored state lacks.
+  const grows = (field: string, incoming: string, stored: string) =>
+    `coalesce((${incoming} ? '${field}') AND ${joined(field, incoming, stored)} IS DISTINCT FROM coalesce(${stored}->'${field}', '{}'::jsonb), false)`;
+  const wonBy = (field: string) => (isSet(field) ? grows(field, 'd.sets', 'd.stored_sets') : beats(field, 'd.clocks', 'd.stored_clocks'));
+  // Equal clocks are candidates too: the stored value is not read here, so the upsert decides.
+  const candidate = (field: string) =>
+    isSet(field) ? grows(field, 'd.sets', 'd.stored_sets') : `coalesce((d.clocks->>'${field}') COLLATE "C" >= coalesce(d.stored_clocks->>'${field}', '') COLLATE "C", false)`;
+  const anyWins = fields.map(candidate).join(' OR ');
+  // Greater clock, or an equal clock and a greater value as jsonb text (shared/sync/merge.ts, canonicalText).
+  const newer = (field: string) =>
+    `(${beats(field, 'excluded.clocks', 't.clocks')} OR coalesce((excluded.clocks->>'${field}') = (t.clocks->>'${field}') AND ` +
+    `coalesce(to_jsonb(excluded.${column(field)})::text, 'null') COLLATE "C" > coalesce(to_jsonb(t.${column(field)})::text, 'null') COLLATE "C", false))`;
+  const updateWhen = fields.map((field) => (isSet(field) ? grows(field, 'excluded.sets', 't.sets') : newer(field))).join(' OR ');
+  const setColumnsOnInsert = sets.map((field) => `CASE WHEN d.sets ? '${field}' THEN lamplight_orset_elements(d.sets->'${field}') END`);
+  const setsUpdate = sets.length
+    ? `t.sets || jsonb_strip_nulls(jsonb_build_object(${sets
+        .map((field) => `'${field}', CASE WHEN excluded.sets ? '${field}' THEN ${joined(field, 'excluded.sets', 't.sets')} END`)
+        .join(', ')}))`
+    : 't.sets';
   return `
     WITH input AS (
       SELECT r.*, nextval('sync_seq') AS seq
-        FROM jsonb_to_recordset($2::jsonb) AS r(id uuid, ${recordColumns}, clocks jsonb)
+        FROM jsonb_to_recordset($2::jsonb) AS r(id uuid, ${recordColumns})
     ), decided AS (
       -- A scalar subquery is never flattened into a join: one primary-key probe per row, even
       -- while statistics lag behind a big first sync (a join was planned as a scan of all the
       -- reader's rows then).
-      SELECT i.*, (SELECT t.clocks FROM ${spec.table} t WHERE t.user_id = $1::uuid AND t.id = i.id) AS stored_clocks
-        FROM input i
+      SELECT probed.*, stored->'c' AS stored_clocks, stored->'s' AS stored_sets
+        FROM (SELECT i.id, ${lww.map((field) => `i.${column(field)}, `).join('')}i.clocks, coalesce(i.sets, '{}'::jsonb) AS sets, i.seq,
+                     (SELECT jsonb_build_object('c', t.clocks, 's', t.sets) FROM ${spec.table} t WHERE t.user_id = $1::uuid AND t.id = i.id) AS stored
+                FROM input i) probed
     ), merged AS (
-      INSERT INTO ${spec.table} AS t (user_id, id, ${fields.map(column).join(', ')}, clocks, seq)
-      SELECT $1::uuid, d.id, ${fields.map((field) => `d.${column(field)}`).join(', ')}, d.clocks, d.seq
+      INSERT INTO ${spec.table} AS t (user_id, id, ${[...lww, ...sets].map(column).join(', ')}, clocks, sets, seq)
+      SELECT $1::uuid, d.id, ${[...lww.map((field) => `d.${column(field)}`), ...setColumnsOnInsert].join(', ')}, d.clocks, d.sets, d.seq
         FROM decided d
-       WHERE d.stored_clocks IS NULL OR ${anyWins('d.clocks', 'd.stored_clocks')}
+       WHERE d.stored IS NULL OR ${anyWins}
       ON CONFLICT (user_id, id) DO UPDATE SET
-        ${fields.map((field) => `${column(field)} = CASE WHEN ${newer(field)} THEN excluded.${column(field)} ELSE t.${column(field)} END`).join(',\n        ')},
+        ${[
+          ...lww.map((field) => `${column(field)} = CASE WHEN ${newer(field)} THEN excluded.${column(field)} ELSE t.${column(field)} END`),
+          ...sets.map(
+            (field) =>
+              `${column(field)} = CASE WHEN excluded.sets ? '${field}' THEN lamplight_orset_elements(${joined(field, 'excluded.sets', 't.sets')}) ELSE t.${column(field)} END`,
+          ),
+        ].join(',\n        ')},
         clocks = t.clocks || jsonb_strip_nulls(jsonb_build_object(${fields
           .map((field) => `'${field}', CASE WHEN ${newer(field)} THEN excluded.clocks->'${field}' END`)
           .join(', ')})),
+        sets = ${setsUpdate},
         seq = excluded.seq
+      WHERE ${updateWhen}
       RETURNING 1
     )
     SELECT (SELECT count(*) FROM merged)::int AS rows,
-           (SELECT sum(${fields.map((field) => `${beats(field, 'd.clocks', 'd.stored_clocks')}::int`).join(' + ')}) FROM decided d)::int AS won`;
+           (SELECT jsonb_object_agg(d.id, jsonb_build_object('c', d.stored_clocks, 'g', jsonb_build_array(${
+             sets.map((field) => `CASE WHEN ${grows(field, 'd.sets', 'd.stored_sets')} THEN '${field}' END`).join(', ')
+           })))
+              FROM decided d WHERE d.stored IS NOT NULL) AS before`;
 }
 
-/** Rows changed after a sequence, across every collection, in sequence order. */
+/**
+ * Rows changed after a sequence, across every collection, in sequence order: `$1` user, `$2`
+ * sequence, `$3` rows at most, `$4` byte budget. Keys come first — each table's branch takes its
+ * own `ORDER BY seq LIMIT` from the (user_id, seq) index, so no branch reads or sorts more than a
+ * page of a reader's rows — and JSON is built only for rows inside the page's byte budget,
+ * estimated from stored column sizes (compressed, so the caller trims by actual size too). The
+ * first row always fits. `keys` tells the caller how many rows were candidates, for `hasMore`.
+ */
 export function pullSql(specs: readonly CollectionSpec[]): string {
-  const parts = specs.map(
-    (spec) => `SELECT '${spec.name}' AS collection, t.seq, to_jsonb(t) AS row FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2`,
+  const size = (spec: CollectionSpec) =>
+    ['clocks', 'sets', ...Object.keys(spec.fields).map(columnName)].map((column) => `coalesce(pg_column_size(t.${column}), 0)`).join(' + ');
+  const branches = specs.map(
+    (spec, n) =>
+      `(SELECT ${n} AS c, t.id, t.seq, ${size(spec)} AS size FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2 ORDER BY t.seq LIMIT $3)`,
   );
-  return `SELECT collection, seq, row FROM (${parts.join(' UNION ALL ')}) changed ORDER BY seq LIMIT $3`;
+  const rowOf = specs.map((spec, n) => `WHEN ${n} THEN (SELECT to_jsonb(t) FROM ${spec.table} t WHERE t.user_id = $1 AND t.id = b.id)`);
+  return `
+    WITH keys AS (
+      SELECT * FROM (${branches.join('\n      UNION ALL ')}) changed ORDER BY seq LIMIT $3
+    ), budgeted AS (
+      SELECT k.*, sum(k.size) OVER (ORDER BY k.seq) - k.size AS before, count(*) OVER () AS keys FROM keys k
+    )
+    SELECT b.c, b.seq, b.keys, CASE b.c ${rowOf.join(' ')} END AS row
+      FROM budgeted b
+     WHERE b.before < $4
+     ORDER BY b.seq`;
 }

@@ -1,9 +1,11 @@
 import type { DataSource } from 'typeorm';
 
-import type { FieldChange, PulledChange } from '../../../shared/sync/field-change';
+import { MAX_PULL_BYTES, type FieldChange, type PulledChange } from '../../../shared/sync/field-change';
 import { wins } from '../../../shared/sync/merge';
-import { columnName } from '../../../shared/sync/schema/field';
-import { COLLECTIONS, collectionSpec } from '../../../shared/sync/schema/collections';
+import { setDeltaOf } from '../../../shared/sync/merge-set';
+import { joinOrSet, type OrSetState } from '../../../shared/sync/or-set';
+import { columnName, type FieldSpec } from '../../../shared/sync/schema/field';
+import { COLLECTIONS, collectionSpec, fieldSpecOf } from '../../../shared/sync/schema/collections';
 import { mergeSql, pullSql } from './merge-sql';
 import { notifyPushed } from './sync-notifications';
 
@@ -36,11 +38,24 @@ interface PgClient {
   query(config: { name?: string; text: string; values?: unknown[] } | string): Promise<{ rows: Record<string, unknown>[] }>;
 }
 
-/** One row's pieces from a batch: the winning value (by column) and clock of each field it touches. */
+/**
+ * One row's pieces from a batch: the winning value (by column) and clock of each field it
+ * touches, and for set fields the joined delta.
+ */
 interface RowPieces {
   id: string;
   clocks: Record<string, string>;
+  sets: Record<string, OrSetState>;
   [column: string]: unknown;
+}
+
+/** What a push did with each change (see {@link classify}). */
+export interface PushResult {
+  readonly applied: number;
+  readonly duplicates: number;
+  readonly superseded: number;
+  /** The superseded changes, with the clock that beat each. */
+  readonly overwritten: { readonly id: string; readonly by: string }[];
 }
 
 export interface PulledPage {
@@ -72,21 +87,10 @@ export class SyncStore {
    * change sent again finds its own clock (or a later one) already stored and changes nothing.
    * Such changes are counted as `duplicates`, like any change that arrived after a newer value.
    */
-  async push(userId: string, changes: readonly FieldChange[]): Promise<{ applied: number; duplicates: number }> {
-    const byCollection = new Map<string, Map<string, RowPieces>>();
-    for (const change of changes) {
-      const rows = byCollection.get(change.collection) ?? new Map<string, RowPieces>();
-      byCollection.set(change.collection, rows);
-      const row = rows.get(change.rowId) ?? { id: change.rowId, clocks: {} };
-      rows.set(change.rowId, row);
-      // One statement may not touch a row twice: reduce the batch to one winner per field first.
-      if (wins(change.hlc, row.clocks[change.field])) {
-        row[COLUMNS.get(change.collection)!.get(change.field)!] = change.value;
-        row.clocks[change.field] = change.hlc;
-      }
-    }
-    const applied = await this.inUserTransaction(userId, async (client) => {
-      let won = 0;
+  async push(userId: string, changes: readonly FieldChange[]): Promise<PushResult> {
+    return this.inUserTransaction(userId, async (client) => {
+      const byCollection = reduceBatch(changes, await storedSetStates(client, userId, changes));
+      const before = new Map<string, { c: Record<string, string>; g: (string | null)[] }>();
       for (const [collection, rows] of byCollection) {
         const touched = new Set<string>();
         for (const row of rows.values()) for (const field of Object.keys(row.clocks)) touched.add(field);
@@ -95,12 +99,13 @@ export class SyncStore {
         const statement = mergeStatement(collection, fields);
         const text = this.options.namedStatements === false ? { text: statement.text } : statement;
         const result = await client.query({ ...text, values: [userId, JSON.stringify([...rows.values()])] });
-        won += Number(result.rows[0]?.['won'] ?? 0);
+        const stored = (result.rows[0]?.['before'] ?? {}) as Record<string, { c: Record<string, string>; g: (string | null)[] }>;
+        for (const [rowId, entry] of Object.entries(stored)) before.set(`${collection}/${rowId}`, entry);
       }
-      if (won > 0) await notifyPushed(client, userId); // live updates: delivered on commit only
-      return won;
+      const outcome = classify(changes, byCollection, before);
+      if (outcome.applied > 0) await notifyPushed(client, userId); // live updates: delivered on commit only
+      return outcome;
     });
-    return { applied, duplicates: changes.length - applied };
   }
 
   /**
@@ -132,34 +137,120 @@ export class SyncStore {
    * sequence order. Whole rows, not just the fields that changed: a row's older fields may not
    * have reached this cursor's holder yet (the row can move past a page boundary while they
    * page), and sending current values again is harmless to an idempotent merge. Pages end on
-   * whole rows.
+   * whole rows, hold at most `limit` fields and about `maxBytes` of JSON; the first row always
+   * fits, so paging always moves on.
    */
-  async pull(userId: string, sinceSeq: number, limit: number): Promise<PulledPage> {
-    const rows: { collection: string; seq: string; row: Record<string, unknown> }[] = await this.dataSource.query(PULL_SQL, [
+  async pull(userId: string, sinceSeq: number, limit: number, maxBytes = MAX_PULL_BYTES): Promise<PulledPage> {
+    // Every row has at least one field, so `limit` rows always fill a page; one more tells whether more remain.
+    const rows: { c: number; seq: string; keys: string; row: Record<string, unknown> }[] = await this.dataSource.query(PULL_SQL, [
       userId,
       sinceSeq,
       limit + 1,
+      maxBytes,
     ]);
     const changes: PulledChange[] = [];
     let lastSeq = sinceSeq;
     let taken = 0;
-    for (const { collection, seq, row } of rows) {
-      const pieces = rowFields(collection, row);
-      if (taken > 0 && changes.length + pieces.length > limit) break;
+    let bytes = 0;
+    for (const { c, seq, row } of rows) {
+      const pieces = rowFields(SPECS[c]!.name, row);
+      const size = Buffer.byteLength(JSON.stringify(pieces));
+      if (taken > 0 && (changes.length + pieces.length > limit || bytes + size > maxBytes)) break;
       changes.push(...pieces);
+      bytes += size;
       lastSeq = Number(seq);
       taken++;
     }
-    return { changes, lastSeq, hasMore: taken < rows.length };
+    return { changes, lastSeq, hasMore: taken < Number(rows[0]?.keys ?? 0) };
   }
+}
 
+/**
+ * Reduces a batch to one piece per row: one statement may not touch a row twice. A
+ * last-writer-wins field keeps its winner; a set field joins its deltas, and an older app's whole
+ * list becomes a delta against the stored state (and what the batch did before it).
+ */
+function reduceBatch(changes: readonly FieldChange[], stored: ReadonlyMap<string, OrSetState>): Map<string, Map<string, RowPieces>> {
+  const byCollection = new Map<string, Map<string, RowPieces>>();
+  for (const change of changes) {
+    const rows = byCollection.get(change.collection) ?? new Map<string, RowPieces>();
+    byCollection.set(change.collection, rows);
+    const row = rows.get(change.rowId) ?? { id: change.rowId, clocks: {}, sets: {} };
+    rows.set(change.rowId, row);
+    if (fieldSpecOf(change.collection, change.field)?.kind === 'set') {
+      const before = joinOrSet(stored.get(storedKey(change.collection, change.rowId, change.field)), row.sets[change.field]);
+      row.sets[change.field] = joinOrSet(row.sets[change.field], setDeltaOf(before, change));
+      if (wins(change.hlc, row.clocks[change.field])) row.clocks[change.field] = change.hlc;
+    } else if (wins(change.hlc, row.clocks[change.field], change.value, row[COLUMNS.get(change.collection)!.get(change.field)!])) {
+      row[COLUMNS.get(change.collection)!.get(change.field)!] = change.value;
+      row.clocks[change.field] = change.hlc;
+    }
+  }
+  return byCollection;
+}
+
+/**
+ * Sorts a pushed batch: a change is a duplicate when the server already had its clock (a re-send,
+ * or a set change that added nothing new), superseded when a greater clock — stored, or later in
+ * the same batch — won its field, and applied otherwise.
+ */
+function classify(
+  changes: readonly FieldChange[],
+  byCollection: ReadonlyMap<string, ReadonlyMap<string, RowPieces>>,
+  before: ReadonlyMap<string, { c: Record<string, string>; g: (string | null)[] }>,
+): PushResult {
+  let applied = 0;
+  let duplicates = 0;
+  const overwritten: { id: string; by: string }[] = [];
+  for (const change of changes) {
+    const stored = before.get(`${change.collection}/${change.rowId}`);
+    const storedClock = stored?.c[change.field];
+    if (fieldSpecOf(change.collection, change.field)?.kind === 'set') {
+      if (!stored || stored.g.includes(change.field)) applied++;
+      else duplicates++;
+      continue;
+    }
+    const batchClock = byCollection.get(change.collection)!.get(change.rowId)!.clocks[change.field]!;
+    const winner = storedClock !== undefined && storedClock > batchClock ? storedClock : batchClock;
+    if (change.hlc < winner) overwritten.push({ id: change.id, by: winner });
+    else if (change.hlc === storedClock) duplicates++;
+    else applied++;
+  }
+  return { applied, duplicates, superseded: overwritten.length, overwritten };
+}
+
+const storedKey = (collection: string, rowId: string, field: string) => `${collection}/${rowId}/${field}`;
+
+/** The stored states of set fields that a batch writes whole lists to (older apps), read under the user's lock. */
+async function storedSetStates(client: PgClient, userId: string, changes: readonly FieldChange[]): Promise<Map<string, OrSetState>> {
+  const rowsByCollection = new Map<string, Set<string>>();
+  for (const change of changes) {
+    if (!Array.isArray(change.value) || fieldSpecOf(change.collection, change.field)?.kind !== 'set') continue;
+    rowsByCollection.set(change.collection, (rowsByCollection.get(change.collection) ?? new Set()).add(change.rowId));
+  }
+  const states = new Map<string, OrSetState>();
+  for (const [collection, rowIds] of rowsByCollection) {
+    const { rows } = await client.query({
+      text: `SELECT id, sets FROM ${collectionSpec(collection)!.table} WHERE user_id = $1 AND id = ANY($2::uuid[])`,
+      values: [userId, [...rowIds]],
+    });
+    for (const row of rows) {
+      for (const [field, state] of Object.entries(row['sets'] as Record<string, OrSetState>)) states.set(storedKey(collection, row['id'] as string, field), state);
+    }
+  }
+  return states;
 }
 
 function rowFields(collection: string, row: Record<string, unknown>): PulledChange[] {
   const spec = collectionSpec(collection)!;
   const clocks = row['clocks'] as Record<string, string>;
+  const sets = (row['sets'] ?? {}) as Record<string, OrSetState>;
   const rowId = row['id'] as string;
-  return Object.keys(spec.fields)
-    .filter((field) => clocks[field] !== undefined)
-    .map((field) => ({ collection, rowId, field, value: row[columnName(field)] ?? null, hlc: clocks[field]! }));
+  return Object.entries(spec.fields as Record<string, FieldSpec>)
+    .filter(([field]) => clocks[field] !== undefined)
+    .map(([field, fieldSpec]) => {
+      const value = row[columnName(field)] ?? null;
+      const hlc = clocks[field]!;
+      return fieldSpec.kind === 'set' ? { collection, rowId, field, value, hlc, state: sets[field] ?? {} } : { collection, rowId, field, value, hlc };
+    });
 }

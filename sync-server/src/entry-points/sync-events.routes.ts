@@ -5,6 +5,7 @@ import type { DataSource } from 'typeorm';
 import type { SyncListener } from '../data-access/sync-listener';
 import { latestSeq } from '../data-access/sync-notifications';
 import { AppError } from '../errors';
+import { PullCursors } from './pull-cursor';
 import { callerOf } from './require-auth';
 
 /** A reader rarely has more than a few tabs and devices open; past this, a stream is refused. */
@@ -27,18 +28,20 @@ export interface SyncEventsOptions {
  * picks. The stream ends when the access token expires; the client reconnects with a fresh one,
  * so a revoked device loses its stream within one token lifetime.
  *
- * Events: `event: sync`, `id:` the reader's sequence the poke announces, `data: {"seq":N}`. On
+ * Events: `event: sync`, `id:` the sealed sequence the poke announces (opaque), `data: {}`. On
  * connect the current sequence is sent unless `Last-Event-ID` shows the device saw it already.
  */
-export function syncEventsRoutes(dataSource: DataSource, listener: SyncListener, options: SyncEventsOptions): Router {
+export function syncEventsRoutes(dataSource: DataSource, listener: SyncListener, options: SyncEventsOptions, serverSecret: Uint8Array): Router {
   const router = Router();
+  // Event ids are sealed like pull cursors: the sequence is server-wide and would tell how much others write.
+  const cursors = new PullCursors(serverSecret);
 
   router.get('/', async (req: Request, res: Response) => {
     const { userId } = callerOf(res);
     if (listener.streamsOf(userId) >= MAX_STREAMS_PER_READER) {
       throw new AppError(429, 'too_many_streams', `At most ${MAX_STREAMS_PER_READER} live streams per reader; close one first`);
     }
-    const lastEventId = parseLastEventId(req.get('last-event-id'));
+    const lastEventId = parseLastEventId(cursors, userId, req.get('last-event-id'));
     let lastSent = lastEventId ?? -1;
     let open = true;
     let sending = Promise.resolve();
@@ -49,7 +52,7 @@ export function syncEventsRoutes(dataSource: DataSource, listener: SyncListener,
         const next = seq ?? (await latestSeq(dataSource, userId).catch(() => null));
         if (!open || next === null || next <= lastSent) return;
         lastSent = next;
-        res.write(`event: sync\nid: ${next}\ndata: ${JSON.stringify({ seq: next })}\n\n`);
+        res.write(`event: sync\nid: ${cursors.seal(userId, next)}\ndata: {}\n\n`);
       });
     };
 
@@ -94,9 +97,9 @@ export function syncEventsRoutes(dataSource: DataSource, listener: SyncListener,
   return router;
 }
 
-/** `Last-Event-ID` as a sequence; anything else counts as absent (a fresh start, never an error). */
-function parseLastEventId(header: string | undefined): number | undefined {
-  return header !== undefined && /^\d{1,15}$/.test(header.trim()) ? Number(header.trim()) : undefined;
+/** `Last-Event-ID` opened to a sequence; anything else counts as absent (a fresh start, never an error). */
+function parseLastEventId(cursors: PullCursors, userId: string, header: string | undefined): number | undefined {
+  return (header === undefined ? null : cursors.open(userId, header.trim())) ?? undefined;
 }
 
 /** requireAuth has verified the token already; its `exp` says how long this stream may live. */

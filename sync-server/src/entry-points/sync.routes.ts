@@ -13,6 +13,7 @@ import { validateChange } from '../../../shared/sync/validate-change';
 import type { SyncStore } from '../data-access/sync-store';
 import { AppError } from '../errors';
 import { parseInput } from './parse-input';
+import { PullCursors } from './pull-cursor';
 import { callerOf } from './require-auth';
 
 const pushEnvelope = z.object({
@@ -25,18 +26,31 @@ const pullQuery = z.object({
   limit: z.coerce.number().int('limit must be a whole number').min(1, 'limit must be 1 to 5000').max(MAX_PULL_LIMIT, 'limit must be 1 to 5000').default(1000),
 });
 
-/** Cursors are opaque to clients: today a sequence number, versioned so it can change. */
-const encodeCursor = (seq: number) => Buffer.from(`v1:${seq}`).toString('base64url');
-function decodeCursor(cursor: string | undefined): number {
-  if (cursor === undefined || cursor === '') return 0;
-  const match = /^v1:(\d{1,18})$/.exec(Buffer.from(cursor, 'base64url').toString());
-  if (!match) throw new AppError(400, 'invalid_input', 'Some fields need attention', { since: 'is not a cursor this server issued' });
-  return Number(match[1]);
+/** Pulls one reader may run at once on one instance: a page can be 2 MiB of JSON to build. */
+export const MAX_CONCURRENT_PULLS = 2;
+
+/**
+ * PostgreSQL's data exceptions (SQLSTATE class 22: invalid text, untranslatable characters,
+ * numbers out of range) and program limits (class 54) are the input's fault, not the server's:
+ * answer 400 or 413 without per-change details, so a device halves the batch to find the change.
+ * The shared validator refuses the known cases first, naming the field.
+ */
+async function refusingBadData<T>(work: () => Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (error) {
+    const code = (error as { code?: unknown }).code;
+    if (typeof code === 'string' && code.startsWith('22')) throw new AppError(400, 'unstorable', 'The database cannot store one of these values', []);
+    if (typeof code === 'string' && code.startsWith('54')) throw new AppError(413, 'too_large', 'One of these values is too large to store');
+    throw error;
+  }
 }
 
 /** `/api/sync` (behind requireAuth): push field changes, pull winning values. */
-export function syncRoutes(store: SyncStore): Router {
+export function syncRoutes(store: SyncStore, serverSecret: Uint8Array): Router {
   const router = Router();
+  const cursors = new PullCursors(serverSecret);
+  const pullsInFlight = new Map<string, number>();
   router.use(express.json({ limit: MAX_PUSH_BYTES }));
 
   router.post('/push', async (req, res) => {
@@ -56,22 +70,36 @@ export function syncRoutes(store: SyncStore): Router {
         problems,
       );
     }
-    const result = await store.push(callerOf(res).userId, changes as FieldChange[]);
+    const result = await refusingBadData(() => store.push(callerOf(res).userId, changes as FieldChange[]));
     const body: PushResponse = { ...result, serverTime: new Date().toISOString() };
     res.json(body);
   });
 
   router.get('/pull', async (req, res) => {
     const { since, limit } = parseInput(pullQuery, req.query);
-    const sinceSeq = decodeCursor(since);
-    const page = await store.pull(callerOf(res).userId, sinceSeq, limit);
-    const body: PullResponse = {
-      changes: page.changes,
-      cursor: encodeCursor(page.lastSeq),
-      hasMore: page.hasMore,
-      serverTime: new Date().toISOString(),
-    };
-    res.json(body);
+    const { userId } = callerOf(res);
+    const sinceSeq = since ? cursors.open(userId, since) : 0;
+    if (sinceSeq === null) throw new AppError(400, 'invalid_input', 'Some fields need attention', { since: 'is not a cursor this server issued' });
+    const running = pullsInFlight.get(userId) ?? 0;
+    if (running >= MAX_CONCURRENT_PULLS) {
+      res.setHeader('Retry-After', '1');
+      throw new AppError(429, 'too_many_pulls', `At most ${MAX_CONCURRENT_PULLS} pulls at once; try again in a moment`);
+    }
+    pullsInFlight.set(userId, running + 1);
+    try {
+      const page = await store.pull(userId, sinceSeq, limit);
+      const body: PullResponse = {
+        changes: page.changes,
+        cursor: cursors.seal(userId, page.lastSeq),
+        hasMore: page.hasMore,
+        serverTime: new Date().toISOString(),
+      };
+      res.json(body);
+    } finally {
+      const left = (pullsInFlight.get(userId) ?? 1) - 1;
+      if (left > 0) pullsInFlight.set(userId, left);
+      else pullsInFlight.delete(userId);
+    }
   });
 
   return router;

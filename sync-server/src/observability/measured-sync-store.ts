@@ -13,6 +13,7 @@ export class MeasuredSyncStore extends SyncStore {
     pushChanges.observe(changes.length);
     pushOutcome.inc({ outcome: 'applied' }, result.applied);
     pushOutcome.inc({ outcome: 'duplicate' }, result.duplicates);
+    pushOutcome.inc({ outcome: 'superseded' }, result.superseded);
     // The oldest change of a push is how long the device's outbox held it (clocks carry wall time).
     const oldest = Math.min(...changes.map((change) => parseHlc(change.hlc)?.wall ?? now));
     if (changes.length > 0) outboxLag.observe(Math.max(0, now - oldest) / 1000);

@@ -5,7 +5,7 @@ import { firstValueFrom } from 'rxjs';
 import type { AccountUser, SignedIn, TokenPair } from '@shared/account/account-input';
 
 import { browserStorage } from '../device/browser-storage';
-import { secondsUntilExpiry, SESSION_STORAGE_KEY, type StoredSession } from './stored-session';
+import { secondsUntilExpiry, SESSION_STORAGE_KEY, tokenReceived, type StoredSession } from './stored-session';
 
 /** Refresh a little before expiry, so a request does not leave with a token about to lapse. */
 const REFRESH_MARGIN_SECONDS = 30;
@@ -110,6 +110,7 @@ export class Auth {
   }
 
   private store(session: StoredSession | null): void {
+    if (session && session.accessToken !== this.session()?.accessToken) tokenReceived(session.accessToken);
     this.session.set(session);
     if (session) browserStorage.write(SESSION_STORAGE_KEY, session);
     else browserStorage.remove(SESSION_STORAGE_KEY);

@@ -14,13 +14,28 @@ export interface StoredSession {
 
 export const SESSION_STORAGE_KEY = 'lamplight.session';
 
-/** Seconds left before an access token expires, read from its payload (not verified: the server does that). */
+/** This device's own time when each access token arrived (this page's life only). */
+const receivedAt = new Map<string, number>();
+
+/** Notes when a token arrived, so its age can be measured by this device's clock alone. */
+export function tokenReceived(accessToken: string, now = Date.now()): void {
+  receivedAt.set(accessToken, now);
+}
+
+/**
+ * Seconds left before an access token expires, read from its payload (not verified: the server
+ * does that). When the token arrived in this page, its age is measured from then: a device whose
+ * date is days off would otherwise find every token expired, or never expired.
+ */
 export function secondsUntilExpiry(accessToken: string, now = Date.now()): number {
   try {
     const payload = accessToken.split('.')[1] ?? '';
     const json = atob(payload.replace(/-/g, '+').replace(/_/g, '/'));
-    const exp = (JSON.parse(json) as { exp?: unknown }).exp;
-    return typeof exp === 'number' ? exp - now / 1000 : 0;
+    const { exp, iat } = JSON.parse(json) as { exp?: unknown; iat?: unknown };
+    if (typeof exp !== 'number') return 0;
+    const arrived = receivedAt.get(accessToken);
+    if (arrived !== undefined && typeof iat === 'number') return exp - iat - (now - arrived) / 1000;
+    return exp - now / 1000;
   } catch {
     return 0;
   }

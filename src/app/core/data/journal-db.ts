@@ -1,6 +1,6 @@
 import Dexie, { type Table } from 'dexie';
 
-import type { FieldChange } from '@shared/sync/field-change';
+import type { FieldChange, PulledChange } from '@shared/sync/field-change';
 import type { LocalRow } from '@shared/sync/local-row';
 import { COLLECTIONS } from '@shared/sync/schema/collections';
 
@@ -29,10 +29,19 @@ export interface StoredCover {
   readonly problem?: string;
 }
 
-/** Small key-value facts about this database: the last clock, the pull cursor, the last sync. */
+/**
+ * Small key-value facts about this database: the last clock, the pull cursor, the last sync, the
+ * offset from the server's time (ms, as text), the greatest clock seen from others, whether the
+ * reader was told their date looks wrong, and recent edits another device overwrote (JSON).
+ */
 export interface MetaEntry {
-  readonly key: 'clock' | 'cursor' | 'lastSyncedAt';
+  readonly key: 'clock' | 'cursor' | 'lastSyncedAt' | 'clockOffset' | 'seenClock' | 'clockWarned' | 'overwritten';
   readonly value: string;
+}
+
+/** A pulled change for a collection this version of the app does not know yet, kept for after an update. */
+export interface HeldChange extends PulledChange {
+  readonly seq?: number;
 }
 
 /** The name of a reader's local database: one per user id, so readers sharing a tablet never mix. */
@@ -42,7 +51,7 @@ export const journalDbName = (userId: string) => `lamplight-journal-${userId}`;
  * Bump when the stores below change (a new collection or index). Dexie works out the upgrade
  * from the latest declaration; other open tabs get a `versionchange` and close.
  */
-export const JOURNAL_DB_VERSION = 6;
+export const JOURNAL_DB_VERSION = 7;
 
 /** Dexie store specs for every synced collection, from the shared schema: `id` plus its indexes. */
 export function collectionStores(): Record<string, string> {
@@ -56,6 +65,8 @@ export class JournalDb extends Dexie {
   meta!: Table<MetaEntry, string>;
   /** Cover images on this device (not a synced collection: books sync their `coverId`). */
   covers!: Table<StoredCover, string>;
+  /** Pulled changes of collections unknown to this app version (applied once it knows them). */
+  held!: Table<HeldChange, number>;
 
   constructor(readonly userId: string) {
     super(journalDbName(userId));
@@ -65,6 +76,7 @@ export class JournalDb extends Dexie {
       rejected: 'id',
       meta: 'key',
       covers: 'id, state',
+      held: '++seq, collection',
     });
   }
 

@@ -3,9 +3,11 @@ import { Subject } from 'rxjs';
 
 import { HlcClock } from '@shared/sync/hlc';
 import { emptyRow, type LocalRow } from '@shared/sync/local-row';
+import { currentSetState, mergeSetField } from '@shared/sync/merge-set';
+import { isEmptyOrSet, joinOrSet, orSetDelta, type OrSetState } from '@shared/sync/or-set';
 import { validatePatch } from '@shared/sync/validate-patch';
 import type { CollectionName } from '@shared/sync/schema/collections';
-import { COLLECTIONS } from '@shared/sync/schema/collections';
+import { COLLECTIONS, fieldSpecOf } from '@shared/sync/schema/collections';
 import type { PatchOf, RowOf } from '@shared/sync/schema/collection';
 
 import { deviceId } from '../device/device-id';
@@ -59,9 +61,23 @@ export class JournalStore {
         const row: LocalRow = (await db.rows(collection).get(rowId)) ?? emptyRow(rowId);
         const fields = Object.entries(patch).filter(([field, value]) => !sameValue(row[field], value));
         if (fields.length === 0) continue;
-        hlc ??= new HlcClock(deviceId(), Date.now, (await db.meta.get('clock'))?.value).tick();
+        // From the server-corrected time, so a device with a wrong date still stamps sensible clocks.
+        const offset = Number((await db.meta.get('clockOffset'))?.value ?? 0) || 0;
+        hlc ??= new HlcClock(deviceId(), () => Date.now() + offset, (await db.meta.get('clock'))?.value).tick();
         const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
         for (const [field, value] of fields) {
+          if (fieldSpecOf(collection, field)?.kind === 'set') {
+            // Sent as a delta (what was added, which adds were removed), so other devices' edits stay.
+            const current = { value: row[field], hlc: row._hlc[field], state: row._sets?.[field] };
+            const delta = orSetDelta(currentSetState(current), value as string[], hlc);
+            if (isEmptyOrSet(delta)) continue; // the same elements in another order
+            const merged = mergeSetField(current, { value: delta, hlc });
+            next[field] = merged.value;
+            next['_sets'] = { ...(next['_sets'] as object), [field]: merged.state };
+            (next['_hlc'] as Record<string, string>)[field] = hlc;
+            outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value: delta, hlc });
+            continue;
+          }
           next[field] = value;
           (next['_hlc'] as Record<string, string>)[field] = hlc;
           outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value, hlc });
@@ -70,7 +86,7 @@ export class JournalStore {
       }
       if (!hlc) return false;
       await db.meta.put({ key: 'clock', value: hlc });
-      await db.outbox.bulkAdd(outbox);
+      await db.outbox.bulkAdd(await coalesce(db, outbox));
       return true;
     });
     if (changed) this.writes.next();
@@ -103,6 +119,26 @@ export class JournalStore {
     if (!db) throw new Error('Nobody is signed in on this device');
     return db;
   }
+}
+
+/**
+ * Drops waiting outbox changes to the same field of the same row, so only the newest is sent
+ * (with its newer clock): a timer that writes every few seconds keeps one change, not hundreds.
+ * A set field's waiting deltas are joined into the new one instead, so no add or remove is lost.
+ */
+async function coalesce(db: JournalDb, fresh: OutboxEntry[]): Promise<OutboxEntry[]> {
+  const key = (change: OutboxEntry) => `${change.collection}\u0000${change.rowId}\u0000${change.field}`;
+  const byKey = new Map(fresh.map((change) => [key(change), change]));
+  const rowIds = new Set(fresh.map((change) => change.rowId));
+  const waiting = await db.outbox.filter((change) => rowIds.has(change.rowId) && byKey.has(key(change))).toArray();
+  for (const old of waiting) {
+    const replacement = byKey.get(key(old))!;
+    if (fieldSpecOf(old.collection, old.field)?.kind === 'set') {
+      byKey.set(key(old), { ...replacement, value: joinOrSet(old.value as OrSetState, replacement.value as OrSetState) });
+    }
+  }
+  await db.outbox.bulkDelete(waiting.map((change) => change.seq!));
+  return [...new Set(fresh.map((change) => byKey.get(key(change))!))];
 }
 
 /** Values are JSON (strings, numbers, booleans, null, lists): compare them as JSON. */

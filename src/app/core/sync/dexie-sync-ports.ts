@@ -1,20 +1,28 @@
-import { HttpClient, HttpErrorResponse } from '@angular/common/http';
+import { HttpClient, HttpErrorResponse, type HttpResponse } from '@angular/common/http';
 import { firstValueFrom } from 'rxjs';
 
 import { isApiErrorBody } from '@shared/api/api-error';
-import type { ChangeProblem, FieldChange, PullResponse } from '@shared/sync/field-change';
+import { clockOffsetMs, restampClocks } from '@shared/sync/device-clock';
+import type { ChangeProblem, FieldChange, PulledChange, PullResponse, PushResponse } from '@shared/sync/field-change';
 import { HlcClock } from '@shared/sync/hlc';
-import { applyPulled, emptyRow } from '@shared/sync/local-row';
+import { applyPulled, emptyRow, type LocalRow } from '@shared/sync/local-row';
+import { COLLECTIONS } from '@shared/sync/schema/collections';
 import type { PushOutcome, QueuedChange, SyncPorts } from '@shared/sync/sync-cycle';
 
 import { deviceId } from '../device/device-id';
 import type { JournalDb } from '../data/journal-db';
+import { rememberOverwritten } from './overwritten-edits';
 
 /** The browser's side of the shared sync cycle: the outbox and rows in Dexie, the server over HTTP. */
 export class DexieSyncPorts implements SyncPorts {
+  /**
+   * @param known the collections this version of the app knows; changes to others are held on
+   * the device and applied after an update that knows them.
+   */
   constructor(
     private readonly db: JournalDb,
     private readonly http: HttpClient,
+    private readonly known: ReadonlySet<string> = new Set(Object.keys(COLLECTIONS)),
   ) {}
 
   nextBatch(limit: number): Promise<readonly QueuedChange[]> {
@@ -35,11 +43,38 @@ export class DexieSyncPorts implements SyncPorts {
     });
   }
 
+  /**
+   * Stamps refused changes again from the server-corrected time, in outbox order and after the
+   * greatest clock seen from others; the rows' field clocks follow, and so does the device clock.
+   */
+  async restamp(changes: readonly QueuedChange[]): Promise<void> {
+    const tables = [...new Set(changes.map((change) => change.collection))].filter((name) => this.known.has(name)).map((name) => this.db.rows(name));
+    await this.db.transaction('rw', [this.db.outbox, this.db.meta, ...tables], async () => {
+      const offset = await this.offset();
+      const seen = (await this.db.meta.get('seenClock'))?.value;
+      const ordered = [...changes].sort((a, b) => a.seq! - b.seq!);
+      const renamed = restampClocks(ordered.map((change) => change.hlc), deviceId(), () => Date.now() + offset, seen);
+      await this.db.outbox.bulkPut(ordered.map((change) => ({ ...change, hlc: renamed.get(change.hlc)! })));
+      for (const change of ordered) {
+        if (!this.known.has(change.collection)) continue;
+        const row = await this.db.rows(change.collection).get(change.rowId);
+        if (row && row._hlc[change.field] === change.hlc) {
+          await this.db.rows(change.collection).put({ ...row, _hlc: { ...row._hlc, [change.field]: renamed.get(change.hlc)! } });
+        }
+      }
+      await this.db.meta.put({ key: 'clock', value: [...renamed.values()].at(-1)! });
+    });
+  }
+
   async push(changes: readonly FieldChange[]): Promise<PushOutcome> {
+    const sentAt = Date.now();
     try {
-      await firstValueFrom(this.http.post('/api/sync/push', { deviceId: deviceId(), changes }));
+      const res = await firstValueFrom(this.http.post<PushResponse>('/api/sync/push', { deviceId: deviceId(), changes }, { observe: 'response' }));
+      await this.learnTime(res, sentAt, res.body?.serverTime);
+      if (res.body?.overwritten?.length) await rememberOverwritten(this.db, changes, res.body.overwritten);
       return { kind: 'applied' };
     } catch (error) {
+      if (error instanceof HttpErrorResponse) await this.learnTime(error, sentAt);
       if (error instanceof HttpErrorResponse && error.status === 413) return { kind: 'too-large' };
       if (error instanceof HttpErrorResponse && error.status === 400 && isApiErrorBody(error.error) && Array.isArray(error.error.error.details)) {
         return { kind: 'refused', problems: error.error.error.details as ChangeProblem[] };
@@ -52,35 +87,32 @@ export class DexieSyncPorts implements SyncPorts {
     return (await this.db.meta.get('cursor'))?.value;
   }
 
-  pull(cursor: string | undefined): Promise<PullResponse> {
+  async pull(cursor: string | undefined): Promise<PullResponse> {
     const params: Record<string, string> = { limit: '1000' };
     if (cursor) params['since'] = cursor;
-    return firstValueFrom(this.http.get<PullResponse>('/api/sync/pull', { params }));
+    const sentAt = Date.now();
+    const res = await firstValueFrom(this.http.get<PullResponse>('/api/sync/pull', { params, observe: 'response' }));
+    await this.learnTime(res, sentAt, res.body?.serverTime);
+    return res.body!;
   }
 
   /**
    * Merges a page into local rows with the shared rule and saves its cursor in the same
-   * transaction, so a crash can only make the next pull repeat work, never skip it.
+   * transaction, so a crash can only make the next pull repeat work, never skip it. Changes to
+   * collections this app does not know are held, with the cursor moving on; held changes whose
+   * collection the app now knows (after an update) are applied first.
    */
   async apply(page: PullResponse): Promise<void> {
-    const byRow = new Map<string, { collection: string; rowId: string; changes: PullResponse['changes'][number][] }>();
-    for (const change of page.changes) {
-      const key = `${change.collection}/${change.rowId}`;
-      const entry = byRow.get(key) ?? { collection: change.collection, rowId: change.rowId, changes: [] };
-      entry.changes.push(change);
-      byRow.set(key, entry);
-    }
-    const collections = [...new Set(page.changes.map((change) => change.collection))].filter((name) =>
-      this.db.tables.some((table) => table.name === name),
-    );
-    await this.db.transaction('rw', [...collections.map((name) => this.db.rows(name)), this.db.meta], async () => {
-      for (const collection of collections) {
-        const entries = [...byRow.values()].filter((entry) => entry.collection === collection);
-        const table = this.db.rows(collection);
-        const current = await table.bulkGet(entries.map((entry) => entry.rowId));
-        const merged = entries.map((entry, n) => applyPulled(current[n] ?? emptyRow(entry.rowId), entry.changes));
-        await table.bulkPut(merged.filter((row, n) => row !== current[n]));
-      }
+    const unknown = page.changes.filter((change) => !this.known.has(change.collection));
+    const collections = [...new Set(page.changes.map((change) => change.collection))].filter((name) => this.known.has(name));
+    const tables = this.db.tables.filter((table) => this.known.has(table.name)).map((table) => table.name);
+    await this.db.transaction('rw', [...tables.map((name) => this.db.rows(name)), this.db.meta, this.db.held], async () => {
+      const released = await this.db.held.where('collection').anyOf([...this.known]).toArray();
+      await this.merge([...released.map(({ seq: _seq, ...change }) => change), ...page.changes.filter((change) => this.known.has(change.collection))], [
+        ...new Set([...collections, ...released.map((change) => change.collection)]),
+      ]);
+      await this.db.held.bulkDelete(released.map((change) => change.seq!));
+      await this.db.held.bulkAdd(unknown);
       await this.adoptClocks(page);
       await this.db.meta.bulkPut([
         { key: 'cursor', value: page.cursor },
@@ -89,16 +121,47 @@ export class DexieSyncPorts implements SyncPorts {
     });
   }
 
+  private async merge(changes: readonly PulledChange[], collections: readonly string[]): Promise<void> {
+    const byRow = new Map<string, { collection: string; rowId: string; changes: PulledChange[] }>();
+    for (const change of changes) {
+      const key = `${change.collection}/${change.rowId}`;
+      const entry = byRow.get(key) ?? { collection: change.collection, rowId: change.rowId, changes: [] };
+      entry.changes.push(change);
+      byRow.set(key, entry);
+    }
+    for (const collection of collections) {
+      const entries = [...byRow.values()].filter((entry) => entry.collection === collection);
+      const table = this.db.rows(collection);
+      const current = await table.bulkGet(entries.map((entry) => entry.rowId));
+      const merged: LocalRow[] = entries.map((entry, n) => applyPulled(current[n] ?? emptyRow(entry.rowId), entry.changes));
+      await table.bulkPut(merged.filter((row, n) => row !== current[n]));
+    }
+  }
+
+  private async offset(): Promise<number> {
+    return Number((await this.db.meta.get('clockOffset'))?.value ?? 0) || 0;
+  }
+
+  /** Keeps the offset from the server's time: the answer's `serverTime`, else its HTTP Date header. */
+  private async learnTime(res: Pick<HttpResponse<unknown>, 'headers'>, sentAt: number, serverTime?: string): Promise<void> {
+    const server = Date.parse(serverTime ?? res.headers?.get('Date') ?? '');
+    if (!Number.isFinite(server)) return;
+    await this.db.meta.put({ key: 'clockOffset', value: String(clockOffsetMs(server, sentAt, Date.now())) });
+  }
+
   /** HLC receive rule: later local edits order after everything seen from other devices. */
   private async adoptClocks(page: PullResponse): Promise<void> {
     const latest = page.changes.reduce<string | null>((max, change) => (max === null || change.hlc > max ? change.hlc : max), null);
     if (!latest) return;
-    const clock = new HlcClock(deviceId(), Date.now, (await this.db.meta.get('clock'))?.value);
+    const offset = await this.offset();
+    const clock = new HlcClock(deviceId(), () => Date.now() + offset, (await this.db.meta.get('clock'))?.value);
+    const seen = (await this.db.meta.get('seenClock'))?.value;
+    if (!seen || latest > seen) await this.db.meta.put({ key: 'seenClock', value: latest });
     try {
       clock.receive(latest);
       await this.db.meta.put({ key: 'clock', value: clock.current() });
     } catch {
-      // A clock over 24 h ahead of this device: keep our own (this device's date may be wrong).
+      // A clock over 24 h ahead even of the corrected time: keep our own.
     }
   }
 }

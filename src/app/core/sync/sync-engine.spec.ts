@@ -152,7 +152,7 @@ describe('SyncEngine', () => {
       const titleIndex = queued.findIndex((change) => change.id === title!.id);
 
       const engine = start();
-      (await sent(backend, '/api/sync/push')).flush(refusedBody([{ index: titleIndex, code: 'clock_ahead', reason: 'This change is dated more than a day ahead' }]), {
+      (await sent(backend, '/api/sync/push')).flush(refusedBody([{ index: titleIndex, code: 'invalid_value', reason: 'books.title must be at most 500 characters' }]), {
         status: 400,
         statusText: 'Bad Request',
       });
@@ -164,7 +164,7 @@ describe('SyncEngine', () => {
 
       expect(await db.outbox.count()).toBe(0);
       expect(await db.rejected.toArray()).toEqual([
-        jasmine.objectContaining({ id: title!.id, field: 'title', value: 'A Winter in Tolvik', code: 'clock_ahead', reason: 'This change is dated more than a day ahead' }),
+        jasmine.objectContaining({ id: title!.id, field: 'title', value: 'A Winter in Tolvik', code: 'invalid_value', reason: 'books.title must be at most 500 characters' }),
       ]);
     });
   });
@@ -317,11 +317,13 @@ describe('SyncEngine', () => {
       expect(await db.outbox.count()).toBe(2);
 
       await nextAttemptAfter(750);
-      // The service worker's answer when the network is down: 504 without our error body.
-      (await sent(backend, '/api/sync/push')).flush('', { status: 504, statusText: 'Gateway Timeout' });
+      // While offline each attempt is one cheap probe, not the push; the service worker's answer
+      // when the network is down is a 504 without our error body.
+      (await sent(backend, '/api/health')).flush('', { status: 504, statusText: 'Gateway Timeout' });
       await until(() => engine.phase() === 'offline', 'the engine shows offline');
       expect(engine.error()).toBeNull();
       await nextAttemptAfter(1500);
+      (await sent(backend, '/api/health')).flush({ status: 'ok' });
       (await sent(backend, '/api/sync/push')).flush(pushed(2));
       (await sent(backend, '/api/sync/pull')).flush(emptyPage('cursor-1'));
       await until(() => engine.phase() === 'idle', 'the retry succeeded');

@@ -1,12 +1,14 @@
 import { HttpClient, HttpErrorResponse } from '@angular/common/http';
 import { computed, DestroyRef, effect, inject, Injectable, signal } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
-import { debounceTime } from 'rxjs';
+import { debounceTime, firstValueFrom } from 'rxjs';
 
+import { dateLooksWrong } from '@shared/sync/device-clock';
 import { retryDelayMs, runSyncCycle } from '@shared/sync/sync-cycle';
 
 import { Auth } from '../auth/auth';
 import { isUnreachable } from '../http/api-error-message';
+import type { JournalDb } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
 import { liveQuerySignal } from '../data/live-query';
 import { LocalJournal } from '../data/local-journal';
@@ -35,6 +37,7 @@ export class SyncEngine {
 
   private readonly phaseState = signal<SyncPhase>('idle');
   private readonly lastError = signal<string | null>(null);
+  private readonly clockNoticeState = signal<string | null>(null);
   private attempt = 0;
   private timer: ReturnType<typeof setTimeout> | undefined;
   private running: Promise<void> | null = null;
@@ -48,6 +51,8 @@ export class SyncEngine {
   readonly lastSyncedAt = liveQuerySignal(async (db) => (await db.meta.get('lastSyncedAt'))?.value ?? null, null);
   readonly phase = computed<SyncPhase>(() => (this.auth.needsSignIn() ? 'needs-sign-in' : this.phaseState()));
   readonly error = this.lastError.asReadonly();
+  /** Said once per device: its date is far from the server's (sync corrects for it meanwhile). */
+  readonly clockNotice = this.clockNoticeState.asReadonly();
 
   constructor() {
     const destroyRef = inject(DestroyRef);
@@ -56,15 +61,27 @@ export class SyncEngine {
       if (this.journal.db() && !this.auth.needsSignIn()) this.schedule(0);
     });
     inject(SyncEvents).connect(() => void this.syncNow()); // another device pushed: pull now
+    // While offline, writes and the minute timer leave the backoff's probe alone (no retry storm).
     inject(JournalStore)
       .localWrites.pipe(debounceTime(WRITE_DEBOUNCE_MS), takeUntilDestroyed(destroyRef))
-      .subscribe(() => this.schedule(0));
-    const online = () => this.schedule(0);
-    const offline = () => this.phaseState.set('offline');
+      .subscribe(() => {
+        if (this.phaseState() !== 'offline') this.schedule(0);
+      });
+    const online = () => {
+      this.attempt = 0;
+      if (this.phaseState() === 'offline') this.phaseState.set('idle'); // the browser says so: no probe needed
+      this.schedule(0);
+    };
+    const offline = () => {
+      clearTimeout(this.timer); // nothing to try until the browser says it is back (or a probe finds it)
+      this.phaseState.set('offline');
+      this.schedule(retryDelayMs(this.attempt++));
+    };
     globalThis.addEventListener?.('online', online);
     globalThis.addEventListener?.('offline', offline);
     const periodic = setInterval(() => {
-      if (globalThis.document?.visibilityState !== 'hidden' && this.phaseState() !== 'syncing') this.schedule(0);
+      const phase = this.phaseState();
+      if (globalThis.document?.visibilityState !== 'hidden' && phase !== 'syncing' && phase !== 'offline') this.schedule(0);
     }, PERIODIC_MS);
     destroyRef.onDestroy(() => {
       clearInterval(periodic);
@@ -104,9 +121,13 @@ export class SyncEngine {
     const db = this.journal.db();
     if (!db || this.auth.needsSignIn()) return;
     clearTimeout(this.timer);
+    const wasOffline = this.phaseState() === 'offline';
     this.phaseState.set('syncing');
     try {
+      // Back from offline: a cheap probe first, so a still-missing network costs one small request.
+      if (wasOffline) await firstValueFrom(this.http.get('/api/health'));
       const ran = await this.withTabLock(db.userId, () => runSyncCycle(new DexieSyncPorts(db, this.http)));
+      await this.noticeWrongDate(db);
       this.attempt = 0;
       this.lastError.set(null);
       this.phaseState.set('idle');
@@ -115,6 +136,17 @@ export class SyncEngine {
       this.phaseState.set(this.describeFailure(error));
       if (this.phaseState() !== 'needs-sign-in') this.schedule(retryDelayMs(this.attempt++));
     }
+  }
+
+  /** Tells the reader once per device that its date looks wrong (sync corrects for it meanwhile). */
+  private async noticeWrongDate(db: JournalDb): Promise<void> {
+    const offset = Number((await db.meta.get('clockOffset'))?.value ?? 0) || 0;
+    if (!dateLooksWrong(offset) || (await db.meta.get('clockWarned'))) return;
+    const days = Math.round(Math.abs(offset) / 86_400_000);
+    this.clockNoticeState.set(
+      `This device's date looks about ${days} ${days === 1 ? 'day' : 'days'} ${offset < 0 ? 'ahead' : 'behind'}. Your changes still sync; setting the date right keeps their order exact.`,
+    );
+    await db.meta.put({ key: 'clockWarned', value: new Date().toISOString() });
   }
 
   private describeFailure(error: unknown): SyncPhase {

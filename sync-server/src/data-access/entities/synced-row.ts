@@ -16,6 +16,10 @@ export abstract class SyncedRow {
   @Column({ type: 'jsonb', default: {} })
   clocks: Record<string, string>;
 
+  /** Set fields' per-element states (field → observed-remove state, shared/sync/or-set.ts). */
+  @Column({ type: 'jsonb', default: {} })
+  sets: Record<string, unknown>;
+
   /** bigint arrives as a string from pg. */
   @Column({ type: 'bigint' })
   seq: string;

@@ -193,7 +193,7 @@ describe('SyncStatus', () => {
     await configure();
     await TestBed.inject(JournalStore).write('books', crypto.randomUUID(), { title: 'The Long Way to Ardmore' });
     await render();
-    (await sent(backend, '/api/sync/push')).flush(refusedBody([{ index: 0, code: 'clock_ahead', reason: 'This change is dated more than a day ahead' }]), {
+    (await sent(backend, '/api/sync/push')).flush(refusedBody([{ index: 0, code: 'invalid_value', reason: 'books.title must be at most 500 characters' }]), {
       status: 400,
       statusText: 'Bad Request',
     });
@@ -201,7 +201,7 @@ describe('SyncStatus', () => {
 
     await shows('1 change refused');
     await details();
-    expect(document.querySelector('.sync-details .refused')?.textContent?.trim()).toBe('Refused: This change is dated more than a day ahead');
+    expect(document.querySelector('.sync-details .refused')?.textContent?.trim()).toBe('Refused: books.title must be at most 500 characters');
   });
 
   it('when the server fails, says it will retry and why in the menu', async () => {

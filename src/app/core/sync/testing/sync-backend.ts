@@ -35,17 +35,18 @@ export async function expectNothingSent(backend: HttpTestingController): Promise
     .toEqual([]);
 }
 
-export const SERVER_TIME = '2026-03-14T09:05:00.000Z';
+/** The server's time in answers: now (a fixed date would read as this device's date being wrong). */
+const serverTime = () => new Date().toISOString();
 
 /** A pull answer: these changes, then this cursor. */
 export function pullPage(cursor: string, changes: PullResponse['changes'] = [], hasMore = false): PullResponse {
-  return { changes, cursor, hasMore, serverTime: SERVER_TIME };
+  return { changes, cursor, hasMore, serverTime: serverTime() };
 }
 
 /** A pull answer with nothing new. */
 export const emptyPage = (cursor: string) => pullPage(cursor);
 
-export const pushed = (applied: number) => ({ applied, duplicates: 0, serverTime: SERVER_TIME });
+export const pushed = (applied: number) => ({ applied, duplicates: 0, serverTime: serverTime() });
 
 export const UNAUTHORIZED = { status: 401, statusText: 'Unauthorized' };
 export const SERVER_ERROR = { status: 500, statusText: 'Internal Server Error' };

@@ -13,6 +13,7 @@ import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { BookCover } from '../../../core/covers/book-cover/book-cover';
 import { LocalJournal } from '../../../core/data/local-journal';
+import { OverwrittenNote } from '../../../core/sync/overwritten-note/overwritten-note';
 import { BookQuotes } from '../../quotes/book-quotes/book-quotes';
 import { QuoteCapture } from '../../quotes/quote-capture';
 import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
@@ -63,6 +64,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
     BookReading,
     TimerStartButton,
     CatalogueOffer,
+    OverwrittenNote,
   ],
   templateUrl: './book-page.html',
   styleUrl: './book-page.scss',

@@ -1,0 +1,51 @@
+import { provideHttpClient } from '@angular/common/http';
+import { TestBed } from '@angular/core/testing';
+import Dexie from 'dexie';
+
+import { formatHlc } from '@shared/sync/hlc';
+
+import { forgetSession, READER, rememberSession } from '../../auth/testing/session-fixtures';
+import { journalDbName } from '../../data/journal-db';
+import { LocalJournal } from '../../data/local-journal';
+import { until } from '../testing/sync-backend';
+import { rememberOverwritten } from '../overwritten-edits';
+import { OverwrittenNote } from './overwritten-note';
+
+describe('OverwrittenNote', () => {
+  let userId: string;
+
+  beforeEach(() => {
+    userId = `note-${crypto.randomUUID()}`;
+    rememberSession({ user: { ...READER, id: userId } });
+    TestBed.configureTestingModule({ providers: [provideHttpClient()] });
+  });
+
+  afterEach(async () => {
+    TestBed.resetTestingModule();
+    await Dexie.delete(journalDbName(userId));
+    forgetSession();
+  });
+
+  it('shows which edit another device overwrote: the field, what was written here, what it reads now, and the device', async () => {
+    const db = TestBed.inject(LocalJournal).db()!;
+    const rowId = crypto.randomUUID();
+    const change = { id: crypto.randomUUID(), collection: 'books', rowId, field: 'pageCount', value: 312, hlc: formatHlc({ wall: Date.now(), counter: 0, node: 'me' }) };
+    await rememberOverwritten(db, [change], [{ id: change.id, by: formatHlc({ wall: Date.now() + 5, counter: 0, node: 'laptop-4f2a9c' }) }]);
+
+    const fixture = TestBed.createComponent(OverwrittenNote);
+    fixture.componentRef.setInput('collection', 'books');
+    fixture.componentRef.setInput('row', { id: rowId, pageCount: 298 });
+    await until(async () => {
+      fixture.detectChanges();
+      return !!fixture.nativeElement.querySelector('li');
+    }, 'the note shows');
+
+    expect(fixture.nativeElement.querySelector('li').textContent.replace(/\s+/g, ' ').trim()).toBe(
+      'page count: you wrote “312”; it now reads “298” (device laptop-4).',
+    );
+
+    fixture.componentRef.setInput('row', { id: crypto.randomUUID(), pageCount: 298 });
+    fixture.detectChanges();
+    expect(fixture.nativeElement.querySelector('li')).toBeNull(); // another book: nothing
+  });
+});
