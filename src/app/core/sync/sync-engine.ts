@@ -138,7 +138,15 @@ export class SyncEngine {
     }
   }
 
-  /** Tells the reader once per device that its date looks wrong (sync corrects for it meanwhile). */
+  /** The reader has seen the notice about their device's date: do not say it again on this device. */
+  async clockNoticeSeen(): Promise<void> {
+    const db = this.journal.db();
+    if (!this.clockNoticeState() || !db) return;
+    this.clockNoticeState.set(null);
+    await db.meta.put({ key: 'clockWarned', value: new Date().toISOString() });
+  }
+
+  /** Tells the reader, until they have seen it once, that their device's date looks wrong (sync corrects for it meanwhile). */
   private async noticeWrongDate(db: JournalDb): Promise<void> {
     const offset = Number((await db.meta.get('clockOffset'))?.value ?? 0) || 0;
     if (!dateLooksWrong(offset) || (await db.meta.get('clockWarned'))) return;
@@ -146,7 +154,6 @@ export class SyncEngine {
     this.clockNoticeState.set(
       `This device's date looks about ${days} ${days === 1 ? 'day' : 'days'} ${offset < 0 ? 'ahead' : 'behind'}. Your changes still sync; setting the date right keeps their order exact.`,
     );
-    await db.meta.put({ key: 'clockWarned', value: new Date().toISOString() });
   }
 
   private describeFailure(error: unknown): SyncPhase {
