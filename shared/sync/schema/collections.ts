@@ -17,7 +17,7 @@ export const LABEL_COLOURS = ['amber', 'rose', 'sage', 'teal', 'sky', 'plum', 's
 export const LABEL_ICONS = ['star', 'repeat', 'group', 'favorite', 'bolt', 'spa', 'local_cafe', 'flag', 'auto_stories', 'bookmark'] as const;
 
 /** Labels a book or a quote may carry, by label id (at most 20). */
-const labelIds = () => field.textList(20, 36);
+const labelIds = () => field.set(20, 36);
 
 /** The books of a reader's library. */
 export const books = defineCollection(
@@ -25,7 +25,8 @@ export const books = defineCollection(
   {
     title: field.text(500),
     subtitle: field.optionalText(500),
-    authors: field.textList(20, 200),
+    /** Ordered (the first is the main author): the whole list is one last-writer-wins value. */
+    authors: field.orderedList(20, 200),
     format: field.choice(BOOK_FORMATS),
     /** Length in the book's own unit: pages for print and ebook… */
     pageCount: field.optionalInteger(1, 100_000),
@@ -35,8 +36,8 @@ export const books = defineCollection(
     publisher: field.optionalText(200),
     year: field.optionalInteger(1, 3000),
     language: field.optionalLanguage(),
-    genres: field.textList(20, 60),
-    tags: field.textList(40, 60),
+    genres: field.set(20, 60),
+    tags: field.set(40, 60),
     status: field.choice(BOOK_STATUSES),
     /** When the status last changed; every change is also kept in `bookStatusChanges`. */
     statusChangedAt: field.optionalTimestamp(),
@@ -121,7 +122,7 @@ export const quotes = defineCollection(
     audioSeconds: field.optionalInteger(0, 1_200_000),
     chapter: field.optionalText(200),
     note: field.optionalText(5_000),
-    tags: field.textList(40, 60),
+    tags: field.set(40, 60),
     labelIds: labelIds(),
     favourite: field.optionalBoolean(),
     /** When it was captured (for ordering and the year in review). */

@@ -5,13 +5,34 @@ import { isValidIsbn13 } from '../../isbn/is-valid-isbn13';
 /** How a field is stored in PostgreSQL; a spec checks the TypeORM entities against this. */
 export type SqlType = 'text' | 'text[]' | 'double precision' | 'integer' | 'boolean' | 'uuid' | 'jsonb';
 
-/** One field of a synced collection: its validator and its column type. */
+/**
+ * How concurrent writes to a field combine; every layer (shared merge, server SQL, client apply)
+ * switches on it. See DEVELOPERS.md, "Field kinds".
+ * - `lww`: one value, the greater clock wins, whole (scalars, and ordered lists such as authors,
+ *   whose order is part of the value).
+ * - `set`: an unordered list merged per element (an observed-remove set, `shared/sync/or-set.ts`):
+ *   concurrent adds both survive and a remove takes away only the adds it saw.
+ * New kinds (mergeable text, say) are added to this union and to {@link FIELD_KINDS}.
+ */
+export type FieldKind = 'lww' | 'set';
+export const FIELD_KINDS: readonly FieldKind[] = ['lww', 'set'];
+
+/** One field of a synced collection: how it merges, its validator and its column type. */
 export interface FieldSpec<T = unknown> {
+  readonly kind: FieldKind;
   readonly sqlType: SqlType;
+  /** The value as the app reads and writes it (and as an older client pushes it). */
   readonly schema: z.ZodType<T>;
+  /** `set` only: the most elements and the longest element, for the per-element wire form. */
+  readonly elements?: { readonly maxItems: number; readonly maxLength: number };
 }
 
-const spec = <T>(sqlType: SqlType, schema: z.ZodType<T>): FieldSpec<T> => ({ sqlType, schema });
+const spec = <T>(sqlType: SqlType, schema: z.ZodType<T>): FieldSpec<T> => ({ kind: 'lww', sqlType, schema });
+
+const stringList = (maxItems: number, maxLength: number) =>
+  z
+    .array(z.string().max(maxLength, `each entry must be at most ${maxLength} characters`))
+    .max(maxItems, `must have at most ${maxItems} entries`);
 
 /** Calendar dates as readers think of them, 'YYYY-MM-DD' (RFC 3339 full-date). */
 const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
@@ -25,13 +46,19 @@ const TIMESTAMP = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z$/;
 export const field = {
   text: (max: number) => spec('text', z.string().max(max, `must be at most ${max} characters`)),
   optionalText: (max: number) => spec('text', z.string().max(max, `must be at most ${max} characters`).nullable()),
-  textList: (maxItems: number, maxLength: number) =>
-    spec(
-      'text[]',
-      z
-        .array(z.string().max(maxLength, `each entry must be at most ${maxLength} characters`))
-        .max(maxItems, `must have at most ${maxItems} entries`),
-    ),
+  /** An ordered list (authors: the first is the main one). Last writer wins for the whole list. */
+  orderedList: (maxItems: number, maxLength: number) => spec('text[]', stringList(maxItems, maxLength)),
+  /**
+   * An unordered list of distinct strings (tags, label ids) merged per element, so two devices
+   * adding different entries offline both keep theirs. The column holds the current elements;
+   * the per-element state lives beside it (see `shared/sync/or-set.ts`).
+   */
+  set: (maxItems: number, maxLength: number): FieldSpec<string[]> => ({
+    kind: 'set',
+    sqlType: 'text[]',
+    schema: stringList(maxItems, maxLength),
+    elements: { maxItems, maxLength },
+  }),
   choice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
     spec('text', z.enum(values, { error: `must be one of ${values.join(', ')}` })),
   optionalChoice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
@@ -72,3 +99,6 @@ export const field = {
 export function columnName(fieldName: string): string {
   return fieldName.replace(/[A-Z]/g, (letter) => `_${letter.toLowerCase()}`);
 }
+
+/** Whether a field merges per element (see {@link FieldKind}). */
+export const isSetField = (spec: FieldSpec | undefined): boolean => spec?.kind === 'set';
