@@ -18,6 +18,8 @@ export interface PulledChange {
   readonly field: string;
   readonly value: unknown;
   readonly hlc: string;
+  /** Mergeable texts: the base64 Yjs state behind `value` (the text it shows). */
+  readonly state?: unknown;
 }
 
 export interface PushRequest {

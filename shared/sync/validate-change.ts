@@ -1,6 +1,8 @@
 import { parseHlc, MAX_CLOCK_AHEAD_MS } from './hlc';
 import type { ChangeProblem } from './field-change';
 import { collectionSpec } from './schema/collections';
+import { textChangeProblem } from '../text/text-change-problem';
+import { textDocName } from '../text/text-doc';
 
 /** Lower-case, as crypto.randomUUID() writes them and PostgreSQL returns them. */
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
@@ -24,6 +26,10 @@ export function validateChange(change: unknown, index: number, nowMs: number): C
   if (!clock) return problem('invalid_change', 'hlc must be a clock like 001764633600000:00000:<node>', id);
   if (clock.wall > nowMs + MAX_CLOCK_AHEAD_MS) {
     return problem('clock_ahead', 'hlc is more than 24 hours ahead of the server clock; check the device date', id);
+  }
+  if (fieldSpec.kind === 'text') {
+    const textProblem = textChangeProblem(textDocName(spec.name, rowId, String(field)), fieldSpec, value);
+    return textProblem ? problem('invalid_value', `${spec.name}.${String(field)} ${textProblem}`, id) : null;
   }
   const parsed = fieldSpec.schema.safeParse(value);
   if (!parsed.success) return problem('invalid_value', `${spec.name}.${String(field)} ${parsed.error.issues[0]?.message ?? 'is not valid'}`, id);

@@ -12,6 +12,7 @@ import { adminRoutes } from './entry-points/admin.routes';
 import { authRoutes } from './entry-points/auth.routes';
 import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
+import { textsRoutes } from './entry-points/texts.routes';
 import { uploadsRoutes } from './entry-points/uploads.routes';
 import { PostgresAttemptStore } from './data-access/attempt-store';
 import { SyncStore } from './data-access/sync-store';
@@ -53,6 +54,7 @@ export function createApp({ config, dataSource, mailer }: AppDependencies): Expr
   app.use('/api', authenticated);
   app.use('/api/devices', devicesRoutes(sessions));
   app.use('/api/sync', syncRoutes(new SyncStore(dataSource)));
+  app.use('/api/texts', textsRoutes(dataSource));
   app.use('/api/uploads', uploadsRoutes(new Uploads(new UploadStore(dataSource)), config.uploadMaxBytes));
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);

@@ -6,6 +6,7 @@ import { createDataSource } from './data-access/data-source';
 import { migrate } from './data-access/migrate';
 import { User } from './data-access/entities/user.entity';
 import { createSmtpMailer } from './domain/mailer';
+import { startJobRunner } from './jobs/job-runner';
 
 /** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
 async function main(): Promise<void> {
@@ -17,6 +18,7 @@ async function main(): Promise<void> {
     await dataSource.getRepository(User).update({ email: config.adminEmail }, { role: 'admin' });
   }
 
+  const jobs = await startJobRunner(config.databaseUrl, dataSource);
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
   const app = createApp({ config, dataSource, mailer });
   const server: Server = app.listen(config.port, config.host, () => {
@@ -36,7 +38,11 @@ async function main(): Promise<void> {
     console.log(`\n${signal}: stopping Lamplight…`);
     server.close(() => {
       mailer.close();
-      void dataSource.destroy().finally(() => process.exit(0));
+      void jobs
+        .stop()
+        .catch((err: unknown) => console.error(`Background jobs did not stop cleanly: ${String(err)}`))
+        .then(() => dataSource.destroy())
+        .finally(() => process.exit(0));
     });
     server.closeAllConnections();
   };

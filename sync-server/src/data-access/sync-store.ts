@@ -5,6 +5,8 @@ import { wins } from '../../../shared/sync/merge';
 import { columnName } from '../../../shared/sync/schema/field';
 import { COLLECTIONS, collectionSpec } from '../../../shared/sync/schema/collections';
 import { mergeSql, pullSql } from './merge-sql';
+import { queryableOf, TextStore } from './text-store';
+import { textFieldMax } from '../../../shared/text/text-fields';
 
 const SPECS = Object.values(COLLECTIONS);
 /** Per collection: its columns by field. */
@@ -32,7 +34,7 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
 /** The part of a node-postgres client the hot path uses. */
 interface PgClient {
-  query(config: { name?: string; text: string; values?: unknown[] } | string): Promise<{ rows: Record<string, unknown>[] }>;
+  query(config: { name?: string; text: string; values?: unknown[] } | string, values?: unknown[]): Promise<{ rows: Record<string, unknown>[] }>;
 }
 
 /** One row's pieces from a batch: the winning value (by column) and clock of each field it touches. */
@@ -65,7 +67,13 @@ export class SyncStore {
    */
   async push(userId: string, changes: readonly FieldChange[]): Promise<{ applied: number; duplicates: number }> {
     const byCollection = new Map<string, Map<string, RowPieces>>();
-    for (const change of changes) {
+    // Mergeable texts merge per character in text-store.ts, after the per-field merge.
+    const texts: { index: number; change: FieldChange }[] = [];
+    for (const [index, change] of changes.entries()) {
+      if (textFieldMax(change.collection, change.field) !== undefined) {
+        texts.push({ index, change });
+        continue;
+      }
       const rows = byCollection.get(change.collection) ?? new Map<string, RowPieces>();
       byCollection.set(change.collection, rows);
       const row = rows.get(change.rowId) ?? { id: change.rowId, clocks: {} };
@@ -87,6 +95,7 @@ export class SyncStore {
         const result = await client.query({ ...statement, values: [userId, JSON.stringify([...rows.values()])] });
         won += Number(result.rows[0]?.['won'] ?? 0);
       }
+      if (texts.length > 0) won += await TextStore.merge(client, userId, texts);
       return won;
     });
     return { applied, duplicates: changes.length - applied };
@@ -139,7 +148,7 @@ export class SyncStore {
       lastSeq = Number(seq);
       taken++;
     }
-    return { changes, lastSeq, hasMore: taken < rows.length };
+    return { changes: await TextStore.withStates(queryableOf(this.dataSource), userId, changes), lastSeq, hasMore: taken < rows.length };
   }
 
 }
