@@ -46,7 +46,10 @@ interface OpenText {
   state: Uint8Array;
   text: string;
   hlc: string;
+  /** Characters changed: the state, the column and a version are written. */
   changed: boolean;
+  /** Only the clock moved: the column and clock are written. */
+  clocked: boolean;
 }
 
 /** A page of history keeps one version per text per this many minutes (the last one of it). */
@@ -83,13 +86,14 @@ export const TextStore = {
         problems.push({ index, id: change.id, code: 'invalid_value', reason: `${change.collection}.${change.field} update ${result?.reason ?? 'is not base64'}` });
         continue;
       }
-      if (change.hlc > text.hlc) text.hlc = change.hlc;
-      if (!result.changed) continue;
-      applied++;
-      Object.assign(text, { state: result.state, text: result.text, changed: true });
+      // A first write of an empty text changes no character but still sets the field's clock.
+      const newerClock = change.hlc > text.hlc;
+      if (newerClock) Object.assign(text, { hlc: change.hlc, clocked: true });
+      if (result.changed) Object.assign(text, { state: result.state, text: result.text, changed: true });
+      if (result.changed || newerClock) applied++;
     }
     if (problems.length > 0) throw new TextChangesRefused(problems);
-    for (const text of open.values()) if (text.changed) await save(client, userId, text);
+    for (const text of open.values()) if (text.changed || text.clocked) await save(client, userId, text);
     return applied;
   },
 
@@ -183,7 +187,7 @@ async function load(client: Queryable, userId: string, change: FieldChange): Pro
   ]);
   const plain = (current[0]?.['text'] as string | null | undefined) ?? '';
   const state = rows[0] ? new Uint8Array(rows[0]['state'] as Buffer) : initialTextState(name, plain);
-  return { collection: change.collection, rowId: change.rowId, field: change.field, state, text: plain, hlc: (current[0]?.['hlc'] as string | null) ?? '', changed: false };
+  return { collection: change.collection, rowId: change.rowId, field: change.field, state, text: plain, hlc: (current[0]?.['hlc'] as string | null) ?? '', changed: false, clocked: false };
 }
 
 /**
@@ -200,11 +204,11 @@ function updateOf(name: string, text: OpenText, value: unknown): Uint8Array | nu
   return Y.encodeStateAsUpdate(doc, before);
 }
 
-/** Writes a text's new state, its row's column, clock and sequence, and its version of now. */
+/** Writes a text's new state, its row's column (null when empty), clock and sequence, and its version of now. */
 async function save(client: Queryable, userId: string, text: OpenText): Promise<void> {
   const spec = collectionSpec(text.collection)!;
   const column = columnName(text.field);
-  await client.query(
+  if (text.changed) await client.query(
     `INSERT INTO text_states (user_id, collection, row_id, field, state) VALUES ($1, $2, $3, $4, $5)
      ON CONFLICT (user_id, collection, row_id, field) DO UPDATE SET state = excluded.state, updated_at = now(), compacted_at = NULL`,
     [userId, text.collection, text.rowId, text.field, Buffer.from(text.state)],
@@ -216,9 +220,9 @@ async function save(client: Queryable, userId: string, text: OpenText): Promise<
      ON CONFLICT (user_id, id) DO UPDATE SET ${column} = excluded.${column},
        clocks = t.clocks || jsonb_build_object($4::text, CASE WHEN coalesce(t.clocks->>$4, '') COLLATE "C" < $5::text COLLATE "C" THEN $5 ELSE t.clocks->>$4 END),
        seq = excluded.seq`,
-    [userId, text.rowId, text.text, text.field, text.hlc],
+    [userId, text.rowId, text.text === '' ? null : text.text, text.field, text.hlc],
   );
-  await client.query(
+  if (text.changed) await client.query(
     `INSERT INTO text_versions (user_id, collection, row_id, field, period, saved_at, text)
      VALUES ($1, $2, $3, $4, date_bin(make_interval(mins => $6), now(), timestamptz '2000-01-01'), now(), $5)
      ON CONFLICT (user_id, collection, row_id, field, period) DO UPDATE SET saved_at = excluded.saved_at, text = excluded.text`,
