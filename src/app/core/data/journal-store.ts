@@ -7,6 +7,11 @@ import { validatePatch } from '@shared/sync/validate-patch';
 import type { CollectionName } from '@shared/sync/schema/collections';
 import { COLLECTIONS } from '@shared/sync/schema/collections';
 import type { PatchOf, RowOf } from '@shared/sync/schema/collection';
+import type { FieldSpec } from '@shared/sync/schema/field';
+import { TEXT_STATES, textStatesOf } from '@shared/text/apply-pulled-texts';
+import { writeLocalText } from '@shared/text/local-text';
+import { textDocName } from '@shared/text/text-doc';
+import type { TextUpdateValue } from '@shared/text/text-value';
 
 import { deviceId } from '../device/device-id';
 import { InvalidFieldsError } from './field-errors';
@@ -62,9 +67,11 @@ export class JournalStore {
         hlc ??= new HlcClock(deviceId(), Date.now, (await db.meta.get('clock'))?.value).tick();
         const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
         for (const [field, value] of fields) {
-          next[field] = value;
+          const text = textWrite(collection, row, field, value);
+          if (text) Object.assign(next, text.row);
+          else next[field] = value;
           (next['_hlc'] as Record<string, string>)[field] = hlc;
-          outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value, hlc });
+          outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value: text ? text.value : value, hlc });
         }
         await db.rows(collection).put(next as LocalRow);
       }
@@ -103,6 +110,23 @@ export class JournalStore {
     if (!db) throw new Error('Nobody is signed in on this device');
     return db;
   }
+}
+
+/**
+ * A mergeable text's write (see shared/text/local-text.ts): the text and its new Yjs state for
+ * the row, and the update the outbox pushes. Null for any other kind of field.
+ */
+function textWrite(collection: CollectionName, row: LocalRow, field: string, value: unknown): { row: Record<string, unknown>; value: TextUpdateValue } | null {
+  const spec: FieldSpec | undefined = (COLLECTIONS[collection].fields as Record<string, FieldSpec>)[field];
+  if (spec?.kind !== 'text') return null;
+  const states = textStatesOf(row);
+  const local = { state: states[field], text: row[field] as string | null | undefined };
+  const written = writeLocalText(textDocName(collection, row.id, field), local, value as string | null | TextUpdateValue, spec.maxLength!);
+  if ('problem' in written) throw new InvalidFieldsError({ [field]: written.problem });
+  return {
+    row: { [field]: written.text === '' ? null : written.text, [TEXT_STATES]: { ...states, [field]: written.state } },
+    value: { yjs: written.update },
+  };
 }
 
 /** Values are JSON (strings, numbers, booleans, null, lists): compare them as JSON. */

@@ -6,6 +6,8 @@ import type { ChangeProblem, FieldChange, PullResponse } from '@shared/sync/fiel
 import { HlcClock } from '@shared/sync/hlc';
 import { applyPulled, emptyRow } from '@shared/sync/local-row';
 import type { PushOutcome, QueuedChange, SyncPorts } from '@shared/sync/sync-cycle';
+import { applyPulledTexts } from '@shared/text/apply-pulled-texts';
+import { textFieldMax } from '@shared/text/text-fields';
 
 import { deviceId } from '../device/device-id';
 import type { JournalDb } from '../data/journal-db';
@@ -78,7 +80,12 @@ export class DexieSyncPorts implements SyncPorts {
         const entries = [...byRow.values()].filter((entry) => entry.collection === collection);
         const table = this.db.rows(collection);
         const current = await table.bulkGet(entries.map((entry) => entry.rowId));
-        const merged = entries.map((entry, n) => applyPulled(current[n] ?? emptyRow(entry.rowId), entry.changes));
+        // Mergeable texts merge their Yjs states; every other field by the shared per-field rule.
+        const merged = entries.map((entry, n) => {
+          const isText = (change: { field: string }) => textFieldMax(collection, change.field) !== undefined;
+          const row = applyPulled(current[n] ?? emptyRow(entry.rowId), entry.changes.filter((change) => !isText(change)));
+          return applyPulledTexts(collection, row, entry.changes.filter(isText));
+        });
         await table.bulkPut(merged.filter((row, n) => row !== current[n]));
       }
       await this.adoptClocks(page);
