@@ -16,31 +16,74 @@ export type TextMerge =
   | { readonly ok: false; readonly reason: string };
 
 /**
- * Merges one update into a text's stored state after checking it: it decodes and carries only
- * plain text ({@link textUpdateProblem}), every character it builds on is already in the stored
- * state (otherwise it belongs to another document, or to history this text never had), and the
- * text it leads to is at most `maxLength` UTF-16 code units — the unit of `String.length`,
- * which the plain-text fields' limits use too.
+ * Merges updates into one text's stored state, checking each: it decodes and carries only
+ * plain text ({@link textUpdateProblem}), every character it builds on is already there
+ * (otherwise it belongs to another document, or to history this text never had), and the text
+ * it leads to is at most `maxLength` UTF-16 code units — the unit of `String.length`, which the
+ * plain-text fields' limits use too. One document serves a whole batch, so a push of many
+ * small edits decodes the stored state once.
  */
+export class TextMerger {
+  private doc: Y.Doc;
+  private readonly accepted: Uint8Array[] = [];
+
+  constructor(
+    private readonly name: string,
+    private readonly stored: Uint8Array,
+    private readonly maxLength: number,
+  ) {
+    this.doc = loadTextDoc([stored], false);
+  }
+
+  /** Applies one update; answers whether it changed anything, or why it is refused. */
+  apply(update: Uint8Array): { ok: true; changed: boolean } | { ok: false; reason: string } {
+    const problem = textUpdateProblem(this.name, update);
+    if (problem) return { ok: false, reason: problem };
+    let changed = false;
+    const seen = () => (changed = true);
+    this.doc.on('update', seen);
+    let reason: string | null = null;
+    try {
+      Y.applyUpdate(this.doc, update);
+      if (this.doc.store.pendingStructs !== null || this.doc.store.pendingDs !== null) {
+        reason = 'builds on characters this text does not have (another document, or a lost update)';
+      } else if ([...this.doc.share.keys()].some((key) => key !== this.name)) reason = 'belongs to another text';
+      else if (this.doc.getText(this.name).length > this.maxLength) reason = `would make the text longer than ${this.maxLength} characters`;
+    } catch {
+      reason = 'is not a Yjs update (it does not apply)';
+    } finally {
+      this.doc.off('update', seen);
+    }
+    if (reason) {
+      // Start again from what was accepted, without the refused update's traces.
+      this.doc = loadTextDoc([this.stored, ...this.accepted], false);
+      return { ok: false, reason };
+    }
+    if (changed) this.accepted.push(update);
+    return { ok: true, changed };
+  }
+
+  /** Whether any accepted update changed the text's state. */
+  get changed(): boolean {
+    return this.accepted.length > 0;
+  }
+
+  /** The text now. */
+  get text(): string {
+    return textOf(this.doc, this.name);
+  }
+
+  /** The stored state with the accepted updates merged in (`Y.mergeUpdates`). */
+  state(): Uint8Array {
+    return this.accepted.length ? Y.mergeUpdates([this.stored, ...this.accepted]) : this.stored;
+  }
+}
+
+/** {@link TextMerger} for a single update. */
 export function mergeTextUpdate(name: string, stored: Uint8Array, update: Uint8Array, maxLength: number): TextMerge {
-  const problem = textUpdateProblem(name, update);
-  if (problem) return { ok: false, reason: problem };
-  const doc = loadTextDoc([stored], false);
-  const before = textOf(doc, name);
-  const vectorBefore = Y.encodeStateVector(doc);
-  try {
-    Y.applyUpdate(doc, update);
-  } catch {
-    return { ok: false, reason: 'is not a Yjs update (it does not apply)' };
-  }
-  if (doc.store.pendingStructs !== null || doc.store.pendingDs !== null) {
-    return { ok: false, reason: 'builds on characters this text does not have (another document, or a lost update)' };
-  }
-  if ([...doc.share.keys()].some((key) => key !== name)) return { ok: false, reason: 'belongs to another text' };
-  const text = textOf(doc, name);
-  if (text.length > maxLength) return { ok: false, reason: `would make the text longer than ${maxLength} characters` };
-  const changed = text !== before || !sameBytes(vectorBefore, Y.encodeStateVector(doc));
-  return { ok: true, state: changed ? Y.mergeUpdates([stored, update]) : stored, text, changed };
+  const merger = new TextMerger(name, stored, maxLength);
+  const result = merger.apply(update);
+  return result.ok ? { ok: true, state: merger.state(), text: merger.text, changed: result.changed } : result;
 }
 
 /**
@@ -49,8 +92,4 @@ export function mergeTextUpdate(name: string, stored: Uint8Array, update: Uint8A
  */
 export function compactTextState(state: Uint8Array): Uint8Array {
   return Y.encodeStateAsUpdate(loadTextDoc([state], true));
-}
-
-function sameBytes(a: Uint8Array, b: Uint8Array): boolean {
-  return a.length === b.length && a.every((byte, i) => byte === b[i]);
 }

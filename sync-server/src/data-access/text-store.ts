@@ -7,7 +7,7 @@ import type { ChangeProblem, FieldChange, PulledChange } from '../../../shared/s
 import { columnName } from '../../../shared/sync/schema/field';
 import { collectionSpec } from '../../../shared/sync/schema/collections';
 import { initialTextState } from '../../../shared/text/initial-text-state';
-import { mergeTextUpdate, compactTextState } from '../../../shared/text/merge-text-update';
+import { compactTextState, TextMerger } from '../../../shared/text/merge-text-update';
 import { replaceText } from '../../../shared/text/replace-text';
 import { loadTextDoc, textDocName, textOf } from '../../../shared/text/text-doc';
 import { textFieldMax } from '../../../shared/text/text-fields';
@@ -38,16 +38,15 @@ export class TextChangesRefused extends Error {
   }
 }
 
-/** One text's state while a batch is merged into it. */
+/** One text while a batch is merged into it. */
 interface OpenText {
   readonly collection: string;
   readonly rowId: string;
   readonly field: string;
-  state: Uint8Array;
-  text: string;
+  readonly merger: TextMerger;
+  /** The text stored before the batch. */
+  readonly before: string;
   hlc: string;
-  /** Characters changed: the state, the column and a version are written. */
-  changed: boolean;
   /** Only the clock moved: the column and clock are written. */
   clocked: boolean;
 }
@@ -81,19 +80,18 @@ export const TextStore = {
         open.set(key, text);
       }
       const update = updateOf(key, text, change.value);
-      const result = update ? mergeTextUpdate(key, text.state, update, textFieldMax(change.collection, change.field)!) : null;
-      if (!result || !result.ok) {
-        problems.push({ index, id: change.id, code: 'invalid_value', reason: `${change.collection}.${change.field} update ${result?.reason ?? 'is not base64'}` });
+      const result = update ? text.merger.apply(update) : ({ ok: false, reason: 'is not base64' } as const);
+      if (!result.ok) {
+        problems.push({ index, id: change.id, code: 'invalid_value', reason: `${change.collection}.${change.field} update ${result.reason}` });
         continue;
       }
       // A first write of an empty text changes no character but still sets the field's clock.
       const newerClock = change.hlc > text.hlc;
       if (newerClock) Object.assign(text, { hlc: change.hlc, clocked: true });
-      if (result.changed) Object.assign(text, { state: result.state, text: result.text, changed: true });
       if (result.changed || newerClock) applied++;
     }
     if (problems.length > 0) throw new TextChangesRefused(problems);
-    for (const text of open.values()) if (text.changed || text.clocked) await save(client, userId, text);
+    for (const text of open.values()) if (text.merger.changed || text.clocked) await save(client, userId, text);
     return applied;
   },
 
@@ -187,7 +185,8 @@ async function load(client: Queryable, userId: string, change: FieldChange): Pro
   ]);
   const plain = (current[0]?.['text'] as string | null | undefined) ?? '';
   const state = rows[0] ? new Uint8Array(rows[0]['state'] as Buffer) : initialTextState(name, plain);
-  return { collection: change.collection, rowId: change.rowId, field: change.field, state, text: plain, hlc: (current[0]?.['hlc'] as string | null) ?? '', changed: false, clocked: false };
+  const merger = new TextMerger(name, state, textFieldMax(change.collection, change.field)!);
+  return { collection: change.collection, rowId: change.rowId, field: change.field, merger, before: plain, hlc: (current[0]?.['hlc'] as string | null) ?? '', clocked: false };
 }
 
 /**
@@ -197,7 +196,7 @@ async function load(client: Queryable, userId: string, change: FieldChange): Pro
  */
 function updateOf(name: string, text: OpenText, value: unknown): Uint8Array | null {
   if (isTextUpdateValue(value)) return decodeTextBytes(value.yjs);
-  const doc = loadTextDoc([text.state]);
+  const doc = loadTextDoc([text.merger.state()]);
   doc.clientID = randomInt(1, 2 ** 32 - 1);
   const before = Y.encodeStateVector(doc);
   replaceText(doc.getText(name), typeof value === 'string' ? value : '');
@@ -208,11 +207,15 @@ function updateOf(name: string, text: OpenText, value: unknown): Uint8Array | nu
 async function save(client: Queryable, userId: string, text: OpenText): Promise<void> {
   const spec = collectionSpec(text.collection)!;
   const column = columnName(text.field);
-  if (text.changed) await client.query(
-    `INSERT INTO text_states (user_id, collection, row_id, field, state) VALUES ($1, $2, $3, $4, $5)
-     ON CONFLICT (user_id, collection, row_id, field) DO UPDATE SET state = excluded.state, updated_at = now(), compacted_at = NULL`,
-    [userId, text.collection, text.rowId, text.field, Buffer.from(text.state)],
-  );
+  const changed = text.merger.changed;
+  const shown = changed ? text.merger.text : text.before;
+  if (changed) {
+    await client.query(
+      `INSERT INTO text_states (user_id, collection, row_id, field, state) VALUES ($1, $2, $3, $4, $5)
+       ON CONFLICT (user_id, collection, row_id, field) DO UPDATE SET state = excluded.state, updated_at = now(), compacted_at = NULL`,
+      [userId, text.collection, text.rowId, text.field, Buffer.from(text.merger.state())],
+    );
+  }
   // The clock kept for a text is the greatest that wrote to it (older apps apply the text by it).
   await client.query(
     `INSERT INTO ${spec.table} AS t (user_id, id, ${column}, clocks, seq)
@@ -220,12 +223,14 @@ async function save(client: Queryable, userId: string, text: OpenText): Promise<
      ON CONFLICT (user_id, id) DO UPDATE SET ${column} = excluded.${column},
        clocks = t.clocks || jsonb_build_object($4::text, CASE WHEN coalesce(t.clocks->>$4, '') COLLATE "C" < $5::text COLLATE "C" THEN $5 ELSE t.clocks->>$4 END),
        seq = excluded.seq`,
-    [userId, text.rowId, text.text === '' ? null : text.text, text.field, text.hlc],
+    [userId, text.rowId, shown === '' ? null : shown, text.field, text.hlc],
   );
-  if (text.changed) await client.query(
-    `INSERT INTO text_versions (user_id, collection, row_id, field, period, saved_at, text)
-     VALUES ($1, $2, $3, $4, date_bin(make_interval(mins => $6), now(), timestamptz '2000-01-01'), now(), $5)
-     ON CONFLICT (user_id, collection, row_id, field, period) DO UPDATE SET saved_at = excluded.saved_at, text = excluded.text`,
-    [userId, text.collection, text.rowId, text.field, text.text, VERSION_PERIOD_MINUTES],
-  );
+  if (changed) {
+    await client.query(
+      `INSERT INTO text_versions (user_id, collection, row_id, field, period, saved_at, text)
+       VALUES ($1, $2, $3, $4, date_bin(make_interval(mins => $6), now(), timestamptz '2000-01-01'), now(), $5)
+       ON CONFLICT (user_id, collection, row_id, field, period) DO UPDATE SET saved_at = excluded.saved_at, text = excluded.text`,
+      [userId, text.collection, text.rowId, text.field, shown, VERSION_PERIOD_MINUTES],
+    );
+  }
 }
