@@ -55,12 +55,12 @@ function typePage(name: string): { updates: Uint8Array[]; texts: string[] } {
   for (let n = 0; n < EDITS; n++) {
     const left = EDITS - n;
     const wanted = Math.ceil((TARGET_LENGTH - text.length) / left);
-    if (n % 10 === 9 && text.length > 20) {
+    if ((n % 10 === 9 && text.length > 20) || text.length >= TARGET_LENGTH) {
       text.delete(Math.floor(next() * (text.length - 8)), 1 + Math.floor(next() * 6));
     } else {
       let words = '';
       while (words.length < wanted + 4) words += `${WORDS[Math.floor(next() * WORDS.length)]} `;
-      const insert = words.slice(0, Math.max(1, Math.min(wanted + 4, TARGET_LENGTH - text.length)));
+      const insert = words.slice(0, Math.min(wanted + 4, TARGET_LENGTH - text.length));
       text.insert(Math.floor(next() * (text.length + 1)), insert);
     }
     texts.push(text.toString());

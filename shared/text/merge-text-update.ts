@@ -87,9 +87,13 @@ export function mergeTextUpdate(name: string, stored: Uint8Array, update: Uint8A
 }
 
 /**
- * A stored state with deleted characters dropped (Yjs garbage collection): what a fresh
- * device needs, smaller than the merged history. The text it shows is unchanged.
+ * The smaller of a stored state and the same state with deleted characters dropped (a Yjs
+ * document with garbage collection, re-encoded): what a fresh device needs. Dropping deleted
+ * characters pays off on pages with many deletions; on pages written by many insertions in the
+ * middle, the merged updates are smaller (each insertion stays one struct, where an integrated
+ * document splits it at every later insertion inside it), so they are kept. The text is the same.
  */
 export function compactTextState(state: Uint8Array): Uint8Array {
-  return Y.encodeStateAsUpdate(loadTextDoc([state], true));
+  const collected = Y.encodeStateAsUpdate(loadTextDoc([state], true));
+  return collected.length < state.length ? collected : state;
 }

@@ -86,6 +86,7 @@ describe('mergeable texts (Yjs)', () => {
         const compacted = compactTextState(merged);
         expect(textOf(loadTextDoc([merged]), NAME)).toBe(texts[0]!);
         expect(textOf(loadTextDoc([compacted]), NAME)).toBe(texts[0]!);
+        expect(compacted.length).toBeLessThanOrEqual(merged.length);
       }),
       { numRuns: 80 },
     );
