@@ -1,6 +1,7 @@
 import type { BrowserContext, Page } from 'playwright-core';
 
 import { SyncClient } from '../support/sync-client';
+import { testDataSource } from '../support/test-database';
 import { useServerAndBrowser } from './support/harness';
 import { syncNow } from './support/library';
 import { registerThroughApi, signInThroughUi } from './support/reader';
@@ -27,7 +28,7 @@ describe('A notebook page edited on two devices, one offline', () => {
     await page.getByRole('status').filter({ hasText: 'Saved on this device.' }).waitFor();
   }
 
-  it('keeps both devices’ words in the page on both, and the open editor shows the other device’s words without a reload', async () => {
+  it('keeps both devices’ words in the page on both, the open editor shows the other device’s words without a reload, and a restored version syncs', async () => {
     const { baseUrl } = harness.server;
     const reader = await registerThroughApi(baseUrl, 'Maren Quillfeather');
     const tablet = await device(reader.user.email, reader.password);
@@ -88,5 +89,23 @@ describe('A notebook page edited on two devices, one offline', () => {
     const { state } = await new SyncClient(baseUrl, reader.accessToken).pullAll();
     const pageId = new URL(pageUrl).pathname.split('/').pop()!;
     expect(state.get(`notebookPages/${pageId}/body`)?.value).toBe(both);
+
+    // History: a version from two hours ago (put there as the server would have kept it) is
+    // restored on the laptop; the restore is an edit like any other and reaches the tablet.
+    const dataSource = await testDataSource();
+    await dataSource.query(
+      `INSERT INTO text_versions (user_id, collection, row_id, field, period, saved_at, text)
+       VALUES ($1, 'notebookPages', $2, 'body', now() - interval '2 hours', now() - interval '2 hours', 'An older page about herons.')`,
+      [reader.user.id, pageId],
+    );
+    await laptop.getByRole('button', { name: 'Page history' }).click();
+    await laptop.getByRole('button', { name: /· 27 characters$/ }).click();
+    expect(await laptop.getByLabel('The chosen version').textContent()).toBe('An older page about herons.');
+    await laptop.getByRole('button', { name: 'Restore this version' }).click();
+    await laptop.getByRole('status').filter({ hasText: 'Saved on this device.' }).waitFor();
+    expect(await laptopText.inputValue()).toBe('An older page about herons.');
+    await syncNow(laptop);
+    await syncNow(tablet);
+    await tablet.waitForFunction(() => (document.querySelector('textarea') as HTMLTextAreaElement | null)?.value === 'An older page about herons.');
   });
 });
