@@ -182,6 +182,14 @@ describe('mergeTextUpdate', () => {
     expect(mergeTextUpdate(NAME, stored, update, 100)).toEqual({ ok: false, reason: jasmine.stringContaining('builds on characters') });
   });
 
+  it('refuses a NUL (PostgreSQL text cannot hold one) and never stores a lone surrogate', () => {
+    expect(mergeTextUpdate(NAME, stored, editOf(NAME, (t) => t.insert(0, 'a\u0000b')), 100)).toEqual({ ok: false, reason: jasmine.stringContaining('NUL') });
+    // A lone surrogate cannot even travel: Yjs writes strings as UTF-8, which turns it into U+FFFD
+    // (WHATWG Encoding Standard, UTF-8 encoder via TextEncoder).
+    expect(mergeTextUpdate(NAME, stored, editOf(NAME, (t) => t.insert(0, 'x\ud800y')), 100)).toEqual(jasmine.objectContaining({ ok: true, text: 'x\ufffdyStored words' }));
+    expect(mergeTextUpdate(NAME, stored, editOf(NAME, (t) => t.insert(0, '\ud83d\udcd6')), 100)).toEqual(jasmine.objectContaining({ ok: true }));
+  });
+
   it('refuses anything but plain text', () => {
     const update = editOf(NAME, (t) => t.insertEmbed(0, { image: 'x' }));
     expect(mergeTextUpdate(NAME, stored, update, 100)).toEqual({ ok: false, reason: 'may only insert plain text' });

@@ -4,6 +4,12 @@ import type { DataSource } from 'typeorm';
 import type { Job } from './job';
 import { JOBS } from './jobs';
 
+/**
+ * A run still active after this long counts as failed (and is retried). It also bounds how long
+ * a run left active by a crashed instance blocks its singleton queue.
+ */
+const RUN_LIMIT_SECONDS = 5 * 60;
+
 /** pg-boss keeps its tables in a schema of their own, beside ours. */
 export const JOBS_SCHEMA = 'pgboss';
 
@@ -25,7 +31,7 @@ export async function startJobRunner(databaseUrl: string, dataSource: DataSource
   boss.on('error', (error: Error) => console.error(`Background jobs: ${error.message}`));
   await boss.start();
   for (const job of jobs) {
-    await boss.createQueue(job.name, { name: job.name, policy: 'singleton', retryLimit: 2, expireInSeconds: 15 * 60 });
+    await boss.createQueue(job.name, { name: job.name, policy: 'singleton', retryLimit: 2, expireInSeconds: RUN_LIMIT_SECONDS });
     if (job.cron) await boss.schedule(job.name, job.cron, {}, { tz: 'UTC' });
     else await boss.unschedule(job.name);
     await boss.work(job.name, { pollingIntervalSeconds: 2 }, async () => {
