@@ -2,15 +2,9 @@ import type { PulledChange } from '../sync/field-change';
 import type { LocalRow } from '../sync/local-row';
 import { mergePulledText } from './local-text';
 import { textDocName } from './text-doc';
+import { TEXT_STATES, textStatesOf } from './text-states';
 
-/**
- * Where a device keeps each mergeable text's Yjs state (base64), beside the text itself in the
- * field: `row._text[field]`. Like `_hlc`, it never leaves the device as a field.
- */
-export const TEXT_STATES = '_text';
-
-/** A row's stored Yjs states, by field. */
-export const textStatesOf = (row: LocalRow): Readonly<Record<string, string>> => (row[TEXT_STATES] as Record<string, string> | undefined) ?? {};
+export { TEXT_STATES, textStatesOf } from './text-states';
 
 /**
  * Merges pulled mergeable texts into a local row: every pulled state is merged in, whatever its

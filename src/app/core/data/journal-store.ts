@@ -8,9 +8,8 @@ import type { CollectionName } from '@shared/sync/schema/collections';
 import { COLLECTIONS } from '@shared/sync/schema/collections';
 import type { PatchOf, RowOf } from '@shared/sync/schema/collection';
 import type { FieldSpec } from '@shared/sync/schema/field';
-import { TEXT_STATES, textStatesOf } from '@shared/text/apply-pulled-texts';
-import { writeLocalText } from '@shared/text/local-text';
-import { textDocName } from '@shared/text/text-doc';
+import { textFieldMax } from '@shared/text/text-fields';
+import { TEXT_STATES, textStatesOf } from '@shared/text/text-states';
 import type { TextUpdateValue } from '@shared/text/text-value';
 
 import { deviceId } from '../device/device-id';
@@ -56,6 +55,10 @@ export class JournalStore {
       const problems = validatePatch(COLLECTIONS[collection], patch);
       if (Object.keys(problems).length > 0) throw new InvalidFieldsError(problems);
     }
+    // Yjs loads on the first text write, before the transaction (which must not await anything else).
+    const texts = writes.some(({ collection, patch }) => Object.keys(patch).some((field) => textFieldMax(collection, field) !== undefined))
+      ? await loadTextWriter()
+      : null;
     const tables = [...new Set(writes.map((w) => w.collection))].map((name) => db.rows(name));
     const changed = await db.transaction('rw', [...tables, db.outbox, db.meta], async () => {
       const outbox: OutboxEntry[] = [];
@@ -67,7 +70,7 @@ export class JournalStore {
         hlc ??= new HlcClock(deviceId(), Date.now, (await db.meta.get('clock'))?.value).tick();
         const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
         for (const [field, value] of fields) {
-          const text = textWrite(collection, row, field, value);
+          const text = texts && textWrite(texts, collection, row, field, value);
           if (text) Object.assign(next, text.row);
           else next[field] = value;
           (next['_hlc'] as Record<string, string>)[field] = hlc;
@@ -116,7 +119,18 @@ export class JournalStore {
  * A mergeable text's write (see shared/text/local-text.ts): the text and its new Yjs state for
  * the row, and the update the outbox pushes. Null for any other kind of field.
  */
-function textWrite(collection: CollectionName, row: LocalRow, field: string, value: unknown): { row: Record<string, unknown>; value: TextUpdateValue } | null {
+const loadTextWriter = async () => {
+  const [{ writeLocalText }, { textDocName }] = await Promise.all([import('@shared/text/local-text'), import('@shared/text/text-doc')]);
+  return { writeLocalText, textDocName };
+};
+
+function textWrite(
+  { writeLocalText, textDocName }: Awaited<ReturnType<typeof loadTextWriter>>,
+  collection: CollectionName,
+  row: LocalRow,
+  field: string,
+  value: unknown,
+): { row: Record<string, unknown>; value: TextUpdateValue } | null {
   const spec: FieldSpec | undefined = (COLLECTIONS[collection].fields as Record<string, FieldSpec>)[field];
   if (spec?.kind !== 'text') return null;
   const states = textStatesOf(row);

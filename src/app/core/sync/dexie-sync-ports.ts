@@ -6,7 +6,6 @@ import type { ChangeProblem, FieldChange, PullResponse } from '@shared/sync/fiel
 import { HlcClock } from '@shared/sync/hlc';
 import { applyPulled, emptyRow } from '@shared/sync/local-row';
 import type { PushOutcome, QueuedChange, SyncPorts } from '@shared/sync/sync-cycle';
-import { applyPulledTexts } from '@shared/text/apply-pulled-texts';
 import { textFieldMax } from '@shared/text/text-fields';
 
 import { deviceId } from '../device/device-id';
@@ -75,6 +74,10 @@ export class DexieSyncPorts implements SyncPorts {
     const collections = [...new Set(page.changes.map((change) => change.collection))].filter((name) =>
       this.db.tables.some((table) => table.name === name),
     );
+    // Yjs loads on the first pulled text, before the transaction (which must not await anything else).
+    const { applyPulledTexts } = page.changes.some((change) => textFieldMax(change.collection, change.field) !== undefined)
+      ? await import('@shared/text/apply-pulled-texts')
+      : { applyPulledTexts: null };
     await this.db.transaction('rw', [...collections.map((name) => this.db.rows(name)), this.db.meta], async () => {
       for (const collection of collections) {
         const entries = [...byRow.values()].filter((entry) => entry.collection === collection);
@@ -84,7 +87,7 @@ export class DexieSyncPorts implements SyncPorts {
         const merged = entries.map((entry, n) => {
           const isText = (change: { field: string }) => textFieldMax(collection, change.field) !== undefined;
           const row = applyPulled(current[n] ?? emptyRow(entry.rowId), entry.changes.filter((change) => !isText(change)));
-          return applyPulledTexts(collection, row, entry.changes.filter(isText));
+          return applyPulledTexts ? applyPulledTexts(collection, row, entry.changes.filter(isText)) : row;
         });
         await table.bulkPut(merged.filter((row, n) => row !== current[n]));
       }
