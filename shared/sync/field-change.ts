@@ -22,8 +22,8 @@ export interface PulledChange {
   readonly value: unknown;
   /** The field's clock: for a set field, the greatest clock it has seen. */
   readonly hlc: string;
-  /** Set fields only: the per-element state, joined into the device's own. */
-  readonly state?: OrSetState;
+  /** Set fields: the per-element state, joined into the device's own; mergeable texts: the base64 Yjs state behind `value`. */
+  readonly state?: OrSetState | string;
 }
 
 export interface PushRequest {

@@ -12,7 +12,8 @@ export interface StampedSet {
 export interface SetChange {
   readonly value: unknown;
   readonly hlc: string;
-  readonly state?: OrSetState;
+  /** A pulled change's `state`; a string is a mergeable text's Yjs state and never a set field's. */
+  readonly state?: OrSetState | string;
 }
 
 /** A set field's state as kept, reading a plain list stored before sets merged per element. */
@@ -27,7 +28,7 @@ export function currentSetState(current: { value?: unknown; hlc?: string; state?
  * missing and removes only adds older than itself (an older app could not have seen newer ones).
  */
 export function setDeltaOf(current: OrSetState | undefined, change: SetChange): OrSetState {
-  if (change.state) return change.state;
+  if (change.state && typeof change.state === 'object') return change.state;
   if (Array.isArray(change.value)) return orSetDelta(current, change.value as string[], change.hlc, { onlySeenBefore: true });
   return typeof change.value === 'object' && change.value !== null ? (change.value as OrSetState) : {};
 }

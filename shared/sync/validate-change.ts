@@ -3,6 +3,8 @@ import type { ChangeProblem } from './field-change';
 import { setDeltaProblem } from './merge-set';
 import { unstorableText } from './storable-text';
 import { collectionSpec } from './schema/collections';
+import { textChangeProblem } from '../text/text-change-problem';
+import { textDocName } from '../text/text-doc';
 
 /** Lower-case, as crypto.randomUUID() writes them and PostgreSQL returns them. */
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
@@ -26,6 +28,11 @@ export function validateChange(change: unknown, index: number, nowMs: number): C
   if (!clock) return problem('invalid_change', 'hlc must be a clock like 001764633600000:00000:<node>', id);
   if (clock.wall > nowMs + MAX_CLOCK_AHEAD_MS) {
     return problem('clock_ahead', 'hlc is more than 24 hours ahead of the server clock; check the device date', id);
+  }
+  if (fieldSpec.kind === 'text') {
+    // A plain string (an older app's write) must be storable too; an update is checked as it decodes.
+    const textProblem = unstorableText(value) ?? textChangeProblem(textDocName(spec.name, rowId, String(field)), fieldSpec, value);
+    return textProblem ? problem('invalid_value', `${spec.name}.${String(field)} ${textProblem}`, id) : null;
   }
   const textProblem = unstorableText(value);
   if (textProblem) return problem('invalid_value', `${spec.name}.${String(field)} ${textProblem}`, id);

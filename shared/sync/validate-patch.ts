@@ -1,6 +1,7 @@
 import type { CollectionSpec } from './schema/collection';
 import type { FieldSpec } from './schema/field';
 import { unstorableText } from './storable-text';
+import { isTextUpdateValue } from '../text/text-value';
 
 /**
  * What is wrong with each field of a local edit, by field name; empty when it may be written.
@@ -18,6 +19,8 @@ export function validatePatch(spec: CollectionSpec, patch: Readonly<Record<strin
       problems[name] = 'is not a field of this collection';
       continue;
     }
+    // A Yjs update from an editor is checked when it is applied (shared/text/local-text.ts).
+    if (field.kind === 'text' && isTextUpdateValue(value)) continue;
     const parsed = field.schema.safeParse(value);
     if (!parsed.success) problems[name] = parsed.error.issues[0]?.message ?? 'is not valid';
     else {

@@ -74,7 +74,7 @@ describe('Set fields merge per element (observed-remove sets)', () => {
     const pulled = (await laptop.pull()).changes.find((c) => c.field === 'tags')!;
 
     expect(pulled.value).toEqual(['signed', 'reread', 'book club']);
-    expect(orSetElements(pulled.state)).toEqual(['signed', 'reread', 'book club']);
+    expect(orSetElements(pulled.state as OrSetState)).toEqual(['signed', 'reread', 'book club']);
     expect(pulled.hlc).toBe(clock(NOW + 9, 'laptop'));
   });
 
@@ -118,7 +118,7 @@ describe('Set fields merge per element (observed-remove sets)', () => {
     const genres = (await device.pull()).changes.find((c) => c.field === 'genres')!;
 
     expect(genres.value).toEqual(['Essays', 'Nature writing', 'Poetry']);
-    expect(genres.state!['Essays']).toEqual({ a: { old: legacyClock }, r: {} });
+    expect((genres.state as OrSetState)['Essays']).toEqual({ a: { old: legacyClock }, r: {} });
   });
 
   it('When a set change carries a clock later than its own, or a malformed entry, then it is a 400', async () => {

@@ -17,6 +17,7 @@ import { devicesRoutes } from './entry-points/devices.routes';
 import { syncRoutes } from './entry-points/sync.routes';
 import { syncEventsRoutes } from './entry-points/sync-events.routes';
 import { SyncListener } from './data-access/sync-listener';
+import { textsRoutes } from './entry-points/texts.routes';
 import { uploadsRoutes } from './entry-points/uploads.routes';
 import { catalogueRoutes } from './entry-points/catalogue.routes';
 import { Catalogue } from './domain/catalogue/catalogue';
@@ -107,6 +108,7 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
       readerLimiter('catalogue look-up', config.catalogueRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'catalogue')),
     ),
   );
+  app.use('/api/texts', textsRoutes(dataSource));
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);
 

@@ -8,6 +8,7 @@ import { User } from './data-access/entities/user.entity';
 import { createSmtpMailer } from './domain/mailer';
 import { createLogger } from './observability/logger';
 import { closePasswordPools } from './domain/passwords';
+import { startJobRunner } from './jobs/job-runner';
 
 /** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
 async function main(): Promise<void> {
@@ -20,6 +21,7 @@ async function main(): Promise<void> {
     await dataSource.getRepository(User).update({ email: config.adminEmail }, { role: 'admin' });
   }
 
+  const jobs = await startJobRunner(config.databaseUrl, dataSource);
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
   const app = createApp({ config, dataSource, mailer, logger });
   const server: Server = app.listen(config.port, config.host, () => {
@@ -41,7 +43,11 @@ async function main(): Promise<void> {
     logger.info(`${signal}: stopping Lamplight`);
     server.close(() => {
       mailer.close();
-      void Promise.allSettled([dataSource.destroy(), closePasswordPools()]).finally(() => process.exit(0));
+      void jobs
+        .stop()
+        .catch((err: unknown) => logger.error(`Background jobs did not stop cleanly: ${String(err)}`))
+        .then(() => Promise.allSettled([dataSource.destroy(), closePasswordPools()]))
+        .finally(() => process.exit(0));
     });
     server.closeAllConnections();
   };

@@ -91,8 +91,8 @@ export const readings = defineCollection(
     rating: field.optionalNumber(0.5, 5, 0.5),
     /** The review in one line. */
     summary: field.optionalText(200),
-    review: field.optionalText(20_000),
-    takeaways: field.optionalText(5_000),
+    review: field.mergeableText(20_000),
+    takeaways: field.mergeableText(5_000),
     recommend: field.optionalChoice(RECOMMEND_ANSWERS),
     recommendTo: field.optionalText(200),
   },
@@ -105,7 +105,7 @@ export const series = defineCollection('series', {
   name: field.text(300),
   /** How many books the series will have, when known. */
   plannedCount: field.optionalInteger(1, 500),
-  review: field.optionalText(20_000),
+  review: field.mergeableText(20_000),
   rating: field.optionalNumber(0.5, 5, 0.5),
 });
 export type Series = RowOf<typeof series>;
@@ -121,7 +121,7 @@ export const quotes = defineCollection(
     ebookLocation: field.optionalText(40),
     audioSeconds: field.optionalInteger(0, 1_200_000),
     chapter: field.optionalText(200),
-    note: field.optionalText(5_000),
+    note: field.mergeableText(5_000),
     tags: field.set(40, 60),
     labelIds: labelIds(),
     favourite: field.optionalBoolean(),
@@ -149,7 +149,7 @@ export const notebookPages = defineCollection(
   {
     notebookId: field.optionalRef(),
     title: field.optionalText(300),
-    body: field.optionalText(50_000),
+    body: field.mergeableText(50_000),
     /** Order within the notebook; decimals let a page slot in between two others. */
     position: field.optionalNumber(-1e9, 1e9),
   },
@@ -161,7 +161,7 @@ export type NotebookPage = RowOf<typeof notebookPages>;
 export const pageTemplates = defineCollection('pageTemplates', {
   name: field.text(120),
   title: field.optionalText(300),
-  body: field.optionalText(50_000),
+  body: field.mergeableText(50_000),
 });
 export type PageTemplate = RowOf<typeof pageTemplates>;
 
@@ -215,7 +215,7 @@ export const sessions = defineCollection(
     ebookLocation: field.optionalText(40),
     playbackSpeed: field.optionalNumber(0.5, 4),
     mood: field.optionalChoice(SESSION_MOODS),
-    note: field.optionalText(2_000),
+    note: field.mergeableText(2_000),
     source: field.optionalChoice(SESSION_SOURCES),
   },
   { indexes: ['bookId', 'startedAt'] },

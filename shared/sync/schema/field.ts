@@ -12,10 +12,12 @@ export type SqlType = 'text' | 'text[]' | 'double precision' | 'integer' | 'bool
  *   whose order is part of the value).
  * - `set`: an unordered list merged per element (an observed-remove set, `shared/sync/or-set.ts`):
  *   concurrent adds both survive and a remove takes away only the adds it saw.
- * New kinds (mergeable text, say) are added to this union and to {@link FIELD_KINDS}.
+ * - `text`: long prose merged character by character as a Yjs document (`shared/text/`), so
+ *   edits from several devices all stay. The column holds the text it shows.
+ * New kinds are added to this union and to {@link FIELD_KINDS}.
  */
-export type FieldKind = 'lww' | 'set';
-export const FIELD_KINDS: readonly FieldKind[] = ['lww', 'set'];
+export type FieldKind = 'lww' | 'set' | 'text';
+export const FIELD_KINDS: readonly FieldKind[] = ['lww', 'set', 'text'];
 
 /** One field of a synced collection: how it merges, its validator and its column type. */
 export interface FieldSpec<T = unknown> {
@@ -25,6 +27,8 @@ export interface FieldSpec<T = unknown> {
   readonly schema: z.ZodType<T>;
   /** `set` only: the most elements and the longest element, for the per-element wire form. */
   readonly elements?: { readonly maxItems: number; readonly maxLength: number };
+  /** `text` only: the longest text (UTF-16 code units, as `String.length` counts). */
+  readonly maxLength?: number;
 }
 
 const spec = <T>(sqlType: SqlType, schema: z.ZodType<T>): FieldSpec<T> => ({ kind: 'lww', sqlType, schema });
@@ -58,6 +62,16 @@ export const field = {
     sqlType: 'text[]',
     schema: stringList(maxItems, maxLength),
     elements: { maxItems, maxLength },
+  }),
+  /**
+   * Long prose (a page, a review, a note) that merges per character (Yjs): the app reads it as
+   * text; pushes carry Yjs updates (`shared/text/text-value.ts`), pulls the text and its state.
+   */
+  mergeableText: (max: number): FieldSpec<string | null> => ({
+    kind: 'text',
+    sqlType: 'text',
+    schema: z.string().max(max, `must be at most ${max} characters`).nullable(),
+    maxLength: max,
   }),
   choice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
     spec('text', z.enum(values, { error: `must be one of ${values.join(', ')}` })),

@@ -8,6 +8,8 @@ import { columnName, type FieldSpec } from '../../../shared/sync/schema/field';
 import { COLLECTIONS, collectionSpec, fieldSpecOf } from '../../../shared/sync/schema/collections';
 import { mergeSql, pullSql } from './merge-sql';
 import { notifyPushed } from './sync-notifications';
+import { queryableOf, TextStore } from './text-store';
+import { textFieldMax } from '../../../shared/text/text-fields';
 
 const SPECS = Object.values(COLLECTIONS);
 /** Per collection: its columns by field. */
@@ -35,7 +37,7 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
 /** The part of a node-postgres client the hot path uses. */
 interface PgClient {
-  query(config: { name?: string; text: string; values?: unknown[] } | string): Promise<{ rows: Record<string, unknown>[] }>;
+  query(config: { name?: string; text: string; values?: unknown[] } | string, values?: unknown[]): Promise<{ rows: Record<string, unknown>[] }>;
 }
 
 /**
@@ -88,8 +90,11 @@ export class SyncStore {
    * Such changes are counted as `duplicates`, like any change that arrived after a newer value.
    */
   async push(userId: string, changes: readonly FieldChange[]): Promise<PushResult> {
+    // Mergeable texts merge per character in text-store.ts, after the per-field merge; `index` is the change's place in the batch.
+    const texts = [...changes.entries()].filter(([, change]) => textFieldMax(change.collection, change.field) !== undefined).map(([index, change]) => ({ index, change }));
+    const fieldChanges = texts.length === 0 ? changes : changes.filter((change) => textFieldMax(change.collection, change.field) === undefined);
     return this.inUserTransaction(userId, async (client) => {
-      const byCollection = reduceBatch(changes, await storedSetStates(client, userId, changes));
+      const byCollection = reduceBatch(fieldChanges, await storedSetStates(client, userId, fieldChanges));
       const before = new Map<string, { c: Record<string, string>; g: (string | null)[] }>();
       for (const [collection, rows] of byCollection) {
         const touched = new Set<string>();
@@ -102,9 +107,11 @@ export class SyncStore {
         const stored = (result.rows[0]?.['before'] ?? {}) as Record<string, { c: Record<string, string>; g: (string | null)[] }>;
         for (const [rowId, entry] of Object.entries(stored)) before.set(`${collection}/${rowId}`, entry);
       }
-      const outcome = classify(changes, byCollection, before);
-      if (outcome.applied > 0) await notifyPushed(client, userId); // live updates: delivered on commit only
-      return outcome;
+      const outcome = classify(fieldChanges, byCollection, before);
+      const textsWon = texts.length > 0 ? await TextStore.merge(client, userId, texts) : 0;
+      const result = { ...outcome, applied: outcome.applied + textsWon, duplicates: outcome.duplicates + texts.length - textsWon };
+      if (result.applied > 0) await notifyPushed(client, userId); // live updates: delivered on commit only
+      return result;
     });
   }
 
@@ -161,7 +168,7 @@ export class SyncStore {
       lastSeq = Number(seq);
       taken++;
     }
-    return { changes, lastSeq, hasMore: taken < Number(rows[0]?.keys ?? 0) };
+    return { changes: await TextStore.withStates(queryableOf(this.dataSource), userId, changes), lastSeq, hasMore: taken < Number(rows[0]?.keys ?? 0) };
   }
 }
 

@@ -11,6 +11,7 @@ import {
 } from '../../../shared/sync/field-change';
 import { validateChange } from '../../../shared/sync/validate-change';
 import type { SyncStore } from '../data-access/sync-store';
+import { TextChangesRefused } from '../data-access/text-store';
 import { AppError } from '../errors';
 import { parseInput } from './parse-input';
 import { PullCursors } from './pull-cursor';
@@ -70,7 +71,13 @@ export function syncRoutes(store: SyncStore, serverSecret: Uint8Array): Router {
         problems,
       );
     }
-    const result = await refusingBadData(() => store.push(callerOf(res).userId, changes as FieldChange[]));
+    const result = await refusingBadData(() => store.push(callerOf(res).userId, changes as FieldChange[])).catch((error: unknown) => {
+      // A text update that does not fit its stored text: refused like any invalid change.
+      if (error instanceof TextChangesRefused) {
+        throw new AppError(400, 'invalid_changes', `${error.problems.length} of ${changes.length} changes cannot be applied`, error.problems);
+      }
+      throw error;
+    });
     const body: PushResponse = { ...result, serverTime: new Date().toISOString() };
     res.json(body);
   });

@@ -9,6 +9,10 @@ import { validatePatch } from '@shared/sync/validate-patch';
 import type { CollectionName } from '@shared/sync/schema/collections';
 import { COLLECTIONS, fieldSpecOf } from '@shared/sync/schema/collections';
 import type { PatchOf, RowOf } from '@shared/sync/schema/collection';
+import type { FieldSpec } from '@shared/sync/schema/field';
+import { textFieldMax } from '@shared/text/text-fields';
+import { TEXT_STATES, textStatesOf } from '@shared/text/text-states';
+import type { TextUpdateValue } from '@shared/text/text-value';
 
 import { deviceId } from '../device/device-id';
 import { InvalidFieldsError } from './field-errors';
@@ -53,6 +57,10 @@ export class JournalStore {
       const problems = validatePatch(COLLECTIONS[collection], patch);
       if (Object.keys(problems).length > 0) throw new InvalidFieldsError(problems);
     }
+    // Yjs loads on the first text write, before the transaction (which must not await anything else).
+    const texts = writes.some(({ collection, patch }) => Object.keys(patch).some((field) => textFieldMax(collection, field) !== undefined))
+      ? await loadTextWriter()
+      : null;
     const tables = [...new Set(writes.map((w) => w.collection))].map((name) => db.rows(name));
     const changed = await db.transaction('rw', [...tables, db.outbox, db.meta], async () => {
       const outbox: OutboxEntry[] = [];
@@ -78,9 +86,11 @@ export class JournalStore {
             outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value: delta, hlc });
             continue;
           }
-          next[field] = value;
+          const text = texts && textWrite(texts, collection, next as LocalRow, field, value); // next: keeps earlier texts of this write
+          if (text) Object.assign(next, text.row);
+          else next[field] = value;
           (next['_hlc'] as Record<string, string>)[field] = hlc;
-          outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value, hlc });
+          outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value: text ? text.value : value, hlc });
         }
         await db.rows(collection).put(next as LocalRow);
       }
@@ -124,11 +134,14 @@ export class JournalStore {
 /**
  * Drops waiting outbox changes to the same field of the same row, so only the newest is sent
  * (with its newer clock): a timer that writes every few seconds keeps one change, not hundreds.
- * A set field's waiting deltas are joined into the new one instead, so no add or remove is lost.
+ * A set field's waiting deltas are joined into the new one instead, so no add or remove is lost;
+ * a mergeable text's updates are never dropped.
  */
 async function coalesce(db: JournalDb, fresh: OutboxEntry[]): Promise<OutboxEntry[]> {
   const key = (change: OutboxEntry) => `${change.collection}\u0000${change.rowId}\u0000${change.field}`;
-  const byKey = new Map(fresh.map((change) => [key(change), change]));
+  // A mergeable text's updates each carry typed characters: they all go, never only the newest.
+  const coalescable = (change: OutboxEntry) => fieldSpecOf(change.collection, change.field)?.kind !== 'text';
+  const byKey = new Map(fresh.filter(coalescable).map((change) => [key(change), change]));
   const rowIds = new Set(fresh.map((change) => change.rowId));
   const waiting = await db.outbox.filter((change) => rowIds.has(change.rowId) && byKey.has(key(change))).toArray();
   for (const old of waiting) {
@@ -138,7 +151,35 @@ async function coalesce(db: JournalDb, fresh: OutboxEntry[]): Promise<OutboxEntr
     }
   }
   await db.outbox.bulkDelete(waiting.map((change) => change.seq!));
-  return [...new Set(fresh.map((change) => byKey.get(key(change))!))];
+  return [...new Set(fresh.map((change) => (coalescable(change) ? byKey.get(key(change))! : change)))];
+}
+
+/**
+ * A mergeable text's write (see shared/text/local-text.ts): the text and its new Yjs state for
+ * the row, and the update the outbox pushes. Null for any other kind of field.
+ */
+const loadTextWriter = async () => {
+  const [{ writeLocalText }, { textDocName }] = await Promise.all([import('@shared/text/local-text'), import('@shared/text/text-doc')]);
+  return { writeLocalText, textDocName };
+};
+
+function textWrite(
+  { writeLocalText, textDocName }: Awaited<ReturnType<typeof loadTextWriter>>,
+  collection: CollectionName,
+  row: LocalRow,
+  field: string,
+  value: unknown,
+): { row: Record<string, unknown>; value: TextUpdateValue } | null {
+  const spec: FieldSpec | undefined = (COLLECTIONS[collection].fields as Record<string, FieldSpec>)[field];
+  if (spec?.kind !== 'text') return null;
+  const states = textStatesOf(row);
+  const local = { state: states[field], text: row[field] as string | null | undefined };
+  const written = writeLocalText(textDocName(collection, row.id, field), local, value as string | null | TextUpdateValue, spec.maxLength!);
+  if ('problem' in written) throw new InvalidFieldsError({ [field]: written.problem });
+  return {
+    row: { [field]: written.text === '' ? null : written.text, [TEXT_STATES]: { ...states, [field]: written.state } },
+    value: { yjs: written.update },
+  };
 }
 
 /** Values are JSON (strings, numbers, booleans, null, lists): compare them as JSON. */

@@ -8,6 +8,7 @@ import { HlcClock } from '@shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '@shared/sync/local-row';
 import { COLLECTIONS } from '@shared/sync/schema/collections';
 import type { PushOutcome, QueuedChange, SyncPorts } from '@shared/sync/sync-cycle';
+import { textFieldMax } from '@shared/text/text-fields';
 
 import { deviceId } from '../device/device-id';
 import type { JournalDb } from '../data/journal-db';
@@ -106,11 +107,14 @@ export class DexieSyncPorts implements SyncPorts {
     const unknown = page.changes.filter((change) => !this.known.has(change.collection));
     const collections = [...new Set(page.changes.map((change) => change.collection))].filter((name) => this.known.has(name));
     const tables = this.db.tables.filter((table) => this.known.has(table.name)).map((table) => table.name);
+    // Yjs loads on the first pulled text, before the transaction (which must not await anything else).
+    const isText = (change: { collection: string; field: string }) => textFieldMax(change.collection, change.field) !== undefined;
+    const texts = page.changes.some(isText) || (await this.db.held.count()) > 0 ? await import('@shared/text/apply-pulled-texts') : null;
     await this.db.transaction('rw', [...tables.map((name) => this.db.rows(name)), this.db.meta, this.db.held], async () => {
       const released = await this.db.held.where('collection').anyOf([...this.known]).toArray();
       await this.merge([...released.map(({ seq: _seq, ...change }) => change), ...page.changes.filter((change) => this.known.has(change.collection))], [
         ...new Set([...collections, ...released.map((change) => change.collection)]),
-      ]);
+      ], texts?.applyPulledTexts ?? null);
       await this.db.held.bulkDelete(released.map((change) => change.seq!));
       await this.db.held.bulkAdd(unknown);
       await this.adoptClocks(page);
@@ -121,7 +125,12 @@ export class DexieSyncPorts implements SyncPorts {
     });
   }
 
-  private async merge(changes: readonly PulledChange[], collections: readonly string[]): Promise<void> {
+  /** Mergeable texts merge their Yjs states (when Yjs is loaded); every other field by the shared per-field rule. */
+  private async merge(
+    changes: readonly PulledChange[],
+    collections: readonly string[],
+    applyPulledTexts: ((collection: string, row: LocalRow, changes: PulledChange[]) => LocalRow) | null,
+  ): Promise<void> {
     const byRow = new Map<string, { collection: string; rowId: string; changes: PulledChange[] }>();
     for (const change of changes) {
       const key = `${change.collection}/${change.rowId}`;
@@ -133,7 +142,11 @@ export class DexieSyncPorts implements SyncPorts {
       const entries = [...byRow.values()].filter((entry) => entry.collection === collection);
       const table = this.db.rows(collection);
       const current = await table.bulkGet(entries.map((entry) => entry.rowId));
-      const merged: LocalRow[] = entries.map((entry, n) => applyPulled(current[n] ?? emptyRow(entry.rowId), entry.changes));
+      const isText = (change: PulledChange) => applyPulledTexts !== null && textFieldMax(collection, change.field) !== undefined;
+      const merged: LocalRow[] = entries.map((entry, n) => {
+        const row = applyPulled(current[n] ?? emptyRow(entry.rowId), entry.changes.filter((change) => !isText(change)));
+        return applyPulledTexts ? applyPulledTexts(collection, row, entry.changes.filter(isText)) : row;
+      });
       await table.bulkPut(merged.filter((row, n) => row !== current[n]));
     }
   }

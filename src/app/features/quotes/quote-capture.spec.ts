@@ -6,6 +6,8 @@ import Dexie from 'dexie';
 
 import { STARTER_LABELS } from '@shared/journal/starter-labels';
 import type { Quote } from '@shared/sync/schema/collections';
+import { loadTextDoc, textDocName, textOf } from '@shared/text/text-doc';
+import { decodeTextBytes } from '@shared/text/text-value';
 
 import { forgetSession, READER, rememberSession } from '../../core/auth/testing/session-fixtures';
 import { journalDbName } from '../../core/data/journal-db';
@@ -179,6 +181,9 @@ describe('QuoteCapture and its dialog', () => {
 
     expect(await saved).toBe(id);
     const changes = (await db.outbox.toArray()).slice(outboxBefore);
-    expect(changes.map((change) => [change.field, change.value])).toEqual([['note', 'For the fen walk']]);
+    expect(changes.map((change) => change.field)).toEqual(['note']);
+    // The note is a mergeable text: the outbox carries a Yjs update, which Yjs itself reads back.
+    const doc = loadTextDoc([decodeTextBytes((changes[0]!.value as { yjs: string }).yjs)!]);
+    expect(textOf(doc, textDocName('quotes', id, 'note'))).toBe('For the fen walk');
   });
 });

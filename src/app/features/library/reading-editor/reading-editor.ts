@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, viewChildren } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -11,6 +11,7 @@ import { RECOMMEND_ANSWERS, type Book, type Reading } from '@shared/sync/schema/
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore, type RowWrite } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { MergeableTextarea, type PendingEdits } from '../../../core/text/mergeable-textarea';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../account/field-errors';
 import { RECOMMEND_LABELS } from '../book-labels';
@@ -26,7 +27,7 @@ import {
 /** One reading of a book: its dates and the review. A re-read is simply another reading. */
 @Component({
   selector: 'll-reading-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MergeableTextarea],
   templateUrl: './reading-editor.html',
   styleUrl: './reading-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -62,6 +63,11 @@ export class ReadingEditor {
   /** Cancel discards on purpose, so it leaves without asking. */
   protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
   private original: ReadingFormValue = EMPTY_READING_FORM;
+  /** A new reading's id, made now so its review can be edited as a Yjs text before it is saved. */
+  private readonly newId = crypto.randomUUID();
+  protected readonly rowId = computed(() => this.readingId() ?? this.newId);
+  /** The review and takeaways, bound to their Yjs texts. */
+  private readonly texts = viewChildren(MergeableTextarea);
 
   constructor() {
     inject(UnsavedWork).trackForm(this.form);
@@ -91,16 +97,22 @@ export class ReadingEditor {
     }
     const bookId = this.id();
     const existing = this.readingId();
-    const readingId = existing ?? crypto.randomUUID();
+    const readingId = this.rowId();
     const value = this.form.getRawValue();
-    const patch = existing ? changedReadingFields(this.original, value) : { ...toReadingFields(value), bookId, deleted: false };
+    const { review: _review, takeaways: _takeaways, ...patch }: Record<string, unknown> = existing
+      ? changedReadingFields(this.original, value)
+      : { ...toReadingFields(value), bookId, deleted: false };
+    // The review and takeaways are saved as the edits typed here, which merge with other devices'.
+    const typed = this.texts().map((text) => [text, text.pendingEdits()] as const).filter((entry): entry is [MergeableTextarea, PendingEdits] => entry[1] !== null);
+    for (const [text, edits] of typed) patch[text.llMergeableText().field] = edits.value;
     const writes: RowWrite[] = [{ collection: 'readings', rowId: readingId, patch }];
-    if (patch.rating !== undefined && (await this.isLatest(bookId, readingId, value.startedOn))) {
+    if (patch['rating'] !== undefined && (await this.isLatest(bookId, readingId, value.startedOn))) {
       // The book's rating follows its latest reading.
-      writes.push({ collection: 'books', rowId: bookId, patch: { rating: patch.rating } });
+      writes.push({ collection: 'books', rowId: bookId, patch: { rating: patch['rating'] as number | null } });
     }
     try {
       await this.store.writeAll(writes);
+      for (const [text, edits] of typed) text.saved(edits);
       this.form.markAsPristine();
       await this.router.navigate(['/library', bookId]);
     } catch (error) {

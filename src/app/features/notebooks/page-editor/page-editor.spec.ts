@@ -2,6 +2,13 @@ import { TestBed, type ComponentFixture } from '@angular/core/testing';
 
 import type { PageTemplate } from '@shared/sync/schema/collections';
 
+import * as Y from 'yjs';
+
+import { applyPulledTexts, textStatesOf } from '@shared/text/apply-pulled-texts';
+import { localTextState } from '@shared/text/local-text';
+import { loadTextDoc, textDocName } from '@shared/text/text-doc';
+import { encodeTextBytes } from '@shared/text/text-value';
+
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { Notebooks } from '../notebooks';
 import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
@@ -59,6 +66,33 @@ describe('PageEditor', () => {
     expect(changes.map((c) => [c.rowId, c.field])).toEqual([[pageId, 'body']]);
     expect((await journal.store.get('notebookPages', pageId))?.body).toBe('# Low tide\nGulls and **one heron**.\n[ ] come back at dawn');
     expect(unsaved.present()).toBeFalse();
+  });
+
+  it('shows a change from another device while the reader types, keeping the caret and the typed words', async () => {
+    await open();
+    const area = textarea();
+    area.focus();
+    type(area, 'Gulls. Terns.');
+    area.setSelectionRange(13, 13);
+
+    // Another device prepends a line; a pull stores its state as DexieSyncPorts.apply does.
+    const name = textDocName('notebookPages', pageId, 'body');
+    const row = (await journal.db.rows('notebookPages').get(pageId))!;
+    const remote = loadTextDoc([localTextState(name, { state: textStatesOf(row)['body'], text: row['body'] as string })]);
+    remote.getText(name).insert(0, 'Morning: ');
+    const pulled = { field: 'body', value: 'Morning: Gulls.', hlc: '999999999999999:00000:other', state: encodeTextBytes(Y.encodeStateAsUpdate(remote)) };
+    await journal.db.rows('notebookPages').put(applyPulledTexts('notebookPages', row, [pulled]));
+
+    await until(() => area.value === 'Morning: Gulls. Terns.', fixture);
+    // The caret stays after "Terns." (Yjs relative positions), 9 characters further on.
+    expect([area.selectionStart, area.selectionEnd]).toEqual([22, 22]);
+
+    buttonNamed('Save page').click();
+    await until(() => textOf(element.querySelector('[role=status]')) === 'Saved on this device.', fixture);
+    expect((await journal.store.get('notebookPages', pageId))?.body).toBe('Morning: Gulls. Terns.');
+    const last = (await journal.db.outbox.toArray()).at(-1)!;
+    expect(last.field).toBe('body');
+    expect(Object.keys(last.value as object)).toEqual(['yjs']);
   });
 
   it('says what is wrong per field and saves nothing', async () => {

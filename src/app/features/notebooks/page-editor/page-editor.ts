@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, effect, inject, input, signal, viewChild } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -15,6 +15,8 @@ import type { Notebook, NotebookPage } from '@shared/sync/schema/collections';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { MergeableTextarea } from '../../../core/text/mergeable-textarea';
+import { PageHistory } from '../page-history/page-history';
 import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
 import { LightText } from '../light-text/light-text';
 import { clip } from '../notebook-data';
@@ -24,7 +26,7 @@ import { changedPageFields, toPageForm, type PageFormValue } from './page-form-m
 /** One notebook page: its title and text, with the formatting shown as it will look. */
 @Component({
   selector: 'll-page-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, LightText],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, LightText, MergeableTextarea, PageHistory],
   templateUrl: './page-editor.html',
   styleUrl: './page-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -58,6 +60,8 @@ export class PageEditor {
   protected readonly namingTemplate = signal(false);
   protected readonly fieldError = fieldError;
   private original: PageFormValue = { title: '', body: '' };
+  /** The body's Yjs binding: typed edits are saved as character edits that merge. */
+  private readonly bodyText = viewChild(MergeableTextarea);
 
   constructor() {
     // Nothing typed here may be lost to an update reload or another tab's upgrade.
@@ -89,8 +93,12 @@ export class PageEditor {
     }
     const value = this.form.getRawValue();
     try {
-      const patch = changedPageFields(this.original, value);
+      // The body is saved as the edits typed here; changes from elsewhere are already stored.
+      const { body: _typed, ...patch }: Record<string, unknown> = changedPageFields(this.original, value);
+      const edits = this.bodyText()?.pendingEdits();
+      if (edits) patch['body'] = edits.value;
       if (Object.keys(patch).length) await this.store.write('notebookPages', this.pageId(), patch);
+      if (edits) this.bodyText()?.saved(edits);
       this.original = value;
       this.form.markAsPristine();
       this.problem.set('');
@@ -99,6 +107,12 @@ export class PageEditor {
       if (error instanceof InvalidFieldsError) showServerErrors(this.form, error.fields);
       this.problem.set('This page could not be saved. What was saved before is unchanged.');
     }
+  }
+
+  /** A version from the history becomes the page's text: an edit like any other, saved at once. */
+  protected async restoreVersion(text: string): Promise<void> {
+    this.bodyText()?.replaceAll(text);
+    await this.save();
   }
 
   protected startTemplate(): void {

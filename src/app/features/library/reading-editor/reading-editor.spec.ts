@@ -1,0 +1,60 @@
+import { TestBed, type ComponentFixture } from '@angular/core/testing';
+import * as Y from 'yjs';
+
+import { applyPulledTexts, textStatesOf } from '@shared/text/apply-pulled-texts';
+import { localTextState } from '@shared/text/local-text';
+import { loadTextDoc, textDocName } from '@shared/text/text-doc';
+import { encodeTextBytes } from '@shared/text/text-value';
+
+import { openTestJournal, until, type TestJournal } from '../../notebooks/testing/test-journal';
+import { ReadingEditor } from './reading-editor';
+
+describe('ReadingEditor (review and takeaways as mergeable texts)', () => {
+  let journal: TestJournal;
+  let fixture: ComponentFixture<ReadingEditor>;
+  let element: HTMLElement;
+  const bookId = crypto.randomUUID();
+  const readingId = crypto.randomUUID();
+
+  beforeEach(async () => {
+    journal = openTestJournal();
+    await journal.store.write('books', bookId, { title: 'The Salt Roads', authors: ['Wren Okafor'], format: 'print', status: 'finished', deleted: false });
+    await journal.store.write('readings', readingId, { bookId, startedOn: '2026-03-01', review: 'A slow start.', deleted: false });
+    fixture = TestBed.createComponent(ReadingEditor);
+    fixture.componentRef.setInput('id', bookId);
+    fixture.componentRef.setInput('readingId', readingId);
+    element = fixture.nativeElement as HTMLElement;
+    await until(() => review().value === 'A slow start.', fixture);
+  });
+  afterEach(() => journal.close());
+
+  const review = () => element.querySelector<HTMLTextAreaElement>('textarea[formcontrolname=review]')!;
+
+  it('keeps the reader’s typing and another device’s edit of the review, and saves the typing as a Yjs update', async () => {
+    const area = review();
+    area.focus();
+    area.value = 'A slow start, then wonderful.';
+    area.dispatchEvent(new Event('input'));
+
+    // Another device adds a line at the end; a pull stores it as DexieSyncPorts.apply does.
+    const name = textDocName('readings', readingId, 'review');
+    const row = (await journal.db.rows('readings').get(readingId))!;
+    const remote = loadTextDoc([localTextState(name, { state: textStatesOf(row)['review'], text: row['review'] as string })]);
+    remote.getText(name).insert(13, '\nRead it on the train.');
+    const pulled = { field: 'review', value: 'A slow start.\nRead it on the train.', hlc: '999999999999999:00000:other', state: encodeTextBytes(Y.encodeStateAsUpdate(remote)) };
+    await journal.db.rows('readings').put(applyPulledTexts('readings', row, [pulled]));
+    await until(() => area.value === 'A slow start, then wonderful.\nRead it on the train.', fixture);
+
+    element.querySelector<HTMLFormElement>('form')!.requestSubmit();
+    const expected = 'A slow start, then wonderful.\nRead it on the train.';
+    const deadline = Date.now() + 3000;
+    let stored = await journal.store.get('readings', readingId);
+    while (stored?.review !== expected && Date.now() < deadline) {
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      stored = await journal.store.get('readings', readingId);
+    }
+    expect(stored?.review).toBe(expected);
+    const last = (await journal.db.outbox.toArray()).filter((change) => change.field === 'review').at(-1)!;
+    expect(Object.keys(last.value as object)).toEqual(['yjs']);
+  });
+});

@@ -1,0 +1,59 @@
+import { HttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { firstValueFrom } from 'rxjs';
+
+import type { TextVersion, TextVersionsResponse } from '@shared/api/text-history';
+
+/**
+ * A page's earlier versions (the last 30 days, one per ten minutes of editing, kept by the
+ * server) and a way back to one. Restoring is an ordinary edit of the page, so it syncs and can
+ * itself be undone from the history.
+ */
+@Component({
+  selector: 'll-page-history',
+  imports: [MatButtonModule, MatIconModule],
+  templateUrl: './page-history.html',
+  styleUrl: './page-history.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class PageHistory {
+  private readonly http = inject(HttpClient);
+
+  /** The page whose history this is. */
+  readonly pageId = input.required<string>();
+  /** The reader chose to bring a version back. */
+  readonly restore = output<string>();
+
+  protected readonly state = signal<'closed' | 'loading' | 'open' | 'offline'>('closed');
+  protected readonly versions = signal<readonly TextVersion[]>([]);
+  protected readonly chosen = signal<TextVersion | null>(null);
+
+  protected async open(): Promise<void> {
+    this.state.set('loading');
+    this.chosen.set(null);
+    try {
+      const answer = await firstValueFrom(this.http.get<TextVersionsResponse>(`/api/texts/notebookPages/${this.pageId()}/body/versions`));
+      this.versions.set(answer.versions);
+      this.state.set('open');
+    } catch {
+      this.state.set('offline');
+    }
+  }
+
+  protected close(): void {
+    this.state.set('closed');
+  }
+
+  protected restoreChosen(): void {
+    const version = this.chosen();
+    if (!version) return;
+    this.restore.emit(version.text);
+    this.state.set('closed');
+  }
+
+  protected when(version: TextVersion): string {
+    return new Date(version.savedAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+  }
+}

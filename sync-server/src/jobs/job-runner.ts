@@ -1,0 +1,45 @@
+import PgBoss from 'pg-boss';
+import type { DataSource } from 'typeorm';
+
+import type { Job } from './job';
+import { JOBS } from './jobs';
+
+/**
+ * A run still active after this long counts as failed (and is retried). It also bounds how long
+ * a run left active by a crashed instance blocks its singleton queue.
+ */
+const RUN_LIMIT_SECONDS = 5 * 60;
+
+/** pg-boss keeps its tables in a schema of their own, beside ours. */
+export const JOBS_SCHEMA = 'pgboss';
+
+export interface JobRunner {
+  /** Sends a job now (specs and one-off runs); answers the job id. */
+  send(name: string): Promise<string | null>;
+  /** Stops taking jobs, waits up to `timeoutMs` for running ones, then closes pg-boss's pool. */
+  stop(timeoutMs?: number): Promise<void>;
+}
+
+/**
+ * Starts pg-boss 10 on the server's database and works every job of {@link JOBS}. Safe with
+ * several instances: pg-boss claims jobs with `SKIP LOCKED`, sends each cron tick once and
+ * creates its schema under an advisory lock; each queue is `singleton`, so a job never runs
+ * twice at once. pg-boss has its own small pool (`max` connections).
+ */
+export async function startJobRunner(databaseUrl: string, dataSource: DataSource, jobs: readonly Job[] = JOBS): Promise<JobRunner> {
+  const boss = new PgBoss({ connectionString: databaseUrl, schema: JOBS_SCHEMA, max: 3, application_name: 'lamplight-jobs' });
+  boss.on('error', (error: Error) => console.error(`Background jobs: ${error.message}`));
+  await boss.start();
+  for (const job of jobs) {
+    await boss.createQueue(job.name, { name: job.name, policy: 'singleton', retryLimit: 2, expireInSeconds: RUN_LIMIT_SECONDS });
+    if (job.cron) await boss.schedule(job.name, job.cron, {}, { tz: 'UTC' });
+    else await boss.unschedule(job.name);
+    await boss.work(job.name, { pollingIntervalSeconds: 2 }, async () => {
+      await job.run({ dataSource });
+    });
+  }
+  return {
+    send: (name) => boss.send(name, {}),
+    stop: (timeoutMs = 10_000) => boss.stop({ graceful: true, timeout: timeoutMs, wait: true }),
+  };
+}
