@@ -6,9 +6,14 @@ import { createDataSource } from './data-access/data-source';
 import { migrate } from './data-access/migrate';
 import { User } from './data-access/entities/user.entity';
 import { createSmtpMailer } from './domain/mailer';
+import { closeGracefully, exitOnUnexpectedError } from './process-lifecycle';
 
-/** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
+/**
+ * Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it gracefully:
+ * no new connections, the requests in flight are answered, then the pool closes.
+ */
 async function main(): Promise<void> {
+  exitOnUnexpectedError();
   const config = loadConfig();
   const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
@@ -30,18 +35,18 @@ async function main(): Promise<void> {
   });
 
   let stopping = false;
-  const stop = (signal: string) => {
+  const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
-    console.log(`\n${signal}: stopping Lamplight…`);
-    server.close(() => {
-      mailer.close();
-      void dataSource.destroy().finally(() => process.exit(0));
-    });
-    server.closeAllConnections();
+    console.log(`\n${signal}: stopping Lamplight (finishing the requests in flight)…`);
+    await closeGracefully(server);
+    mailer.close();
+    await dataSource.destroy();
+    console.log('Lamplight stopped.');
+    process.exit(0);
   };
-  process.on('SIGINT', () => stop('SIGINT'));
-  process.on('SIGTERM', () => stop('SIGTERM'));
+  process.on('SIGINT', () => void stop('SIGINT'));
+  process.on('SIGTERM', () => void stop('SIGTERM'));
 }
 
 main().catch((err: unknown) => {

@@ -35,5 +35,6 @@ describe('BookNotebooks', () => {
     fixture.componentRef.setInput('bookId', bookId);
     const element = fixture.nativeElement as HTMLElement;
     await until(() => textOf(element).includes('No notebook is about this book yet.'), fixture);
+    expect(element.querySelectorAll('ul.notebooks li').length).toBe(0);
   });
 });

@@ -98,6 +98,7 @@ describe('TimerPage', () => {
     await until(() => (fixture.detectChanges(), !!button('Pause')));
     clock.advance(MINUTE);
     await shown('06:00');
+    expect(text()).not.toContain('Paused');
   });
 
   it('stops into a saved session and opens the stop form, holding off app reloads while it is open', async () => {
@@ -171,5 +172,6 @@ describe('TimerPage', () => {
     await shown('10 minutes to go');
     clock.advance(10 * MINUTE);
     await shown('You have read your 10 minutes.');
+    expect(text()).toContain('You have read your 10 minutes.');
   });
 });

@@ -79,5 +79,6 @@ describe('InProgress', () => {
   it('says so when nothing is in progress', async () => {
     fixture = TestBed.createComponent(InProgress);
     await until(() => element().textContent?.includes('Nothing in progress'), 'the empty list');
+    expect(element().querySelectorAll('li').length).toBe(0);
   });
 });
