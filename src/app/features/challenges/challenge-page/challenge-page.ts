@@ -17,12 +17,12 @@ import type { Challenge } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank } from '../../account/field-errors';
-import { goalRecord } from '../../goals/goal-rows';
-import { OneAtATime } from '../../goals/one-at-a-time';
+import { fieldError, notBlank } from '../../../ui/field-errors';
+import { goalRecord } from '../../../core/read-model/goal-rows';
+import { OneAtATime } from '../../../core/tasks/one-at-a-time';
 import { celebrateOnce } from '../celebrate-once';
 import { ChallengeCelebration } from '../challenge-celebration/challenge-celebration';
-import { KIND_LABELS, progressLine, progressPercent } from '../challenge-labels';
+import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challenge-labels';
 import { periodLine } from '../challenge-period';
 
 type Prompt = NonNullable<Challenge['prompts']>[number];

@@ -13,15 +13,14 @@ import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { BookCover } from '../../../core/covers/book-cover/book-cover';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { BookQuotes } from '../../quotes/book-quotes/book-quotes';
-import { QuoteCapture } from '../../quotes/quote-capture';
-import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
-import { BookNotebooks } from '../../notebooks/book-notebooks/book-notebooks';
-import { BookStatus } from '../book-status';
-import { StarRating } from '../star-rating/star-rating';
-import { LabelChips } from '../../labels/label-chips/label-chips';
-import { BookReading } from '../../sessions/book-reading/book-reading';
-import { TimerStartButton } from '../../timer/timer-start-button/timer-start-button';
+import { BookQuotes, QuoteCapture } from '../../quotes';
+import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../../../ui/book-labels';
+import { BookNotebooks } from '../../notebooks';
+import { BookStatus } from '../../../core/read-model/book-status';
+import { StarRating } from '../../../ui/star-rating/star-rating';
+import { LabelChips } from '../../../ui/label-chips/label-chips';
+import { BookReading } from '../../sessions';
+import { TimerStartButton } from '../../timer';
 
 /** Everything the reader keeps about one book, on this device, together with what is linked to it. */
 interface BookDossier {

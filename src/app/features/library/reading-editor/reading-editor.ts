@@ -12,8 +12,8 @@ import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore, type RowWrite } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, showServerErrors } from '../../account/field-errors';
-import { RECOMMEND_LABELS } from '../book-labels';
+import { fieldError, showServerErrors } from '../../../ui/field-errors';
+import { RECOMMEND_LABELS } from '../../../ui/book-labels';
 import {
   changedReadingFields,
   EMPTY_READING_FORM,

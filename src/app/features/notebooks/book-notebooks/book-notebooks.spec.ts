@@ -1,7 +1,7 @@
 import { TestBed } from '@angular/core/testing';
 
 import { Notebooks } from '../notebooks';
-import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
+import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { BookNotebooks } from './book-notebooks';
 
 describe('BookNotebooks', () => {

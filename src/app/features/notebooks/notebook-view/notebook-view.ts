@@ -23,7 +23,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
 import { bookOptions } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';

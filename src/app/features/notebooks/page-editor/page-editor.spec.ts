@@ -4,7 +4,7 @@ import type { PageTemplate } from '@shared/sync/schema/collections';
 
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { Notebooks } from '../notebooks';
-import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
+import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { PageEditor } from './page-editor';
 
 describe('PageEditor', () => {

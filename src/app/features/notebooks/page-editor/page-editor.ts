@@ -15,7 +15,7 @@ import type { Notebook, NotebookPage } from '@shared/sync/schema/collections';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
 import { LightText } from '../light-text/light-text';
 import { clip } from '../notebook-data';
 import { Notebooks } from '../notebooks';

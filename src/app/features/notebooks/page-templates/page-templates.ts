@@ -12,7 +12,7 @@ import type { PageTemplate } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank } from '../../account/field-errors';
+import { fieldError, notBlank } from '../../../ui/field-errors';
 import { Notebooks } from '../notebooks';
 
 /** The reader's own page templates: rename or delete them. The starter ones are listed as they are. */

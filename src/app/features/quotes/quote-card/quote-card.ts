@@ -9,8 +9,8 @@ import { quotePosition, quoteWithSource } from '@shared/journal/quote-source';
 import type { Book, Quote } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { LabelChips } from '../../labels/label-chips/label-chips';
-import { authorLine } from '../../library/book-labels';
+import { LabelChips } from '../../../ui/label-chips/label-chips';
+import { authorLine } from '../../../ui/book-labels';
 import { QuoteCapture } from '../quote-capture';
 
 /** One quote with where it is from, and what can be done with it: favourite, copy, edit, delete. */

@@ -15,9 +15,9 @@ import type { Book, Series } from '@shared/sync/schema/collections';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank } from '../../account/field-errors';
-import { STATUS_LABELS } from '../../library/book-labels';
-import { StarRating } from '../../library/star-rating/star-rating';
+import { fieldError, notBlank } from '../../../ui/field-errors';
+import { STATUS_LABELS } from '../../../ui/book-labels';
+import { StarRating } from '../../../ui/star-rating/star-rating';
 
 /** One series: its books in order, progress, the next to read, and the reader's view of it all. */
 @Component({

@@ -15,7 +15,7 @@ import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { bookForecast, bookProgress } from '../book-forecast';
 import { minutesLine, MOOD_LABELS, positionLine, progressLine } from '../book-position';
-import { newestFirst } from '../reading-sessions';
+import { newestFirst } from '../../../core/read-model/reading-sessions';
 
 /** One line of the session list. */
 interface SessionLine {

@@ -10,7 +10,7 @@ import { forgetSession, READER, rememberSession } from '../../../core/auth/testi
 import { journalDbName } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { QuoteCapture } from '../../quotes/quote-capture';
+import { QuoteCapture } from '../../quotes';
 import { CLOCK } from '../../../core/time/clock';
 import { NOTIFIER } from '../notifier';
 import { ReadingTimer, TIMER_ROW_ID } from '../reading-timer';

@@ -1,4 +1,4 @@
-import type { JournalStore } from '../../../core/data/journal-store';
+import type { JournalStore } from '../data/journal-store';
 
 /**
  * A small invented library for goal and challenge specs. Local days are for a reader in

@@ -4,12 +4,12 @@ import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import Dexie from 'dexie';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
-import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
-import { CLOCK, fixedClock } from '../../../core/time/clock';
-import { TIME_ZONE } from '../../../core/time/time-zone';
+import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
+import { journalDbName, type JournalDb } from '../data/journal-db';
+import { JournalStore } from '../data/journal-store';
+import { LocalJournal } from '../data/local-journal';
+import { CLOCK, fixedClock } from '../time/clock';
+import { TIME_ZONE } from '../time/time-zone';
 
 /** Noon on 1 July 2026 in Los Angeles (PDT, UTC−7): the "now" of goal specs unless they say otherwise. */
 export const JULY_FIRST_NOON_LA = '2026-07-01T19:00:00.000Z';

@@ -1,7 +1,7 @@
 import { signal } from '@angular/core';
 import type { FormGroup } from '@angular/forms';
 
-import { readableError } from '../../core/http/api-error-message';
+import { readableError } from '../core/http/api-error-message';
 import { showServerErrors } from './field-errors';
 
 /**

@@ -5,7 +5,7 @@ import { Router } from '@angular/router';
 import { nextUnread, seriesBooks } from '@shared/journal/series-order';
 import type { Book, Series } from '@shared/sync/schema/collections';
 
-import { JournalStore, type RowWrite } from '../../core/data/journal-store';
+import { JournalStore, type RowWrite } from '../data/journal-store';
 
 /**
  * Changing a book's status: the book keeps its current status and when it changed, and every

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 
-import { LabelDirectory } from '../label-directory';
+import { LabelDirectory } from '../../core/read-model/label-directory';
 
 /** A book's or a quote's labels as small coloured chips (labels that no longer exist are skipped). */
 @Component({

@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, inject, model } from '@angular/core
 import { MatChipsModule } from '@angular/material/chips';
 import { MatIconModule } from '@angular/material/icon';
 
-import { LabelDirectory } from '../label-directory';
+import { LabelDirectory } from '../../core/read-model/label-directory';
 
 /** Choose labels by toggling chips; the value is the list of chosen label ids. */
 @Component({

@@ -4,11 +4,11 @@ import { TestBed, type ComponentFixture } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import Dexie from 'dexie';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import type { JournalDb } from '../../../core/data/journal-db';
-import { journalDbName } from '../../../core/data/journal-db';
-import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
+import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
+import type { JournalDb } from '../data/journal-db';
+import { journalDbName } from '../data/journal-db';
+import { JournalStore } from '../data/journal-store';
+import { LocalJournal } from '../data/local-journal';
 
 /** A signed-in reader with a fresh, real IndexedDB journal (Dexie in Chromium), for one spec. */
 export interface TestJournal {

@@ -3,7 +3,7 @@ import { computed, Injectable } from '@angular/core';
 import { mergeLabels } from '@shared/journal/starter-labels';
 import type { Label } from '@shared/sync/schema/collections';
 
-import { liveQuerySignal } from '../../core/data/live-query';
+import { liveQuerySignal } from '../data/live-query';
 
 /** One label as the UI shows it. */
 export type LabelView = ReturnType<typeof mergeLabels>[number];

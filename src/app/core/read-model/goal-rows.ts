@@ -6,9 +6,9 @@ import type { ChallengeBook } from '@shared/challenges/challenge-book';
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 import type { Book, Challenge, MonthPlan, Reading, Session, YearPlan } from '@shared/sync/schema/collections';
 
-import { liveQuerySignal } from '../../core/data/live-query';
-import { TIME_ZONE } from '../../core/time/time-zone';
-import { readerToday } from './reader-today';
+import { liveQuerySignal } from '../data/live-query';
+import { TIME_ZONE } from '../time/time-zone';
+import { readerToday } from '../time/reader-today';
 
 /** The rows goals and challenges read, not deleted. */
 export interface GoalRowSet {
