@@ -37,10 +37,10 @@ const env = {
 };
 
 console.log('Demo accounts (invented people):');
-run('node', ['dist/node/sync-server/src/seed.js'], { env });
+run('node', ['dist/node/sync-server/src/demo/seed.js'], { env });
 
 const children = [];
-const inbox = process.env.SMTP_URL ? null : spawn('node', ['dist/node/sync-server/src/dev-inbox/main.js'], { cwd: root, stdio: 'inherit', env });
+const inbox = process.env.SMTP_URL ? null : spawn('node', ['dist/node/sync-server/src/mail/dev-inbox-main.js'], { cwd: root, stdio: 'inherit', env });
 if (inbox) children.push(inbox);
 const server = spawn('node', ['dist/node/sync-server/src/main.js'], { cwd: root, stdio: 'inherit', env });
 children.push(server);

@@ -26,6 +26,7 @@ async function startServerProcess(): Promise<ServerProcess> {
       DATABASE_URL: testDatabaseUrl(),
       LAMPLIGHT_JWT_SECRET: 'spec-secret-that-is-at-least-32-characters-long',
       LAMPLIGHT_BCRYPT_COST: '4',
+      LAMPLIGHT_AUTH_RATE_LIMIT: '100000',
       SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
       NODE_ENV: 'test',
     },
@@ -60,7 +61,7 @@ describe('The server process', () => {
   describe('When it gets SIGTERM while a request is in flight', () => {
     it('then it stops accepting connections, still answers that request, closes the pool and exits 0', async () => {
       const server = await startServerProcess();
-      const body = JSON.stringify({ email: 'nobody@example.invalid', password: 'not-the-password-1' });
+      const body = JSON.stringify({ email: `nobody-${Date.now()}@example.invalid`, password: 'not-the-password-1' });
       const socket = await openSocket(server.port);
       let response = '';
       socket.on('data', (chunk: Buffer) => (response += chunk.toString()));

@@ -5,7 +5,7 @@ import type { ServerConfig } from './config';
 import { Accounts } from './domain/accounts';
 import { AdminUsers } from './domain/admin-users';
 import { DeviceSessions } from './domain/device-sessions';
-import type { Mailer } from './domain/mailer';
+import type { Mailer } from './mail/mailer';
 import { PasswordResets } from './domain/password-resets';
 import { Uploads } from './domain/uploads';
 import { adminRoutes } from './entry-points/admin.routes';

@@ -5,7 +5,7 @@ import { loadConfig } from './config';
 import { createDataSource } from './data-access/data-source';
 import { migrate } from './data-access/migrate';
 import { User } from './data-access/entities/user.entity';
-import { createSmtpMailer } from './domain/mailer';
+import { createSmtpMailer } from './mail/mailer';
 import { closeGracefully, exitOnUnexpectedError } from './process-lifecycle';
 
 /**

@@ -7,7 +7,7 @@ import { User } from '../data-access/entities/user.entity';
 import { ownedUploadIds, removeOrphanedUploads } from '../data-access/upload-store';
 import { welcomeMail } from './account-mail';
 import type { DeviceSessions } from './device-sessions';
-import type { Mailer } from './mailer';
+import type { Mailer } from '../mail/mailer';
 import { hashPassword, verifyPassword } from './passwords';
 
 /** The same answer for an unknown e-mail and a wrong password, so neither can be probed. */

@@ -1,9 +1,9 @@
-import { loadConfig } from './config';
-import { createDataSource } from './data-access/data-source';
-import { migrate } from './data-access/migrate';
-import { DEMO_ACCOUNTS, seedDemo } from './data-access/seed-demo';
+import { loadConfig } from '../config';
+import { createDataSource } from '../data-access/data-source';
+import { migrate } from '../data-access/migrate';
+import { DEMO_ACCOUNTS, seedDemo } from './seed-demo';
 
-/** `node dist/node/sync-server/src/seed.js`: migrate, then add the demo accounts and library (idempotent). */
+/** `node dist/node/sync-server/src/demo/seed.js`: migrate, then add the demo accounts and library (idempotent). */
 async function seed(): Promise<void> {
   const config = loadConfig();
   const dataSource = createDataSource(config.databaseUrl);

@@ -2,16 +2,16 @@ import { randomUUID } from 'node:crypto';
 
 import type { DataSource } from 'typeorm';
 
-import { gs1CheckDigit } from '../../../../shared/isbn/gs1-check-digit';
-import type { FieldChange } from '../../../../shared/sync/field-change';
-import { HlcClock } from '../../../../shared/sync/hlc';
-import type { Book, BookStatusChange, Reading, Series } from '../../../../shared/sync/schema/collections';
-import { bookStatusChanges, books, readings, series } from '../../../../shared/sync/schema/collections';
-import { deterministicId } from '../../../../shared/sync/deterministic-id';
-import { validateChange } from '../../../../shared/sync/validate-change';
-import { Uploads } from '../../domain/uploads';
-import { SyncStore } from '../sync-store';
-import { UploadStore } from '../upload-store';
+import { gs1CheckDigit } from '../../../shared/isbn/gs1-check-digit';
+import type { FieldChange } from '../../../shared/sync/field-change';
+import { HlcClock } from '../../../shared/sync/hlc';
+import type { Book, BookStatusChange, Reading, Series } from '../../../shared/sync/schema/collections';
+import { bookStatusChanges, books, readings, series } from '../../../shared/sync/schema/collections';
+import { deterministicId } from '../../../shared/sync/deterministic-id';
+import { validateChange } from '../../../shared/sync/validate-change';
+import { Uploads } from '../domain/uploads';
+import { SyncStore } from '../data-access/sync-store';
+import { UploadStore } from '../data-access/upload-store';
 import { demoCover } from './demo-cover';
 import { DEMO_BOOKS, type DemoBook, type DemoReview } from './demo-books';
 import { seedDemoJournal } from './demo-journal';

@@ -1,8 +1,8 @@
 import type { DataSource } from 'typeorm';
 
 import { hashPassword } from '../domain/passwords';
-import { seedDemoLibrary } from './demo-library/seed-demo-library';
-import { User, type Role } from './entities/user.entity';
+import { seedDemoLibrary } from './seed-demo-library';
+import { User, type Role } from '../data-access/entities/user.entity';
 
 /** The invented demo accounts `npm start` creates. Names and addresses are made up. */
 export const DEMO_ACCOUNTS: readonly { email: string; password: string; displayName: string; role: Role; withLibrary: boolean }[] = [

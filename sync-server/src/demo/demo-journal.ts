@@ -1,5 +1,5 @@
-import { STARTER_LABELS } from '../../../../shared/journal/starter-labels';
-import { deterministicId } from '../../../../shared/sync/deterministic-id';
+import { STARTER_LABELS } from '../../../shared/journal/starter-labels';
+import { deterministicId } from '../../../shared/sync/deterministic-id';
 import type { DemoBook } from './demo-books';
 
 /** Writes one synced row (the seed's `write`): all fields under one clock. */
