@@ -1,10 +1,12 @@
 import { Routes } from '@angular/router';
 
 import { adminGuard, signedInGuard } from './core/auth/auth-guards';
+import accountRoutes from './features/account/account.routes';
 
 /** The areas of the app; each keeps its own route table beside its pages (`features/NAME/NAME.routes.ts`). */
 export const routes: Routes = [
-  { path: '', loadChildren: () => import('./features/account/account.routes') },
+  // Spread, not lazy: an empty-path lazy group at the root would sit in front of the redirect from '/'.
+  ...accountRoutes,
   {
     path: '',
     canMatch: [signedInGuard],

@@ -4,7 +4,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 import { format } from 'date-fns';
 
@@ -24,6 +23,7 @@ import { bookOptions } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
 import { liveQueryFor } from '../../../core/data/live-query-for';
+import { offerUndo } from '../../../ui/offer-undo';
 
 const EXCERPT_LENGTH = 160;
 
@@ -72,7 +72,7 @@ export class NotebookView {
   private readonly store = inject(JournalStore);
   private readonly notebooks = inject(Notebooks);
   private readonly router = inject(Router);
-  private readonly snackBar = inject(MatSnackBar);
+  private readonly offerUndo = offerUndo();
 
   private readonly data = liveQueryFor(this.id, notebookData);
   protected readonly notebook = computed(() => this.data()?.notebook);
@@ -118,8 +118,7 @@ export class NotebookView {
 
   protected async removePage(page: { id: string; title: string }): Promise<void> {
     await this.notebooks.removePage(page.id);
-    const undo = this.snackBar.open(`Page “${page.title || 'Untitled page'}” deleted.`, 'Undo', { duration: 8000 });
-    undo.onAction().subscribe(() => void this.notebooks.restorePage(page.id));
+    this.offerUndo(`Page “${page.title || 'Untitled page'}” deleted.`, () => this.notebooks.restorePage(page.id));
   }
 
   protected startEditing(): void {
