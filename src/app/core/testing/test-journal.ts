@@ -50,6 +50,19 @@ export async function until(check: () => boolean, fixture?: ComponentFixture<unk
   }
 }
 
+/**
+ * Waits until `check` passes (it may be async), letting change detection and live queries run in
+ * between; fails naming `what` after about 200 rounds.
+ */
+export async function waitFor(fixture: ComponentFixture<unknown>, check: () => unknown, what: string): Promise<void> {
+  for (let i = 0; i < 200; i++) {
+    await fixture.whenStable();
+    if (await check()) return;
+    await new Promise((resolve) => setTimeout(resolve, 5));
+  }
+  throw new Error(`gave up waiting for ${what}`);
+}
+
 /** The element's text with runs of whitespace as single spaces. */
 export function textOf(element: Element | null | undefined): string {
   return (element?.textContent ?? '').replace(/\s+/g, ' ').trim();
