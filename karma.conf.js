@@ -2,15 +2,19 @@
 // Used through the @angular/build:karma builder (`ng test`).
 const fs = require('node:fs');
 
-/** Prints `N passed, N failed` at the end and, when asked, writes the counts for scripts/test.mjs. */
+/**
+ * Prints `N passed, N failed` at the end and, when asked, writes the counts for scripts/test.mjs.
+ * A skipped spec (`xit`, `xdescribe`, or one left out because another is focused with `fit`)
+ * counts as failed, so a stray `x` or `f` cannot turn part of the suite off unnoticed.
+ */
 function SummaryReporter(baseReporterDecorator) {
   baseReporterDecorator(this);
   let passed = 0;
   let failed = 0;
   this.onSpecComplete = (_browser, result) => {
-    if (process.env.KARMA_VERBOSE) this.write(`\n  ${result.success ? 'ok' : 'FAIL'}  ${result.fullName}\n`);
-    if (result.skipped) return;
-    if (result.success) passed++;
+    const outcome = result.skipped ? 'SKIPPED (counted as failed)' : result.success ? 'ok' : 'FAIL';
+    if (process.env.KARMA_VERBOSE || result.skipped) this.write(`\n  ${outcome}  ${result.fullName}\n`);
+    if (result.success && !result.skipped) passed++;
     else failed++;
   };
   this.onRunComplete = (_browsers, results) => {
@@ -33,7 +37,7 @@ module.exports = function (config) {
     ],
     client: {
       clearContext: true,
-      jasmine: { random: true, seed: process.env.KARMA_SEED },
+      jasmine: { random: true, seed: process.env.KARMA_SEED, failSpecWithNoExpectations: true },
     },
     reporters: ['dots', 'summary'],
     browsers: ['ChromiumHeadlessLocal'],

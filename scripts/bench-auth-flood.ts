@@ -20,7 +20,7 @@ import { createDataSource } from '../sync-server/src/data-access/data-source';
 import { migrate } from '../sync-server/src/data-access/migrate';
 import { SyncStore } from '../sync-server/src/data-access/sync-store';
 import { signAccessToken } from '../sync-server/src/domain/access-tokens';
-import { createSmtpMailer } from '../sync-server/src/domain/mailer';
+import { createSmtpMailer } from '../sync-server/src/mail/mailer';
 import { closePasswordPools, hashPassword } from '../sync-server/src/domain/passwords';
 
 const PHASE_MS = 6_000;

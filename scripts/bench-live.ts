@@ -18,7 +18,7 @@ import path from 'node:path';
 
 import { quantile } from 'simple-statistics';
 
-import { DevInbox } from '../sync-server/src/dev-inbox/dev-inbox';
+import { DevInbox } from '../sync-server/src/mail/dev-inbox';
 import { MemoryDevice } from '../spec/support/memory-device';
 import { processUsage, registeredReader, serverProcessEnv, startServerProcess, type ServerProcess } from '../spec/support/server-process';
 import { SyncEventStream } from '../spec/support/sync-event-stream';

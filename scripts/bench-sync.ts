@@ -20,7 +20,7 @@ import { loadConfig } from '../sync-server/src/config';
 import { createDataSource } from '../sync-server/src/data-access/data-source';
 import { migrate } from '../sync-server/src/data-access/migrate';
 import { SyncStore } from '../sync-server/src/data-access/sync-store';
-import { createSmtpMailer } from '../sync-server/src/domain/mailer';
+import { createSmtpMailer } from '../sync-server/src/mail/mailer';
 import { signAccessToken } from '../sync-server/src/domain/access-tokens';
 
 const ROWS = 10_000;

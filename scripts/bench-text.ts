@@ -27,7 +27,7 @@ import { migrate } from '../sync-server/src/data-access/migrate';
 import { SyncStore } from '../sync-server/src/data-access/sync-store';
 import { TextStore, transactionalOf } from '../sync-server/src/data-access/text-store';
 import { signAccessToken } from '../sync-server/src/domain/access-tokens';
-import { createSmtpMailer } from '../sync-server/src/domain/mailer';
+import { createSmtpMailer } from '../sync-server/src/mail/mailer';
 
 const EDITS = 5_000;
 const TARGET_LENGTH = 50_000;

@@ -5,7 +5,7 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 
-import { DevInbox } from '../sync-server/src/dev-inbox/dev-inbox';
+import { DevInbox } from '../sync-server/src/mail/dev-inbox';
 import { restartLocalPostgres } from '../spec/support/postgres-restart';
 import { isClean, summary } from '../spec/sync-sim/fault-schedule';
 import { runRealChaos } from '../spec/sync-sim/real-chaos';

@@ -38,10 +38,10 @@ const cataloguePort = process.env.LAMPLIGHT_LOCAL_CATALOGUE_PORT ?? '41500';
 if (!process.env.LAMPLIGHT_CATALOGUE_URLS) env.LAMPLIGHT_CATALOGUE_URLS = `http://127.0.0.1:${cataloguePort}/sru`;
 
 console.log('Demo accounts (invented people):');
-run('node', ['dist/node/sync-server/src/seed.js'], { env });
+run('node', ['dist/node/sync-server/src/demo/seed.js'], { env });
 
 const children = [];
-const inbox = process.env.SMTP_URL ? null : spawn('node', ['dist/node/sync-server/src/dev-inbox/main.js'], { cwd: root, stdio: 'inherit', env });
+const inbox = process.env.SMTP_URL ? null : spawn('node', ['dist/node/sync-server/src/mail/dev-inbox-main.js'], { cwd: root, stdio: 'inherit', env });
 if (inbox) children.push(inbox);
 const catalogue = process.env.LAMPLIGHT_CATALOGUE_URLS
   ? null

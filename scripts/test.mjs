@@ -33,6 +33,8 @@ const env = {
  * success this one depends on.
  */
 const suites = [
+  { name: 'lint: ESLint with the boundary rule (no warnings)', command: [bin('eslint'), '--max-warnings', '0', '.'] },
+  { name: 'format: Prettier check', command: [bin('prettier'), '--check', '.'] },
   { name: 'type check: shared/', command: [bin('tsc'), '-p', 'shared/tsconfig.json'] },
   { name: 'type check: src/', command: [bin('tsc'), '-p', 'tsconfig.app.json', '--noEmit'] },
   { name: 'type check + compile: sync-server/, spec/, scripts/', id: 'node', command: [bin('tsc'), '-p', 'sync-server/tsconfig.json'] },

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { isoWeekOf } from './iso-week-of';
 import { isoWeeksOfYear } from './iso-weeks-of-year';
+import { expectProperty } from '../testing/expect-property';
 
 describe('isoWeeksOfYear', () => {
   it('lists the 53 weeks of 2026, from 29 December 2025 to 3 January 2027', () => {
@@ -25,7 +26,7 @@ describe('isoWeeksOfYear', () => {
   it('covers a year with whole Monday–Sunday weeks and no gaps', () => {
     // ISO 8601: each week runs Monday (1) to Sunday (7), and a week-numbering year is 364 or 371
     // days (Wikipedia, "ISO week date").
-    fc.assert(
+    expectProperty(
       fc.property(fc.integer({ min: 1600, max: 2400 }), (year) => {
         const weeks = isoWeeksOfYear(year);
         weeks.forEach((span, index) => {

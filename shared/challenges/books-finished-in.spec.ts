@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { booksFinishedIn } from './books-finished-in';
 import { ChallengeBook } from './challenge-book';
+import { expectProperty } from '../testing/expect-property';
 
 // Invented books.
 const book = (id: string, finishedOn: string | undefined, status = 'finished'): ChallengeBook => ({ id, title: `Saltmarsh ${id}`, authors: ['Kit Ashdown'], status, finishedOn });
@@ -26,7 +27,7 @@ describe('booksFinishedIn', () => {
   it('agrees with comparing time values, for any dates', () => {
     // Reference: ECMA-262 Date.parse of a date-only ISO string is UTC midnight of that day.
     const day = fc.date({ min: new Date('1900-01-01T00:00:00Z'), max: new Date('2100-12-31T00:00:00Z'), noInvalidDate: true }).map((date) => date.toISOString().slice(0, 10));
-    fc.assert(
+    expectProperty(
       fc.property(fc.array(day, { maxLength: 20 }), day, day, (days, a, b) => {
         const [start, end] = Date.parse(a) <= Date.parse(b) ? [a, b] : [b, a];
         const books = days.map((finishedOn, index) => book(`b${String(index).padStart(2, '0')}`, finishedOn));

@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { goalPacing } from './goal-pacing';
+import { expectProperty } from '../testing/expect-property';
 
 /** Whole days from 1 January to `day`, with plain ECMAScript Date (ECMA-262 Date.UTC: ms since epoch). */
 function referenceDaysGone(day: string): number {
@@ -116,7 +117,7 @@ describe('goalPacing', () => {
 
     it('counts days gone as plain Date arithmetic does', () => {
       // Reference: ECMA-262 time values, one day = 86 400 000 ms.
-      fc.assert(
+      expectProperty(
         fc.property(year, fc.integer({ min: 0, max: 365 }), (y, offset) => {
           const today = dayOf(y, offset);
           fc.pre(today.startsWith(String(y)));
@@ -126,7 +127,7 @@ describe('goalPacing', () => {
     });
 
     it('expects more (never less) as the days go by', () => {
-      fc.assert(
+      expectProperty(
         fc.property(year, target, fc.integer({ min: -10, max: 380 }), fc.integer({ min: -10, max: 380 }), (y, t, a, b) => {
           const [early, late] = a <= b ? [a, b] : [b, a];
           const first = goalPacing({ target: t, actual: 0, year: y, today: dayOf(y, early) });
@@ -138,7 +139,7 @@ describe('goalPacing', () => {
     });
 
     it('has difference = actual − expected, and a status that agrees with its sign', () => {
-      fc.assert(
+      expectProperty(
         fc.property(year, target, actual, fc.integer({ min: 0, max: 365 }), (y, t, done, offset) => {
           const pacing = goalPacing({ target: t, actual: done, year: y, today: dayOf(y, offset) });
           expect(pacing.difference).toBe(pacing.actual - pacing.expectedByToday);
@@ -149,7 +150,7 @@ describe('goalPacing', () => {
     });
 
     it('asks per week for exactly what closes the gap by 31 December', () => {
-      fc.assert(
+      expectProperty(
         fc.property(year, target, actual, fc.integer({ min: 0, max: 364 }), (y, t, done, offset) => {
           const pacing = goalPacing({ target: t, actual: done, year: y, today: dayOf(y, offset) });
           const daysLeft = pacing.daysInYear - pacing.daysElapsed;

@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { monthProgress } from './month-progress';
+import { expectProperty } from '../testing/expect-property';
 
 describe('monthProgress', () => {
   it('puts each unit with a target beside what was read', () => {
@@ -23,7 +24,7 @@ describe('monthProgress', () => {
 
   it('keeps remaining, fraction and met consistent', () => {
     // Definitions: remaining = max(0, target − actual); met ⇔ actual ≥ target ⇔ fraction ≥ 1.
-    fc.assert(
+    expectProperty(
       fc.property(fc.integer({ min: 1, max: 50_000 }), fc.integer({ min: 0, max: 50_000 }), (target, actual) => {
         const [row] = monthProgress({ targets: { pages: target }, actuals: { pages: actual } });
         expect(row.remaining).toBe(Math.max(0, target - actual));

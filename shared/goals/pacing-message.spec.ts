@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { goalPacing } from './goal-pacing';
 import { GOAL_UNITS } from './goal-unit';
 import { pacingMessage } from './pacing-message';
+import { expectProperty } from '../testing/expect-property';
 
 describe('pacingMessage', () => {
   // The figures are hand-worked in goal-pacing.spec.ts; the wording is ours.
@@ -47,7 +48,7 @@ describe('pacingMessage', () => {
     // Common practice in product writing (e.g. Mailchimp's Content Style Guide, from memory:
     // exclamation points sparingly, never to alarm); the words ruled out are our own choice.
     const scolding = /!|\b(behind|fail|failed|only|should|must|missed|late|hurry|need to)\b/i;
-    fc.assert(
+    expectProperty(
       fc.property(
         fc.integer({ min: 1, max: 20_000 }),
         fc.integer({ min: 0, max: 20_000 }),

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 
 import { lightPlainText, parseInline, parseLightFormat, type LightInline } from './light-format';
+import { expectProperty } from '../testing/expect-property';
 
 const text = (value: string): LightInline => ({ kind: 'text', text: value });
 const em = (...children: LightInline[]): LightInline => ({ kind: 'emphasis', children });
@@ -110,7 +111,7 @@ describe('light formatting', () => {
   it('never loses or invents words: the plain text is the typed text without markers (property)', () => {
     // Text without markers or special line starts comes back word for word.
     const word = fc.stringMatching(/^[A-Za-z0-9 .,;!?'"<>&()]{0,30}$/);
-    fc.assert(
+    expectProperty(
       fc.property(fc.array(word, { maxLength: 8 }), (lines) => {
         const typed = lines.map((line) => line.trim()).filter((line) => line !== '' && !/^[>]/.test(line));
         expect(lightPlainText(parseLightFormat(typed.join('\n')))).toBe(typed.join('\n'));
@@ -119,7 +120,7 @@ describe('light formatting', () => {
   });
 
   it('never throws, whatever is typed (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(fc.string({ unit: fc.constantFrom('*', '\\', '#', '-', '>', '[', ']', 'x', ' ', '\n', '\r', 'a') }), (typed) => {
         expect(() => parseLightFormat(typed)).not.toThrow();
       }),

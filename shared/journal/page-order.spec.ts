@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 
 import { appendPage, byPosition, MAX_POSITION, MIN_POSITION_GAP, movePage, placeAt, positionBetween, renumber, type Positioned } from './page-order';
+import { expectProperty } from '../testing/expect-property';
 
 /** Applies position writes to pages. */
 const apply = (pages: readonly Positioned[], writes: readonly { id: string; position: number }[]) => {
@@ -32,7 +33,7 @@ describe('page order', () => {
 
     it('gives a result strictly between any two positions in range with room between them (property)', () => {
       const position = fc.double({ min: -MAX_POSITION, max: MAX_POSITION, noNaN: true });
-      fc.assert(
+      expectProperty(
         fc.property(position, position, (x, y) => {
           const [before, after] = x < y ? [x, y] : [y, x];
           fc.pre(after - before >= MIN_POSITION_GAP);
@@ -101,7 +102,7 @@ describe('page order', () => {
 
   it('keeps every insert and move where it was asked, however many, renumbering when gaps get tiny (property)', () => {
     const step = fc.record({ kind: fc.constantFrom('insert', 'move'), at: fc.nat(), by: fc.constantFrom(-1 as const, 1 as const) });
-    fc.assert(
+    expectProperty(
       fc.property(fc.array(step, { minLength: 1, maxLength: 120 }), (steps) => {
         let pages: Positioned[] = [];
         let expected: string[] = [];

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { dailyLog } from './daily-log';
 import { DailyLogEntry, LogSession } from './log-session';
+import { expectProperty } from '../testing/expect-property';
 
 const session = (startedAt: string, endedAt: string, activeMinutes: number, pages?: number): LogSession => ({
   startedAt,
@@ -206,7 +207,7 @@ describe('dailyLog', () => {
   });
 
   it('keeps every minute and page (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(fc.array(quarterHourSession, { maxLength: 8 }), fc.constantFrom(...zones), (sessions, zone) => {
         const log = dailyLog(sessions, zone);
         const sum = (xs: number[]) => xs.reduce((a, b) => a + b, 0);
@@ -224,7 +225,7 @@ describe('dailyLog', () => {
   const anySession = fc.oneof(fc.record({ zone: fc.constantFrom(...zones), s: quarterHourSession }), nearTransition);
 
   it('matches a quarter-hour walk with Intl.DateTimeFormat (ECMA-402 reference) in odd zones (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(anySession, ({ zone, s }) => {
         fc.pre(s.activeMinutes > 0);
         const parts = new Intl.DateTimeFormat('en-US', { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit' });

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { dayFromIndex } from './day-from-index';
 import { dayIndex } from './day-index';
+import { expectProperty } from '../testing/expect-property';
 
 describe('dayFromIndex', () => {
   it('writes day numbers as dates', () => {
@@ -12,7 +13,7 @@ describe('dayFromIndex', () => {
   });
 
   it('is the inverse of dayIndex over years 0000–9999', () => {
-    fc.assert(
+    expectProperty(
       fc.property(fc.integer({ min: dayIndex('0000-01-01'), max: dayIndex('9999-12-31') }), (index) => {
         return dayIndex(dayFromIndex(index)) === index;
       }),

@@ -3,6 +3,7 @@ import { tz } from '@date-fns/tz';
 import fc from 'fast-check';
 import { dailyLog } from './daily-log';
 import { streaks } from './streaks';
+import { expectProperty } from '../testing/expect-property';
 
 describe('streaks', () => {
   it('counts a run ending today', () => {
@@ -59,7 +60,7 @@ describe('streaks', () => {
   });
 
   it('gives n for n days in a row ending today, built with date-fns addDays (npm reference) (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(
         fc.date({ min: new Date('2000-01-01T00:00:00Z'), max: new Date('2099-12-31T00:00:00Z'), noInvalidDate: true }),
         fc.integer({ min: 1, max: 800 }),
@@ -84,7 +85,7 @@ describe('streaks', () => {
 
   it('does not depend on order or duplicates, and longest ≥ current (property)', () => {
     const day = fc.integer({ min: 0, max: 60 }).map((i) => new Date(Date.UTC(2026, 0, 1 + i)).toISOString().slice(0, 10));
-    fc.assert(
+    expectProperty(
       fc.property(fc.array(day, { maxLength: 40 }), day, (days, today) => {
         const result = streaks(days, today);
         const again = streaks([...days].reverse().concat(days), today);

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { fallbackPace } from './fallback-pace';
 import { ForecastInput, forecastFinish } from './forecast-finish';
+import { expectProperty } from '../testing/expect-property';
 
 /** 300 pages at 30 pages/hour, 45 minutes a day, from 1 March 2026; override what a case needs. */
 const forecast = (changes: Partial<ForecastInput> = {}) =>
@@ -71,7 +72,7 @@ describe('forecastFinish', () => {
   it('finishes no earlier with more left, and no later with more minutes a day (property)', () => {
     const amount = fc.double({ min: 0, max: 2000, noNaN: true });
     const minutes = fc.double({ min: 1, max: 600, noNaN: true });
-    fc.assert(
+    expectProperty(
       fc.property(amount, amount, fc.double({ min: 1, max: 120, noNaN: true }), minutes, minutes, (a, b, rate, m1, m2) => {
         const pace = { format: 'print' as const, rate };
         const [less, more] = a <= b ? [a, b] : [b, a];

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { PaceSession, ReadingFormat } from './pace-session';
 import { personalPace } from './personal-pace';
+import { expectProperty } from '../testing/expect-property';
 
 /** A session on day `day` of March 2026 at 20:00Z, with `minutes` active and `progress` made. */
 const on = (day: number, minutes: number, progress: number, format: ReadingFormat = 'print', from = 0): PaceSession => {
@@ -74,7 +75,7 @@ describe('personalPace', () => {
     const tying = fc
       .tuple(fc.integer({ min: 1, max: 4 }), fc.constantFrom(30, 60), fc.integer({ min: 1, max: 120 }))
       .map(([day, minutes, pages]) => on(day, minutes, pages));
-    fc.assert(
+    expectProperty(
       fc.property(
         fc.array(fc.oneof(session, tying), { minLength: 3, maxLength: 25 }).chain((sessions) =>
           fc.tuple(
@@ -94,7 +95,7 @@ describe('personalPace', () => {
   it('is not moved by one outlier beyond the range of the other sessions (property)', () => {
     // Median breakdown point (a standard robust-statistics result): one extreme value among
     // three or more cannot take the median outside the range of the rest.
-    fc.assert(
+    expectProperty(
       fc.property(
         fc.array(session, { minLength: 2, maxLength: 9 }),
         fc.constantFrom(0.001, 1000),
@@ -109,7 +110,7 @@ describe('personalPace', () => {
   });
 
   it('scales with the reading: twice the pages in the same time is twice the pace (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(fc.array(session, { minLength: 3, maxLength: 12 }), (sessions) => {
         const doubled = sessions.map((s) => ({ ...s, toPosition: s.fromPosition + 2 * (s.toPosition - s.fromPosition) }));
         return Math.abs(personalPace(doubled, 'print')!.rate - 2 * personalPace(sessions, 'print')!.rate) < 1e-9;

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { LogSession } from '../reading-log/log-session';
 import { usualMinutesPerDay } from './usual-minutes-per-day';
+import { expectProperty } from '../testing/expect-property';
 
 const at = (iso: string, minutes: number): LogSession => ({
   startedAt: iso,
@@ -56,7 +57,7 @@ describe('usualMinutesPerDay', () => {
     const session = fc
       .tuple(fc.integer({ min: 0, max: 60 * 24 * 40 }), fc.integer({ min: 1, max: 240 }))
       .map(([minute, minutes]) => at(new Date(Date.UTC(2026, 1, 1) + minute * 60_000).toISOString(), minutes));
-    fc.assert(
+    expectProperty(
       fc.property(
         fc.array(session, { maxLength: 20 }),
         fc.constantFrom('UTC', 'America/Los_Angeles', 'Asia/Tokyo'),

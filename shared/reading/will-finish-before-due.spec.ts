@@ -3,6 +3,7 @@ import { dayFromIndex } from '../reading-log/day-from-index';
 import { dayIndex } from '../reading-log/day-index';
 import { fallbackPace } from './fallback-pace';
 import { DueForecastInput, willFinishBeforeDue } from './will-finish-before-due';
+import { expectProperty } from '../testing/expect-property';
 
 /** 300 pages at 30 pages/hour (600 minutes), 45 minutes a day, from 1 March 2026, due 14 March. */
 const due = (changes: Partial<DueForecastInput> = {}) =>
@@ -68,7 +69,7 @@ describe('willFinishBeforeDue', () => {
   });
 
   it('is likely exactly when the usual minutes reach the minutes needed (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(
         fc.integer({ min: 1, max: 2000 }),
         fc.integer({ min: 1, max: 120 }),

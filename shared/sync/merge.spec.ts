@@ -4,6 +4,7 @@ import type { PulledChange } from './field-change';
 import { formatHlc } from './hlc';
 import { mergeField } from './merge';
 import { mergeChanges, type FieldState } from './merge-changes';
+import { expectProperty } from '../testing/expect-property';
 
 /** Random changes over a small space of rows and fields, so they collide often. */
 const changeArb: fc.Arbitrary<PulledChange> = fc.record({
@@ -43,7 +44,7 @@ describe('Per-field last-writer-wins merge', () => {
   });
 
   it('is commutative: any order of the same changes gives the same state (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(changesArb.chain((changes) => fc.tuple(fc.constant(changes), fc.shuffledSubarray(changes, { minLength: changes.length }))), ([changes, shuffled]) => {
         expect(fold(shuffled)).toEqual(fold(changes));
       }),
@@ -51,7 +52,7 @@ describe('Per-field last-writer-wins merge', () => {
   });
 
   it('is associative: merging in batches, in any grouping, equals merging all at once (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(changesArb, fc.integer({ min: 0, max: 40 }), fc.integer({ min: 0, max: 40 }), (changes, i, j) => {
         const [cut1, cut2] = [Math.min(i, j, changes.length), Math.min(Math.max(i, j), changes.length)];
         const a = changes.slice(0, cut1);
@@ -67,7 +68,7 @@ describe('Per-field last-writer-wins merge', () => {
   });
 
   it('is idempotent: duplicates and re-sent batches change nothing (property)', () => {
-    fc.assert(
+    expectProperty(
       fc.property(changesArb, fc.array(fc.nat(), { maxLength: 30 }), (changes, picks) => {
         const duplicated = [...changes, ...picks.filter(() => changes.length > 0).map((p) => changes[p % changes.length]!)];
         expect(fold(duplicated)).toEqual(fold(changes));
@@ -79,7 +80,7 @@ describe('Per-field last-writer-wins merge', () => {
 
   it('ends every device in one state after random interleavings of their changes (property)', () => {
     // Three devices each see all changes, in their own order and with repeats.
-    fc.assert(
+    expectProperty(
       fc.property(
         changesArb.chain((changes) =>
           fc.tuple(

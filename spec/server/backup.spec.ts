@@ -10,7 +10,7 @@ import type { DataSource } from 'typeorm';
 import { createApp } from '../../sync-server/src/app';
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
 import { migrate } from '../../sync-server/src/data-access/migrate';
-import { createSmtpMailer } from '../../sync-server/src/domain/mailer';
+import { createSmtpMailer } from '../../sync-server/src/mail/mailer';
 import { bearer, registerReader } from '../support/accounts';
 import { uniquePng } from '../support/images';
 import { fieldChange } from '../support/sync-client';

@@ -2,7 +2,7 @@ import request from 'supertest';
 
 import { createApp } from '../../sync-server/src/app';
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
-import { createSmtpMailer } from '../../sync-server/src/domain/mailer';
+import { createSmtpMailer } from '../../sync-server/src/mail/mailer';
 import { bearer, registerReader } from '../support/accounts';
 import { startTcpProxy } from '../support/tcp-proxy';
 import { testDatabaseUrl } from '../support/test-database';

@@ -5,7 +5,7 @@ import request from 'supertest';
 
 import { createApp } from '../../sync-server/src/app';
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
-import { createSmtpMailer } from '../../sync-server/src/domain/mailer';
+import { createSmtpMailer } from '../../sync-server/src/mail/mailer';
 import { addressNetwork, createLogger, userIdHash } from '../../sync-server/src/observability/logger';
 import { bearer, GOOD_PASSWORD, registerReader, uniqueEmail } from '../support/accounts';
 import { fieldChange } from '../support/sync-client';

@@ -8,7 +8,7 @@ import { freePort } from '../../scripts/ops/processes';
 import { createApp } from '../../sync-server/src/app';
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
 import { migrate } from '../../sync-server/src/data-access/migrate';
-import { createSmtpMailer, type Mailer } from '../../sync-server/src/domain/mailer';
+import { createSmtpMailer, type Mailer } from '../../sync-server/src/mail/mailer';
 import { bearer, registerReader } from '../support/accounts';
 import { fieldChange } from '../support/sync-client';
 import { testDatabaseUrl, testDataSource } from '../support/test-database';

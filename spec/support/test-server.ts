@@ -8,8 +8,8 @@ import type { Express } from 'express';
 
 import { createApp } from '../../sync-server/src/app';
 import { loadConfig, type ServerConfig } from '../../sync-server/src/config';
-import { DevInbox } from '../../sync-server/src/dev-inbox/dev-inbox';
-import { createSmtpMailer, type Mailer } from '../../sync-server/src/domain/mailer';
+import { DevInbox } from '../../sync-server/src/mail/dev-inbox';
+import { createSmtpMailer, type Mailer } from '../../sync-server/src/mail/mailer';
 import { testDatabaseUrl, testDataSource } from './test-database';
 
 /** The built Angular app, for specs that serve it (npm test builds it before the e2e specs). */

@@ -17,9 +17,9 @@ import { InstallHelpDialog } from './core/pwa/install-help-dialog';
 import { InstallPrompt } from './core/pwa/install-prompt';
 import { TabCoordination } from './core/pwa/tab-coordination';
 import { SyncStatus } from './core/sync/sync-status/sync-status';
-import { SignOutFlow } from './features/account/sign-out/sign-out-flow';
-import { QuoteCapture } from './features/quotes/quote-capture';
-import { TimerBar } from './features/timer/timer-bar/timer-bar';
+import { SignOutFlow } from './features/account';
+import { QuoteCapture } from './features/quotes';
+import { TimerBar } from './features/timer';
 
 /** A place in the app the shell links to. */
 interface Destination {

@@ -7,7 +7,7 @@ import { Accounts } from './domain/accounts';
 import { AdminUsers } from './domain/admin-users';
 import { DeviceSessions } from './domain/device-sessions';
 import { EmailVerification } from './domain/email-verification';
-import type { Mailer } from './domain/mailer';
+import type { Mailer } from './mail/mailer';
 import { PasswordResets } from './domain/password-resets';
 import { Uploads } from './domain/uploads';
 import { adminRoutes } from './entry-points/admin.routes';

@@ -5,13 +5,18 @@ import { loadConfig } from './config';
 import { createDataSource } from './data-access/data-source';
 import { migrate } from './data-access/migrate';
 import { User } from './data-access/entities/user.entity';
-import { createSmtpMailer } from './domain/mailer';
+import { createSmtpMailer } from './mail/mailer';
+import { closeGracefully, exitOnUnexpectedError } from './process-lifecycle';
 import { createLogger } from './observability/logger';
 import { closePasswordPools } from './domain/passwords';
 import { startJobRunner } from './jobs/job-runner';
 
-/** Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it cleanly. */
+/**
+ * Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it gracefully:
+ * no new connections, the requests in flight are answered, then the pool closes.
+ */
 async function main(): Promise<void> {
+  exitOnUnexpectedError();
   const config = loadConfig();
   const logger = createLogger(config.logLevel);
   const dataSource = createDataSource(config.databaseUrl);
@@ -37,22 +42,19 @@ async function main(): Promise<void> {
   });
 
   let stopping = false;
-  const stop = (signal: string) => {
+  const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
-    logger.info(`${signal}: stopping Lamplight`);
-    server.close(() => {
-      mailer.close();
-      void jobs
-        .stop()
-        .catch((err: unknown) => logger.error(`Background jobs did not stop cleanly: ${String(err)}`))
-        .then(() => Promise.allSettled([dataSource.destroy(), closePasswordPools()]))
-        .finally(() => process.exit(0));
-    });
-    server.closeAllConnections();
+    logger.info(`${signal}: stopping Lamplight (finishing the requests in flight)`);
+    await closeGracefully(server);
+    mailer.close();
+    await jobs.stop().catch((err: unknown) => logger.error(`Background jobs did not stop cleanly: ${String(err)}`));
+    await Promise.allSettled([dataSource.destroy(), closePasswordPools()]);
+    logger.info('Lamplight stopped');
+    process.exit(0);
   };
-  process.on('SIGINT', () => stop('SIGINT'));
-  process.on('SIGTERM', () => stop('SIGTERM'));
+  process.on('SIGINT', () => void stop('SIGINT'));
+  process.on('SIGTERM', () => void stop('SIGTERM'));
 }
 
 main().catch((err: unknown) => {

@@ -1,4 +1,4 @@
-import type { OutgoingMail } from './mailer';
+import type { OutgoingMail } from '../mail/mailer';
 
 /** The minutes a reset link stays valid. */
 export const RESET_LINK_MINUTES = 30;

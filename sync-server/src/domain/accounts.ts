@@ -10,7 +10,7 @@ import { ownedUploadIds, removeOrphanedUploads } from '../data-access/upload-sto
 import { welcomeMail } from './account-mail';
 import type { DeviceSessions } from './device-sessions';
 import type { EmailVerification } from './email-verification';
-import type { Mailer } from './mailer';
+import type { Mailer } from '../mail/mailer';
 import { hashPassword, verifyPassword } from './passwords';
 
 /** The same answer for an unknown e-mail and a wrong password, so neither can be probed. */

@@ -6,7 +6,7 @@ import { AppError } from '../errors';
 import { User } from '../data-access/entities/user.entity';
 import { TOKEN_ISSUER } from './access-tokens';
 import { verificationMail } from './account-mail';
-import type { Mailer } from './mailer';
+import type { Mailer } from '../mail/mailer';
 
 /** Days a verification link stays valid. */
 export const VERIFY_LINK_DAYS = 7;

@@ -6,7 +6,7 @@ import { PasswordReset } from '../data-access/entities/password-reset.entity';
 import { User } from '../data-access/entities/user.entity';
 import { passwordResetMail, RESET_LINK_MINUTES } from './account-mail';
 import type { DeviceSessions } from './device-sessions';
-import type { Mailer } from './mailer';
+import type { Mailer } from '../mail/mailer';
 import { hashPassword } from './passwords';
 import { hashSecretToken, newSecretToken } from './secret-tokens';
 

@@ -2,7 +2,7 @@ import { Router } from 'express';
 
 import { adminUserUpdateInput } from '../../../shared/account/account-input';
 import type { AdminUsers } from '../domain/admin-users';
-import { readCaughtMail } from '../dev-inbox/caught-mail';
+import { readCaughtMail } from '../mail/caught-mail';
 import { AppError } from '../errors';
 import { parseInput, uuidParam } from './parse-input';
 import { callerOf } from './require-auth';

@@ -336,6 +336,7 @@ describe('SyncEngine', () => {
       void engine.syncNow();
       (await sent(backend, '/api/sync/pull')).flush(emptyPage('cursor-1'));
       await until(() => engine.phase() === 'idle', 'the sync is done');
+      expect(engine.phase()).toBe('idle');
     });
   });
 

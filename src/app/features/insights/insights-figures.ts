@@ -6,7 +6,7 @@ import type { MonthPace } from '@shared/insights/monthly-pace';
 import type { RatingSpread } from '@shared/insights/rating-spread';
 import type { TopTerms } from '@shared/insights/top-terms';
 
-import { goalAmount, UNIT_LABELS } from '../goals/goal-figures';
+import { goalAmount, UNIT_LABELS } from '../../ui/goal-figures';
 import type { ChartModel } from './chart-model';
 
 const FORMAT_LABELS = { print: 'Print', ebook: 'Ebook', audiobook: 'Audiobook' } as const;

@@ -4,7 +4,7 @@ import { booksFinishedIn } from '@shared/challenges/books-finished-in';
 import { yearPeriod } from '@shared/goals/amounts-in';
 import type { Book } from '@shared/sync/schema/collections';
 
-import { goalRecord, type GoalRecord } from '../goals/goal-rows';
+import { goalRecord, type GoalRecord } from '../../core/read-model/goal-rows';
 
 /** The reader's journal as the insights of one year read it. */
 export interface InsightsYear {

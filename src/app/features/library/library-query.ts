@@ -1,4 +1,5 @@
 import type { Book } from '@shared/sync/schema/collections';
+import { foldSearchText as fold } from '@shared/text/fold-search-text';
 
 /** What the library view is asked to show. */
 export interface LibraryQuery {
@@ -16,14 +17,6 @@ const collator = new Intl.Collator(undefined, { sensitivity: 'base', numeric: tr
 /** The words a book is found by: title, subtitle, authors, ISBN, tags; lower-cased, accents folded. */
 export function searchText(book: Book): string {
   return fold([book.title, book.subtitle, ...(book.authors ?? []), book.isbn, ...(book.tags ?? []), ...(book.genres ?? [])].join(' '));
-}
-
-/** Lower case without diacritics, so "Émile" is found by "emile". */
-export function fold(text: string | null | undefined): string {
-  return (text ?? '')
-    .normalize('NFD')
-    .replace(/\p{M}/gu, '')
-    .toLowerCase();
 }
 
 /**

@@ -4,7 +4,7 @@ import { STARTER_TEMPLATES } from '@shared/journal/starter-templates';
 import type { NotebookPage, PageTemplate } from '@shared/sync/schema/collections';
 
 import { Notebooks } from './notebooks';
-import { openTestJournal, type TestJournal } from './testing/test-journal';
+import { openTestJournal, type TestJournal } from '../../core/testing/test-journal';
 
 describe('Notebooks (real IndexedDB)', () => {
   let journal: TestJournal;

@@ -1,6 +1,5 @@
 import type { Book, Quote } from '@shared/sync/schema/collections';
-
-import { fold } from '../library/library-query';
+import { foldSearchText as fold } from '@shared/text/fold-search-text';
 
 /** What the quotes screen is asked to show. */
 export interface QuoteQuery {

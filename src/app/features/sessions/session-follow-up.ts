@@ -5,7 +5,7 @@ import { firstValueFrom } from 'rxjs';
 import type { Book } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../core/data/journal-store';
-import { BookStatus } from '../library/book-status';
+import { BookStatus } from '../../core/read-model/book-status';
 import { bookEnd } from './book-position';
 import { FinishDialog, type FinishDialogData } from './finish-dialog';
 

@@ -3,7 +3,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 
 import { Auth } from '../../core/auth/auth';
-import { SignOutFlow } from '../account/sign-out/sign-out-flow';
+import { SignOutFlow } from '../account';
 import { ChangePassword } from './change-password/change-password';
 import { DeleteAccount } from './delete-account/delete-account';
 import { Devices } from './devices/devices';

@@ -8,7 +8,7 @@ import type { Book, Session } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../core/data/journal-store';
 import { minutesWords } from './book-progress';
-import { ConfirmDialog, type ConfirmDialogData } from './confirm-dialog/confirm-dialog';
+import { ConfirmDialog, type ConfirmDialogData } from '../../ui/confirm-dialog/confirm-dialog';
 import { ReadingTimer } from './reading-timer';
 
 /**

@@ -8,8 +8,8 @@ import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 
 import { AccountPage } from '../account-page/account-page';
-import { fieldError } from '../field-errors';
-import { FormSubmission } from '../form-submission';
+import { fieldError } from '../../../ui/field-errors';
+import { FormSubmission } from '../../../ui/form-submission';
 
 /** Ask for a link to choose a new password. The answer never says whether the address exists. */
 @Component({

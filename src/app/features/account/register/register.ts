@@ -11,9 +11,9 @@ import { PASSWORD_MIN_LENGTH } from '@shared/account/password-policy';
 
 import { Auth } from '../../../core/auth/auth';
 import { AccountPage } from '../account-page/account-page';
-import { fieldError } from '../field-errors';
-import { FormSubmission } from '../form-submission';
-import { passwordPolicy } from '../password-validator';
+import { fieldError } from '../../../ui/field-errors';
+import { FormSubmission } from '../../../ui/form-submission';
+import { passwordPolicy } from '../../../ui/password-validator';
 
 /** Create an account: e-mail, a name to show and a long password (no composition rules). */
 @Component({

@@ -10,9 +10,9 @@ import { firstValueFrom } from 'rxjs';
 import { PASSWORD_MIN_LENGTH } from '@shared/account/password-policy';
 
 import { AccountPage } from '../account-page/account-page';
-import { fieldError } from '../field-errors';
-import { FormSubmission } from '../form-submission';
-import { passwordPolicy } from '../password-validator';
+import { fieldError } from '../../../ui/field-errors';
+import { FormSubmission } from '../../../ui/form-submission';
+import { passwordPolicy } from '../../../ui/password-validator';
 
 /**
  * The page a reset link opens. The token travels in the URL fragment (`#token=…`), which

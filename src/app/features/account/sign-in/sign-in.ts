@@ -8,8 +8,8 @@ import { Router, RouterLink } from '@angular/router';
 
 import { Auth } from '../../../core/auth/auth';
 import { AccountPage } from '../account-page/account-page';
-import { fieldError } from '../field-errors';
-import { FormSubmission } from '../form-submission';
+import { fieldError } from '../../../ui/field-errors';
+import { FormSubmission } from '../../../ui/form-submission';
 
 /** Sign in with e-mail and password; needed once per device, then the journal opens offline. */
 @Component({

@@ -1,16 +1,15 @@
 import { DatePipe, DecimalPipe } from '@angular/common';
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatSlideToggleModule, type MatSlideToggleChange } from '@angular/material/slide-toggle';
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
-import { firstValueFrom } from 'rxjs';
 
 import type { AdminUserView } from '@shared/account/account-input';
 
 import { Auth } from '../../../core/auth/auth';
 import { readableError } from '../../../core/http/api-error-message';
+import { AdminApi } from '../admin-api';
 
 /** Admins see accounts (never their journals), and can disable one or change its role. */
 @Component({
@@ -21,7 +20,7 @@ import { readableError } from '../../../core/http/api-error-message';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class Accounts {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(AdminApi);
   protected readonly me = inject(Auth).user;
 
   protected readonly columns = ['name', 'email', 'role', 'created', 'lastSeen', 'stored', 'enabled'];
@@ -34,7 +33,7 @@ export class Accounts {
 
   private async load(): Promise<void> {
     try {
-      this.users.set(await firstValueFrom(this.http.get<AdminUserView[]>('/api/admin/users')));
+      this.users.set(await this.api.users());
     } catch (error) {
       this.problem.set(readableError(error).message);
     }
@@ -52,7 +51,7 @@ export class Accounts {
   /** Resolves whether the server took the change. */
   private async update(user: AdminUserView, change: Partial<Pick<AdminUserView, 'disabled' | 'role'>>): Promise<boolean> {
     try {
-      const updated = await firstValueFrom(this.http.patch<AdminUserView>(`/api/admin/users/${user.id}`, change));
+      const updated = await this.api.updateUser(user.id, change);
       this.users.update((list) => list.map((u) => (u.id === updated.id ? updated : u)));
       this.problem.set('');
       return true;

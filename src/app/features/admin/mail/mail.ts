@@ -1,12 +1,11 @@
 import { DatePipe } from '@angular/common';
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { RouterLink } from '@angular/router';
-import { firstValueFrom } from 'rxjs';
 
 import type { CaughtMail } from '@shared/account/account-input';
 
 import { readableError } from '../../../core/http/api-error-message';
+import { AdminApi } from '../admin-api';
 
 /** Development only: the mail the local inbox caught, so a reset link can be followed locally. */
 @Component({
@@ -17,7 +16,7 @@ import { readableError } from '../../../core/http/api-error-message';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class Mail {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(AdminApi);
   protected readonly messages = signal<readonly CaughtMail[]>([]);
   protected readonly problem = signal('');
 
@@ -27,7 +26,7 @@ export class Mail {
   }
 
   constructor() {
-    firstValueFrom(this.http.get<CaughtMail[]>('/api/admin/mail')).then(
+    this.api.caughtMail().then(
       (messages) => this.messages.set(messages),
       (error: unknown) => this.problem.set(readableError(error).message),
     );

@@ -4,7 +4,7 @@ import { Router } from '@angular/router';
 import type { Challenge } from '@shared/sync/schema/collections';
 
 import type { JournalDb } from '../../../core/data/journal-db';
-import { field, setUpGoalSpec, textOf, type, until } from '../../goals/testing/goal-fixtures';
+import { field, setUpGoalSpec, textOf, type, until } from '../../../core/testing/goal-fixtures';
 import { ChallengeEditor } from './challenge-editor';
 
 describe('ChallengeEditor', () => {

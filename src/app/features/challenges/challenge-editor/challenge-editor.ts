@@ -17,8 +17,8 @@ import { CHALLENGE_KINDS, type Challenge } from '@shared/sync/schema/collections
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { readerToday } from '../../goals/reader-today';
-import { defaultChallengeName, KIND_LABELS } from '../challenge-labels';
+import { readerToday } from '../../../core/time/reader-today';
+import { defaultChallengeName, KIND_LABELS } from '../../../ui/challenge-labels';
 import { periodLine } from '../challenge-period';
 import { challengeFormValidator, countTarget, newChallengeFields, weekYear, type ChallengeFormValue } from './challenge-form';
 

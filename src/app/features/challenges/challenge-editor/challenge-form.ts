@@ -4,7 +4,7 @@ import { isoWeeksOfYear } from '@shared/calendar/iso-weeks-of-year';
 import type { PatchOf } from '@shared/sync/schema/collection';
 import type { Challenge, challenges } from '@shared/sync/schema/collections';
 
-import { defaultChallengeName } from '../challenge-labels';
+import { defaultChallengeName } from '../../../ui/challenge-labels';
 
 /** The new-challenge form's values. */
 export interface ChallengeFormValue {

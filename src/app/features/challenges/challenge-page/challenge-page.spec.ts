@@ -4,8 +4,8 @@ import type { Challenge } from '@shared/sync/schema/collections';
 
 import type { JournalDb } from '../../../core/data/journal-db';
 import type { JournalStore } from '../../../core/data/journal-store';
-import { choose, JULY_FIRST_NOON_LA, setUpGoalSpec, textOf, until } from '../../goals/testing/goal-fixtures';
-import { BOOK, seedLibrary } from '../../goals/testing/seed';
+import { choose, JULY_FIRST_NOON_LA, setUpGoalSpec, textOf, until } from '../../../core/testing/goal-fixtures';
+import { BOOK, seedLibrary } from '../../../core/testing/seed';
 import { ChallengePage } from './challenge-page';
 
 describe('ChallengePage', () => {

@@ -6,7 +6,6 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 
 import { booksFinishedIn } from '@shared/challenges/books-finished-in';
@@ -17,13 +16,14 @@ import type { Challenge } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank } from '../../account/field-errors';
-import { goalRecord } from '../../goals/goal-rows';
-import { OneAtATime } from '../../goals/one-at-a-time';
+import { fieldError, notBlank } from '../../../ui/field-errors';
+import { goalRecord } from '../../../core/read-model/goal-rows';
+import { OneAtATime } from '../../../core/tasks/one-at-a-time';
 import { celebrateOnce } from '../celebrate-once';
 import { ChallengeCelebration } from '../challenge-celebration/challenge-celebration';
-import { KIND_LABELS, progressLine, progressPercent } from '../challenge-labels';
+import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challenge-labels';
 import { periodLine } from '../challenge-period';
+import { offerUndo } from '../../../ui/offer-undo';
 
 type Prompt = NonNullable<Challenge['prompts']>[number];
 
@@ -58,7 +58,7 @@ export class ChallengePage {
   private readonly store = inject(JournalStore);
   private readonly promptUpdates = new OneAtATime();
   private readonly router = inject(Router);
-  private readonly snackBar = inject(MatSnackBar);
+  private readonly offerUndo = offerUndo();
   private readonly record = goalRecord();
   protected readonly loaded = computed(() => this.record.rows() !== null);
   protected readonly today = this.record.today;
@@ -192,10 +192,7 @@ export class ChallengePage {
     const name = this.challenge()?.name ?? 'The challenge';
     await this.store.remove('challenges', id);
     await this.router.navigate(['/goals/challenges']);
-    this.snackBar
-      .open(`${name} removed`, 'Undo', { duration: 8000 })
-      .onAction()
-      .subscribe(() => void this.store.write('challenges', id, { deleted: false }));
+    this.offerUndo(`${name} removed`, () => this.store.write('challenges', id, { deleted: false }));
   }
 
   /**

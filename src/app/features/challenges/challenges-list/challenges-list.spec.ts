@@ -1,8 +1,8 @@
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 
 import type { JournalStore } from '../../../core/data/journal-store';
-import { setUpGoalSpec, textOf, until } from '../../goals/testing/goal-fixtures';
-import { seedLibrary } from '../../goals/testing/seed';
+import { setUpGoalSpec, textOf, until } from '../../../core/testing/goal-fixtures';
+import { seedLibrary } from '../../../core/testing/seed';
 import { ChallengesList } from './challenges-list';
 
 describe('ChallengesList', () => {

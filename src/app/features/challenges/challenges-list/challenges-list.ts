@@ -6,10 +6,10 @@ import { RouterLink } from '@angular/router';
 
 import { challengeProgress } from '@shared/challenges/challenge-progress';
 
-import { goalRecord } from '../../goals/goal-rows';
+import { goalRecord } from '../../../core/read-model/goal-rows';
 import { celebrateOnce } from '../celebrate-once';
 import { ChallengeCelebration } from '../challenge-celebration/challenge-celebration';
-import { KIND_LABELS, progressLine, progressPercent } from '../challenge-labels';
+import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challenge-labels';
 import { periodLine } from '../challenge-period';
 
 /** Every challenge, running ones first, with its progress. */

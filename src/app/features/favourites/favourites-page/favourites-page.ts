@@ -11,8 +11,8 @@ import { FAVOURITE_KINDS, type Book, type Favourite, type MonthPick, type Quote 
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
-import { fieldError } from '../../account/field-errors';
-import { readerToday } from '../../goals/reader-today';
+import { fieldError } from '../../../ui/field-errors';
+import { readerToday } from '../../../core/time/reader-today';
 
 const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'Book', author: 'Author', quote: 'Quote' };
 

@@ -5,8 +5,8 @@ import type { YearPlan } from '@shared/sync/schema/collections';
 
 import type { JournalDb } from '../../../core/data/journal-db';
 import type { JournalStore } from '../../../core/data/journal-store';
-import { choose, field, setUpGoalSpec, textOf, type, until } from '../testing/goal-fixtures';
-import { BOOK, seedLibrary } from '../testing/seed';
+import { choose, field, setUpGoalSpec, textOf, type, until } from '../../../core/testing/goal-fixtures';
+import { BOOK, seedLibrary } from '../../../core/testing/seed';
 import { GoalsPage } from './goals-page';
 
 describe('GoalsPage', () => {

@@ -19,10 +19,10 @@ import type { YearPlan } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { KIND_LABELS, progressLine, progressPercent } from '../../challenges/challenge-labels';
-import { goalAmount, goalFigure, signedFigure, UNIT_LABELS } from '../goal-figures';
-import { goalRecord } from '../goal-rows';
-import { OneAtATime } from '../one-at-a-time';
+import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challenge-labels';
+import { goalAmount, goalFigure, signedFigure, UNIT_LABELS } from '../../../ui/goal-figures';
+import { goalRecord } from '../../../core/read-model/goal-rows';
+import { OneAtATime } from '../../../core/tasks/one-at-a-time';
 import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
 
 type OtherGoal = NonNullable<YearPlan['otherGoals']>[number];

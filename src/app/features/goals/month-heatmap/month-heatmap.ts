@@ -3,8 +3,8 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
-import { goalAmount } from '../goal-figures';
-import { HeatmapLegend } from '../heatmap-legend/heatmap-legend';
+import { goalAmount } from '../../../ui/goal-figures';
+import { HeatmapLegend } from '../../../ui/heatmap-legend/heatmap-legend';
 import { monthHeatmap } from './month-heatmap-cells';
 
 /**

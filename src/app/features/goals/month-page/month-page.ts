@@ -18,8 +18,8 @@ import type { MonthPlan } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { amountsLine, goalAmount, goalFigure, UNIT_LABELS } from '../goal-figures';
-import { goalRecord } from '../goal-rows';
+import { amountsLine, goalAmount, goalFigure, UNIT_LABELS } from '../../../ui/goal-figures';
+import { goalRecord } from '../../../core/read-model/goal-rows';
 import { MonthHeatmap } from '../month-heatmap/month-heatmap';
 import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
 

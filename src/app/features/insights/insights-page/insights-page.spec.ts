@@ -1,8 +1,8 @@
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 
 import type { JournalStore } from '../../../core/data/journal-store';
-import { setUpGoalSpec, textOf, until } from '../../goals/testing/goal-fixtures';
-import { BOOK, seedLibrary } from '../../goals/testing/seed';
+import { setUpGoalSpec, textOf, until } from '../../../core/testing/goal-fixtures';
+import { BOOK, seedLibrary } from '../../../core/testing/seed';
 import { InsightsPage } from './insights-page';
 
 describe('InsightsPage', () => {

@@ -12,7 +12,7 @@ import { ratingSpread } from '@shared/insights/rating-spread';
 import { topTerms } from '@shared/insights/top-terms';
 
 import { TIME_ZONE } from '../../../core/time/time-zone';
-import { UNIT_LABELS } from '../../goals/goal-figures';
+import { UNIT_LABELS } from '../../../ui/goal-figures';
 import { InsightsChart } from '../insights-chart/insights-chart';
 import { formatsChart, monthlyChart, paceChart, ratingsChart, termsChart } from '../insights-figures';
 import { insightsYear } from '../insights-year';

@@ -3,7 +3,7 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
-import { HeatmapLegend } from '../../goals/heatmap-legend/heatmap-legend';
+import { HeatmapLegend } from '../../../ui/heatmap-legend/heatmap-legend';
 import { yearHeatmapLayout } from './year-heatmap-layout';
 
 /**

@@ -3,8 +3,8 @@ import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import { deterministicId } from '@shared/sync/deterministic-id';
 
 import type { JournalStore } from '../../../core/data/journal-store';
-import { setUpGoalSpec, textOf, until } from '../../goals/testing/goal-fixtures';
-import { BOOK, seedLibrary } from '../../goals/testing/seed';
+import { setUpGoalSpec, textOf, until } from '../../../core/testing/goal-fixtures';
+import { BOOK, seedLibrary } from '../../../core/testing/seed';
 import { YearReview } from './year-review';
 
 describe('YearReview', () => {

@@ -9,7 +9,7 @@ import { yearReview } from '@shared/insights/year-review';
 import { deterministicId } from '@shared/sync/deterministic-id';
 
 import { Auth } from '../../../core/auth/auth';
-import { goalAmount } from '../../goals/goal-figures';
+import { goalAmount } from '../../../ui/goal-figures';
 import { InsightsChart } from '../insights-chart/insights-chart';
 import { formatsChart } from '../insights-figures';
 import { insightsYear } from '../insights-year';

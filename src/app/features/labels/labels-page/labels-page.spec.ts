@@ -3,10 +3,10 @@ import { TestBed, type ComponentFixture } from '@angular/core/testing';
 import { STARTER_LABELS } from '@shared/journal/starter-labels';
 import type { Book, Label } from '@shared/sync/schema/collections';
 
-import { choose, field, textOf, type } from '../../goals/testing/goal-fixtures';
-import { queryLibrary, searchText } from '../../library/library-query';
-import { openTestJournal, until, type TestJournal } from '../../notebooks/testing/test-journal';
-import { LabelChips } from '../label-chips/label-chips';
+import { choose, field, textOf, type } from '../../../core/testing/goal-fixtures';
+import { queryLibrary, searchText } from '../../library';
+import { openTestJournal, until, type TestJournal } from '../../../core/testing/test-journal';
+import { LabelChips } from '../../../ui/label-chips/label-chips';
 import { LabelsPage } from './labels-page';
 
 const starter = (name: string) => STARTER_LABELS.find((label) => label.name === name)!;

@@ -8,8 +8,8 @@ import { MatInputModule } from '@angular/material/input';
 import { LABEL_COLOURS, LABEL_ICONS, type Label } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { fieldError, notBlank } from '../../account/field-errors';
-import { LabelDirectory, type LabelView } from '../label-directory';
+import { fieldError, notBlank } from '../../../ui/field-errors';
+import { LabelDirectory, type LabelView } from '../../../core/read-model/label-directory';
 
 /** Words for our colours and icons, so choices read well to everyone. */
 const COLOUR_NAMES: Record<NonNullable<Label['colour']>, string> = {

@@ -8,8 +8,8 @@ import type { Book } from '@shared/sync/schema/collections';
 import { leaveAnswer, leaveQuestion, untilTicked } from '../../../core/pwa/testing/leave-question';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { unsavedWorkGuard } from '../../../core/pwa/unsaved-work-guard';
-import { choose, field, type } from '../../goals/testing/goal-fixtures';
-import { openTestJournal, textOf, type TestJournal } from '../../notebooks/testing/test-journal';
+import { choose, field, type } from '../../../core/testing/goal-fixtures';
+import { openTestJournal, textOf, type TestJournal } from '../../../core/testing/test-journal';
 import { BookEditor } from './book-editor';
 
 @Component({ selector: 'll-book-page-stub', template: '<p>The book</p>' })

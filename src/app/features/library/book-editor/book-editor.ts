@@ -18,11 +18,11 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
+import { LabelPicker } from '../../../ui/label-picker/label-picker';
+import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../../../ui/book-labels';
+import { BookStatus } from '../../../core/read-model/book-status';
 import { CatalogueFill, CatalogueSearch, FILLABLE_FIELDS, PendingLookups, type FillInResult, type FillValues } from '../../catalogue';
-import { LabelPicker } from '../../labels/label-picker/label-picker';
-import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
-import { BookStatus } from '../book-status';
 import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
 

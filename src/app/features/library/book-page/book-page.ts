@@ -1,11 +1,8 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
-import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
-import { liveQuery } from 'dexie';
-import { combineLatest, from, of, switchMap } from 'rxjs';
 
 import { BOOK_STATUSES, type Book, type BookStatusChange, type Reading, type Series } from '@shared/sync/schema/collections';
 
@@ -14,16 +11,16 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { BookCover } from '../../../core/covers/book-cover/book-cover';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { OverwrittenNote } from '../../../core/sync/overwritten-note/overwritten-note';
-import { BookQuotes } from '../../quotes/book-quotes/book-quotes';
-import { QuoteCapture } from '../../quotes/quote-capture';
-import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../book-labels';
-import { BookNotebooks } from '../../notebooks/book-notebooks/book-notebooks';
 import { CatalogueOffer } from '../../catalogue';
-import { BookStatus } from '../book-status';
-import { StarRating } from '../star-rating/star-rating';
-import { LabelChips } from '../../labels/label-chips/label-chips';
-import { BookReading } from '../../sessions/book-reading/book-reading';
-import { TimerStartButton } from '../../timer/timer-start-button/timer-start-button';
+import { BookQuotes, QuoteCapture } from '../../quotes';
+import { authorLine, COPY_LABELS, FORMAT_LABELS, lengthLine, RECOMMEND_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../../../ui/book-labels';
+import { BookNotebooks } from '../../notebooks';
+import { BookStatus } from '../../../core/read-model/book-status';
+import { StarRating } from '../../../ui/star-rating/star-rating';
+import { LabelChips } from '../../../ui/label-chips/label-chips';
+import { BookReading } from '../../sessions';
+import { TimerStartButton } from '../../timer';
+import { liveQueryFor } from '../../../core/data/live-query-for';
 
 /** Everything the reader keeps about one book, on this device, together with what is linked to it. */
 interface BookDossier {
@@ -74,15 +71,10 @@ export class BookPage {
   /** The book's id, from the route. */
   readonly id = input.required<string>();
 
-  private readonly journal = inject(LocalJournal);
   private readonly store = inject(JournalStore);
   private readonly bookStatus = inject(BookStatus);
   private readonly quoteCapture = inject(QuoteCapture);
-  private readonly data = toSignal(
-    combineLatest([toObservable(this.journal.db), toObservable(this.id)]).pipe(
-      switchMap(([db, id]) => (db ? from(liveQuery(() => dossier(db, id))) : of(undefined))),
-    ),
-  );
+  private readonly data = liveQueryFor(this.id, dossier);
   protected readonly book = computed(() => this.data()?.book);
   protected readonly readings = computed(() => this.data()?.readings ?? []);
   protected readonly history = computed(() => this.data()?.history ?? []);

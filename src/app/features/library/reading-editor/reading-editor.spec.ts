@@ -6,7 +6,7 @@ import { localTextState } from '@shared/text/local-text';
 import { loadTextDoc, textDocName } from '@shared/text/text-doc';
 import { encodeTextBytes } from '@shared/text/text-value';
 
-import { openTestJournal, until, type TestJournal } from '../../notebooks/testing/test-journal';
+import { openTestJournal, until, type TestJournal } from '../../../core/testing/test-journal';
 import { ReadingEditor } from './reading-editor';
 
 describe('ReadingEditor (review and takeaways as mergeable texts)', () => {

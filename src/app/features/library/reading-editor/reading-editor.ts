@@ -13,8 +13,8 @@ import { JournalStore, type RowWrite } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { MergeableTextarea, type PendingEdits } from '../../../core/text/mergeable-textarea';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, showServerErrors } from '../../account/field-errors';
-import { RECOMMEND_LABELS } from '../book-labels';
+import { fieldError, showServerErrors } from '../../../ui/field-errors';
+import { RECOMMEND_LABELS } from '../../../ui/book-labels';
 import {
   changedReadingFields,
   EMPTY_READING_FORM,

@@ -1,7 +1,7 @@
 import { TestBed } from '@angular/core/testing';
 
 import { Notebooks } from '../notebooks';
-import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
+import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { BookNotebooks } from './book-notebooks';
 
 describe('BookNotebooks', () => {
@@ -35,5 +35,6 @@ describe('BookNotebooks', () => {
     fixture.componentRef.setInput('bookId', bookId);
     const element = fixture.nativeElement as HTMLElement;
     await until(() => textOf(element).includes('No notebook is about this book yet.'), fixture);
+    expect(element.querySelectorAll('ul.notebooks li').length).toBe(0);
   });
 });

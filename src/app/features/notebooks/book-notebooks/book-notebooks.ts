@@ -1,14 +1,11 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
-import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
-import { liveQuery } from 'dexie';
-import { combineLatest, from, of, switchMap } from 'rxjs';
 
 import type { JournalDb } from '../../../core/data/journal-db';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { summarizeNotebooks } from '../notebook-data';
+import { liveQueryFor } from '../../../core/data/live-query-for';
 
 async function notebooksAbout(db: JournalDb, bookId: string) {
   // Readers keep few notebooks, so a scan is fine (notebooks are not indexed by book).
@@ -33,12 +30,7 @@ export class BookNotebooks {
   /** The book whose notebooks to list. */
   readonly bookId = input.required<string>();
 
-  private readonly journal = inject(LocalJournal);
-  private readonly found = toSignal(
-    combineLatest([toObservable(this.journal.db), toObservable(this.bookId)]).pipe(
-      switchMap(([db, bookId]) => (db ? from(liveQuery(() => notebooksAbout(db, bookId))) : of([]))),
-    ),
-  );
+  private readonly found = liveQueryFor(this.bookId, notebooksAbout);
   protected readonly notebooks = computed(() => this.found() ?? []);
   protected readonly loaded = computed(() => this.found() !== undefined);
 }

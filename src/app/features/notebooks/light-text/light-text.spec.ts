@@ -1,6 +1,6 @@
 import { TestBed } from '@angular/core/testing';
 
-import { textOf } from '../testing/test-journal';
+import { textOf } from '../../../core/testing/test-journal';
 import { LightText } from './light-text';
 
 describe('LightText', () => {

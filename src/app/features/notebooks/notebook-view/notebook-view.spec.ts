@@ -5,7 +5,7 @@ import { STARTER_TEMPLATES } from '@shared/journal/starter-templates';
 
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { Notebooks } from '../notebooks';
-import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
+import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { NotebookView } from './notebook-view';
 
 describe('NotebookView', () => {

@@ -1,15 +1,11 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 import { format } from 'date-fns';
-import { liveQuery } from 'dexie';
-import { combineLatest, from, of, switchMap } from 'rxjs';
 
 import { lightPlainText, parseLightFormat } from '@shared/journal/light-format';
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
@@ -20,13 +16,14 @@ import type { Notebook, NotebookPage, PageTemplate } from '@shared/sync/schema/c
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
 import { bookOptions } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
+import { liveQueryFor } from '../../../core/data/live-query-for';
+import { offerUndo } from '../../../ui/offer-undo';
 
 const EXCERPT_LENGTH = 160;
 
@@ -72,17 +69,12 @@ export class NotebookView {
   /** The notebook's id, from the route. */
   readonly id = input.required<string>();
 
-  private readonly journal = inject(LocalJournal);
   private readonly store = inject(JournalStore);
   private readonly notebooks = inject(Notebooks);
   private readonly router = inject(Router);
-  private readonly snackBar = inject(MatSnackBar);
+  private readonly offerUndo = offerUndo();
 
-  private readonly data = toSignal(
-    combineLatest([toObservable(this.journal.db), toObservable(this.id)]).pipe(
-      switchMap(([db, id]) => (db ? from(liveQuery(() => notebookData(db, id))) : of(undefined))),
-    ),
-  );
+  private readonly data = liveQueryFor(this.id, notebookData);
   protected readonly notebook = computed(() => this.data()?.notebook);
   protected readonly pages = computed(() => this.data()?.pages ?? []);
   protected readonly books = computed(() => this.data()?.books ?? []);
@@ -126,8 +118,7 @@ export class NotebookView {
 
   protected async removePage(page: { id: string; title: string }): Promise<void> {
     await this.notebooks.removePage(page.id);
-    const undo = this.snackBar.open(`Page “${page.title || 'Untitled page'}” deleted.`, 'Undo', { duration: 8000 });
-    undo.onAction().subscribe(() => void this.notebooks.restorePage(page.id));
+    this.offerUndo(`Page “${page.title || 'Untitled page'}” deleted.`, () => this.notebooks.restorePage(page.id));
   }
 
   protected startEditing(): void {

@@ -2,7 +2,7 @@ import { TestBed, type ComponentFixture } from '@angular/core/testing';
 import { Router } from '@angular/router';
 
 import { Notebooks } from '../notebooks';
-import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
+import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { NotebooksPage } from './notebooks-page';
 
 describe('NotebooksPage', () => {

@@ -12,7 +12,7 @@ import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
 import { bookOptions, summarizeNotebooks, type BookOption, type NotebookSummary } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';

@@ -11,7 +11,7 @@ import { encodeTextBytes } from '@shared/text/text-value';
 
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { Notebooks } from '../notebooks';
-import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
+import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { PageEditor } from './page-editor';
 
 describe('PageEditor', () => {

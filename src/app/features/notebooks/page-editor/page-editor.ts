@@ -17,7 +17,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { MergeableTextarea } from '../../../core/text/mergeable-textarea';
 import { PageHistory } from '../page-history/page-history';
-import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
+import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
 import { LightText } from '../light-text/light-text';
 import { clip } from '../notebook-data';
 import { Notebooks } from '../notebooks';

@@ -3,7 +3,7 @@ import { TestBed } from '@angular/core/testing';
 import { STARTER_TEMPLATES } from '@shared/journal/starter-templates';
 
 import { Notebooks } from '../notebooks';
-import { openTestJournal, textOf, until, type TestJournal } from '../testing/test-journal';
+import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { PageTemplates } from './page-templates';
 
 describe('PageTemplates', () => {

@@ -4,7 +4,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { MatSnackBar } from '@angular/material/snack-bar';
 
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 import { ownTemplates, STARTER_TEMPLATES, type TemplateView } from '@shared/journal/starter-templates';
@@ -12,8 +11,9 @@ import type { PageTemplate } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank } from '../../account/field-errors';
+import { fieldError, notBlank } from '../../../ui/field-errors';
 import { Notebooks } from '../notebooks';
+import { offerUndo } from '../../../ui/offer-undo';
 
 /** The reader's own page templates: rename or delete them. The starter ones are listed as they are. */
 @Component({
@@ -25,7 +25,7 @@ import { Notebooks } from '../notebooks';
 })
 export class PageTemplates {
   private readonly notebooks = inject(Notebooks);
-  private readonly snackBar = inject(MatSnackBar);
+  private readonly offerUndo = offerUndo();
 
   protected readonly own = liveQuerySignal(async (db) => ownTemplates((await db.rows('pageTemplates').toArray()) as PageTemplate[]), [] as TemplateView[]);
   protected readonly starters = STARTER_TEMPLATES;
@@ -62,7 +62,6 @@ export class PageTemplates {
 
   protected async remove(template: TemplateView): Promise<void> {
     await this.notebooks.removeTemplate(template.id);
-    const undo = this.snackBar.open(`Template “${template.name}” deleted.`, 'Undo', { duration: 8000 });
-    undo.onAction().subscribe(() => void this.notebooks.restoreTemplate(template.id));
+    this.offerUndo(`Template “${template.name}” deleted.`, () => this.notebooks.restoreTemplate(template.id));
   }
 }

@@ -1,14 +1,11 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
-import { toObservable, toSignal } from '@angular/core/rxjs-interop';
-import { liveQuery } from 'dexie';
-import { combineLatest, from, of, switchMap } from 'rxjs';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 
 import type { Book, Quote } from '@shared/sync/schema/collections';
 
 import type { JournalDb } from '../../../core/data/journal-db';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { QuoteCard } from '../quote-card/quote-card';
 import { newestFirst } from '../quote-query';
+import { liveQueryFor } from '../../../core/data/live-query-for';
 
 async function bookQuotes(db: JournalDb, bookId: string): Promise<{ book: Book | undefined; quotes: Quote[] }> {
   const [book, quotes] = await Promise.all([
@@ -42,12 +39,7 @@ export class BookQuotes {
   /** The book whose quotes to show. */
   readonly bookId = input.required<string>();
 
-  private readonly journal = inject(LocalJournal);
-  private readonly data = toSignal(
-    combineLatest([toObservable(this.journal.db), toObservable(this.bookId)]).pipe(
-      switchMap(([db, id]) => (db ? from(liveQuery(() => bookQuotes(db, id))) : of(undefined))),
-    ),
-  );
+  private readonly data = liveQueryFor(this.bookId, bookQuotes);
   protected readonly book = computed(() => this.data()?.book);
   protected readonly quotes = computed(() => this.data()?.quotes ?? []);
 }

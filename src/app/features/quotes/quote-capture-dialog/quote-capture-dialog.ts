@@ -14,9 +14,9 @@ import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank, showServerErrors } from '../../account/field-errors';
-import { LabelPicker } from '../../labels/label-picker/label-picker';
-import { authorLine } from '../../library/book-labels';
+import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
+import { LabelPicker } from '../../../ui/label-picker/label-picker';
+import { authorLine } from '../../../ui/book-labels';
 import {
   changedQuoteFields,
   EMPTY_QUOTE_FORM,

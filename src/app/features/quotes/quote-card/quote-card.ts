@@ -9,9 +9,10 @@ import { quotePosition, quoteWithSource } from '@shared/journal/quote-source';
 import type { Book, Quote } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { LabelChips } from '../../labels/label-chips/label-chips';
-import { authorLine } from '../../library/book-labels';
+import { LabelChips } from '../../../ui/label-chips/label-chips';
+import { authorLine } from '../../../ui/book-labels';
 import { QuoteCapture } from '../quote-capture';
+import { offerUndo } from '../../../ui/offer-undo';
 
 /** One quote with where it is from, and what can be done with it: favourite, copy, edit, delete. */
 @Component({
@@ -25,6 +26,7 @@ export class QuoteCard {
   private readonly store = inject(JournalStore);
   private readonly capture = inject(QuoteCapture);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly offerUndo = offerUndo();
 
   /** The quote to show. */
   readonly quote = input.required<Quote>();
@@ -57,9 +59,6 @@ export class QuoteCard {
   protected async remove(): Promise<void> {
     const id = this.quote().id;
     await this.store.remove('quotes', id);
-    this.snackBar
-      .open('Quote deleted.', 'Undo', { duration: 8000 })
-      .onAction()
-      .subscribe(() => void this.store.write('quotes', id, { deleted: false }));
+    this.offerUndo('Quote deleted.', () => this.store.write('quotes', id, { deleted: false }));
   }
 }

@@ -9,7 +9,7 @@ import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import type { Book, Quote } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
-import { LabelDirectory } from '../../labels/label-directory';
+import { LabelDirectory } from '../../../core/read-model/label-directory';
 import { QuoteCapture } from '../quote-capture';
 import { QuoteCard } from '../quote-card/quote-card';
 import { queryQuotes, quoteSearchText } from '../quote-query';

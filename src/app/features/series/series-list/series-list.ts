@@ -11,7 +11,7 @@ import type { Book, Series } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
-import { fieldError, notBlank } from '../../account/field-errors';
+import { fieldError, notBlank } from '../../../ui/field-errors';
 
 /** Every series the reader follows, how far they are in each, and what comes next. */
 @Component({

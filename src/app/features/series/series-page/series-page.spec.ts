@@ -2,8 +2,8 @@ import { TestBed, type ComponentFixture } from '@angular/core/testing';
 
 import type { Series } from '@shared/sync/schema/collections';
 
-import { choose, field, textOf, type } from '../../goals/testing/goal-fixtures';
-import { openTestJournal, until, type TestJournal } from '../../notebooks/testing/test-journal';
+import { choose, field, textOf, type } from '../../../core/testing/goal-fixtures';
+import { openTestJournal, until, type TestJournal } from '../../../core/testing/test-journal';
 import { SeriesPage } from './series-page';
 
 const ISLES = '00000000-0000-4000-8000-00000000d001';

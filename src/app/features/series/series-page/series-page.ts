@@ -1,23 +1,20 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { liveQuery } from 'dexie';
-import { combineLatest, from, of, switchMap } from 'rxjs';
 
 import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-order';
 import type { Book, Series } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank } from '../../account/field-errors';
-import { STATUS_LABELS } from '../../library/book-labels';
-import { StarRating } from '../../library/star-rating/star-rating';
+import { fieldError, notBlank } from '../../../ui/field-errors';
+import { STATUS_LABELS } from '../../../ui/book-labels';
+import { StarRating } from '../../../ui/star-rating/star-rating';
+import { liveQueryFor } from '../../../core/data/live-query-for';
 
 /** One series: its books in order, progress, the next to read, and the reader's view of it all. */
 @Component({
@@ -32,21 +29,10 @@ export class SeriesPage {
   readonly id = input.required<string>();
 
   private readonly store = inject(JournalStore);
-  private readonly journal = inject(LocalJournal);
-  private readonly data = toSignal(
-    combineLatest([toObservable(this.journal.db), toObservable(this.id)]).pipe(
-      switchMap(([db, id]) =>
-        db
-          ? from(
-              liveQuery(async () => ({
-                series: (await db.rows('series').get(id)) as Series | undefined,
-                books: (await db.rows('books').where('seriesId').equals(id).toArray()) as Book[],
-              })),
-            )
-          : of(undefined),
-      ),
-    ),
-  );
+  private readonly data = liveQueryFor(this.id, async (db, id) => ({
+    series: (await db.rows('series').get(id)) as Series | undefined,
+    books: (await db.rows('books').where('seriesId').equals(id).toArray()) as Book[],
+  }));
   protected readonly series = computed(() => this.data()?.series);
   protected readonly ordered = computed(() => seriesBooks(this.data()?.books ?? [], this.id()));
   protected readonly progress = computed(() => seriesProgress(this.ordered(), this.series()?.plannedCount));

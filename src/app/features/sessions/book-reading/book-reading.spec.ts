@@ -12,6 +12,7 @@ import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { BookReading } from './book-reading';
+import { waitFor } from '../../../core/testing/test-journal';
 
 /** Real IndexedDB; the reader is in Los Angeles on 8 March 2026 at 13:00 PDT. */
 describe('BookReading', () => {
@@ -25,14 +26,7 @@ describe('BookReading', () => {
   const text = () => element().textContent?.replace(/\s+/g, ' ') ?? '';
   const items = () => [...element().querySelectorAll('li.session')];
 
-  async function until(check: () => unknown, what: string): Promise<void> {
-    for (let i = 0; i < 200; i++) {
-      await fixture.whenStable();
-      if (check()) return;
-      await new Promise((resolve) => setTimeout(resolve, 5));
-    }
-    throw new Error(`gave up waiting for ${what}`);
-  }
+  const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
   const session = (bookId: string, startedAt: string, minutes: number, from: number, to: number, extra: Partial<Session> = {}) =>
     store.create('sessions', {

@@ -3,7 +3,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID 
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
 
 import { localDay } from '@shared/calendar/local-day';
@@ -15,7 +14,8 @@ import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { bookForecast, bookProgress } from '../book-forecast';
 import { minutesLine, MOOD_LABELS, positionLine, progressLine } from '../book-position';
-import { newestFirst } from '../reading-sessions';
+import { newestFirst } from '../../../core/read-model/reading-sessions';
+import { offerUndo } from '../../../ui/offer-undo';
 
 /** One line of the session list. */
 interface SessionLine {
@@ -43,7 +43,7 @@ export class BookReading {
   readonly book = input.required<Book>();
 
   private readonly store = inject(JournalStore);
-  private readonly snackBar = inject(MatSnackBar);
+  private readonly offerUndo = offerUndo();
   private readonly timeZone = inject(TIME_ZONE);
   private readonly clock = inject(CLOCK);
   private readonly whenFormat = new Intl.DateTimeFormat(inject(LOCALE_ID), {
@@ -93,9 +93,6 @@ export class BookReading {
 
   protected async remove(line: SessionLine): Promise<void> {
     await this.store.remove('sessions', line.id);
-    this.snackBar
-      .open('Session deleted', 'Undo', { duration: 8000 })
-      .onAction()
-      .subscribe(() => void this.store.write('sessions', line.id, { deleted: false }));
+    this.offerUndo('Session deleted', () => this.store.write('sessions', line.id, { deleted: false }));
   }
 }

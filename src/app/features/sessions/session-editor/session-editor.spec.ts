@@ -13,6 +13,7 @@ import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { SessionEditor } from './session-editor';
+import { waitFor } from '../../../core/testing/test-journal';
 
 @Component({ template: '' })
 class BookPageStub {}
@@ -39,14 +40,7 @@ describe('SessionEditor', () => {
   const alertText = () => element().querySelector('[role="alert"]')?.textContent ?? '';
   const sessions = async () => (await db().rows('sessions').toArray()) as Session[];
 
-  async function until(check: () => unknown, what: string): Promise<void> {
-    for (let i = 0; i < 200; i++) {
-      await fixture.whenStable();
-      if (await check()) return;
-      await new Promise((resolve) => setTimeout(resolve, 5));
-    }
-    throw new Error(`gave up waiting for ${what}`);
-  }
+  const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
   async function open(bookId: string, sessionId?: string): Promise<void> {
     fixture = TestBed.createComponent(SessionEditor);

@@ -15,9 +15,9 @@ import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
-import { fieldError, showServerErrors } from '../../account/field-errors';
+import { fieldError, showServerErrors } from '../../../ui/field-errors';
 import { MOOD_LABELS, positionLabels } from '../book-position';
-import { latestPosition } from '../reading-sessions';
+import { latestPosition } from '../../../core/read-model/reading-sessions';
 import { SessionFollowUp } from '../session-follow-up';
 import {
   changedSessionFields,

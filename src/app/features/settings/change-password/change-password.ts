@@ -7,9 +7,9 @@ import { MatInputModule } from '@angular/material/input';
 import { firstValueFrom } from 'rxjs';
 
 import { Auth } from '../../../core/auth/auth';
-import { fieldError } from '../../account/field-errors';
-import { FormSubmission } from '../../account/form-submission';
-import { passwordPolicy } from '../../account/password-validator';
+import { fieldError } from '../../../ui/field-errors';
+import { FormSubmission } from '../../../ui/form-submission';
+import { passwordPolicy } from '../../../ui/password-validator';
 
 /** Change the password; other devices are signed out, this one stays signed in. */
 @Component({

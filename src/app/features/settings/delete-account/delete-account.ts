@@ -9,8 +9,8 @@ import { firstValueFrom } from 'rxjs';
 
 import { Auth } from '../../../core/auth/auth';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { fieldError } from '../../account/field-errors';
-import { FormSubmission } from '../../account/form-submission';
+import { fieldError } from '../../../ui/field-errors';
+import { FormSubmission } from '../../../ui/form-submission';
 
 /** Delete the account and all its data, on the server and on this device, after the password. */
 @Component({

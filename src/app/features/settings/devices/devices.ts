@@ -1,4 +1,3 @@
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -6,11 +5,11 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { DatePipe } from '@angular/common';
-import { firstValueFrom } from 'rxjs';
 
 import type { DeviceSessionView } from '@shared/account/account-input';
 
 import { readableError } from '../../../core/http/api-error-message';
+import { DevicesApi } from './devices-api';
 
 /** The reader's signed-in devices: rename one, or sign out a lost one. Needs a connection. */
 @Component({
@@ -21,7 +20,7 @@ import { readableError } from '../../../core/http/api-error-message';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class Devices {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(DevicesApi);
 
   protected readonly devices = signal<readonly DeviceSessionView[]>([]);
   protected readonly problem = signal('');
@@ -35,7 +34,7 @@ export class Devices {
 
   protected async load(): Promise<void> {
     try {
-      this.devices.set(await firstValueFrom(this.http.get<DeviceSessionView[]>('/api/devices')));
+      this.devices.set(await this.api.list());
       this.problem.set('');
     } catch (error) {
       const readable = readableError(error);
@@ -52,7 +51,7 @@ export class Devices {
 
   protected async saveName(device: DeviceSessionView): Promise<void> {
     try {
-      const updated = await firstValueFrom(this.http.patch<DeviceSessionView>(`/api/devices/${device.id}`, { name: this.draftName }));
+      const updated = await this.api.rename(device.id, this.draftName);
       this.devices.update((list) => list.map((d) => (d.id === updated.id ? updated : d)));
       this.renaming.set(null);
     } catch (error) {
@@ -63,7 +62,7 @@ export class Devices {
 
   protected async signOutDevice(device: DeviceSessionView): Promise<void> {
     try {
-      await firstValueFrom(this.http.delete(`/api/devices/${device.id}`));
+      await this.api.signOut(device.id);
       this.devices.update((list) => list.filter((d) => d.id !== device.id));
     } catch (error) {
       this.problem.set(readableError(error).message);

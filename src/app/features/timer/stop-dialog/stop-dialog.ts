@@ -9,8 +9,8 @@ import { SESSION_MOODS, type Book, type Session } from '@shared/sync/schema/coll
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
-import { fieldError, showServerErrors } from '../../account/field-errors';
-import { BookStatus } from '../../library/book-status';
+import { fieldError, showServerErrors } from '../../../ui/field-errors';
+import { BookStatus } from '../../../core/read-model/book-status';
 import { minutesText, minutesWords, positionEnd, positionUnit, reachedEnd } from '../book-progress';
 import { CLOCK } from '../../../core/time/clock';
 import { changedStopFields, MOOD_LABELS, stopFields, stopFormPrefill, stopProblems, type StopFormValue } from './stop-form-model';

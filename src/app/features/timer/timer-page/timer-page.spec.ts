@@ -10,7 +10,7 @@ import { forgetSession, READER, rememberSession } from '../../../core/auth/testi
 import { journalDbName } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { QuoteCapture } from '../../quotes/quote-capture';
+import { QuoteCapture } from '../../quotes';
 import { CLOCK } from '../../../core/time/clock';
 import { NOTIFIER } from '../notifier';
 import { ReadingTimer, TIMER_ROW_ID } from '../reading-timer';
@@ -98,6 +98,7 @@ describe('TimerPage', () => {
     await until(() => (fixture.detectChanges(), !!button('Pause')));
     clock.advance(MINUTE);
     await shown('06:00');
+    expect(text()).not.toContain('Paused');
   });
 
   it('stops into a saved session and opens the stop form, holding off app reloads while it is open', async () => {
@@ -171,5 +172,6 @@ describe('TimerPage', () => {
     await shown('10 minutes to go');
     clock.advance(10 * MINUTE);
     await shown('You have read your 10 minutes.');
+    expect(text()).toContain('You have read your 10 minutes.');
   });
 });

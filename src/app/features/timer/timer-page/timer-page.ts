@@ -15,9 +15,9 @@ import type { Book, Session, Timer } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { QuoteCapture } from '../../quotes/quote-capture';
+import { QuoteCapture } from '../../quotes';
 import { elapsedText, latestSession, minutesWords, positionUnit, progressFraction, progressLine } from '../book-progress';
-import { ConfirmDialog, type ConfirmDialogData } from '../confirm-dialog/confirm-dialog';
+import { ConfirmDialog, type ConfirmDialogData } from '../../../ui/confirm-dialog/confirm-dialog';
 import { ReadingTimer, TIMER_ROW_ID } from '../reading-timer';
 import { ScreenAwake } from '../screen-awake';
 import { StopDialog, type StopDialogData } from '../stop-dialog/stop-dialog';

@@ -10,6 +10,7 @@ import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { InProgress } from './in-progress';
+import { waitFor } from '../../../core/testing/test-journal';
 
 describe('InProgress', () => {
   const NOW = Date.parse('2026-03-08T20:00:00Z'); // 13:00 PDT in Los Angeles
@@ -25,14 +26,7 @@ describe('InProgress', () => {
       [...li.querySelectorAll(':scope > a, :scope > span')].map((part) => part.textContent).join(' ').replace(/\s+/g, ' ').trim(),
     );
 
-  async function until(check: () => unknown, what: string): Promise<void> {
-    for (let i = 0; i < 200; i++) {
-      await fixture.whenStable();
-      if (check()) return;
-      await new Promise((resolve) => setTimeout(resolve, 5));
-    }
-    throw new Error(`gave up waiting for ${what}`);
-  }
+  const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
   beforeEach(async () => {
     userId = `in-progress-${crypto.randomUUID()}`;
@@ -79,5 +73,6 @@ describe('InProgress', () => {
   it('says so when nothing is in progress', async () => {
     fixture = TestBed.createComponent(InProgress);
     await until(() => element().textContent?.includes('Nothing in progress'), 'the empty list');
+    expect(element().querySelectorAll('li').length).toBe(0);
   });
 });

@@ -8,8 +8,8 @@ import type { Book, Session } from '@shared/sync/schema/collections';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
-import { bookForecast, bookProgress } from '../../sessions/book-forecast';
-import { TimerStartButton } from '../../timer/timer-start-button/timer-start-button';
+import { bookForecast, bookProgress } from '../../sessions';
+import { TimerStartButton } from '../../timer';
 
 /** One book being read, as the list shows it. */
 interface InProgressLine {

@@ -11,6 +11,7 @@ import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { ReadingLog } from './reading-log';
+import { waitFor } from '../../../core/testing/test-journal';
 
 /**
  * The same session, 2026-03-08 07:30–08:00 UTC, seen from two zones. IANA tz database: Los
@@ -29,14 +30,7 @@ describe('ReadingLog', () => {
   const shown = (css: string) => element().querySelector(css)?.textContent?.trim();
   const level = (day: string) => /level-(\d)/.exec(element().querySelector(`ll-year-heatmap [data-day="${day}"]`)?.className ?? '')?.[1];
 
-  async function until(check: () => unknown, what: string): Promise<void> {
-    for (let i = 0; i < 200; i++) {
-      await fixture.whenStable();
-      if (check()) return;
-      await new Promise((resolve) => setTimeout(resolve, 5));
-    }
-    throw new Error(`gave up waiting for ${what}`);
-  }
+  const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
   function setUp(timeZone: string): void {
     beforeEach(async () => {

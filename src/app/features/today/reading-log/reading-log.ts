@@ -8,8 +8,8 @@ import type { Book, Session } from '@shared/sync/schema/collections';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
-import { YearHeatmap } from '../../insights/year-heatmap/year-heatmap';
-import { logSessions } from '../../sessions/reading-sessions';
+import { YearHeatmap } from '../../insights';
+import { logSessions } from '../../../core/read-model/reading-sessions';
 
 /**
  * The daily reading log: minutes and pages today, the current and longest streak, and a heatmap

@@ -1,0 +1,88 @@
+import { provideHttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { type ComponentFixture, TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import Dexie from 'dexie';
+
+import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
+import { journalDbName, type JournalDb } from '../data/journal-db';
+import { JournalStore } from '../data/journal-store';
+import { LocalJournal } from '../data/local-journal';
+import { CLOCK, fixedClock } from '../time/clock';
+import { TIME_ZONE } from '../time/time-zone';
+
+/** Noon on 1 July 2026 in Los Angeles (PDT, UTC−7): the "now" of goal specs unless they say otherwise. */
+export const JULY_FIRST_NOON_LA = '2026-07-01T19:00:00.000Z';
+
+/** Where specs' navigations land. */
+@Component({ selector: 'll-spec-landing', template: '', changeDetection: ChangeDetectionStrategy.OnPush })
+class SpecLanding {}
+
+/**
+ * A signed-in reader with a fresh real IndexedDB journal, a fixed time zone and clock, and a
+ * router. Call in `beforeEach`; `tearDown` in `afterEach`.
+ */
+export async function setUpGoalSpec(options: { timeZone?: string; now?: string } = {}): Promise<{ store: JournalStore; db: () => JournalDb; tearDown: () => Promise<void> }> {
+  const userId = `goals-${crypto.randomUUID()}`;
+  rememberSession({ user: { ...READER, id: userId } });
+  TestBed.configureTestingModule({
+    providers: [
+      provideHttpClient(),
+      provideRouter([{ path: '**', component: SpecLanding }]),
+      { provide: TIME_ZONE, useValue: options.timeZone ?? 'America/Los_Angeles' },
+      { provide: CLOCK, useValue: fixedClock(new Date(options.now ?? JULY_FIRST_NOON_LA).getTime()) },
+    ],
+  });
+  const db = () => TestBed.inject(LocalJournal).db()!;
+  await db().open(); // before any spec ends, so teardown never closes it mid-open
+  return {
+    store: TestBed.inject(JournalStore),
+    db,
+    tearDown: async () => {
+      TestBed.resetTestingModule();
+      await Dexie.delete(journalDbName(userId));
+      forgetSession();
+    },
+  };
+}
+
+/** Waits, a few milliseconds at a time, until `check` passes (live queries answer asynchronously). */
+export async function until(fixture: ComponentFixture<unknown>, check: () => unknown, what: string): Promise<void> {
+  for (let i = 0; i < 300; i++) {
+    await fixture.whenStable();
+    if (check()) return;
+    await new Promise((resolve) => setTimeout(resolve, 5));
+  }
+  throw new Error(`gave up waiting for ${what}`);
+}
+
+/** The text of an element as words: its text pieces joined by spaces, icon names left out. */
+export function textOf(element: Element | null | undefined): string {
+  if (!element) return '';
+  const pieces: string[] = [];
+  const walker = document.createTreeWalker(element, NodeFilter.SHOW_TEXT);
+  for (let node = walker.nextNode(); node; node = walker.nextNode()) {
+    if (!node.parentElement?.closest('mat-icon')) pieces.push(node.textContent ?? '');
+  }
+  return pieces.join(' ').replace(/\s+/g, ' ').trim();
+}
+
+/** The field whose label reads `label`, as a reader finds it. */
+export function field<T extends HTMLElement = HTMLInputElement>(root: HTMLElement, label: string): T {
+  const found = Array.from(root.querySelectorAll('label')).find((element) => textOf(element).replace(/\s*\*$/, '') === label);
+  const control = found?.htmlFor ? document.getElementById(found.htmlFor) : found?.querySelector('input, select, textarea');
+  if (!control) throw new Error(`no field labelled ${label}`);
+  return control as T;
+}
+
+/** Sets a text field's value as typing would, and tells Angular. */
+export function type(input: HTMLInputElement | HTMLTextAreaElement, value: string): void {
+  input.value = value;
+  input.dispatchEvent(new Event('input'));
+}
+
+/** Picks an option of a native select, and tells Angular. */
+export function choose(select: HTMLSelectElement, value: string): void {
+  select.value = value;
+  select.dispatchEvent(new Event('change'));
+}

@@ -1,0 +1,69 @@
+import { provideHttpClient } from '@angular/common/http';
+import type { EnvironmentProviders, Provider } from '@angular/core';
+import { TestBed, type ComponentFixture } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import Dexie from 'dexie';
+
+import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
+import type { JournalDb } from '../data/journal-db';
+import { journalDbName } from '../data/journal-db';
+import { JournalStore } from '../data/journal-store';
+import { LocalJournal } from '../data/local-journal';
+
+/** A signed-in reader with a fresh, real IndexedDB journal (Dexie in Chromium), for one spec. */
+export interface TestJournal {
+  readonly store: JournalStore;
+  readonly db: JournalDb;
+  /** Closes and deletes the database and forgets the session. */
+  close(): Promise<void>;
+}
+
+/** Configures TestBed for a fresh reader; call in `beforeEach`, and `close()` in `afterEach`. */
+export function openTestJournal(providers: (Provider | EnvironmentProviders)[] = []): TestJournal {
+  const userId = `spec-${crypto.randomUUID()}`;
+  rememberSession({ user: { ...READER, id: userId } });
+  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideRouter([]), ...providers] });
+  const store = TestBed.inject(JournalStore);
+  const db = TestBed.inject(LocalJournal).db()!;
+  return {
+    store,
+    db,
+    async close() {
+      TestBed.resetTestingModule(); // closes the database (LocalJournal's cleanup)
+      await Dexie.delete(journalDbName(userId));
+      forgetSession();
+    },
+  };
+}
+
+/**
+ * Waits until `check` passes, letting live queries and change detection run in between.
+ * Live queries answer asynchronously, so a fixed wait would be either flaky or slow.
+ */
+export async function until(check: () => boolean, fixture?: ComponentFixture<unknown>, timeoutMs = 3000): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    if (fixture) await fixture.whenStable();
+    if (check()) return;
+    if (Date.now() > deadline) throw new Error('timed out waiting for the condition');
+    await new Promise((resolve) => setTimeout(resolve, 20));
+  }
+}
+
+/**
+ * Waits until `check` passes (it may be async), letting change detection and live queries run in
+ * between; fails naming `what` after about 200 rounds.
+ */
+export async function waitFor(fixture: ComponentFixture<unknown>, check: () => unknown, what: string): Promise<void> {
+  for (let i = 0; i < 200; i++) {
+    await fixture.whenStable();
+    if (await check()) return;
+    await new Promise((resolve) => setTimeout(resolve, 5));
+  }
+  throw new Error(`gave up waiting for ${what}`);
+}
+
+/** The element's text with runs of whitespace as single spaces. */
+export function textOf(element: Element | null | undefined): string {
+  return (element?.textContent ?? '').replace(/\s+/g, ' ').trim();
+}

@@ -1,0 +1,29 @@
+import type { Routes } from '@angular/router';
+
+import { signedOutGuard } from '../../core/auth/auth-guards';
+
+/** Signing in, creating a journal and choosing a new password (mounted at the root). */
+export default [
+  {
+    path: 'sign-in',
+    title: 'Sign in · Lamplight',
+    canMatch: [signedOutGuard],
+    loadComponent: () => import('./sign-in/sign-in').then((m) => m.SignIn),
+  },
+  {
+    path: 'register',
+    title: 'Create your journal · Lamplight',
+    canMatch: [signedOutGuard],
+    loadComponent: () => import('./register/register').then((m) => m.Register),
+  },
+  {
+    path: 'forgot-password',
+    title: 'Choose a new password · Lamplight',
+    loadComponent: () => import('./forgot-password/forgot-password').then((m) => m.ForgotPassword),
+  },
+  {
+    path: 'reset-password',
+    title: 'Choose a new password · Lamplight',
+    loadComponent: () => import('./reset-password/reset-password').then((m) => m.ResetPassword),
+  },
+] satisfies Routes;

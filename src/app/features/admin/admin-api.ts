@@ -1,0 +1,24 @@
+import { HttpClient } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
+
+import type { AdminUserView, CaughtMail } from '@shared/account/account-input';
+
+/** The admin pages' calls (`/api/admin`), online only; the server checks the role on each. */
+@Injectable({ providedIn: 'root' })
+export class AdminApi {
+  private readonly http = inject(HttpClient);
+
+  users(): Promise<AdminUserView[]> {
+    return firstValueFrom(this.http.get<AdminUserView[]>('/api/admin/users'));
+  }
+
+  updateUser(id: string, change: Partial<Pick<AdminUserView, 'disabled' | 'role'>>): Promise<AdminUserView> {
+    return firstValueFrom(this.http.patch<AdminUserView>(`/api/admin/users/${encodeURIComponent(id)}`, change));
+  }
+
+  /** Development only: what the local inbox caught. */
+  caughtMail(): Promise<CaughtMail[]> {
+    return firstValueFrom(this.http.get<CaughtMail[]>('/api/admin/mail'));
+  }
+}

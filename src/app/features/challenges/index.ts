@@ -1,0 +1,2 @@
+// This area is reached only through its routes (challenges.routes.ts); nothing else is given out.
+export {};

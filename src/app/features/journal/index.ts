@@ -1,0 +1,2 @@
+// The journal hub is reached only through its routes (journal.routes.ts); nothing else is given out.
+export {};
