@@ -50,7 +50,7 @@ async function main(): Promise<void> {
     mailer.close();
     await jobs.stop().catch((err: unknown) => logger.error(`Background jobs did not stop cleanly: ${String(err)}`));
     await Promise.allSettled([dataSource.destroy(), closePasswordPools()]);
-    logger.info('Lamplight stopped');
+    logger.info('Lamplight stopped.');
     process.exit(0);
   };
   process.on('SIGINT', () => void stop('SIGINT'));

@@ -155,12 +155,17 @@ export class SyncStore {
       limit + 1,
       maxBytes,
     ]);
+    // Texts' Yjs states count towards the page's bytes too, so they are read before the page is cut.
+    const candidates = rows.map(({ c, row }) => rowFields(SPECS[c]!.name, row));
+    const withStates = await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat());
     const changes: PulledChange[] = [];
     let lastSeq = sinceSeq;
     let taken = 0;
     let bytes = 0;
-    for (const { c, seq, row } of rows) {
-      const pieces = rowFields(SPECS[c]!.name, row);
+    let offset = 0;
+    for (const [index, { seq }] of rows.entries()) {
+      const pieces = withStates.slice(offset, offset + candidates[index]!.length);
+      offset += pieces.length;
       const size = Buffer.byteLength(JSON.stringify(pieces));
       if (taken > 0 && (changes.length + pieces.length > limit || bytes + size > maxBytes)) break;
       changes.push(...pieces);
@@ -168,7 +173,7 @@ export class SyncStore {
       lastSeq = Number(seq);
       taken++;
     }
-    return { changes: await TextStore.withStates(queryableOf(this.dataSource), userId, changes), lastSeq, hasMore: taken < Number(rows[0]?.keys ?? 0) };
+    return { changes, lastSeq, hasMore: taken < Number(rows[0]?.keys ?? 0) };
   }
 }
 
