@@ -8,11 +8,6 @@ export const routes: Routes = [
   // Spread, not lazy: an empty-path lazy group at the root would sit in front of the redirect from '/'.
   ...accountRoutes,
   {
-    path: 'verify-email',
-    title: 'Confirm your e-mail address · Lamplight',
-    loadComponent: () => import('./features/account/verify-email/verify-email').then((m) => m.VerifyEmail),
-  },
-  {
     path: '',
     canMatch: [signedInGuard],
     children: [

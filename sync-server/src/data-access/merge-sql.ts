@@ -31,7 +31,6 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
   // A set field wins when the delta adds something its stored state lacks.
   const grows = (field: string, incoming: string, stored: string) =>
     `coalesce((${incoming} ? '${field}') AND ${joined(field, incoming, stored)} IS DISTINCT FROM coalesce(${stored}->'${field}', '{}'::jsonb), false)`;
-  const wonBy = (field: string) => (isSet(field) ? grows(field, 'd.sets', 'd.stored_sets') : beats(field, 'd.clocks', 'd.stored_clocks'));
   // Equal clocks are candidates too: the stored value is not read here, so the upsert decides.
   const candidate = (field: string) =>
     isSet(field) ? grows(field, 'd.sets', 'd.stored_sets') : `coalesce((d.clocks->>'${field}') COLLATE "C" >= coalesce(d.stored_clocks->>'${field}', '') COLLATE "C", false)`;

@@ -26,4 +26,9 @@ export default [
     title: 'Choose a new password · Lamplight',
     loadComponent: () => import('./reset-password/reset-password').then((m) => m.ResetPassword),
   },
+  {
+    path: 'verify-email',
+    title: 'Confirm your e-mail address · Lamplight',
+    loadComponent: () => import('./verify-email/verify-email').then((m) => m.VerifyEmail),
+  },
 ] satisfies Routes;

@@ -5,7 +5,7 @@ import type { CatalogueBook } from '@shared/api/catalogue';
 import type { Book } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { changedFields, toFormValue, type BookFormValue } from '../../library/book-editor/book-form-model';
+import { changedFields, toFormValue, type BookFormValue } from '../../library';
 import { CatalogueClient } from '../catalogue-client';
 import { matchLine } from '../fill-values';
 import { OpenFillIn } from '../open-fill-in';

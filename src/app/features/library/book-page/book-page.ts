@@ -9,7 +9,6 @@ import { BOOK_STATUSES, type Book, type BookStatusChange, type Reading, type Ser
 import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { BookCover } from '../../../core/covers/book-cover/book-cover';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { OverwrittenNote } from '../../../core/sync/overwritten-note/overwritten-note';
 import { CatalogueOffer } from '../../catalogue';
 import { BookQuotes, QuoteCapture } from '../../quotes';
