@@ -49,7 +49,7 @@ export class Accounts {
       }
       throw err;
     }
-    const tokens = await this.sessions.start(user, userAgent, input.deviceName);
+    const tokens = await this.sessions.start(user, userAgent, input.deviceName, input.deviceId);
     // The welcome note must not hold up or fail the registration.
     this.mailer.send(welcomeMail(user.email, user.displayName, this.config.publicUrl)).catch((err: unknown) => {
       console.warn(`welcome e-mail to user ${user.id} not sent: ${(err as Error).message}`);
@@ -66,7 +66,7 @@ export class Accounts {
     }
     if (!(await verifyPassword(input.password, user.passwordHash))) throw SIGN_IN_REFUSED;
     if (user.disabledAt) throw new AppError(403, 'account_disabled', 'This account is disabled; ask an admin to enable it');
-    const tokens = await this.sessions.start(user, userAgent, input.deviceName);
+    const tokens = await this.sessions.start(user, userAgent, input.deviceName, input.deviceId);
     return { user: publicUser(user), ...tokens };
   }
 

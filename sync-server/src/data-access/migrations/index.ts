@@ -7,6 +7,7 @@ import { Journal1765065600000 } from './1765065600000-journal';
 import { Sessions1765152000000 } from './1765152000000-sessions';
 import { Goals1765238400000 } from './1765238400000-goals';
 import { AttemptCounts1765324800000 } from './1765324800000-attempt-counts';
+import { DeviceIds1765411200000 } from './1765411200000-device-ids';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   Sessions1765152000000,
   Goals1765238400000,
   AttemptCounts1765324800000,
+  DeviceIds1765411200000,
 ];
