@@ -15,8 +15,8 @@ export interface ChallengeRow {
   readonly periodEnd?: string | null;
   readonly target?: number | null;
   readonly alphabetBy?: 'title' | 'author-surname' | null;
-  /** Each field's last write clock (`hlc.ts`): the kind's tells when the challenge was made. */
-  readonly clocks?: Readonly<Record<string, string>> | null;
+  /** A local row's clock per field (`LocalRow._hlc`): the kind's tells when the challenge was made. */
+  readonly _hlc?: Readonly<Record<string, string>> | null;
   readonly prompts?: readonly { readonly id: string; readonly text: string; readonly bookId?: string | null }[] | null;
 }
 
@@ -60,7 +60,7 @@ export function challengeProgress(
     case 'weekly':
       return {
         kind: 'weekly',
-        progress: weeklyChallengeProgress({ year: isoWeekOf(start).year, books: library, today, countsFrom: start, createdOn: madeOn(challenge.clocks) }),
+        progress: weeklyChallengeProgress({ year: isoWeekOf(start).year, books: library, today, countsFrom: start, createdOn: madeOn(challenge._hlc) }),
       };
     case 'prompts': {
       const prompts = (challenge.prompts ?? []).map((prompt) => ({ id: prompt.id, text: prompt.text, bookId: prompt.bookId ?? undefined }));
@@ -72,7 +72,7 @@ export function challengeProgress(
 }
 
 /** The local day a row's kind was first written, which for a challenge is the day it was made. */
-function madeOn(clocks: ChallengeRow['clocks']): string | undefined {
+function madeOn(clocks: ChallengeRow['_hlc']): string | undefined {
   const clock = clocks?.['kind'] ? parseHlc(clocks['kind']) : null;
   return clock ? format(clock.wall, 'yyyy-MM-dd') : undefined;
 }

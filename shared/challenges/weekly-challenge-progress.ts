@@ -46,7 +46,8 @@ export function weeklyChallengeProgress(input: {
   const { year, today } = input;
   parseCalendarDay(today);
   const countsFrom = input.countsFrom ?? '';
-  const createdOn = input.createdOn ?? '';
+  // A day of making after today is a clock out of step, not a fact: then no week is excused.
+  const createdOn = input.createdOn && input.createdOn <= today ? input.createdOn : '';
   const allWeeks = isoWeeksOfYear(year);
   const counted = allWeeks.filter((span) => span.sunday >= countsFrom);
   // A start past the year's last week still leaves that week to count.

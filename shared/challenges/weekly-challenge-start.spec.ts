@@ -56,4 +56,11 @@ describe('weeklyChallengeProgress from the day a challenge is made', () => {
     expect(later.weeks.find((week) => week.week === 49)?.state).toBe('missed');
     expect(later.weeks.find((week) => week.week === 48)?.state).toBe('before');
   });
+
+  it('takes a day of making after today for a clock out of step, and excuses no week for it', () => {
+    const progress = weeklyChallengeProgress({ year: 2026, books: [], today: '2026-03-10', countsFrom: '2025-12-29', createdOn: '2026-12-04' });
+    // ISO 8601: 10 March 2026 is in week 11, so weeks 1–10 are over and unmet.
+    expect(progress.weeks.slice(0, 10).every((week) => week.state === 'missed')).toBeTrue();
+    expect(progress.weeks[10].state).toBe('upcoming');
+  });
 });
