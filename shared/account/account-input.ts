@@ -27,6 +27,11 @@ const displayName = z
   .refine(isPlainText, PLAIN_TEXT_MESSAGE);
 
 const deviceName = z.string().trim().min(1).max(80).refine(isPlainText, PLAIN_TEXT_MESSAGE).optional();
+/** The browser's own id (the node id of its clocks), so signing in again reuses its device entry. */
+const deviceId = z
+  .string({ error: 'Use the id this browser made for itself' })
+  .regex(/^[A-Za-z0-9-]{1,64}$/, 'Use letters, digits and hyphens, at most 64')
+  .optional();
 
 /** A new password, checked against the shared policy (NIST SP 800-63B-4). */
 const newPassword = z.string({ error: 'Password is required' });
@@ -42,15 +47,14 @@ function refinePassword<T extends { password?: string; newPassword?: string; ema
   };
 }
 
-export const registerInput = z
-  .object({ email, password: newPassword, displayName, deviceName })
-  .superRefine(refinePassword('password'));
+export const registerInput = z.object({ email, password: newPassword, displayName, deviceName, deviceId }).superRefine(refinePassword('password'));
 export type RegisterInput = z.infer<typeof registerInput>;
 
 export const loginInput = z.object({
   email,
   password: z.string({ error: 'Password is required' }).min(1, 'Password is required'),
   deviceName,
+  deviceId,
 });
 export type LoginInput = z.infer<typeof loginInput>;
 

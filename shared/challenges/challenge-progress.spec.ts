@@ -1,3 +1,6 @@
+import { getISOWeek } from 'date-fns';
+
+import { formatHlc } from '../sync/hlc';
 import { ChallengeBook } from './challenge-book';
 import { challengeProgress, ChallengeRow } from './challenge-progress';
 
@@ -47,6 +50,24 @@ describe('challengeProgress', () => {
     const y2027 = challengeProgress({ kind: 'weekly', periodStart: '2027-01-04', periodEnd: '2028-01-02' }, { library, today });
     expect(y2026!.progress.target).toBe(53);
     expect(y2027!.progress.target).toBe(52);
+  });
+
+  it('reads when a whole-year weekly challenge was made from its kind’s clock, and calls no earlier week missed', () => {
+    // The clock's wall time is noon UTC on Wednesday 2 December 2026 (ISO week 49, date-fns getISOWeek).
+    const made = formatHlc({ wall: Date.UTC(2026, 11, 2, 12), counter: 0, node: 'device-a' });
+    const row = { kind: 'weekly' as const, periodStart: '2025-12-29', periodEnd: '2027-01-03', _hlc: { kind: made } };
+    const progress = challengeProgress(row, { library: [], today: '2026-12-20' });
+    if (progress?.kind !== 'weekly') return fail('not a weekly challenge');
+    const stateOf = (week: number) => progress.progress.weeks.find((entry) => entry.week === week)?.state;
+    expect(getISOWeek(new Date(2026, 11, 2))).toBe(49);
+    expect(stateOf(1)).toBe('before');
+    expect(stateOf(48)).toBe('before');
+    expect(stateOf(49)).toBe('missed');
+    expect(stateOf(50)).toBe('missed');
+    expect(stateOf(51)).toBe('upcoming');
+    // Without its clock (a row not yet complete), the old rule stands: every past week unmet is missed.
+    const bare = challengeProgress({ ...row, _hlc: null }, { library: [], today: '2026-12-20' });
+    expect(bare?.kind === 'weekly' && bare.progress.weeks[0].state).toBe('missed');
   });
 
   it('knows a prompt planned with a book not yet finished', () => {

@@ -1,4 +1,7 @@
+import { format } from 'date-fns';
+
 import { isoWeekOf } from '../calendar/iso-week-of';
+import { parseHlc } from '../sync/hlc';
 import { alphabetChallengeProgress, AlphabetChallengeProgress } from './alphabet-challenge-progress';
 import { ChallengeBook, ChallengeStatus } from './challenge-book';
 import { countChallengeProgress } from './count-challenge-progress';
@@ -12,6 +15,8 @@ export interface ChallengeRow {
   readonly periodEnd?: string | null;
   readonly target?: number | null;
   readonly alphabetBy?: 'title' | 'author-surname' | null;
+  /** A local row's clock per field (`LocalRow._hlc`): the kind's tells when the challenge was made. */
+  readonly _hlc?: Readonly<Record<string, string>> | null;
   readonly prompts?: readonly { readonly id: string; readonly text: string; readonly bookId?: string | null }[] | null;
 }
 
@@ -53,7 +58,10 @@ export function challengeProgress(
         progress: alphabetChallengeProgress({ by: challenge.alphabetBy ?? 'title', period, books: library, tbr: library.filter((book) => book.status === 'tbr') }),
       };
     case 'weekly':
-      return { kind: 'weekly', progress: weeklyChallengeProgress({ year: isoWeekOf(start).year, books: library, today }) };
+      return {
+        kind: 'weekly',
+        progress: weeklyChallengeProgress({ year: isoWeekOf(start).year, books: library, today, countsFrom: start, createdOn: madeOn(challenge._hlc) }),
+      };
     case 'prompts': {
       const prompts = (challenge.prompts ?? []).map((prompt) => ({ id: prompt.id, text: prompt.text, bookId: prompt.bookId ?? undefined }));
       return { kind: 'prompts', progress: promptChallengeProgress({ period, prompts, books: library }) };
@@ -61,4 +69,10 @@ export function challengeProgress(
     default:
       return null;
   }
+}
+
+/** The local day a row's kind was first written, which for a challenge is the day it was made. */
+function madeOn(clocks: ChallengeRow['_hlc']): string | undefined {
+  const clock = clocks?.['kind'] ? parseHlc(clocks['kind']) : null;
+  return clock ? format(clock.wall, 'yyyy-MM-dd') : undefined;
 }

@@ -55,4 +55,49 @@ describe('/api/devices', () => {
     await request(app).delete(`/api/devices/${theirs.id}`).set(bearer(one.accessToken)).expect(404);
     await request(app).get('/api/auth/me').set(bearer(other.accessToken)).expect(200);
   });
+
+  it('When a browser signs in again with its device id, then it keeps its one device entry and only the newest token works', async () => {
+    const app = await createTestApp();
+    const email = uniqueEmail();
+    const laptop = await registerReader(app, { email });
+    const tabletId = crypto.randomUUID();
+    const signIn = () =>
+      request(app).post('/api/auth/login').set('User-Agent', ANDROID_FIREFOX).send({ email, password: GOOD_PASSWORD, deviceId: tabletId }).expect(200);
+    const first = (await signIn()).body;
+    const second = (await signIn()).body;
+    const third = (await signIn()).body;
+
+    const devices = (await request(app).get('/api/devices').set(bearer(laptop.accessToken)).expect(200)).body;
+    expect(devices.length).toBe(2);
+    expect(devices.filter((d: { name: string }) => d.name === 'Firefox on Android').length).toBe(1);
+    // The entry's earlier refresh tokens end with the new sign-in; the newest one rotates.
+    await request(app).post('/api/auth/refresh').send({ refreshToken: first.refreshToken }).expect(401);
+    await request(app).post('/api/auth/refresh').send({ refreshToken: second.refreshToken }).expect(401);
+    await request(app).post('/api/auth/refresh').send({ refreshToken: third.refreshToken }).expect(200);
+  });
+
+  it('When another reader or a signed-out entry has the same device id, then a new entry is made', async () => {
+    const app = await createTestApp();
+    const email = uniqueEmail();
+    const shared = crypto.randomUUID();
+    const other = await registerReader(app);
+    await request(app).post('/api/auth/login').send({ email: other.user.email, password: GOOD_PASSWORD, deviceId: shared }).expect(200);
+    const mine = (await request(app).post('/api/auth/register').send({ email, password: GOOD_PASSWORD, displayName: 'Mira Holt', deviceId: shared }).expect(201))
+      .body;
+    const [entry] = (await request(app).get('/api/devices').set(bearer(mine.accessToken))).body;
+    await request(app).post('/api/auth/logout').set(bearer(mine.accessToken)).send({ refreshToken: mine.refreshToken });
+    const again = (await request(app).post('/api/auth/login').send({ email, password: GOOD_PASSWORD, deviceId: shared }).expect(200)).body;
+
+    const devices = (await request(app).get('/api/devices').set(bearer(again.accessToken)).expect(200)).body;
+    expect(devices.length).toBe(1);
+    expect(devices[0].id).not.toBe(entry.id);
+  });
+
+  it('When a device id is not one a browser makes, then sign-in is a 400 naming the field', async () => {
+    const app = await createTestApp();
+    const email = uniqueEmail();
+    await registerReader(app, { email });
+    const res = await request(app).post('/api/auth/login').send({ email, password: GOOD_PASSWORD, deviceId: 'no spaces; or <tags>' }).expect(400);
+    expect(Object.keys(res.body.error.details)).toEqual(['deviceId']);
+  });
 });

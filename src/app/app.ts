@@ -26,6 +26,8 @@ interface Destination {
   readonly path: string;
   readonly label: string;
   readonly icon: string;
+  /** Active only on this very path, not on the pages under it (Goals, not its Challenges). */
+  readonly exact?: boolean;
 }
 
 /** The app shell: brand bar, main navigation and the routed page. */
@@ -49,8 +51,10 @@ export class App {
   protected readonly destinations: readonly Destination[] = [
     { path: '/today', label: 'Today', icon: 'wb_twilight' },
     { path: '/library', label: 'Library', icon: 'local_library' },
+    { path: '/timer', label: 'Timer', icon: 'timer' },
     { path: '/journal', label: 'Journal', icon: 'edit_note' },
-    { path: '/goals', label: 'Goals', icon: 'flag' },
+    { path: '/goals', label: 'Goals', icon: 'flag', exact: true },
+    { path: '/goals/challenges', label: 'Challenges', icon: 'emoji_events' },
     { path: '/insights', label: 'Insights', icon: 'insights' },
   ];
 

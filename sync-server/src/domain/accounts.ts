@@ -87,7 +87,7 @@ export class Accounts {
       }
       throw err;
     }
-    const tokens = await this.sessions.start(user, userAgent, input.deviceName);
+    const tokens = await this.sessions.start(user, userAgent, input.deviceName, input.deviceId);
     // The welcome note must not hold up or fail the registration.
     const welcome = this.verification.link(user).then((link) => this.mailer.send(welcomeMail(user.email, link, this.config.publicUrl)));
     welcome.catch((err: unknown) => {
@@ -105,7 +105,7 @@ export class Accounts {
     const hash = user?.passwordHash ?? (await decoyHash);
     if (!(await this.checkPassword(`account:${input.email}`, input.password, hash)) || !user) throw SIGN_IN_REFUSED;
     if (user.disabledAt) throw new AppError(403, 'account_disabled', 'This account is disabled; ask an admin to enable it');
-    const tokens = await this.sessions.start(user, userAgent, input.deviceName);
+    const tokens = await this.sessions.start(user, userAgent, input.deviceName, input.deviceId);
     return { user: publicUser(user), ...tokens };
   }
 

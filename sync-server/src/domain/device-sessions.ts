@@ -29,18 +29,45 @@ export class DeviceSessions {
     private readonly jwtSecret: Uint8Array,
   ) {}
 
-  /** A new device session for a successful sign-in, with its first token pair. */
-  async start(user: User, userAgent: string | undefined, name?: string): Promise<TokenPair> {
+  /**
+   * The device session for a successful sign-in, with a fresh token pair. A browser that sends
+   * its device id gets its live entry back rather than a new one, so signing in again does not
+   * fill the device list; the refresh tokens the entry issued before are ended.
+   */
+  async start(user: User, userAgent: string | undefined, name?: string, deviceId?: string): Promise<TokenPair> {
     return this.dataSource.transaction(async (manager) => {
-      const session = await manager.save(
-        manager.create(DeviceSession, {
-          userId: user.id,
-          name: name ?? deviceNameFromUserAgent(userAgent),
-          userAgent: (userAgent ?? '').slice(0, 500),
-        }),
-      );
+      const known = deviceId
+        ? await manager
+            .getRepository(DeviceSession)
+            .createQueryBuilder('session')
+            .where('session.userId = :userId AND session.deviceId = :deviceId AND session.revokedAt IS NULL', { userId: user.id, deviceId })
+            .orderBy('session.lastSeenAt', 'DESC')
+            .setLock('pessimistic_write')
+            .getOne()
+        : null;
+      let sessionId: string;
+      if (known) {
+        sessionId = known.id;
+        await manager.update(DeviceSession, { id: sessionId }, { lastSeenAt: new Date(), userAgent: (userAgent ?? '').slice(0, 500), ...(name ? { name } : {}) });
+        await manager
+          .createQueryBuilder()
+          .update(RefreshToken)
+          .set({ expiresAt: () => 'now()' })
+          .where('session_id = :sessionId AND used_at IS NULL', { sessionId })
+          .execute();
+      } else {
+        const session = await manager.save(
+          manager.create(DeviceSession, {
+            userId: user.id,
+            deviceId: deviceId ?? null,
+            name: name ?? deviceNameFromUserAgent(userAgent),
+            userAgent: (userAgent ?? '').slice(0, 500),
+          }),
+        );
+        sessionId = session.id;
+      }
       await manager.update('users', { id: user.id }, { lastSeenAt: new Date() });
-      return this.issue(manager, session.id, user);
+      return this.issue(manager, sessionId, user);
     });
   }
 

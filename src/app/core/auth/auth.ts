@@ -6,6 +6,7 @@ import type { AccountUser, SignedIn, TokenPair } from '@shared/account/account-i
 
 import { browserStorage } from '../device/browser-storage';
 import { secondsUntilExpiry, SESSION_STORAGE_KEY, tokenReceived, type StoredSession } from './stored-session';
+import { deviceId } from '../device/device-id';
 
 /** Refresh a little before expiry, so a request does not leave with a token about to lapse. */
 const REFRESH_MARGIN_SECONDS = 30;
@@ -36,13 +37,13 @@ export class Auth {
   }
 
   async signIn(email: string, password: string): Promise<AccountUser> {
-    const answer = await firstValueFrom(this.http.post<SignedIn>('/api/auth/login', { email, password }));
+    const answer = await firstValueFrom(this.http.post<SignedIn>('/api/auth/login', { email, password, deviceId: deviceId() }));
     this.store({ user: answer.user, accessToken: answer.accessToken, refreshToken: answer.refreshToken, needsSignIn: null });
     return answer.user;
   }
 
   async register(email: string, password: string, displayName: string): Promise<AccountUser> {
-    const answer = await firstValueFrom(this.http.post<SignedIn>('/api/auth/register', { email, password, displayName }));
+    const answer = await firstValueFrom(this.http.post<SignedIn>('/api/auth/register', { email, password, displayName, deviceId: deviceId() }));
     this.store({ user: answer.user, accessToken: answer.accessToken, refreshToken: answer.refreshToken, needsSignIn: null });
     return answer.user;
   }

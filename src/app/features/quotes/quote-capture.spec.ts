@@ -118,6 +118,21 @@ describe('QuoteCapture and its dialog', () => {
     );
   });
 
+  it('warns about a page past the book’s end, and keeps it when the reader saves again', async () => {
+    const bookId = await store.create('books', { title: 'The Salt Road Almanac', authors: ['Ada Pell'], format: 'print', pageCount: 320, status: 'reading' });
+    const saved = capture.open({ bookId });
+    await until(() => find<HTMLSelectElement>('Book')?.value === bookId, 'the book to be chosen');
+    type('The passage', 'Salt keeps what the sea forgets.');
+    type('Page', '400');
+    control('Page').dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true }));
+    const warning = await until(() => dialog()?.querySelector('.page-warning[role="alert"]'), 'the warning');
+    expect(warning.textContent).toContain('320 pages, so page 400 is past its end');
+    expect(await quotes()).toEqual([]);
+    control('Page').dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true }));
+    const id = (await saved)!;
+    expect((await store.get('quotes', id))?.page).toBe(400);
+  });
+
   it('says what each field needs, and saves nothing until it is right', async () => {
     const bookId = await store.create('books', { title: 'Glasswing', format: 'print', status: 'reading' });
     void capture.open({ bookId, page: 12 });

@@ -1,6 +1,6 @@
 import type { Quote } from '@shared/sync/schema/collections';
 
-import { changedQuoteFields, EMPTY_QUOTE_FORM, positionError, tagsError, toQuoteFields, toQuoteForm } from './quote-form-model';
+import { changedQuoteFields, EMPTY_QUOTE_FORM, pageBeyondBook, positionError, tagsError, toQuoteFields, toQuoteForm } from './quote-form-model';
 
 describe('quote form model', () => {
   const typed = { ...EMPTY_QUOTE_FORM, bookId: 'b1', text: '  Tides are patient.\n', chapter: ' ', tags: 'sea, patience ,sea', labelIds: ['l1'] };
@@ -23,6 +23,14 @@ describe('quote form model', () => {
       jasmine.objectContaining({ page: null, ebookLocation: null, audioSeconds: 3750 }),
     );
     expect(toQuoteFields({ ...typed, bookId: '' }, 'print')).toEqual(jasmine.objectContaining({ bookId: null, page: null }));
+  });
+
+  it('warns about a page past the book’s page count, but only for print and only past the end', () => {
+    expect(pageBeyondBook('400', 'print', 320)).toContain('320 pages, so page 400 is past its end');
+    expect(pageBeyondBook('320', 'print', 320)).toBeNull();
+    expect(pageBeyondBook('400', 'print', null)).toBeNull();
+    expect(pageBeyondBook('400', 'ebook', 320)).toBeNull();
+    expect(pageBeyondBook('', 'print', 320)).toBeNull();
   });
 
   it('says what is wrong with a position, per format', () => {

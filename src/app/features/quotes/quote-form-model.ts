@@ -75,6 +75,16 @@ export function positionError(position: string, format: PositionFormat): string 
   return /^\d{1,6}$/.test(typed) && Number(typed) <= MAX_PAGE ? null : 'Use a page number such as 42';
 }
 
+/**
+ * A warning, not an error, for a page past the book's page count: editions differ, so the
+ * reader may keep it after saying so. `null` when the page fits or nothing is known to compare.
+ */
+export function pageBeyondBook(position: string, format: PositionFormat, pageCount: number | null | undefined): string | null {
+  const typed = position.trim();
+  if (format !== 'print' || pageCount == null || !/^\d{1,6}$/.test(typed) || Number(typed) <= pageCount) return null;
+  return `Your copy of this book has ${pageCount} pages, so page ${Number(typed)} is past its end. Editions differ: press Save again to keep it.`;
+}
+
 /** Why the tags do not fit, or `null`. */
 export function tagsError(tags: string): string | null {
   const list = splitList(tags);

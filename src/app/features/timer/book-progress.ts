@@ -76,7 +76,8 @@ export function elapsedText(ms: number): string {
 
 /** Minutes in words, for a saved session: "25 minutes", "1 minute", "less than a minute". */
 export function minutesWords(minutes: number | null | undefined): string {
-  const whole = Math.round(minutes ?? 0);
-  if (whole < 1) return 'less than a minute';
+  // Under a minute is said so, never rounded up to "1 minute": the stop form discards it on Skip.
+  if (!((minutes ?? 0) >= 1)) return 'less than a minute';
+  const whole = Math.round(minutes!);
   return whole === 1 ? '1 minute' : `${whole} minutes`;
 }

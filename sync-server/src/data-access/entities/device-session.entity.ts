@@ -21,6 +21,10 @@ export class DeviceSession {
   @Column({ type: 'text' })
   name: string;
 
+  /** The browser's own id, when it sent one: a later sign-in from it reuses this entry. */
+  @Column({ name: 'device_id', type: 'text', nullable: true })
+  deviceId: string | null;
+
   @Column({ name: 'user_agent', type: 'text', default: '' })
   userAgent: string;
 

@@ -9,6 +9,7 @@ import { Goals1765238400000 } from './1765238400000-goals';
 import { AttemptCounts1765324800000 } from './1765324800000-attempt-counts';
 import { SetFields1765411200000 } from './1765411200000-set-fields';
 import { MergeableTexts1765411201000 } from './1765411201000-mergeable-texts';
+import { DeviceIds1765411202000 } from './1765411202000-device-ids';
 import { Hardening1765411215000 } from './1765411215000-hardening';
 import { CatalogueCache1765412022000 } from './1765412022000-catalogue-cache';
 
@@ -25,6 +26,7 @@ export const migrations = [
   AttemptCounts1765324800000,
   SetFields1765411200000,
   MergeableTexts1765411201000,
+  DeviceIds1765411202000,
   Hardening1765411215000,
   CatalogueCache1765412022000,
 ];

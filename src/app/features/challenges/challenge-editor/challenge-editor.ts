@@ -60,6 +60,7 @@ export class ChallengeEditor {
       periodEnd: `${this.year}-12-31`,
       // The ISO year of today, which differs from the calendar year in the last days of December.
       weekYear: String(isoWeekOf(this.today).year),
+      weekFrom: 'this-week' as ChallengeFormValue['weekFrom'],
       prompts: new FormArray([new FormControl('', { nonNullable: true, validators: Validators.maxLength(300) })]),
     },
     { validators: challengeFormValidator },
@@ -107,7 +108,10 @@ export class ChallengeEditor {
       return;
     }
     this.problem.set('');
-    const id = await this.store.create('challenges', newChallengeFields(this.form.getRawValue(), () => crypto.randomUUID()));
+    const id = await this.store.create(
+      'challenges',
+      newChallengeFields(this.form.getRawValue(), () => crypto.randomUUID(), this.today),
+    );
     this.form.markAsPristine();
     await this.router.navigate(['/goals/challenges', id]);
   }

@@ -1,6 +1,7 @@
 import type { AbstractControl, ValidationErrors } from '@angular/forms';
 
 import { isoWeeksOfYear } from '@shared/calendar/iso-weeks-of-year';
+import { weeklyChallengeStart, type WeeklyChallengeFrom } from '@shared/challenges/weekly-challenge-start';
 import type { PatchOf } from '@shared/sync/schema/collection';
 import type { Challenge, challenges } from '@shared/sync/schema/collections';
 
@@ -18,6 +19,8 @@ export interface ChallengeFormValue {
   periodEnd: string;
   /** Weekly: the ISO week-numbering year. */
   weekYear: string;
+  /** Weekly: count from this week (the default), or every week of the year. */
+  weekFrom: WeeklyChallengeFrom;
   prompts: string[];
 }
 
@@ -44,10 +47,12 @@ export function challengeFormValidator(group: AbstractControl<ChallengeFormValue
 }
 
 /**
- * The row for a new challenge: only the fields its kind uses. A weekly challenge runs from the
- * Monday of week 1 to the Sunday of the last ISO week of its year.
+ * The row for a new challenge: only the fields its kind uses. A weekly challenge runs to the
+ * Sunday of the last ISO week of its year, from the Monday of this week or of week 1.
+ *
+ * @param today the reader's local date, 'YYYY-MM-DD'.
  */
-export function newChallengeFields(value: ChallengeFormValue, newId: () => string): PatchOf<typeof challenges> {
+export function newChallengeFields(value: ChallengeFormValue, newId: () => string, today: string): PatchOf<typeof challenges> {
   const year = value.kind === 'weekly' ? weekYear(value.weekYear)! : Number(value.periodStart.slice(0, 4));
   const target = value.kind === 'count' ? countTarget(value)! : undefined;
   const name = value.name.trim() || defaultChallengeName(value.kind, { target, year });
@@ -59,7 +64,7 @@ export function newChallengeFields(value: ChallengeFormValue, newId: () => strin
       return { ...base, alphabetBy: value.alphabetBy, periodStart: value.periodStart, periodEnd: value.periodEnd };
     case 'weekly': {
       const weeks = isoWeeksOfYear(year);
-      return { ...base, periodStart: weeks[0].monday, periodEnd: weeks[weeks.length - 1].sunday };
+      return { ...base, periodStart: weeklyChallengeStart({ year, today, from: value.weekFrom }), periodEnd: weeks[weeks.length - 1].sunday };
     }
     case 'prompts': {
       const prompts = value.prompts.map((text) => text.trim()).filter((text) => text !== '');

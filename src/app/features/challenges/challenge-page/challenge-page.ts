@@ -27,7 +27,7 @@ import { offerUndo } from '../../../ui/offer-undo';
 
 type Prompt = NonNullable<Challenge['prompts']>[number];
 
-const WEEK_STATES: Readonly<Record<WeekState, string>> = { met: 'Met', missed: 'Missed', upcoming: 'To come' };
+const WEEK_STATES: Readonly<Record<WeekState, string>> = { met: 'Met', missed: 'Missed', upcoming: 'To come', before: 'Before the challenge' };
 const PROMPT_STATES: Readonly<Record<PromptState, string>> = { done: 'Done', planned: 'Planned', open: 'Open' };
 
 /** How many TBR books to suggest for each open letter. */
@@ -118,7 +118,7 @@ export class ChallengePage {
     return progress.progress.weeks.map((week) => ({ ...week, titles: week.bookIds.map((id) => this.title(id)).join(', ') }));
   });
   protected readonly weekCounts = computed(() => {
-    const counts: Record<WeekState, number> = { met: 0, missed: 0, upcoming: 0 };
+    const counts: Record<WeekState, number> = { met: 0, missed: 0, upcoming: 0, before: 0 };
     for (const week of this.weeks()) counts[week.state]++;
     return counts;
   });

@@ -37,6 +37,9 @@ describe('YearReview', () => {
     expect(figures).toEqual(['Books finished 3', 'Pages read 80', 'Hours reading 3', 'Days with reading 2', 'Longest run of days 2']);
     const notes = textOf(element().querySelector('.notes'));
     expect(notes).toContain('Book of the year The Quiet Orchard by Ada Okafor');
+    // The raw text, as a reader (or a copy) gets it: a space between the title and "by".
+    const best = Array.from(element().querySelectorAll('.notes p')).find((p) => p.textContent?.includes('Book of the year'));
+    expect(best?.textContent).toContain('The Quiet Orchard by Ada Okafor');
     expect(textOf(element().querySelector('.rated'))).toBe('Harrow Light 5 ★ The Quiet Orchard 4.5 ★');
     expect(notes).toContain('Longest book The Quiet Orchard (320 pages)');
     expect(notes).toContain('Busiest month May (150 minutes)');

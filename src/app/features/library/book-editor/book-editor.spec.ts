@@ -10,6 +10,7 @@ import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { unsavedWorkGuard } from '../../../core/pwa/unsaved-work-guard';
 import { choose, field, type } from '../../../core/testing/goal-fixtures';
 import { openTestJournal, textOf, type TestJournal } from '../../../core/testing/test-journal';
+import { fieldOverlaps } from '../../../ui/testing/field-overlaps';
 import { BookEditor } from './book-editor';
 
 @Component({ selector: 'll-book-page-stub', template: '<p>The book</p>' })
@@ -77,6 +78,15 @@ describe('BookEditor', () => {
   afterEach(async () => {
     document.querySelectorAll('.cdk-overlay-container').forEach((overlay) => (overlay.innerHTML = ''));
     await journal.close();
+  });
+
+  it('leaves room under every hint, on a phone and on a laptop, so no hint runs into the next field', async () => {
+    for (const width of ['360px', '760px']) {
+      page().style.width = width;
+      await untilTicked(() => true, 'the layout');
+      expect(fieldOverlaps(page(), 4)).withContext(width).toEqual([]);
+    }
+    expect(page().querySelectorAll('mat-hint').length).toBeGreaterThan(3);
   });
 
   describe('leaving the page', () => {

@@ -21,6 +21,7 @@ import {
   changedQuoteFields,
   EMPTY_QUOTE_FORM,
   POSITION_LABELS,
+  pageBeyondBook,
   positionError,
   tagsError,
   toQuoteFields,
@@ -90,6 +91,9 @@ export class QuoteCaptureDialog {
   protected readonly positionLabel = computed(() => POSITION_LABELS[this.format()]);
   protected readonly positionHint = computed(() => POSITION_HINTS[this.format()]);
   protected readonly problem = signal('');
+  /** A page past the book's end, said once; the next Save keeps it (editions differ). */
+  protected readonly pageWarning = signal('');
+  private confirmedPage = '';
   protected readonly editing = this.data.quote !== undefined;
   protected readonly fieldError = fieldError;
   protected readonly authorLine = authorLine;
@@ -179,6 +183,14 @@ export class QuoteCaptureDialog {
     this.problem.set('');
     const value: QuoteFormValue = { ...this.form.getRawValue(), labelIds: this.labelIds() };
     const format = this.format();
+    const book = this.books()?.find((candidate) => candidate.id === value.bookId);
+    const warning = pageBeyondBook(value.position, format, book?.pageCount);
+    if (warning && this.confirmedPage !== `${value.bookId}:${value.position.trim()}`) {
+      this.confirmedPage = `${value.bookId}:${value.position.trim()}`;
+      this.pageWarning.set(warning);
+      return;
+    }
+    this.pageWarning.set('');
     this.saving = true;
     try {
       const quote = this.data.quote;

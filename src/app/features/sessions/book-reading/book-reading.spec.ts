@@ -101,6 +101,17 @@ describe('BookReading', () => {
     expect(text()).toContain('About 5 h 20 min left');
   });
 
+  it('shows a book not started as its length and the time it takes, with no 0 % bar and no finish date', async () => {
+    const bookId = await store.create('books', { title: 'The Salt Road', format: 'print', pageCount: 300, status: 'tbr' });
+    await show(bookId);
+    await until(() => element().querySelector('.not-started'), 'the length');
+    // Brysbaert (2019) 238 wpm at 275 words a page: 300 pages in 347 min (5 h 47 min).
+    expect(text()).toContain('300 pages · about 5 h 47 min of reading at typical reading speeds (Brysbaert 2019)');
+    expect(text()).not.toContain('0 %');
+    expect(text()).not.toContain('finish around');
+    expect(element().querySelector('mat-progress-bar')).toBeNull();
+  });
+
   it('shows an audiobook in listened minutes', async () => {
     const bookId = await store.create('books', { title: 'Harbour Lights', format: 'audiobook', audioMinutes: 600, status: 'reading' });
     await session(bookId, '2026-03-08T03:00:00Z', 60, 0, 90, { format: 'audiobook', playbackSpeed: 1.5 });

@@ -13,8 +13,8 @@ import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { bookForecast, bookProgress } from '../book-forecast';
-import { minutesLine, MOOD_LABELS, positionLine, progressLine } from '../book-position';
-import { newestFirst } from '../../../core/read-model/reading-sessions';
+import { bookEnd, minutesLine, MOOD_LABELS, positionLine, progressLine } from '../book-position';
+import { latestPosition, newestFirst } from '../../../core/read-model/reading-sessions';
 import { offerUndo } from '../../../ui/offer-undo';
 
 /** One line of the session list. */
@@ -59,6 +59,14 @@ export class BookReading {
   private readonly books = liveQuerySignal(async (db) => (await db.rows('books').toArray()) as Book[], [] as Book[]);
 
   private readonly sessions = computed(() => newestFirst(this.allSessions().filter((s) => s.bookId === this.book().id)));
+  /** No session says where the reader got to yet: a length and a time to read, not a 0 % bar. */
+  protected readonly notStarted = computed(() => latestPosition(this.sessions()) === undefined);
+  protected readonly length = computed(() => {
+    const end = bookEnd(this.book());
+    if (end === null) return null;
+    const format = this.book().format;
+    return format === 'ebook' ? null : format === 'audiobook' ? `${minutesLine(end)} long` : `${end} pages`;
+  });
   protected readonly progress = computed(() => {
     const { position, end, fraction } = bookProgress(this.book(), this.sessions());
     if (end === null || fraction === null) return null;

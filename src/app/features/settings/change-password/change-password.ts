@@ -16,6 +16,18 @@ import { passwordPolicy } from '../../../ui/password-validator';
   selector: 'll-change-password',
   imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule],
   templateUrl: './change-password.html',
+  // One field per row with room between them: a hint or an error never touches the next field.
+  styles: `
+    .stack {
+      display: flex;
+      flex-direction: column;
+      gap: 16px;
+      max-width: 420px;
+    }
+    .stack p {
+      margin: 0;
+    }
+  `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ChangePassword {

@@ -40,20 +40,23 @@ describe('StopDialog', () => {
   });
 
   /** Times 25 minutes of a book and stops, as the timer page does, then opens the form. */
-  async function stopped(book: Record<string, unknown>, previous?: Partial<Session>) {
+  async function stopped(book: Record<string, unknown>, previous?: Partial<Session>, minutes = 25) {
     const bookId = await store.create('books', { title: 'The Orchard Under Snow', ...book });
     if (previous) await store.create('sessions', { bookId, startedAt: '2026-03-07T20:00:00.000Z', endedAt: '2026-03-07T20:30:00.000Z', ...previous });
     const timer = TestBed.inject(ReadingTimer);
     await timer.start(bookId);
-    clock.advance(25 * MINUTE);
+    clock.advance(minutes * MINUTE);
     const sessionId = (await timer.stop())!;
     const ref = TestBed.inject(MatDialog).open<StopDialog, StopDialogData, boolean>(StopDialog, { data: { sessionId } });
     const closed = firstValueFrom(ref.afterClosed());
+    TestBed.tick();
+    headingsSeen.push(document.querySelector('ll-stop-dialog h2')?.textContent ?? '');
     await until(() => (TestBed.tick(), !!document.querySelector('ll-stop-dialog input')), 3000, 'the form');
     await until(() => (TestBed.tick(), field('toPosition')?.value !== '' || !previous), 3000, 'the prefill');
     return { bookId, sessionId, closed };
   }
 
+  const headingsSeen: string[] = [];
   const field = (name: string) => document.querySelector<HTMLInputElement & HTMLSelectElement>(`ll-stop-dialog [formcontrolname="${name}"]`);
   const dialogText = () => document.querySelector('ll-stop-dialog')?.textContent?.replace(/\s+/g, ' ') ?? '';
   const click = (name: string) => Array.from(document.querySelectorAll<HTMLButtonElement>('ll-stop-dialog button')).find((b) => b.textContent!.trim() === name)!.click();
@@ -111,5 +114,39 @@ describe('StopDialog', () => {
     click('Skip');
     expect(await closed).toBeFalse();
     expect(((await store.get('sessions', sessionId)) as Session).activeMinutes).toBe(25);
+  });
+
+  it('says "1 minute" for a one-minute session, never "less than a minute", even while it loads', async () => {
+    headingsSeen.length = 0;
+    const { sessionId, closed } = await stopped({ format: 'print', pageCount: 320, status: 'reading' }, { toPosition: 40 }, 1);
+    await until(() => (TestBed.tick(), dialogText().includes('You read for 1 minute')), 3000, 'the heading');
+    expect(headingsSeen.join(' ')).not.toContain('less than a minute');
+    expect(dialogText()).not.toContain('under a minute');
+    click('Skip');
+    expect(await closed).toBeFalse();
+    expect(((await store.get('sessions', sessionId)) as Session).deleted ?? false).toBeFalse();
+  });
+
+  it('discards a session under a minute on Skip, and says so before and after', async () => {
+    const { sessionId, closed } = await stopped({ format: 'print', pageCount: 320, status: 'reading' }, undefined, 0.5);
+    await until(() => (TestBed.tick(), dialogText().includes('under a minute')), 3000, 'the warning');
+    expect(dialogText()).toContain('You read for less than a minute');
+    click('Skip');
+    expect(await closed).toBeFalse();
+    for (let tries = 0; tries < 100 && !((await store.get('sessions', sessionId)) as Session).deleted; tries++)
+      await new Promise((resolve) => setTimeout(resolve, 20));
+    expect(((await store.get('sessions', sessionId)) as Session).deleted).toBeTrue();
+    expect(document.querySelector('mat-snack-bar-container')?.textContent).toContain('the session was not kept');
+  });
+
+  it('keeps a session under a minute when the reader saves it', async () => {
+    const { sessionId, closed } = await stopped({ format: 'print', pageCount: 320, status: 'reading' }, undefined, 0.5);
+    await until(() => (TestBed.tick(), dialogText().includes('under a minute')), 3000, 'the form to load');
+    type('toPosition', '12');
+    click('Save');
+    expect(await closed).toBeTrue();
+    const session = (await store.get('sessions', sessionId)) as Session;
+    expect(session.deleted ?? false).toBeFalse();
+    expect(session.toPosition).toBe(12);
   });
 });

@@ -4,6 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { MatSnackBar } from '@angular/material/snack-bar';
 
 import { SESSION_MOODS, type Book, type Session } from '@shared/sync/schema/collections';
 
@@ -39,6 +40,7 @@ export class StopDialog {
   private readonly store = inject(JournalStore);
   private readonly bookStatus = inject(BookStatus);
   private readonly clock = inject(CLOCK);
+  private readonly snackBar = inject(MatSnackBar);
 
   protected readonly session = signal<Session | undefined>(undefined);
   protected readonly book = signal<Book | undefined>(undefined);
@@ -67,8 +69,16 @@ export class StopDialog {
     return this.unit() === 'minute' ? `Of ${end} (${minutesText(end)})` : `Of ${end} pages`;
   });
   protected readonly heading = computed(() => {
-    const minutes = minutesWords(this.session()?.activeMinutes);
+    const session = this.session();
+    // Until the session is read, no length at all rather than a wrong one.
+    if (!session) return 'Session saved';
+    const minutes = minutesWords(session.activeMinutes);
     return this.unit() === 'minute' ? `You listened for ${minutes}` : `You read for ${minutes}`;
+  });
+  /** A session under a minute is not worth keeping unless the reader adds to it. */
+  protected readonly underAMinute = computed(() => {
+    const session = this.session();
+    return !!session && !((session.activeMinutes ?? 0) >= 1);
   });
   protected readonly moods = SESSION_MOODS;
   protected readonly moodLabels = MOOD_LABELS;
@@ -120,6 +130,16 @@ export class StopDialog {
     const book = this.book();
     if (book) await this.bookStatus.change(book.id, 'finished');
     this.ref.close(true);
+  }
+
+  /** Skip: keeps the saved session as it is, except one under a minute, which it discards. */
+  protected async skip(): Promise<void> {
+    const session = this.session();
+    if (this.step() === 'form' && session && this.underAMinute()) {
+      await this.store.write('sessions', session.id, { deleted: true });
+      this.snackBar.open('Under a minute, so the session was not kept.', 'OK', { duration: 6000 });
+    }
+    this.close();
   }
 
   protected close(): void {

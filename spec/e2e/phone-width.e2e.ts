@@ -1,0 +1,105 @@
+import type { Page } from 'playwright-core';
+
+import { seedDemoLibrary } from '../../sync-server/src/demo/seed-demo-library';
+import { testDataSource } from '../support/test-database';
+import { seriousViolations } from './support/axe';
+import { useServerAndBrowser } from './support/harness';
+import { registerThroughApi, signInThroughUi } from './support/reader';
+
+/** A phone (390 × 844) and a tablet upright (768 × 1024), the sizes readers use most. */
+const VIEWPORTS = [
+  { width: 390, height: 844 },
+  { width: 768, height: 1024 },
+] as const;
+
+/** Every route a reader can open, with ids filled in from the seeded library. */
+function routes(ids: { book: string; series: string; notebook: string | null }): string[] {
+  const year = new Date().getFullYear();
+  const month = String(new Date().getMonth() + 1).padStart(2, '0');
+  return [
+    '/today',
+    '/library',
+    '/library/new',
+    `/library/${ids.book}`,
+    `/library/${ids.book}/edit`,
+    `/library/${ids.book}/readings/new`,
+    `/library/${ids.book}/sessions/new`,
+    '/journal',
+    '/journal/quotes',
+    '/journal/notebooks',
+    ...(ids.notebook ? [`/journal/notebooks/${ids.notebook}`] : []),
+    '/journal/series',
+    `/journal/series/${ids.series}`,
+    '/journal/favourites',
+    '/journal/labels',
+    '/goals',
+    `/goals/${year - 1}`,
+    `/goals/${year}/${month}`,
+    '/goals/challenges',
+    '/goals/challenges/new',
+    '/insights',
+    `/insights/${year}`,
+    `/insights/${year}/review`,
+    '/timer',
+    '/settings',
+    '/no-such-page',
+  ];
+}
+
+/** The first link whose address matches, as the page lists it. */
+async function firstId(page: Page, url: string, pattern: RegExp): Promise<string | null> {
+  await page.goto(url);
+  try {
+    await page.waitForFunction((source) => [...document.querySelectorAll('a[href]')].some((a) => new RegExp(source).test(a.getAttribute('href') ?? '')), pattern.source, {
+      timeout: 10_000,
+    });
+  } catch {
+    return null;
+  }
+  const href = await page.evaluate((source) => [...document.querySelectorAll('a[href]')].map((a) => a.getAttribute('href') ?? '').find((h) => new RegExp(source).test(h)), pattern.source);
+  return href ? href.split('/').pop()! : null;
+}
+
+describe('Every screen at phone and tablet width', () => {
+  const harness = useServerAndBrowser();
+
+  it('fits the window (no sideways scrolling) and has no serious or critical axe findings, signed in as a reader with a library', async () => {
+    const { baseUrl } = harness.server;
+    const reader = await registerThroughApi(baseUrl, 'Oona Teller');
+    const dataSource = await testDataSource();
+    await seedDemoLibrary(dataSource, reader.user.id);
+    const context = await harness.browser.newContext({ viewport: VIEWPORTS[0] });
+    const page = await context.newPage();
+    await signInThroughUi(page, baseUrl, reader.user.email, reader.password);
+
+    const book = await firstId(page, `${baseUrl}/library`, /^\/library\/(?!new$)[^/]+$/);
+    const series = await firstId(page, `${baseUrl}/journal/series`, /^\/journal\/series\/[^/]+$/);
+    const notebook = await firstId(page, `${baseUrl}/journal/notebooks`, /^\/journal\/notebooks\/[^/]+$/);
+    expect(book).withContext('a book of the seeded library').not.toBeNull();
+    // A 500-character title with no space to break at must wrap, not widen the page.
+    await page.goto(`${baseUrl}/library/new`);
+    await page.getByLabel('Title', { exact: true }).fill('Lanternlight'.repeat(42).slice(0, 500));
+    await page.getByRole('button', { name: 'Save' }).click();
+    await page.waitForURL(/\/library\/(?!new$)[^/]+$/);
+    const longTitle = page.url().split('/').pop()!;
+    expect(series).withContext('a series of the seeded library').not.toBeNull();
+
+    const tooWide: string[] = [];
+    const findings: string[] = [];
+    for (const viewport of VIEWPORTS) {
+      await page.setViewportSize(viewport);
+      for (const route of [...routes({ book: book!, series: series!, notebook }), `/library/${longTitle}`]) {
+        await page.goto(`${baseUrl}${route}`);
+        await page.locator('main h1, main h2').first().waitFor({ timeout: 10_000 });
+        // Lazy parts (charts, covers, live queries) settle before measuring.
+        await page.waitForLoadState('networkidle');
+        const { scrollWidth, windowWidth } = await page.evaluate(() => ({ scrollWidth: document.documentElement.scrollWidth, windowWidth: window.innerWidth }));
+        if (scrollWidth > windowWidth) tooWide.push(`${route} at ${viewport.width}: ${scrollWidth} px wide`);
+        for (const finding of await seriousViolations(page)) findings.push(`${route} at ${viewport.width}: ${finding}`);
+      }
+    }
+    expect(tooWide).toEqual([]);
+    expect(findings).toEqual([]);
+    await context.close();
+  }, 900_000);
+});
