@@ -30,11 +30,7 @@ module.exports = function (config) {
   config.set({
     basePath: '',
     frameworks: ['jasmine'],
-    plugins: [
-      require('karma-jasmine'),
-      require('karma-chrome-launcher'),
-      { 'reporter:summary': ['type', SummaryReporter] },
-    ],
+    plugins: [require('karma-jasmine'), require('karma-chrome-launcher'), { 'reporter:summary': ['type', SummaryReporter] }],
     client: {
       clearContext: true,
       jasmine: { random: true, seed: process.env.KARMA_SEED, failSpecWithNoExpectations: true },

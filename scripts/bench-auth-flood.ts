@@ -121,10 +121,17 @@ async function main(): Promise<void> {
   await dataSource.destroy();
 
   const ratio = p(flooded, 0.99) / p(alone, 0.99);
-  console.log(`bench-auth-flood: ${ROUNDS} rounds of ${PHASE_MS / 1000} s alone, then ${PHASE_MS / 1000} s with ${FLOOD_SIGN_INS} wrong sign-ins (bcrypt cost 10, ${config.hashThreads} hashing thread(s), queue ${config.hashQueue})`);
+  console.log(
+    `bench-auth-flood: ${ROUNDS} rounds of ${PHASE_MS / 1000} s alone, then ${PHASE_MS / 1000} s with ${FLOOD_SIGN_INS} wrong sign-ins (bcrypt cost 10, ${config.hashThreads} hashing thread(s), queue ${config.hashQueue})`,
+  );
   console.log(`  pull of ${BOOKS * 3} field values alone:      ${alone.length} pulls, p50 ${p(alone, 0.5).toFixed(1)} ms, p99 ${p(alone, 0.99).toFixed(1)} ms`);
   console.log(`  pull during the sign-in flood: ${flooded.length} pulls, p50 ${p(flooded, 0.5).toFixed(1)} ms, p99 ${p(flooded, 0.99).toFixed(1)} ms`);
-  console.log(`  sign-in answers: ${[...signIns.entries()].sort(([a], [b]) => a - b).map(([status, count]) => `${count} × ${status}`).join(', ')}`);
+  console.log(
+    `  sign-in answers: ${[...signIns.entries()]
+      .sort(([a], [b]) => a - b)
+      .map(([status, count]) => `${count} × ${status}`)
+      .join(', ')}`,
+  );
   console.log(`pull p99 during the flood / alone: ${ratio.toFixed(2)} (goal ≤ 2.00)`);
 }
 

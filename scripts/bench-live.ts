@@ -120,7 +120,9 @@ function report(label: string, samples: readonly number[], baseline: number): vo
   console.log(`  p50 ${ms(p50)}   p95 ${ms(p95)}   max ${ms(Math.max(...arrived))}   not arrived in 10 s: ${samples.length - arrived.length}`);
   console.log(`  goal p95 < 1000 ms: ${p95 < 1000 ? 'met' : 'NOT met'}`);
   console.log(`  baseline, A's own sync cycle (push + pull), p50 ${ms(baseline)}: end-to-end p50 is ${(p50 / baseline).toFixed(2)}× that`);
-  console.log(`  without streams (pull every ${PERIODIC_PULL_MS / 1000} s while visible) a change waits ${PERIODIC_PULL_MS / 2000} s on average: ${(PERIODIC_PULL_MS / 2 / p50).toFixed(0)}× the p50 here`);
+  console.log(
+    `  without streams (pull every ${PERIODIC_PULL_MS / 1000} s while visible) a change waits ${PERIODIC_PULL_MS / 2000} s on average: ${(PERIODIC_PULL_MS / 2 / p50).toFixed(0)}× the p50 here`,
+  );
 }
 
 /** Device B is the app in Chromium, signed in on the second process; A is a Node device on the first. */
@@ -182,8 +184,12 @@ async function idleStreams(first: ServerProcess, second: ServerProcess): Promise
   const cpuShare = (start: { cpuMs: number }, end: { cpuMs: number }) => ((end.cpuMs - start.cpuMs) / HEARTBEAT_WINDOW_MS) * 100;
   const count = streams.length - refused;
   console.log(`\n${count} idle streams on one instance (${IDLE_READERS} readers × ${STREAMS_PER_READER}; ${refused} refused), over ${HEARTBEAT_WINDOW_MS / 1000} s`);
-  console.log(`  resident memory  ${(quietEnd.rssKb / 1024).toFixed(1)} MiB → ${(openEnd.rssKb / 1024).toFixed(1)} MiB (+${((openEnd.rssKb - quietEnd.rssKb) / count).toFixed(1)} KiB a stream)`);
-  console.log(`  CPU              ${cpuShare(quietStart, quietEnd).toFixed(2)} % → ${cpuShare(openStart, openEnd).toFixed(2)} % of one core (${heartbeats} heartbeats received)`);
+  console.log(
+    `  resident memory  ${(quietEnd.rssKb / 1024).toFixed(1)} MiB → ${(openEnd.rssKb / 1024).toFixed(1)} MiB (+${((openEnd.rssKb - quietEnd.rssKb) / count).toFixed(1)} KiB a stream)`,
+  );
+  console.log(
+    `  CPU              ${cpuShare(quietStart, quietEnd).toFixed(2)} % → ${cpuShare(openStart, openEnd).toFixed(2)} % of one core (${heartbeats} heartbeats received)`,
+  );
 }
 
 async function main(): Promise<void> {

@@ -56,7 +56,14 @@ const agent = new http.Agent({ keepAlive: true, maxSockets: CONNECTIONS });
 function send(base: URL, method: string, path: string, token: string, body?: string): Promise<{ status: number; text: string }> {
   return new Promise((resolve, reject) => {
     const req = http.request(
-      { agent, host: base.hostname, port: base.port, method, path, headers: { authorization: `Bearer ${token}`, ...(body ? { 'content-type': 'application/json', 'content-length': Buffer.byteLength(body) } : {}) } },
+      {
+        agent,
+        host: base.hostname,
+        port: base.port,
+        method,
+        path,
+        headers: { authorization: `Bearer ${token}`, ...(body ? { 'content-type': 'application/json', 'content-length': Buffer.byteLength(body) } : {}) },
+      },
       (res) => {
         const chunks: Buffer[] = [];
         res.on('data', (chunk: Buffer) => chunks.push(chunk));
@@ -131,13 +138,17 @@ const rssMb = (pid: number | undefined) => {
 function report(label: string, tally: Tally): Record<Kind, { rps: number; p50: number; p99: number }> {
   const total = Object.values(tally.latencies).reduce((sum, list) => sum + list.length, 0);
   const errors = Object.values(tally.errors).reduce((sum, n) => sum + n, 0);
-  console.log(`\n${label}: ${(total / tally.seconds).toFixed(0)} requests/s, ${errors} errors (statuses: ${[...tally.statuses].map(([s, n]) => `${s}×${n}`).join(', ')})`);
+  console.log(
+    `\n${label}: ${(total / tally.seconds).toFixed(0)} requests/s, ${errors} errors (statuses: ${[...tally.statuses].map(([s, n]) => `${s}×${n}`).join(', ')})`,
+  );
   const rows = {} as Record<Kind, { rps: number; p50: number; p99: number }>;
   for (const kind of Object.keys(tally.latencies) as Kind[]) {
     const list = tally.latencies[kind];
     const row = { rps: list.length / tally.seconds, p50: list.length ? quantile(list, 0.5) : NaN, p99: list.length ? quantile(list, 0.99) : NaN };
     rows[kind] = row;
-    console.log(`  ${kind.padEnd(11)} ${row.rps.toFixed(0).padStart(6)}/s  p50 ${row.p50.toFixed(1).padStart(6)} ms  p99 ${row.p99.toFixed(1).padStart(7)} ms  errors ${tally.errors[kind]}`);
+    console.log(
+      `  ${kind.padEnd(11)} ${row.rps.toFixed(0).padStart(6)}/s  p50 ${row.p50.toFixed(1).padStart(6)} ms  p99 ${row.p99.toFixed(1).padStart(7)} ms  errors ${tally.errors[kind]}`,
+    );
   }
   return rows;
 }
@@ -159,7 +170,9 @@ async function main(): Promise<void> {
   const store = new SyncStore(dataSource);
   const all: Reader[] = [];
   for (let n = 0; n < READERS; n++) {
-    const [{ id: userId }] = await dataSource.query(`INSERT INTO users (email, display_name, password_hash) VALUES ($1, 'Load Reader', 'x') RETURNING id`, [`load-${randomUUID()}@example.com`]);
+    const [{ id: userId }] = await dataSource.query(`INSERT INTO users (email, display_name, password_hash) VALUES ($1, 'Load Reader', 'x') RETURNING id`, [
+      `load-${randomUUID()}@example.com`,
+    ]);
     const [{ id: sessionId }] = await dataSource.query(`INSERT INTO device_sessions (user_id, name) VALUES ($1, 'bench') RETURNING id`, [userId]);
     const clock = new HlcClock(`seed${n}`);
     const books = n < HEAVY ? HEAVY_BOOKS : 3;
@@ -187,7 +200,9 @@ async function main(): Promise<void> {
         reader.cursor = (JSON.parse((await send(proxied, 'GET', '/api/sync/pull', reader.token)).text) as { cursor: string }).cursor;
       }),
     );
-    console.log(`\nThrough nginx → 3 instances${cluster.pgBouncer ? ' → PgBouncer' : ''}: ${CONNECTIONS} connections, ${SECONDS} s (after ${WARM_UP_SECONDS} s of warm-up)`);
+    console.log(
+      `\nThrough nginx → 3 instances${cluster.pgBouncer ? ' → PgBouncer' : ''}: ${CONNECTIONS} connections, ${SECONDS} s (after ${WARM_UP_SECONDS} s of warm-up)`,
+    );
     await drive(proxied, readers, WARM_UP_SECONDS);
     clusterRows = report('cluster', await drive(proxied, readers, SECONDS));
 
@@ -199,7 +214,9 @@ async function main(): Promise<void> {
       console.log(`\nSoak: the same mix through the cluster for ${SOAK_SECONDS} s; RSS sampled every 10 s`);
       const soakTally = await drive(proxied, readers, SOAK_SECONDS, () => samples.push(pids.map(rssMb)));
       const end = pids.map(rssMb);
-      soak = cluster.instances.map((instance, i) => `${instance.name}: RSS ${start[i]} MB → ${end[i]} MB (max ${Math.max(...samples.map((s) => s[i]!), end[i]!)} MB)`);
+      soak = cluster.instances.map(
+        (instance, i) => `${instance.name}: RSS ${start[i]} MB → ${end[i]} MB (max ${Math.max(...samples.map((s) => s[i]!), end[i]!)} MB)`,
+      );
       report('soak', soakTally);
       for (const line of soak) console.log(`  ${line}`);
     }

@@ -92,10 +92,9 @@ async function main(): Promise<void> {
   const rows: { path: string; round: number; oursMs: number; rawMs: number }[] = [];
   let lastUser = '';
   for (let round = 1; round <= ROUNDS; round++) {
-    const [{ id: userId }] = await dataSource.query(
-      `INSERT INTO users (email, display_name, password_hash) VALUES ($1, 'Bench Reader', 'x') RETURNING id`,
-      [`bench-${randomUUID()}@example.com`],
-    );
+    const [{ id: userId }] = await dataSource.query(`INSERT INTO users (email, display_name, password_hash) VALUES ($1, 'Bench Reader', 'x') RETURNING id`, [
+      `bench-${randomUUID()}@example.com`,
+    ]);
     lastUser = userId;
     const rowIds = Array.from({ length: ROWS }, () => randomUUID());
     const clock = new HlcClock('bench-device');
@@ -147,8 +146,12 @@ async function main(): Promise<void> {
       `  round ${row.round} ${row.path.padEnd(9)} ours ${row.oursMs.toFixed(0).padStart(6)} ms (${((changes / row.oursMs) * 1000).toFixed(0)} changes/s)  raw upsert ${row.rawMs.toFixed(0).padStart(6)} ms  ratio ${(row.rawMs / row.oursMs).toFixed(2)}`,
     );
   }
-  console.log(`push merge throughput / raw INSERT … ON CONFLICT DO UPDATE, median: new rows ${median(insertRatios).toFixed(2)}, edits ${median(updateRatios).toFixed(2)} (goal ≥ 0.50)`);
-  console.log(`pull to a fresh device over HTTP: ${state.size} field values in ${pages} pages, ${pullMs.toFixed(0)} ms (${((state.size / pullMs) * 1000).toFixed(0)} values/s)`);
+  console.log(
+    `push merge throughput / raw INSERT … ON CONFLICT DO UPDATE, median: new rows ${median(insertRatios).toFixed(2)}, edits ${median(updateRatios).toFixed(2)} (goal ≥ 0.50)`,
+  );
+  console.log(
+    `pull to a fresh device over HTTP: ${state.size} field values in ${pages} pages, ${pullMs.toFixed(0)} ms (${((state.size / pullMs) * 1000).toFixed(0)} values/s)`,
+  );
   await dataSource.destroy();
   if (state.size !== changes) {
     console.error(`expected ${changes} field values after the pull, got ${state.size}`);

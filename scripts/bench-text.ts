@@ -82,8 +82,11 @@ async function main(): Promise<void> {
   await dataSource.query(`CREATE TABLE IF NOT EXISTS bench_raw_pages (LIKE notebook_pages INCLUDING ALL,
       FOREIGN KEY (user_id) REFERENCES users (id) ON DELETE CASCADE)`);
   const newReader = async () =>
-    (await dataSource.query(`INSERT INTO users (email, display_name, password_hash) VALUES ($1, 'Bench Reader', 'x') RETURNING id`, [`bench-${randomUUID()}@example.com`]))[0]
-      .id as string;
+    (
+      await dataSource.query(`INSERT INTO users (email, display_name, password_hash) VALUES ($1, 'Bench Reader', 'x') RETURNING id`, [
+        `bench-${randomUUID()}@example.com`,
+      ])
+    )[0].id as string;
   const [ours, plain] = [await newReader(), await newReader()];
   const rowId = randomUUID();
   const name = textDocName('notebookPages', rowId, 'body');
@@ -123,7 +126,10 @@ async function main(): Promise<void> {
     }
   });
   // The baseline reader's page, as a pull would read it: a plain text column, no Yjs state.
-  await dataSource.query(`INSERT INTO notebook_pages (user_id, id, body, clocks, seq) SELECT user_id, id, body, clocks, seq FROM bench_raw_pages WHERE user_id = $1`, [plain]);
+  await dataSource.query(
+    `INSERT INTO notebook_pages (user_id, id, body, clocks, seq) SELECT user_id, id, body, clocks, seq FROM bench_raw_pages WHERE user_id = $1`,
+    [plain],
+  );
 
   const [{ bytes: mergedBytes }] = await dataSource.query('SELECT length(state) AS bytes FROM text_states WHERE user_id = $1', [ours]);
   await dataSource.query(`UPDATE text_states SET updated_at = now() - interval '1 minute' WHERE user_id = $1`, [ours]);
@@ -161,12 +167,22 @@ async function main(): Promise<void> {
   await dataSource.destroy();
 
   const kib = (bytes: number) => `${(bytes / 1024).toFixed(1)} KiB`;
-  console.log(`bench-text: one page of ${finalText.length.toLocaleString('en')} characters typed in ${EDITS.toLocaleString('en')} edits, pushed in batches of ${BATCH}`);
-  console.log(`  server merge      Yjs ${mergeMs.toFixed(0).padStart(6)} ms  plain LWW ${plainMs.toFixed(0).padStart(6)} ms  ratio ${(mergeMs / plainMs).toFixed(2)}`);
-  console.log(`  bytes pushed      Yjs ${kib(pushedBytes).padStart(10)}  plain LWW ${kib(plainPushedBytes).padStart(10)}  ratio ${(pushedBytes / plainPushedBytes).toFixed(2)}`);
+  console.log(
+    `bench-text: one page of ${finalText.length.toLocaleString('en')} characters typed in ${EDITS.toLocaleString('en')} edits, pushed in batches of ${BATCH}`,
+  );
+  console.log(
+    `  server merge      Yjs ${mergeMs.toFixed(0).padStart(6)} ms  plain LWW ${plainMs.toFixed(0).padStart(6)} ms  ratio ${(mergeMs / plainMs).toFixed(2)}`,
+  );
+  console.log(
+    `  bytes pushed      Yjs ${kib(pushedBytes).padStart(10)}  plain LWW ${kib(plainPushedBytes).padStart(10)}  ratio ${(pushedBytes / plainPushedBytes).toFixed(2)}`,
+  );
   console.log(`  stored state      merged ${kib(Number(mergedBytes))}, compacted by the job in ${compactMs.toFixed(0)} ms to ${kib(Number(compactBytes))}`);
-  console.log(`  bytes pulled      Yjs ${kib(oursOpen.bytes).padStart(10)}  plain LWW ${kib(plainOpen.bytes).padStart(10)}  ratio ${(oursOpen.bytes / plainOpen.bytes).toFixed(2)}`);
-  console.log(`  open, fresh device (pull + show, median of 7)  Yjs ${oursOpen.ms.toFixed(1)} ms  plain LWW ${plainOpen.ms.toFixed(1)} ms  ratio ${(oursOpen.ms / plainOpen.ms).toFixed(2)}`);
+  console.log(
+    `  bytes pulled      Yjs ${kib(oursOpen.bytes).padStart(10)}  plain LWW ${kib(plainOpen.bytes).padStart(10)}  ratio ${(oursOpen.bytes / plainOpen.bytes).toFixed(2)}`,
+  );
+  console.log(
+    `  open, fresh device (pull + show, median of 7)  Yjs ${oursOpen.ms.toFixed(1)} ms  plain LWW ${plainOpen.ms.toFixed(1)} ms  ratio ${(oursOpen.ms / plainOpen.ms).toFixed(2)}`,
+  );
 }
 
 main().catch((err: unknown) => {

@@ -8,4 +8,6 @@ if (name === 'load') ensureDebianPackage('/usr/sbin/nginx', 'nginx'); // it runs
 startDatabase();
 run('bash', ['scripts/db.sh', 'fresh-db', 'lamplight_bench']);
 run(bin('tsc'), ['-p', 'sync-server/tsconfig.json']);
-run('node', [`dist/node/scripts/${name.startsWith('chaos') ? name : `bench-${name}`}.js`, ...process.argv.slice(3)], { env: { ...process.env, DATABASE_URL: databaseUrl('lamplight_bench') } });
+run('node', [`dist/node/scripts/${name.startsWith('chaos') ? name : `bench-${name}`}.js`, ...process.argv.slice(3)], {
+  env: { ...process.env, DATABASE_URL: databaseUrl('lamplight_bench') },
+});

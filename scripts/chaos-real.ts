@@ -31,7 +31,9 @@ async function main(): Promise<void> {
     });
     const { outcome } = report;
     console.log(`done in ${((performance.now() - started) / 1000).toFixed(1)} s`);
-    console.log(`  faults: ${report.kills} servers killed mid-push, ${report.postgresRestarts} PostgreSQL restart(s), ${report.droppedResponses} answers lost, ${report.deviceCrashes} device crashes`);
+    console.log(
+      `  faults: ${report.kills} servers killed mid-push, ${report.postgresRestarts} PostgreSQL restart(s), ${report.droppedResponses} answers lost, ${report.deviceCrashes} device crashes`,
+    );
     console.log(`  seen by devices: ${report.networkErrors} network errors, ${report.serverErrors} 5xx answers (while something was down)`);
     console.log(`  writes                   ${outcome.writes} (${outcome.acknowledged} acknowledged)`);
     console.log(`  divergent states         ${outcome.divergent}`);

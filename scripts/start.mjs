@@ -45,7 +45,11 @@ const inbox = process.env.SMTP_URL ? null : spawn('node', ['dist/node/sync-serve
 if (inbox) children.push(inbox);
 const catalogue = process.env.LAMPLIGHT_CATALOGUE_URLS
   ? null
-  : spawn('node', ['dist/node/sync-server/src/local-catalogue/main.js'], { cwd: root, stdio: 'inherit', env: { ...env, LAMPLIGHT_LOCAL_CATALOGUE_PORT: cataloguePort } });
+  : spawn('node', ['dist/node/sync-server/src/local-catalogue/main.js'], {
+      cwd: root,
+      stdio: 'inherit',
+      env: { ...env, LAMPLIGHT_LOCAL_CATALOGUE_PORT: cataloguePort },
+    });
 if (catalogue) children.push(catalogue);
 const serve = cluster ? ['dist/node/scripts/ops/run-cluster.js', ...(withPgBouncer ? ['--pgbouncer'] : [])] : ['dist/node/sync-server/src/main.js'];
 const server = spawn('node', serve, { cwd: root, stdio: 'inherit', env });

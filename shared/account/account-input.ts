@@ -36,9 +36,7 @@ const deviceId = z
 /** A new password, checked against the shared policy (NIST SP 800-63B-4). */
 const newPassword = z.string({ error: 'Password is required' });
 
-function refinePassword<T extends { password?: string; newPassword?: string; email?: string; displayName?: string }>(
-  key: 'password' | 'newPassword',
-) {
+function refinePassword<T extends { password?: string; newPassword?: string; email?: string; displayName?: string }>(key: 'password' | 'newPassword') {
   return (value: T, ctx: z.RefinementCtx) => {
     const password = value[key];
     if (typeof password !== 'string') return;

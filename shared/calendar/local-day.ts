@@ -24,4 +24,3 @@ export function localDay(timestamp: string, timeZone: string): string {
   assertTimeZone(timeZone);
   return format(instant, 'yyyy-MM-dd', { in: tz(timeZone) });
 }
-

@@ -17,7 +17,9 @@ describe('parseCalendarDay', () => {
   it('rejects days that do not exist and other shapes', () => {
     // RFC 3339 §5.6 full-date: 4-digit year, 2-digit month, 2-digit day; day ≤ days in month.
     for (const text of ['2026-02-30', '2026-04-31', '2026-13-01', '2026-2-3', '20260203', '2026-02-03T00:00', '']) {
-      expect(() => parseCalendarDay(text)).withContext(text).toThrowError(RangeError);
+      expect(() => parseCalendarDay(text))
+        .withContext(text)
+        .toThrowError(RangeError);
     }
   });
 });

@@ -4,12 +4,25 @@ import { ChallengeBook } from './challenge-book';
 import { expectProperty } from '../testing/expect-property';
 
 // Invented books.
-const book = (id: string, finishedOn: string | undefined, status = 'finished'): ChallengeBook => ({ id, title: `Saltmarsh ${id}`, authors: ['Kit Ashdown'], status, finishedOn });
+const book = (id: string, finishedOn: string | undefined, status = 'finished'): ChallengeBook => ({
+  id,
+  title: `Saltmarsh ${id}`,
+  authors: ['Kit Ashdown'],
+  status,
+  finishedOn,
+});
 
 describe('booksFinishedIn', () => {
   it('keeps finished books inside the period, both ends included, earliest first then by id', () => {
     // Our rule; RFC 3339 §5.1: same-shaped dates sort as text in time order.
-    const books = [book('c', '2026-12-31'), book('b', '2026-01-01'), book('a', '2026-01-01'), book('x', '2027-01-01'), book('r', '2026-05-05', 'reading'), book('n', undefined)];
+    const books = [
+      book('c', '2026-12-31'),
+      book('b', '2026-01-01'),
+      book('a', '2026-01-01'),
+      book('x', '2027-01-01'),
+      book('r', '2026-05-05', 'reading'),
+      book('n', undefined),
+    ];
     expect(booksFinishedIn(books, { start: '2026-01-01', end: '2026-12-31' }).map((entry) => entry.id)).toEqual(['a', 'b', 'c']);
   });
 
@@ -26,7 +39,9 @@ describe('booksFinishedIn', () => {
 
   it('agrees with comparing time values, for any dates', () => {
     // Reference: ECMA-262 Date.parse of a date-only ISO string is UTC midnight of that day.
-    const day = fc.date({ min: new Date('1900-01-01T00:00:00Z'), max: new Date('2100-12-31T00:00:00Z'), noInvalidDate: true }).map((date) => date.toISOString().slice(0, 10));
+    const day = fc
+      .date({ min: new Date('1900-01-01T00:00:00Z'), max: new Date('2100-12-31T00:00:00Z'), noInvalidDate: true })
+      .map((date) => date.toISOString().slice(0, 10));
     expectProperty(
       fc.property(fc.array(day, { maxLength: 20 }), day, day, (days, a, b) => {
         const [start, end] = Date.parse(a) <= Date.parse(b) ? [a, b] : [b, a];

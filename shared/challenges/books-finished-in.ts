@@ -11,10 +11,7 @@ import { ChallengeBook, ChallengePeriod } from './challenge-book';
  * @example
  * booksFinishedIn(books, { start: '2026-01-01', end: '2026-12-31' }).map((book) => book.id)
  */
-export function booksFinishedIn<Book extends ChallengeBook>(
-  books: readonly Book[],
-  period: ChallengePeriod,
-): (Book & { readonly finishedOn: string })[] {
+export function booksFinishedIn<Book extends ChallengeBook>(books: readonly Book[], period: ChallengePeriod): (Book & { readonly finishedOn: string })[] {
   const finished = books.filter((book): book is Book & { finishedOn: string } => {
     if (book.status !== 'finished' || book.finishedOn === undefined) return false;
     parseCalendarDay(book.finishedOn);

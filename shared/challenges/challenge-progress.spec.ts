@@ -72,7 +72,14 @@ describe('challengeProgress', () => {
 
   it('knows a prompt planned with a book not yet finished', () => {
     const progress = challengeProgress(
-      { kind: 'prompts', ...year, prompts: [{ id: 'p1', text: 'A bird in the title', bookId: 'owl' }, { id: 'p2', text: 'A debut', bookId: null }] },
+      {
+        kind: 'prompts',
+        ...year,
+        prompts: [
+          { id: 'p1', text: 'A bird in the title', bookId: 'owl' },
+          { id: 'p2', text: 'A debut', bookId: null },
+        ],
+      },
       { library, today },
     );
     if (progress?.kind !== 'prompts') return fail('not a prompt challenge');

@@ -22,7 +22,10 @@ export function challengeStatus(input: {
   parseCalendarDay(period.start);
   parseCalendarDay(period.end);
   if (period.end < period.start) throw new RangeError(`Period ends before it starts: ${period.start} – ${period.end}`);
-  for (const [name, value] of [['done', done], ['target', target]] as const) {
+  for (const [name, value] of [
+    ['done', done],
+    ['target', target],
+  ] as const) {
     if (!Number.isInteger(value) || value < 0) throw new RangeError(`${name} must be a whole number, 0 or more: ${value}`);
   }
   return { period: { start: period.start, end: period.end }, done, target, counted: [...counted], finished: target > 0 && done >= target };

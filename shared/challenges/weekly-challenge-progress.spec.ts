@@ -36,7 +36,17 @@ describe('weeklyChallengeProgress', () => {
     const books = [finished('w3', '2026-01-14')];
     const before = weeklyChallengeProgress({ year: 2026, books, today: '2026-03-04' });
     expect(before.weeks.map((week) => week.state).slice(0, 11)).toEqual([
-      'missed', 'missed', 'met', 'missed', 'missed', 'missed', 'missed', 'missed', 'missed', 'upcoming', 'upcoming',
+      'missed',
+      'missed',
+      'met',
+      'missed',
+      'missed',
+      'missed',
+      'missed',
+      'missed',
+      'missed',
+      'upcoming',
+      'upcoming',
     ]);
     const after = weeklyChallengeProgress({ year: 2026, books: [...books, finished('w10', '2026-03-03')], today: '2026-03-04' });
     expect(after.weeks[9]).toEqual(jasmine.objectContaining({ week: 10, monday: '2026-03-02', state: 'met', bookIds: ['w10'] }));

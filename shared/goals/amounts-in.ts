@@ -78,12 +78,7 @@ export function amountsInLog(period: ChallengePeriod, finished: readonly Challen
  * amountsIn({ start: '2026-01-01', end: '2026-12-31' }, finished, sessions, 'Europe/Lisbon')
  * // { books: 14, pages: 3820, minutes: 6105 }
  */
-export function amountsIn(
-  period: ChallengePeriod,
-  finished: readonly ChallengeBook[],
-  sessions: readonly GoalSessionRow[],
-  timeZone: string,
-): Amounts {
+export function amountsIn(period: ChallengePeriod, finished: readonly ChallengeBook[], sessions: readonly GoalSessionRow[], timeZone: string): Amounts {
   return amountsInLog(period, finished, sessionLog(sessions, timeZone));
 }
 

@@ -47,8 +47,14 @@ describe('finishedBooks', () => {
     // 2026-11-02T07:30Z is 23:30 PST on 1 November (UTC−8 again since that morning); by summer time it would be 2 November.
     // Tokyo (UTC+9): 16:30 on 9 March and 16:30 on 2 November.
     const books = [book('spring', { statusChangedAt: '2026-03-09T07:30:00Z' }), book('autumn', { statusChangedAt: '2026-11-02T07:30:00Z' })];
-    expect(days(finishedBooks(books, [], LA))).toEqual([['spring', '2026-03-09'], ['autumn', '2026-11-01']]);
-    expect(days(finishedBooks(books, [], TOKYO))).toEqual([['spring', '2026-03-09'], ['autumn', '2026-11-02']]);
+    expect(days(finishedBooks(books, [], LA))).toEqual([
+      ['spring', '2026-03-09'],
+      ['autumn', '2026-11-01'],
+    ]);
+    expect(days(finishedBooks(books, [], TOKYO))).toEqual([
+      ['spring', '2026-03-09'],
+      ['autumn', '2026-11-02'],
+    ]);
   });
 
   it('puts a New Year’s Eve finish in the year the reader was in', () => {
@@ -76,12 +82,22 @@ describe('finishedBooks', () => {
   it('keeps a finished reading while the book is read again or set aside', () => {
     // Our rule: starting a re-read must not take a finished book off the reader's year.
     const books = [book('again', { status: 'reading' }), book('set-aside', { status: 'dnf' })];
-    const readings = [{ bookId: 'again', finishedOn: '2026-02-02' }, { bookId: 'set-aside', finishedOn: '2026-01-20' }];
-    expect(days(finishedBooks(books, readings, 'UTC'))).toEqual([['set-aside', '2026-01-20'], ['again', '2026-02-02']]);
+    const readings = [
+      { bookId: 'again', finishedOn: '2026-02-02' },
+      { bookId: 'set-aside', finishedOn: '2026-01-20' },
+    ];
+    expect(days(finishedBooks(books, readings, 'UTC'))).toEqual([
+      ['set-aside', '2026-01-20'],
+      ['again', '2026-02-02'],
+    ]);
   });
 
   it('sorts by day, then by id', () => {
-    const readings = [{ bookId: 'z', finishedOn: '2026-02-02' }, { bookId: 'm', finishedOn: '2026-02-01' }, { bookId: 'a', finishedOn: '2026-02-02' }];
+    const readings = [
+      { bookId: 'z', finishedOn: '2026-02-02' },
+      { bookId: 'm', finishedOn: '2026-02-01' },
+      { bookId: 'a', finishedOn: '2026-02-02' },
+    ];
     expect(finishedBooks([book('z'), book('m'), book('a')], readings, 'UTC').map((entry) => entry.id)).toEqual(['m', 'a', 'z']);
   });
 

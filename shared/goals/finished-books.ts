@@ -44,11 +44,7 @@ export interface FinishedBook extends ChallengeBook {
  *                  statusChangedAt: '2026-03-01T06:30:00Z' }], [], 'America/Los_Angeles')
  * // [{ id: 'b1', title: 'Tidewater', authors: ['Ada Okafor'], status: 'finished', finishedOn: '2026-02-28' }]
  */
-export function finishedBooks(
-  books: readonly GoalBookRow[],
-  readings: readonly GoalReadingRow[],
-  timeZone: string,
-): FinishedBook[] {
+export function finishedBooks(books: readonly GoalBookRow[], readings: readonly GoalReadingRow[], timeZone: string): FinishedBook[] {
   return challengeBooks(books, readings, timeZone)
     .filter((book): book is FinishedBook => book.finishedOn !== undefined)
     .sort((a, b) => compare(a.finishedOn, b.finishedOn) || compare(a.id, b.id));

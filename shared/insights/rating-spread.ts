@@ -31,8 +31,7 @@ export function ratingSpread(ratings: readonly (number | null | undefined)[]): R
   }
   const sorted = [...given].sort((a, b) => a - b);
   const middle = sorted.length / 2;
-  const median =
-    sorted.length === 0 ? null : sorted.length % 2 === 1 ? sorted[Math.floor(middle)] : (sorted[middle - 1] + sorted[middle]) / 2;
+  const median = sorted.length === 0 ? null : sorted.length % 2 === 1 ? sorted[Math.floor(middle)] : (sorted[middle - 1] + sorted[middle]) / 2;
   return {
     bins: RATING_STEPS.map((rating) => ({ rating, count: counts.get(rating) ?? 0 })),
     rated: sorted.length,

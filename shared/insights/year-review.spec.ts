@@ -13,7 +13,13 @@ const rows: ReviewBookRow[] = [
 ];
 const finished = (id: string, finishedOn: string): FinishedBook => ({ id, title: id, authors: [], status: 'finished', finishedOn });
 const books = new Map(rows.map((row) => [row.id, row]));
-const finishedList = [finished('b5', '2027-12-30'), finished('b1', '2028-01-20'), finished('b2', '2028-02-29'), finished('b3', '2028-03-01'), finished('b4', '2028-06-11')];
+const finishedList = [
+  finished('b5', '2027-12-30'),
+  finished('b1', '2028-01-20'),
+  finished('b2', '2028-02-29'),
+  finished('b3', '2028-03-01'),
+  finished('b4', '2028-06-11'),
+];
 const log: DailyLogEntry[] = [
   { day: '2027-12-31', minutes: 50, pages: 30 },
   { day: '2028-01-01', minutes: 20, pages: 10 },

@@ -98,10 +98,11 @@ export function yearReview(input: {
     ).longest,
     busiestMonth: busiest ? { month: busiest.month, books: busiest.books, minutes: busiest.minutes } : null,
     longestBook: paged[0] ? reviewBook(paged[0]) : null,
-    topGenre: topTerms(
-      rows.map((row) => row.genres),
-      1,
-    ).top[0]?.term ?? null,
+    topGenre:
+      topTerms(
+        rows.map((row) => row.genres),
+        1,
+      ).top[0]?.term ?? null,
     formats: formatSplit(rows),
     averageRating: ratingSpread(rows.map((row) => row.rating)).mean,
     highestRated: rated.slice(0, 3).map((book) => reviewBook(book.row)),

@@ -16,7 +16,7 @@ describe('gs1CheckDigit', () => {
     expect(gs1CheckDigit('890400021003')).toBe(7);
   });
 
-  it('gives the ISBN-13 check digit of the ISBN Users\' Manual example 978-92-95055-12-4', () => {
+  it("gives the ISBN-13 check digit of the ISBN Users' Manual example 978-92-95055-12-4", () => {
     // ISBN Users' Manual, ISBN-13 check digit example: 9+21+8+27+2+27+5+0+5+15+1+6 = 126; 130 − 126 = 4.
     expect(gs1CheckDigit('978929505512')).toBe(4);
   });

@@ -4,10 +4,7 @@ describe('instantiateTemplate', () => {
   const context = { today: '2026-03-08', bookTitle: 'The Salt Roads', bookAuthors: ['Wren Okafor', 'Ada Lindqvist'], notebookTitle: 'Coast reading' };
 
   it('fills every documented placeholder', () => {
-    const page = instantiateTemplate(
-      { title: '{{book}} · {{weekday}} {{date}}', body: '{{month}} {{year}}, {{notebook}}, by {{author}}' },
-      context,
-    );
+    const page = instantiateTemplate({ title: '{{book}} · {{weekday}} {{date}}', body: '{{month}} {{year}}, {{notebook}}, by {{author}}' }, context);
     // 2026-03-08 is a Sunday: checked against Intl.DateTimeFormat below, and any calendar.
     expect(page).toEqual({ title: 'The Salt Roads · Sunday 2026-03-08', body: 'March 2026, Coast reading, by Wren Okafor, Ada Lindqvist' });
     expect(TEMPLATE_PLACEHOLDERS.map((p): string => p.name).sort()).toEqual(Object.keys(placeholderValues(context)).sort());

@@ -52,7 +52,15 @@ describe('light formatting', () => {
       expect(parseLightFormat('#hashtag\n-5 degrees\n### three\n[]not a box\n\\# not a heading\n\\- nor a list\n\\> nor a quote')).toEqual([
         {
           kind: 'paragraph',
-          lines: [[text('#hashtag')], [text('-5 degrees')], [text('### three')], [text('[]not a box')], [text('# not a heading')], [text('- nor a list')], [text('> nor a quote')]],
+          lines: [
+            [text('#hashtag')],
+            [text('-5 degrees')],
+            [text('### three')],
+            [text('[]not a box')],
+            [text('# not a heading')],
+            [text('- nor a list')],
+            [text('> nor a quote')],
+          ],
         },
       ]);
     });

@@ -14,8 +14,12 @@ describe('notebook limits', () => {
       [pageTemplates, 'body', NOTEBOOK_LIMITS.templateBody],
     ] as const;
     for (const [collection, name, limit] of cases) {
-      expect(validatePatch(collection, { [name]: 'x'.repeat(limit) })).withContext(`${collection.name}.${name}`).toEqual({});
-      expect(Object.keys(validatePatch(collection, { [name]: 'x'.repeat(limit + 1) }))).withContext(`${collection.name}.${name}`).toEqual([name]);
+      expect(validatePatch(collection, { [name]: 'x'.repeat(limit) }))
+        .withContext(`${collection.name}.${name}`)
+        .toEqual({});
+      expect(Object.keys(validatePatch(collection, { [name]: 'x'.repeat(limit + 1) })))
+        .withContext(`${collection.name}.${name}`)
+        .toEqual([name]);
     }
     expect(NOTEBOOK_LIMITS).toEqual({ notebookTitle: 300, pageTitle: 300, pageBody: 50_000, templateName: 120, templateTitle: 300, templateBody: 50_000 });
   });

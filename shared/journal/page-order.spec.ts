@@ -38,7 +38,9 @@ describe('page order', () => {
           const [before, after] = x < y ? [x, y] : [y, x];
           fc.pre(after - before >= MIN_POSITION_GAP);
           const between = positionBetween(before, after);
-          expect(between > before && between < after).withContext(`${before} < ${between} < ${after}`).toBeTrue();
+          expect(between > before && between < after)
+            .withContext(`${before} < ${between} < ${after}`)
+            .toBeTrue();
         }),
       );
     });
@@ -49,7 +51,9 @@ describe('page order', () => {
         let after = before + MIN_POSITION_GAP;
         while (after - before < MIN_POSITION_GAP) after += Math.max(Math.abs(after) * Number.EPSILON, Number.MIN_VALUE);
         const between = positionBetween(before, after);
-        expect(between > before && between < after).withContext(`${before} < ${between} < ${after}`).toBeTrue();
+        expect(between > before && between < after)
+          .withContext(`${before} < ${between} < ${after}`)
+          .toBeTrue();
       }
     });
   });

@@ -24,9 +24,7 @@ describe('quote with its source line', () => {
   });
 
   it('leaves out what is missing: the author, the position, or the whole source', () => {
-    expect(quoteWithSource({ text: 'Anonymous, and proud.', page: 7 }, { title: 'Marginalia', authors: [] })).toBe(
-      '“Anonymous, and proud.”\n— Marginalia, p. 7',
-    );
+    expect(quoteWithSource({ text: 'Anonymous, and proud.', page: 7 }, { title: 'Marginalia', authors: [] })).toBe('“Anonymous, and proud.”\n— Marginalia, p. 7');
     expect(quoteWithSource({ text: 'No page kept.' }, almanac)).toBe('“No page kept.”\n— Ada Pell, The Salt Road Almanac');
     expect(quoteWithSource({ text: 'From memory.' }, undefined)).toBe('“From memory.”');
   });

@@ -31,9 +31,7 @@ export const STARTER_LABELS: readonly CompleteLabel[] = starters.map(({ key, ...
  */
 export function mergeLabels(stored: readonly Label[]): CompleteLabel[] {
   const byId = new Map(stored.map((label) => [label.id, label]));
-  const starters = STARTER_LABELS.map((starter) => ({ ...starter, ...definedFields(byId.get(starter.id)) })).filter(
-    (label) => !byId.get(label.id)?.deleted,
-  );
+  const starters = STARTER_LABELS.map((starter) => ({ ...starter, ...definedFields(byId.get(starter.id)) })).filter((label) => !byId.get(label.id)?.deleted);
   const starterIds = new Set(STARTER_LABELS.map((label) => label.id));
   const own = stored
     .filter((label) => !starterIds.has(label.id) && !label.deleted && label.name && label.colour && label.icon)

@@ -12,7 +12,9 @@ describe('starter templates', () => {
     const known = new Set<string>(TEMPLATE_PLACEHOLDERS.map((p) => p.name));
     for (const template of STARTER_TEMPLATES) {
       const used = [...`${template.title}\n${template.body}`.matchAll(/\{\{\s*(\w+)\s*\}\}/g)].map((m) => m[1]!);
-      expect(used.filter((name) => !known.has(name))).withContext(template.name).toEqual([]);
+      expect(used.filter((name) => !known.has(name)))
+        .withContext(template.name)
+        .toEqual([]);
       expect(template.starter).toBeTrue();
       expect(template.name.length).toBeLessThanOrEqual(NOTEBOOK_LIMITS.templateName);
       expect(parseLightFormat(template.body)[0]?.kind).withContext(template.name).toBe('heading');

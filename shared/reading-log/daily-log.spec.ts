@@ -11,8 +11,7 @@ const session = (startedAt: string, endedAt: string, activeMinutes: number, page
 });
 
 /** Rounds for comparison: the split is a float division. */
-const rounded = (log: DailyLogEntry[]) =>
-  log.map((e) => ({ day: e.day, minutes: Math.round(e.minutes * 1e6) / 1e6, pages: Math.round(e.pages * 1e6) / 1e6 }));
+const rounded = (log: DailyLogEntry[]) => log.map((e) => ({ day: e.day, minutes: Math.round(e.minutes * 1e6) / 1e6, pages: Math.round(e.pages * 1e6) / 1e6 }));
 
 describe('dailyLog', () => {
   it('puts a session inside one day on that day, and adds sessions of the same day', () => {
@@ -152,12 +151,7 @@ describe('dailyLog', () => {
       fc.integer({ min: 0, max: 200 }),
     )
     .map(([startQuarter, quarters, activeMinutes, pages]) =>
-      session(
-        new Date(startQuarter * QUARTER_HOUR).toISOString(),
-        new Date((startQuarter + quarters) * QUARTER_HOUR).toISOString(),
-        activeMinutes,
-        pages,
-      ),
+      session(new Date(startQuarter * QUARTER_HOUR).toISOString(), new Date((startQuarter + quarters) * QUARTER_HOUR).toISOString(), activeMinutes, pages),
     );
 
   /** UTC instants in 2026 where `zone` changes its offset, found by an hourly walk with Intl. */
@@ -182,26 +176,21 @@ describe('dailyLog', () => {
     }
     return found;
   };
-  const nearTransition = fc
-    .constantFrom(...zones.flatMap((zone) => transitions2026(zone).map((t) => ({ zone, t }))))
-    .chain(({ zone, t }) =>
-      fc
-        // From 36 h before to 2 h after the switch, up to 72 h long.
-        .tuple(fc.integer({ min: -4 * 36, max: 4 * 2 }), fc.integer({ min: 1, max: 4 * 72 }), fc.integer({ min: 1, max: 600 }))
-        .map(([fromQuarter, quarters, activeMinutes]) => {
-          const start = Math.floor(t / QUARTER_HOUR) * QUARTER_HOUR + fromQuarter * QUARTER_HOUR;
-          const end = start + quarters * QUARTER_HOUR;
-          return { zone, s: session(new Date(start).toISOString(), new Date(end).toISOString(), activeMinutes) };
-        }),
-    );
+  const nearTransition = fc.constantFrom(...zones.flatMap((zone) => transitions2026(zone).map((t) => ({ zone, t })))).chain(({ zone, t }) =>
+    fc
+      // From 36 h before to 2 h after the switch, up to 72 h long.
+      .tuple(fc.integer({ min: -4 * 36, max: 4 * 2 }), fc.integer({ min: 1, max: 4 * 72 }), fc.integer({ min: 1, max: 600 }))
+      .map(([fromQuarter, quarters, activeMinutes]) => {
+        const start = Math.floor(t / QUARTER_HOUR) * QUARTER_HOUR + fromQuarter * QUARTER_HOUR;
+        const end = start + quarters * QUARTER_HOUR;
+        return { zone, s: session(new Date(start).toISOString(), new Date(end).toISOString(), activeMinutes) };
+      }),
+  );
 
   it('finds the 2026 transitions it will test around (tz database sanity check)', () => {
     // EPAct 2005: Los Angeles switches on 8 March 10:00Z (02:00 PST) and 1 November 09:00Z (02:00 PDT);
     // the walk reports the hour before each switch. Tokyo and UTC never switch.
-    expect(transitions2026('America/Los_Angeles').map((t) => new Date(t).toISOString())).toEqual([
-      '2026-03-08T09:00:00.000Z',
-      '2026-11-01T08:00:00.000Z',
-    ]);
+    expect(transitions2026('America/Los_Angeles').map((t) => new Date(t).toISOString())).toEqual(['2026-03-08T09:00:00.000Z', '2026-11-01T08:00:00.000Z']);
     expect(transitions2026('Asia/Tokyo')).toEqual([]);
     expect(transitions2026('UTC')).toEqual([]);
   });
@@ -240,10 +229,7 @@ describe('dailyLog', () => {
         const total = (end - start) / QUARTER_HOUR;
         const expected = [...quartersByDay].map(([day, q]) => ({ day, minutes: (s.activeMinutes * q) / total }));
         const actual = dailyLog([s], zone).map((e) => ({ day: e.day, minutes: e.minutes }));
-        return (
-          actual.map((e) => e.day).join() === expected.map((e) => e.day).join() &&
-          actual.every((e, i) => Math.abs(e.minutes - expected[i].minutes) < 1e-6)
-        );
+        return actual.map((e) => e.day).join() === expected.map((e) => e.day).join() && actual.every((e, i) => Math.abs(e.minutes - expected[i].minutes) < 1e-6);
       }),
       { numRuns: 400 },
     );

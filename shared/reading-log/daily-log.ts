@@ -37,7 +37,7 @@ export function dailyLog(sessions: readonly LogSession[], timeZone: string): Dai
       add(dayAt(start, timeZone), minutes, pages);
       continue;
     }
-    for (let cursor = start; cursor < end; ) {
+    for (let cursor = start; cursor < end;) {
       const next = nextDayStart(cursor, timeZone);
       // A day boundary not after the cursor would loop forever; fail instead.
       if (!(next > cursor)) throw new Error(`No day boundary after ${new Date(cursor).toISOString()} in ${timeZone}`);

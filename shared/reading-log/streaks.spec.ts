@@ -21,9 +21,7 @@ describe('streaks', () => {
   });
 
   it('remembers a longer run from the past', () => {
-    expect(
-      streaks(['2026-01-10', '2026-01-11', '2026-01-12', '2026-01-13', '2026-03-07', '2026-03-08'], '2026-03-08'),
-    ).toEqual({ current: 2, longest: 4 });
+    expect(streaks(['2026-01-10', '2026-01-11', '2026-01-12', '2026-01-13', '2026-03-07', '2026-03-08'], '2026-03-08')).toEqual({ current: 2, longest: 4 });
   });
 
   it('runs across month, year and the leap day of 2028', () => {
@@ -75,7 +73,10 @@ describe('streaks', () => {
           if (n < 3) return true;
           // Breaking the run in the middle leaves the longer half as longest.
           const gap = Math.floor(n / 2);
-          const broken = streaks(run.filter((_, i) => i !== gap), today);
+          const broken = streaks(
+            run.filter((_, i) => i !== gap),
+            today,
+          );
           return broken.current === gap && broken.longest === Math.max(gap, n - gap - 1);
         },
       ),
@@ -89,12 +90,7 @@ describe('streaks', () => {
       fc.property(fc.array(day, { maxLength: 40 }), day, (days, today) => {
         const result = streaks(days, today);
         const again = streaks([...days].reverse().concat(days), today);
-        return (
-          again.current === result.current &&
-          again.longest === result.longest &&
-          result.longest >= result.current &&
-          result.longest <= new Set(days).size
-        );
+        return again.current === result.current && again.longest === result.longest && result.longest >= result.current && result.longest <= new Set(days).size;
       }),
     );
   });

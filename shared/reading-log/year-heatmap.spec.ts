@@ -14,10 +14,9 @@ describe('yearHeatmap', () => {
 
   it('lists every day of 2028 in order, as date-fns eachDayOfInterval (npm reference) does', () => {
     const utc = tz('UTC');
-    const expected = eachDayOfInterval(
-      { start: new Date('2028-01-01T00:00:00Z'), end: new Date('2028-12-31T00:00:00Z') },
-      { in: utc },
-    ).map((d) => format(d, 'yyyy-MM-dd', { in: utc }));
+    const expected = eachDayOfInterval({ start: new Date('2028-01-01T00:00:00Z'), end: new Date('2028-12-31T00:00:00Z') }, { in: utc }).map((d) =>
+      format(d, 'yyyy-MM-dd', { in: utc }),
+    );
     const cells = yearHeatmap([], 2028);
     expect(cells.map((c) => c.day)).toEqual(expected);
     // Day 60 of a leap year is 29 February (31 + 29).

@@ -29,11 +29,7 @@ export const HEATMAP_THRESHOLDS: readonly [number, number, number, number] = [Nu
  * cells.length // 366
  * cells[59]    // { day: '2028-02-29', minutes: 40, level: 3 }
  */
-export function yearHeatmap(
-  log: readonly DailyLogEntry[],
-  year: number,
-  thresholds: readonly [number, number, number, number] = HEATMAP_THRESHOLDS,
-): HeatmapCell[] {
+export function yearHeatmap(log: readonly DailyLogEntry[], year: number, thresholds: readonly [number, number, number, number] = HEATMAP_THRESHOLDS): HeatmapCell[] {
   if (!Number.isInteger(year) || year < 0 || year > 9999) throw new RangeError(`Not a year 0000–9999: ${year}`);
   const yyyy = String(year).padStart(4, '0');
   const first = dayIndex(`${yyyy}-01-01`);

@@ -77,12 +77,9 @@ describe('personalPace', () => {
       .map(([day, minutes, pages]) => on(day, minutes, pages));
     expectProperty(
       fc.property(
-        fc.array(fc.oneof(session, tying), { minLength: 3, maxLength: 25 }).chain((sessions) =>
-          fc.tuple(
-            fc.constant(sessions),
-            fc.shuffledSubarray(sessions, { minLength: sessions.length, maxLength: sessions.length }),
-          ),
-        ),
+        fc
+          .array(fc.oneof(session, tying), { minLength: 3, maxLength: 25 })
+          .chain((sessions) => fc.tuple(fc.constant(sessions), fc.shuffledSubarray(sessions, { minLength: sessions.length, maxLength: sessions.length }))),
         ([sessions, shuffled]) => {
           const rate = personalPace(sessions, 'print')?.rate;
           const reversed = [...sessions].reverse();
@@ -96,16 +93,12 @@ describe('personalPace', () => {
     // Median breakdown point (a standard robust-statistics result): one extreme value among
     // three or more cannot take the median outside the range of the rest.
     expectProperty(
-      fc.property(
-        fc.array(session, { minLength: 2, maxLength: 9 }),
-        fc.constantFrom(0.001, 1000),
-        (others, factor) => {
-          const rates = others.map((s) => ((s.toPosition - s.fromPosition) * 60) / s.activeMinutes);
-          const outlier = { ...on(28, 60, 1), toPosition: 60 * factor };
-          const pace = personalPace([...others, outlier], 'print', { recent: 10 });
-          return pace !== null && pace.rate >= Math.min(...rates) - 1e-9 && pace.rate <= Math.max(...rates) + 1e-9;
-        },
-      ),
+      fc.property(fc.array(session, { minLength: 2, maxLength: 9 }), fc.constantFrom(0.001, 1000), (others, factor) => {
+        const rates = others.map((s) => ((s.toPosition - s.fromPosition) * 60) / s.activeMinutes);
+        const outlier = { ...on(28, 60, 1), toPosition: 60 * factor };
+        const pace = personalPace([...others, outlier], 'print', { recent: 10 });
+        return pace !== null && pace.rate >= Math.min(...rates) - 1e-9 && pace.rate <= Math.max(...rates) + 1e-9;
+      }),
     );
   });
 

@@ -26,11 +26,7 @@ export interface PersonalPaceOptions {
  *               evening('2026-03-03', 60, 50, 75)], 'print')
  * // { format: 'print', rate: 30 } (median of 30, 40 and 25 pages per hour)
  */
-export function personalPace(
-  sessions: readonly PaceSession[],
-  format: ReadingFormat,
-  options: PersonalPaceOptions = {},
-): Pace | null {
+export function personalPace(sessions: readonly PaceSession[], format: ReadingFormat, options: PersonalPaceOptions = {}): Pace | null {
   const recent = options.recent ?? 10;
   const minimum = options.minimum ?? 3;
   if (!(recent >= 1) || !(minimum >= 1)) throw new RangeError('recent and minimum must be at least 1');

@@ -3,11 +3,15 @@ import { readingGenre } from './reading-genre';
 describe('readingGenre', () => {
   it('reads fiction and non-fiction from the genres readers write (our own word list)', () => {
     expect(readingGenre(['Fantasy'])).toBe('fiction');
-    expect(readingGenre(['Science fiction'])).withContext('"science" alone would say non-fiction').toBe('fiction');
+    expect(readingGenre(['Science fiction']))
+      .withContext('"science" alone would say non-fiction')
+      .toBe('fiction');
     expect(readingGenre(['Historical fiction'])).toBe('fiction');
     expect(readingGenre(['Non-fiction'])).toBe('nonfiction');
     expect(readingGenre(['nonfiction'])).toBe('nonfiction');
-    expect(readingGenre(['True crime'])).withContext('"crime" alone would say fiction').toBe('nonfiction');
+    expect(readingGenre(['True crime']))
+      .withContext('"crime" alone would say fiction')
+      .toBe('nonfiction');
     expect(readingGenre(['Memoir', 'Humour'])).toBe('nonfiction');
   });
 

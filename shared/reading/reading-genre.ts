@@ -2,8 +2,10 @@ import { Genre } from './fallback-pace';
 
 // Words readers and shops shelve by (our own list, common practice; not from a standard). A
 // term is matched as whole words, case aside: "Fantasy", "historical fiction", "Memoir".
-const NONFICTION = /\b(non-?fiction|memoirs?|biography|autobiography|history|essays?|philosophy|self-help|true crime|travel|cookbooks?|cooking|politics|economics|psychology|science|nature writing|journalism|reference)\b/;
-const FICTION = /\b(fiction|novels?|novellas?|fantasy|mystery|mysteries|thrillers?|romance|horror|sci-fi|short stories|crime|literary|dystopian|adventure|fairy tales?)\b/;
+const NONFICTION =
+  /\b(non-?fiction|memoirs?|biography|autobiography|history|essays?|philosophy|self-help|true crime|travel|cookbooks?|cooking|politics|economics|psychology|science|nature writing|journalism|reference)\b/;
+const FICTION =
+  /\b(fiction|novels?|novellas?|fantasy|mystery|mysteries|thrillers?|romance|horror|sci-fi|short stories|crime|literary|dystopian|adventure|fairy tales?)\b/;
 
 /**
  * Whether a book reads as fiction or non-fiction, from the reader's genres, for the reading

@@ -23,12 +23,7 @@ import { LogSession } from '../reading-log/log-session';
  *    { startedAt: '2026-03-05T20:00:00Z', endedAt: '2026-03-05T20:30:00Z', activeMinutes: 30 }],
  *   '2026-03-07', 'UTC') // 15 (90 minutes over the 6 days 2–7 March)
  */
-export function usualMinutesPerDay(
-  sessions: readonly LogSession[],
-  today: string,
-  timeZone: string,
-  windowDays = 28,
-): number {
+export function usualMinutesPerDay(sessions: readonly LogSession[], today: string, timeZone: string, windowDays = 28): number {
   if (!Number.isInteger(windowDays) || windowDays < 1) {
     throw new RangeError(`windowDays must be a whole number ≥ 1, not ${windowDays}`);
   }

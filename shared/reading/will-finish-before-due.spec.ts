@@ -21,9 +21,7 @@ describe('willFinishBeforeDue', () => {
   it('finishes on the due date exactly: 600 minutes, 45 a day, due 14 March', () => {
     // Hand-worked: 14 days (1–14 March) → finish 14 March, margin 0; needed 600 / 14 = 42.86.
     const result = due();
-    expect(result).toEqual(
-      jasmine.objectContaining({ likely: true, finishDate: '2026-03-14', dueDate: '2026-03-14', marginDays: 0 }),
-    );
+    expect(result).toEqual(jasmine.objectContaining({ likely: true, finishDate: '2026-03-14', dueDate: '2026-03-14', marginDays: 0 }));
     expect(result.minutesPerDayNeeded).toBeCloseTo(600 / 14, 9);
   });
 
@@ -57,15 +55,11 @@ describe('willFinishBeforeDue', () => {
     const idle = due({ minutesPerDay: 0 });
     expect(idle).toEqual(jasmine.objectContaining({ likely: false, finishDate: null, marginDays: null }));
     expect(idle.minutesPerDayNeeded).toBeCloseTo(600 / 14, 9);
-    expect(due({ remaining: 0 })).toEqual(
-      jasmine.objectContaining({ likely: true, finishDate: '2026-03-01', marginDays: 13, minutesPerDayNeeded: 0 }),
-    );
+    expect(due({ remaining: 0 })).toEqual(jasmine.objectContaining({ likely: true, finishDate: '2026-03-01', marginDays: 13, minutesPerDayNeeded: 0 }));
   });
 
   it('has no minutes a day that can help once the due date has passed', () => {
-    expect(due({ dueDate: '2026-02-27' })).toEqual(
-      jasmine.objectContaining({ likely: false, minutesPerDayNeeded: null, marginDays: -15 }),
-    );
+    expect(due({ dueDate: '2026-02-27' })).toEqual(jasmine.objectContaining({ likely: false, minutesPerDayNeeded: null, marginDays: -15 }));
   });
 
   it('is likely exactly when the usual minutes reach the minutes needed (property)', () => {

@@ -35,8 +35,7 @@ export function willFinishBeforeDue(input: DueForecastInput): DueForecast {
   const forecast = forecastFinish(input);
   const due = dayIndex(input.dueDate);
   const daysAvailable = due - dayIndex(input.today) + 1;
-  const minutesPerDayNeeded =
-    forecast.minutesLeft === 0 ? 0 : daysAvailable > 0 ? forecast.minutesLeft / daysAvailable : null;
+  const minutesPerDayNeeded = forecast.minutesLeft === 0 ? 0 : daysAvailable > 0 ? forecast.minutesLeft / daysAvailable : null;
   const finishDate = forecast.finishDate;
   return {
     likely: finishDate !== null && finishDate <= input.dueDate,

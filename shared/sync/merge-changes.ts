@@ -7,8 +7,7 @@ import { fieldSpecOf } from './schema/collections';
 /** Every field's winning value (and a set field's state), keyed `collection/rowId/field`. */
 export type FieldState = ReadonlyMap<string, Stamped & { readonly state?: OrSetState }>;
 
-export const fieldKey = (change: Pick<PulledChange, 'collection' | 'rowId' | 'field'>) =>
-  `${change.collection}/${change.rowId}/${change.field}`;
+export const fieldKey = (change: Pick<PulledChange, 'collection' | 'rowId' | 'field'>) => `${change.collection}/${change.rowId}/${change.field}`;
 
 /**
  * Folds changes into a field state with {@link mergeField} ({@link mergeSetField} for set fields). Because the merge is commutative,

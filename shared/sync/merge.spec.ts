@@ -12,9 +12,7 @@ const changeArb: fc.Arbitrary<PulledChange> = fc.record({
   rowId: fc.constantFrom('r1', 'r2', 'r3'),
   field: fc.constantFrom('title', 'rating', 'deleted'),
   value: fc.oneof(fc.string({ maxLength: 5 }), fc.integer(), fc.boolean(), fc.constant(null)),
-  hlc: fc
-    .record({ wall: fc.integer({ min: 0, max: 20 }), counter: fc.integer({ min: 0, max: 3 }), node: fc.constantFrom('a', 'b', 'c') })
-    .map(formatHlc),
+  hlc: fc.record({ wall: fc.integer({ min: 0, max: 20 }), counter: fc.integer({ min: 0, max: 3 }), node: fc.constantFrom('a', 'b', 'c') }).map(formatHlc),
 });
 
 /**
@@ -45,9 +43,12 @@ describe('Per-field last-writer-wins merge', () => {
 
   it('is commutative: any order of the same changes gives the same state (property)', () => {
     expectProperty(
-      fc.property(changesArb.chain((changes) => fc.tuple(fc.constant(changes), fc.shuffledSubarray(changes, { minLength: changes.length }))), ([changes, shuffled]) => {
-        expect(fold(shuffled)).toEqual(fold(changes));
-      }),
+      fc.property(
+        changesArb.chain((changes) => fc.tuple(fc.constant(changes), fc.shuffledSubarray(changes, { minLength: changes.length }))),
+        ([changes, shuffled]) => {
+          expect(fold(shuffled)).toEqual(fold(changes));
+        },
+      ),
     );
   });
 
@@ -83,11 +84,7 @@ describe('Per-field last-writer-wins merge', () => {
     expectProperty(
       fc.property(
         changesArb.chain((changes) =>
-          fc.tuple(
-            fc.constant(changes),
-            fc.shuffledSubarray(changes, { minLength: changes.length }),
-            fc.shuffledSubarray(changes, { minLength: changes.length }),
-          ),
+          fc.tuple(fc.constant(changes), fc.shuffledSubarray(changes, { minLength: changes.length }), fc.shuffledSubarray(changes, { minLength: changes.length })),
         ),
         ([laptop, tablet, phone]) => {
           const reference = fold(laptop);

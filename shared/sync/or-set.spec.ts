@@ -9,23 +9,25 @@ const elements = (state: OrSetState) => [...orSetElements(state)].sort();
 const same = (x: OrSetState, y: OrSetState) => expect(elements(x)).toEqual(elements(y));
 
 /** Random states: a few elements, devices and clocks, so they overlap often. */
-const stateArb: fc.Arbitrary<OrSetState> = fc.dictionary(
-  fc.constantFrom('fantasy', 'reread', 'signed', '__proto__', 'ünïcode'),
-  fc.record({
-    a: fc.dictionary(fc.constantFrom('a', 'b', 'c'), fc.integer({ min: 1, max: 9 })),
-    r: fc.dictionary(fc.constantFrom('a', 'b', 'c'), fc.integer({ min: 1, max: 9 })),
-  }),
-).map((raw) =>
-  Object.fromEntries(
-    Object.entries(raw).map(([element, { a, r }]) => [
-      element,
-      {
-        a: Object.fromEntries(Object.entries(a).map(([node, wall]) => [node, clock(wall, node)])),
-        r: Object.fromEntries(Object.entries(r).map(([node, wall]) => [node, clock(wall, node)])),
-      },
-    ]),
-  ),
-);
+const stateArb: fc.Arbitrary<OrSetState> = fc
+  .dictionary(
+    fc.constantFrom('fantasy', 'reread', 'signed', '__proto__', 'ünïcode'),
+    fc.record({
+      a: fc.dictionary(fc.constantFrom('a', 'b', 'c'), fc.integer({ min: 1, max: 9 })),
+      r: fc.dictionary(fc.constantFrom('a', 'b', 'c'), fc.integer({ min: 1, max: 9 })),
+    }),
+  )
+  .map((raw) =>
+    Object.fromEntries(
+      Object.entries(raw).map(([element, { a, r }]) => [
+        element,
+        {
+          a: Object.fromEntries(Object.entries(a).map(([node, wall]) => [node, clock(wall, node)])),
+          r: Object.fromEntries(Object.entries(r).map(([node, wall]) => [node, clock(wall, node)])),
+        },
+      ]),
+    ),
+  );
 
 describe('Observed-remove sets (shared/sync/or-set.ts)', () => {
   // The join must be a semilattice join for states to converge in any delivery order
@@ -71,7 +73,12 @@ describe('Observed-remove sets (shared/sync/or-set.ts)', () => {
   // compact state must list the same elements after any run of adds, removes and merges.
   it('agrees with the unique-tag OR-Set of the specification on random runs of three devices', () => {
     type Tagged = { adds: Set<string>; removed: Set<string> };
-    const opArb = fc.record({ device: fc.integer({ min: 0, max: 2 }), kind: fc.constantFrom('add', 'remove', 'merge'), element: fc.constantFrom('x', 'y'), from: fc.integer({ min: 0, max: 2 }) });
+    const opArb = fc.record({
+      device: fc.integer({ min: 0, max: 2 }),
+      kind: fc.constantFrom('add', 'remove', 'merge'),
+      element: fc.constantFrom('x', 'y'),
+      from: fc.integer({ min: 0, max: 2 }),
+    });
     fc.assert(
       fc.property(fc.array(opArb, { maxLength: 30 }), (ops) => {
         const nodes = ['a', 'b', 'c'];
@@ -82,7 +89,11 @@ describe('Observed-remove sets (shared/sync/or-set.ts)', () => {
           reference[device]!.set(element, entry);
           return entry;
         };
-        const present = (device: number) => [...reference[device]!].filter(([, t]) => [...t.adds].some((tag) => !t.removed.has(tag))).map(([e]) => e).sort();
+        const present = (device: number) =>
+          [...reference[device]!]
+            .filter(([, t]) => [...t.adds].some((tag) => !t.removed.has(tag)))
+            .map(([e]) => e)
+            .sort();
         let wall = 0;
         for (const op of ops) {
           wall++;
@@ -93,7 +104,14 @@ describe('Observed-remove sets (shared/sync/or-set.ts)', () => {
             compact[op.device] = joinOrSet(mine, orSetDelta(mine, wanted, now));
             tagged(op.device, op.element).adds.add(now);
           } else if (op.kind === 'remove') {
-            compact[op.device] = joinOrSet(mine, orSetDelta(mine, orSetElements(mine).filter((e) => e !== op.element), now));
+            compact[op.device] = joinOrSet(
+              mine,
+              orSetDelta(
+                mine,
+                orSetElements(mine).filter((e) => e !== op.element),
+                now,
+              ),
+            );
             const t = tagged(op.device, op.element);
             for (const tag of t.adds) t.removed.add(tag);
           } else {

@@ -78,12 +78,7 @@ export function orSetElements(state: OrSetState | null | undefined): string[] {
  * app's whole-list push ("set to exactly this", read against the server's state) both go
  * through here.
  */
-export function orSetDelta(
-  state: OrSetState | null | undefined,
-  next: readonly string[],
-  hlc: string,
-  options: { onlySeenBefore?: boolean } = {},
-): OrSetState {
+export function orSetDelta(state: OrSetState | null | undefined, next: readonly string[], hlc: string, options: { onlySeenBefore?: boolean } = {}): OrSetState {
   const node = parseHlc(hlc)?.node;
   if (!node) throw new RangeError(`Not a clock: ${hlc}`);
   const current = new Set(orSetElements(state));

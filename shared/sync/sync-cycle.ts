@@ -5,10 +5,7 @@ import { MAX_PUSH_CHANGES } from './field-change';
 export type QueuedChange = FieldChange & { readonly seq?: number };
 
 /** What a push came back with, once HTTP is taken out of it. */
-export type PushOutcome =
-  | { readonly kind: 'applied' }
-  | { readonly kind: 'refused'; readonly problems: readonly ChangeProblem[] }
-  | { readonly kind: 'too-large' };
+export type PushOutcome = { readonly kind: 'applied' } | { readonly kind: 'refused'; readonly problems: readonly ChangeProblem[] } | { readonly kind: 'too-large' };
 
 /**
  * What a device provides for one sync: its outbox, its local rows and its connection. Network
@@ -66,7 +63,7 @@ export async function runSyncCycle(ports: SyncPorts, batchSize = 500): Promise<C
       refused++;
     } else if (outcome.kind === 'refused' && outcome.problems.some((p) => p.code === 'clock_ahead' && batch[p.index])) {
       // Never set aside for a clock problem: stamp again from the server's time and push again.
-      if (++restamps > 3) throw new Error('This device\'s clock could not be brought in line with the server; trying again later');
+      if (++restamps > 3) throw new Error("This device's clock could not be brought in line with the server; trying again later");
       await ports.restamp(outcome.problems.filter((p) => p.code === 'clock_ahead' && batch[p.index]).map((p) => batch[p.index]!));
     } else if (outcome.kind === 'refused') {
       const setAside = outcome.problems.filter((p) => batch[p.index]).map((problem) => ({ change: batch[problem.index]!, problem }));

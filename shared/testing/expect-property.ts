@@ -7,5 +7,7 @@ import fc from 'fast-check';
  */
 export function expectProperty<Ts>(property: fc.IProperty<Ts>, params?: fc.Parameters<Ts>): void {
   const details = fc.check(property, params);
-  expect(details.failed).withContext(fc.defaultReportMessage(details) ?? '').toBeFalse();
+  expect(details.failed)
+    .withContext(fc.defaultReportMessage(details) ?? '')
+    .toBeFalse();
 }

@@ -6,8 +6,5 @@
  * foldSearchText('Émile Zola') // 'emile zola'
  */
 export function foldSearchText(text: string | null | undefined): string {
-  return (text ?? '')
-    .normalize('NFD')
-    .replace(/\p{M}/gu, '')
-    .toLowerCase();
+  return (text ?? '').normalize('NFD').replace(/\p{M}/gu, '').toLowerCase();
 }

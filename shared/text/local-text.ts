@@ -62,11 +62,7 @@ export function writeLocalText(name: string, local: LocalText, value: string | n
  * plain string (from a server that predates mergeable texts) counts as its initial state.
  */
 export function mergePulledText(name: string, local: LocalText, pulled: unknown): { text: string; state: string } | null {
-  const bytes = isTextUpdateValue(pulled)
-    ? decodeTextBytes(pulled.yjs)
-    : typeof pulled === 'string'
-      ? initialTextState(name, pulled)
-      : null;
+  const bytes = isTextUpdateValue(pulled) ? decodeTextBytes(pulled.yjs) : typeof pulled === 'string' ? initialTextState(name, pulled) : null;
   if (!bytes) return null;
   const doc = loadTextDoc([localTextState(name, local), bytes]);
   return { text: textOf(doc, name), state: encodeTextBytes(Y.encodeStateAsUpdate(doc)) };

@@ -136,7 +136,7 @@ describe('replaceText', () => {
     );
   });
 
-  it('keeps another device\'s edit elsewhere in the text', () => {
+  it("keeps another device's edit elsewhere in the text", () => {
     const base = initialTextState(NAME, 'alpha beta gamma');
     const [a, b] = [loadTextDoc([base]), loadTextDoc([base])];
     replaceText(a.getText(NAME), 'ALPHA beta gamma');
@@ -156,7 +156,12 @@ describe('mergeTextUpdate', () => {
   };
 
   it('merges a good update and reports the new text', () => {
-    const result = mergeTextUpdate(NAME, stored, editOf(NAME, (t) => t.insert(12, '!')), 100);
+    const result = mergeTextUpdate(
+      NAME,
+      stored,
+      editOf(NAME, (t) => t.insert(12, '!')),
+      100,
+    );
     expect(result).toEqual(jasmine.objectContaining({ ok: true, text: 'Stored words!', changed: true }));
   });
 
@@ -183,11 +188,32 @@ describe('mergeTextUpdate', () => {
   });
 
   it('refuses a NUL (PostgreSQL text cannot hold one) and never stores a lone surrogate', () => {
-    expect(mergeTextUpdate(NAME, stored, editOf(NAME, (t) => t.insert(0, 'a\u0000b')), 100)).toEqual({ ok: false, reason: jasmine.stringContaining('NUL') });
+    expect(
+      mergeTextUpdate(
+        NAME,
+        stored,
+        editOf(NAME, (t) => t.insert(0, 'a\u0000b')),
+        100,
+      ),
+    ).toEqual({ ok: false, reason: jasmine.stringContaining('NUL') });
     // A lone surrogate cannot even travel: Yjs writes strings as UTF-8, which turns it into U+FFFD
     // (WHATWG Encoding Standard, UTF-8 encoder via TextEncoder).
-    expect(mergeTextUpdate(NAME, stored, editOf(NAME, (t) => t.insert(0, 'x\ud800y')), 100)).toEqual(jasmine.objectContaining({ ok: true, text: 'x\ufffdyStored words' }));
-    expect(mergeTextUpdate(NAME, stored, editOf(NAME, (t) => t.insert(0, '\ud83d\udcd6')), 100)).toEqual(jasmine.objectContaining({ ok: true }));
+    expect(
+      mergeTextUpdate(
+        NAME,
+        stored,
+        editOf(NAME, (t) => t.insert(0, 'x\ud800y')),
+        100,
+      ),
+    ).toEqual(jasmine.objectContaining({ ok: true, text: 'x\ufffdyStored words' }));
+    expect(
+      mergeTextUpdate(
+        NAME,
+        stored,
+        editOf(NAME, (t) => t.insert(0, '\ud83d\udcd6')),
+        100,
+      ),
+    ).toEqual(jasmine.objectContaining({ ok: true }));
   });
 
   it('refuses anything but plain text', () => {
@@ -196,7 +222,14 @@ describe('mergeTextUpdate', () => {
   });
 
   it('refuses an update that makes the text longer than the field allows', () => {
-    expect(mergeTextUpdate(NAME, stored, editOf(NAME, (t) => t.insert(0, 'abc')), 14)).toEqual({
+    expect(
+      mergeTextUpdate(
+        NAME,
+        stored,
+        editOf(NAME, (t) => t.insert(0, 'abc')),
+        14,
+      ),
+    ).toEqual({
       ok: false,
       reason: 'would make the text longer than 14 characters',
     });

@@ -27,9 +27,9 @@ describe('Account safety in a real browser', () => {
     await page.goto(`${harness.server.baseUrl}${new URL(link).pathname}${new URL(link).hash}`);
 
     await page.getByRole('status').filter({ hasText: 'your address is confirmed' }).waitFor();
-    const rows: { verified: boolean }[] = await (await testDataSource()).query('SELECT email_verified_at IS NOT NULL AS verified FROM users WHERE id = $1', [
-      reader.user.id,
-    ]);
+    const rows: { verified: boolean }[] = await (
+      await testDataSource()
+    ).query('SELECT email_verified_at IS NOT NULL AS verified FROM users WHERE id = $1', [reader.user.id]);
     expect(rows[0]!.verified).toBeTrue();
     await context.close();
   });
@@ -64,7 +64,9 @@ describe('Account safety in a real browser', () => {
 
     const tokens = await family();
     expect(tokens.length).withContext('tokens in the family: the first and one successor').toBe(2);
-    expect(tokens.some((token) => token.grace)).withContext('a token presented twice (answered from the grace window)').toBeFalse();
+    expect(tokens.some((token) => token.grace))
+      .withContext('a token presented twice (answered from the grace window)')
+      .toBeFalse();
     expect(tokens.some((token) => token.revoked)).toBeFalse();
     await context.close();
   });

@@ -87,9 +87,7 @@ describe('Account, Settings and Accounts screens', () => {
       await page.getByRole('button', { name: 'Send the link' }).click();
       await page.getByRole('status').filter({ hasText: 'The link works once, for 30 minutes.' }).waitFor();
 
-      const mail = await (await testInbox()).inbox.waitFor(
-        (m) => m.to.includes(reader.user.email) && m.subject === 'Choose a new Lamplight password',
-      );
+      const mail = await (await testInbox()).inbox.waitFor((m) => m.to.includes(reader.user.email) && m.subject === 'Choose a new Lamplight password');
       const link = /https?:\/\/\S+\/reset-password#token=[A-Za-z0-9_-]+/.exec(mail.text)?.[0];
       expect(link).withContext(mail.text).toBeDefined();
       // The server's public URL is the default one; the page is the test server's.
@@ -137,7 +135,10 @@ describe('Account, Settings and Accounts screens', () => {
       await openSettings(reader);
       expect(await seriousViolations(page)).toEqual([]);
 
-      await page.getByRole('button', { name: /^Rename / }).first().click();
+      await page
+        .getByRole('button', { name: /^Rename / })
+        .first()
+        .click();
       await page.getByLabel('Device name').fill('   ');
       await page.getByRole('button', { name: 'Save', exact: true }).click();
       await page.getByRole('status').filter({ hasText: 'Name is required' }).waitFor();
@@ -303,9 +304,12 @@ describe('Account, Settings and Accounts screens', () => {
 
       await page.getByRole('link', { name: 'Caught mail' }).click();
       await page.waitForURL(`${base()}/admin/mail`);
-      const resetMail = page.locator('article.mail').filter({ hasText: `To ${reader.user.email}` }).filter({
-        has: page.getByRole('heading', { name: 'Choose a new Lamplight password' }),
-      });
+      const resetMail = page
+        .locator('article.mail')
+        .filter({ hasText: `To ${reader.user.email}` })
+        .filter({
+          has: page.getByRole('heading', { name: 'Choose a new Lamplight password' }),
+        });
       await resetMail.waitFor();
       expect(await resetMail.locator('pre').textContent()).toMatch(/\/reset-password#token=[A-Za-z0-9_-]+/);
       expect(await seriousViolations(page)).toEqual([]);

@@ -94,7 +94,9 @@ describe('Book covers', () => {
     const page = await device(reader.user.email, reader.password);
 
     await page.goto(`${baseUrl}/library/new`);
-    await page.getByLabel('Choose a cover image').setInputFiles({ name: 'notes.png', mimeType: 'image/png', buffer: Buffer.from('Chapter one: notes, not a picture') });
+    await page
+      .getByLabel('Choose a cover image')
+      .setInputFiles({ name: 'notes.png', mimeType: 'image/png', buffer: Buffer.from('Chapter one: notes, not a picture') });
     await page.getByRole('alert').filter({ hasText: 'This file is not an image Lamplight can read' }).waitFor();
     await fillBook(page, { title: 'A Quiet Harbour' });
 

@@ -43,9 +43,35 @@ describe('Insights, offline', () => {
       return id;
     };
     const finishedAt = (day: string) => ({ status: 'finished', statusChangedAt: `${year}-${day}T12:00:00.000Z` });
-    const salt = book({ title: 'Salt Orchard', authors: ['Mirela Quist'], format: 'print', pageCount: 412, genres: ['Fantasy'], tags: ['comfort'], rating: 4.5, ...finishedAt('01-20') });
-    book({ title: 'The Long Ferry', authors: ['Tobin Asare'], format: 'audiobook', genres: ['fantasy', 'Sea stories'], tags: [], rating: 5, ...finishedAt('03-05') });
-    const lanterns = book({ title: 'Nine Lanterns', authors: ['Ines Halloran'], format: 'print', pageCount: 188, genres: ['Poetry'], tags: ['comfort'], rating: 5, ...finishedAt('03-20') });
+    const salt = book({
+      title: 'Salt Orchard',
+      authors: ['Mirela Quist'],
+      format: 'print',
+      pageCount: 412,
+      genres: ['Fantasy'],
+      tags: ['comfort'],
+      rating: 4.5,
+      ...finishedAt('01-20'),
+    });
+    book({
+      title: 'The Long Ferry',
+      authors: ['Tobin Asare'],
+      format: 'audiobook',
+      genres: ['fantasy', 'Sea stories'],
+      tags: [],
+      rating: 5,
+      ...finishedAt('03-05'),
+    });
+    const lanterns = book({
+      title: 'Nine Lanterns',
+      authors: ['Ines Halloran'],
+      format: 'print',
+      pageCount: 188,
+      genres: ['Poetry'],
+      tags: ['comfort'],
+      rating: 5,
+      ...finishedAt('03-20'),
+    });
     book({ title: 'Glass Weather', authors: ['Oskar Lind'], format: 'ebook', genres: ['Essays'], tags: [], status: 'tbr' });
     const session = (bookId: string, day: string, minutes: number, from: number, to: number) => {
       const id = randomUUID();
@@ -75,7 +101,10 @@ describe('Insights, offline', () => {
 
     // Worked by hand from the data above: 1 book in January, 2 in March.
     expect(await summaryUnder(page, 'Month by month').textContent()).toBe(`3 books in ${year}; the most in March: 2 books.`);
-    await page.getByRole('radio', { name: 'Minutes' }).or(page.getByRole('button', { name: 'Minutes' })).click();
+    await page
+      .getByRole('radio', { name: 'Minutes' })
+      .or(page.getByRole('button', { name: 'Minutes' }))
+      .click();
     // 60 + 30 in January, 45 in March.
     await summaryUnder(page, 'Month by month').filter({ hasText: 'minutes' }).waitFor();
     expect(await summaryUnder(page, 'Month by month').textContent()).toBe(`135 minutes in ${year}; the most in January: 90 minutes.`);

@@ -93,7 +93,10 @@ describe('The journal, offline', () => {
 
     // Favourites and picks, and labels of one's own.
     await page.goto(`${baseUrl}/journal/favourites`);
-    await page.getByRole('combobox', { name: /^Pick of [A-Z][a-z]+ \d{4}$/ }).first().selectOption({ label: 'Wick and Ember' });
+    await page
+      .getByRole('combobox', { name: /^Pick of [A-Z][a-z]+ \d{4}$/ })
+      .first()
+      .selectOption({ label: 'Wick and Ember' });
     expect(await seriousViolations(page)).toEqual([]);
     await page.goto(`${baseUrl}/journal/labels`);
     await page.getByRole('button', { name: 'New label' }).click();

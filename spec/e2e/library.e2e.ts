@@ -52,7 +52,10 @@ describe('The library', () => {
 
     // The covers view shows the same books.
     await page.goto(`${harness.server.baseUrl}/library`);
-    await page.getByRole('radio', { name: 'As covers' }).click().catch(() => page.getByLabel('As covers').click());
+    await page
+      .getByRole('radio', { name: 'As covers' })
+      .click()
+      .catch(() => page.getByLabel('As covers').click());
     await page.locator('ul.covers li').first().waitFor();
     expect(await page.locator('ul.covers li').count()).toBe(3);
     await context.close();

@@ -36,7 +36,14 @@ describe('Live updates in the browser', () => {
     ]);
     expect(pushed.status).toBe(200);
 
-    const arrivedAt = await arrivalInIndexedDb(page, { userId: reader.user.id, store: 'books', rowId: row, field: 'title', value: 'The Lantern Keeper’s Almanac', timeoutMs: 15_000 });
+    const arrivedAt = await arrivalInIndexedDb(page, {
+      userId: reader.user.id,
+      store: 'books',
+      rowId: row,
+      field: 'title',
+      value: 'The Lantern Keeper’s Almanac',
+      timeoutMs: 15_000,
+    });
     // The periodic pull runs once a minute; only the poke brings it this soon.
     expect(arrivedAt - pushedAt).toBeLessThan(15_000);
     await page.getByRole('link', { name: /The Lantern Keeper’s Almanac/ }).waitFor({ timeout: 5000 });

@@ -50,13 +50,20 @@ function routes(ids: { book: string; series: string; notebook: string | null }):
 async function firstId(page: Page, url: string, pattern: RegExp): Promise<string | null> {
   await page.goto(url);
   try {
-    await page.waitForFunction((source) => [...document.querySelectorAll('a[href]')].some((a) => new RegExp(source).test(a.getAttribute('href') ?? '')), pattern.source, {
-      timeout: 10_000,
-    });
+    await page.waitForFunction(
+      (source) => [...document.querySelectorAll('a[href]')].some((a) => new RegExp(source).test(a.getAttribute('href') ?? '')),
+      pattern.source,
+      {
+        timeout: 10_000,
+      },
+    );
   } catch {
     return null;
   }
-  const href = await page.evaluate((source) => [...document.querySelectorAll('a[href]')].map((a) => a.getAttribute('href') ?? '').find((h) => new RegExp(source).test(h)), pattern.source);
+  const href = await page.evaluate(
+    (source) => [...document.querySelectorAll('a[href]')].map((a) => a.getAttribute('href') ?? '').find((h) => new RegExp(source).test(h)),
+    pattern.source,
+  );
   return href ? href.split('/').pop()! : null;
 }
 

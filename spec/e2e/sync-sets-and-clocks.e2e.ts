@@ -68,7 +68,10 @@ describe('Tags from two devices, and a device whose date is wrong', () => {
 
     // The sync after the write learns the server's time and says so once, in the sync menu.
     await ahead.getByRole('button', { name: /^Sync status/ }).click();
-    await ahead.getByRole('alert').filter({ hasText: /date looks about 3 days ahead/ }).waitFor({ timeout: 20_000 });
+    await ahead
+      .getByRole('alert')
+      .filter({ hasText: /date looks about 3 days ahead/ })
+      .waitFor({ timeout: 20_000 });
     expect(await ahead.locator('.sync-details .refused').count()).toBe(0);
     await ahead.keyboard.press('Escape');
     await syncNow(ahead);
@@ -78,7 +81,14 @@ describe('Tags from two devices, and a device whose date is wrong', () => {
     expect(titles).toContain('A Calendar of Small Weathers');
     await ahead.getByRole('button', { name: /^Sync status/ }).click();
     await ahead.getByText('Everything you write is saved on this device first.').waitFor();
-    expect(await ahead.getByRole('alert').filter({ hasText: /date looks/ }).count()).withContext('said once').toBe(0);
+    expect(
+      await ahead
+        .getByRole('alert')
+        .filter({ hasText: /date looks/ })
+        .count(),
+    )
+      .withContext('said once')
+      .toBe(0);
     expect(await ahead.locator('.sync-details .refused').count()).toBe(0);
   });
 });

@@ -42,18 +42,24 @@ describe('The reading timer', () => {
     await tablet.getByRole('button', { name: 'Start reading timer' }).click();
     await tablet.waitForURL(`${harness.server.baseUrl}/timer`);
     await tablet.getByRole('heading', { name: 'The Cartographer of Tides' }).waitFor();
-    await elapsed(tablet).filter({ hasText: /00:0\d/ }).waitFor();
+    await elapsed(tablet)
+      .filter({ hasText: /00:0\d/ })
+      .waitFor();
     expect(await seriousViolations(tablet)).toEqual([]);
 
     // Offline, and the tab reloads: the timer is stored, not counted, so it carries on.
     await tablet.context().setOffline(true);
     await tablet.reload();
     await tablet.getByRole('heading', { name: 'The Cartographer of Tides' }).waitFor();
-    await elapsed(tablet).filter({ hasText: /00:\d\d/ }).waitFor();
+    await elapsed(tablet)
+      .filter({ hasText: /00:\d\d/ })
+      .waitFor();
 
     // 25 minutes later (the page's clock jumps; the timer reads it from its stored start).
     await tablet.clock.fastForward('25:00');
-    await elapsed(tablet).filter({ hasText: /25:\d\d/ }).waitFor();
+    await elapsed(tablet)
+      .filter({ hasText: /25:\d\d/ })
+      .waitFor();
     // The mini bar shows it elsewhere in the app.
     await tablet.goto(`${harness.server.baseUrl}/today`);
     await tablet.getByRole('link', { name: /25:\d\d The Cartographer of Tides/ }).click();

@@ -38,7 +38,9 @@ describe('X-Forwarded-For and LAMPLIGHT_TRUST_PROXY', () => {
     expect(loadConfig(base).trustProxy).toEqual([]);
     expect(loadConfig({ ...base, LAMPLIGHT_TRUST_PROXY: 'loopback, 10.0.0.0/8 ,fd00::1' }).trustProxy).toEqual(['loopback', '10.0.0.0/8', 'fd00::1']);
     for (const bad of ['everyone', '10.0.0.0/33', '300.1.1.1', 'true', '*']) {
-      expect(() => loadConfig({ ...base, LAMPLIGHT_TRUST_PROXY: bad })).withContext(bad).toThrowError(/LAMPLIGHT_TRUST_PROXY/);
+      expect(() => loadConfig({ ...base, LAMPLIGHT_TRUST_PROXY: bad }))
+        .withContext(bad)
+        .toThrowError(/LAMPLIGHT_TRUST_PROXY/);
     }
   });
 });

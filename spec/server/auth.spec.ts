@@ -37,10 +37,7 @@ describe('POST /api/auth/register', () => {
   });
 
   it('When fields are bad, then it answers 400 naming each field and the reason', async () => {
-    const res = await request(app)
-      .post('/api/auth/register')
-      .send({ email: 'not-an-address', password: 'short', displayName: '' })
-      .expect(400);
+    const res = await request(app).post('/api/auth/register').send({ email: 'not-an-address', password: 'short', displayName: '' }).expect(400);
 
     expect(res.body.error.code).toBe('invalid_input');
     expect(res.body.error.details).toEqual({
@@ -51,10 +48,7 @@ describe('POST /api/auth/register', () => {
   });
 
   it('When the password is on the blocklist, then it is refused (NIST SP 800-63B-4 §3.1.1.2)', async () => {
-    const res = await request(app)
-      .post('/api/auth/register')
-      .send({ email: uniqueEmail(), password: 'passwordpassword', displayName: 'Ilse' })
-      .expect(400);
+    const res = await request(app).post('/api/auth/register').send({ email: uniqueEmail(), password: 'passwordpassword', displayName: 'Ilse' }).expect(400);
 
     expect(res.body.error.details.password).toContain('too common');
   });
@@ -65,8 +59,14 @@ describe('POST /api/auth/register', () => {
     const email = uniqueEmail();
     await registerReader(app, { email, password: `${prefix}one` });
 
-    await request(app).post('/api/auth/login').send({ email, password: `${prefix}two` }).expect(401);
-    await request(app).post('/api/auth/login').send({ email, password: `${prefix}one` }).expect(200);
+    await request(app)
+      .post('/api/auth/login')
+      .send({ email, password: `${prefix}two` })
+      .expect(401);
+    await request(app)
+      .post('/api/auth/login')
+      .send({ email, password: `${prefix}one` })
+      .expect(200);
   });
 
   it('When an account registers, then a welcome e-mail reaches its address over SMTP, without the chosen name', async () => {
@@ -169,7 +169,10 @@ describe('POST /api/auth/refresh', () => {
   });
 
   it('When the refresh token is unknown, then it answers 401', async () => {
-    const res = await request(app).post('/api/auth/refresh').send({ refreshToken: 'x'.repeat(43) }).expect(401);
+    const res = await request(app)
+      .post('/api/auth/refresh')
+      .send({ refreshToken: 'x'.repeat(43) })
+      .expect(401);
 
     expect(res.body.error.code).toBe('refresh_unknown');
   });
@@ -279,8 +282,14 @@ describe('Bearer tokens on protected routes', () => {
         .setExpirationTime('5m')
         .sign(SECRET);
 
-    await request(app).get('/api/devices').set(bearer(await sign('someone-else', 'lamplight-app'))).expect(401);
-    await request(app).get('/api/devices').set(bearer(await sign('lamplight', 'another-app'))).expect(401);
+    await request(app)
+      .get('/api/devices')
+      .set(bearer(await sign('someone-else', 'lamplight-app')))
+      .expect(401);
+    await request(app)
+      .get('/api/devices')
+      .set(bearer(await sign('lamplight', 'another-app')))
+      .expect(401);
   });
 });
 

@@ -10,7 +10,17 @@ import { startTestServer, type RunningServer } from '../support/test-server';
 
 /** Parameter values that cannot be ids: not uuids, traversal, injection, control characters, huge. */
 const badParam = fc.oneof(
-  fc.constantFrom('abc', '1', '-1', '..', '%00', "1' OR '1'='1", 'ffffffff-ffff-ffff-ffff-ffffffffffffff', '{00000000-0000-0000-0000-000000000000}', 'x'.repeat(5000)),
+  fc.constantFrom(
+    'abc',
+    '1',
+    '-1',
+    '..',
+    '%00',
+    "1' OR '1'='1",
+    'ffffffff-ffff-ffff-ffff-ffffffffffffff',
+    '{00000000-0000-0000-0000-000000000000}',
+    'x'.repeat(5000),
+  ),
   fc.string({ unit: 'binary', maxLength: 80 }).map(encodeURIComponent),
 );
 
@@ -18,8 +28,29 @@ const badParam = fc.oneof(
 const badJson = fc.oneof(
   fc.jsonValue({ maxDepth: 3 }),
   fc.dictionary(
-    fc.constantFrom('email', 'password', 'displayName', 'deviceName', 'refreshToken', 'token', 'newPassword', 'currentPassword', 'name', 'role', 'disabled', 'deviceId', 'changes', '__proto__'),
-    fc.oneof(fc.string({ unit: 'binary', maxLength: 120 }), fc.integer(), fc.boolean(), fc.constant(null), fc.array(fc.jsonValue({ maxDepth: 2 }), { maxLength: 3 })),
+    fc.constantFrom(
+      'email',
+      'password',
+      'displayName',
+      'deviceName',
+      'refreshToken',
+      'token',
+      'newPassword',
+      'currentPassword',
+      'name',
+      'role',
+      'disabled',
+      'deviceId',
+      'changes',
+      '__proto__',
+    ),
+    fc.oneof(
+      fc.string({ unit: 'binary', maxLength: 120 }),
+      fc.integer(),
+      fc.boolean(),
+      fc.constant(null),
+      fc.array(fc.jsonValue({ maxDepth: 2 }), { maxLength: 3 }),
+    ),
   ),
 );
 
@@ -40,7 +71,13 @@ function fill(path: string, value: string): string {
 }
 
 /** Sends exactly these bytes (supertest would turn a Buffer with a JSON type into JSON text). */
-async function sendRaw(server: RunningServer, method: string, path: string, headers: Record<string, string>, bytes: Buffer): Promise<{ status: number; body: unknown }> {
+async function sendRaw(
+  server: RunningServer,
+  method: string,
+  path: string,
+  headers: Record<string, string>,
+  bytes: Buffer,
+): Promise<{ status: number; body: unknown }> {
   const res = await fetch(`${server.baseUrl}${path}`, { method, headers, body: method === 'GET' || method === 'HEAD' ? undefined : new Uint8Array(bytes) });
   const text = await res.text();
   return { status: res.status, body: text.startsWith('{') ? JSON.parse(text) : text };
@@ -59,9 +96,15 @@ describe('Bad ids and bodies', () => {
 
   it('When an id in the path cannot be an id, then devices and admin accounts answer 404, not 500', async () => {
     for (const id of ['not-a-uuid', '12345', 'ffffffff-ffff-ffff-ffff-fffffffffffg']) {
-      expect((await request(app).delete(`/api/devices/${id}`).set(bearer(token))).status).withContext(id).toBe(404);
-      expect((await request(app).patch(`/api/devices/${id}`).set(bearer(token)).send({ name: 'Kitchen tablet' })).status).withContext(id).toBe(404);
-      expect((await request(app).patch(`/api/admin/users/${id}`).set(bearer(token)).send({ disabled: true })).status).withContext(id).toBe(404);
+      expect((await request(app).delete(`/api/devices/${id}`).set(bearer(token))).status)
+        .withContext(id)
+        .toBe(404);
+      expect((await request(app).patch(`/api/devices/${id}`).set(bearer(token)).send({ name: 'Kitchen tablet' })).status)
+        .withContext(id)
+        .toBe(404);
+      expect((await request(app).patch(`/api/admin/users/${id}`).set(bearer(token)).send({ disabled: true })).status)
+        .withContext(id)
+        .toBe(404);
     }
     // A well-formed id nobody has is the same 404.
     expect((await request(app).delete('/api/devices/00000000-0000-4000-8000-000000000000').set(bearer(token))).status).toBe(404);
@@ -76,7 +119,9 @@ describe('Bad ids and bodies', () => {
       const login = await request(app).post('/api/auth/login').send({ email: signedIn.user.email, password: GOOD_PASSWORD, deviceName: bad });
       const rename = await request(app).patch(`/api/devices/${device!.id}`).set(bearer(signedIn.accessToken)).send({ name: bad });
 
-      expect([register.status, register.body.error?.details?.displayName]).withContext(JSON.stringify(bad)).toEqual([400, 'Use letters, digits, spaces and punctuation only']);
+      expect([register.status, register.body.error?.details?.displayName])
+        .withContext(JSON.stringify(bad))
+        .toEqual([400, 'Use letters, digits, spaces and punctuation only']);
       expect([login.status, rename.status]).withContext(JSON.stringify(bad)).toEqual([400, 400]);
     }
   });
@@ -121,7 +166,14 @@ describe('Bad ids and bodies', () => {
 
     it('finds the routes it fuzzes by walking the app (at least the known ones)', () => {
       const found = listRoutes(app).map((route) => `${route.method} ${route.path}`);
-      for (const known of ['POST /api/auth/login', 'PATCH /api/devices/:id', 'PATCH /api/admin/users/:id', 'GET /api/sync/pull', 'POST /api/uploads', 'GET /api/uploads/:id']) {
+      for (const known of [
+        'POST /api/auth/login',
+        'PATCH /api/devices/:id',
+        'PATCH /api/admin/users/:id',
+        'GET /api/sync/pull',
+        'POST /api/uploads',
+        'GET /api/uploads/:id',
+      ]) {
         expect(found).toContain(known);
       }
     });
@@ -133,16 +185,28 @@ describe('Bad ids and bodies', () => {
         // A fresh admin per route: a fuzzed logout or deletion must not spoil the next route.
         const auth = bearer((await registerAdmin(app)).accessToken);
         await fc.assert(
-          fc.asyncProperty(badParam, badJson, badRaw, fc.dictionary(fc.constantFrom('since', 'limit', 'x'), fc.string({ maxLength: 30 })), async (param, json, raw, query) => {
-            const path = fill(route.path, param);
-            const method = route.method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete' | 'put';
-            const withJson = await request(app)[method](path).query(query).set(auth).set('Content-Type', 'application/json').send(JSON.stringify(json));
-            const withRaw = await sendRaw(server, route.method, path, { ...auth, 'Content-Type': raw.type, ...(raw.encoding ? { 'Content-Encoding': raw.encoding } : {}) }, raw.bytes);
-            for (const res of [withJson, withRaw]) {
-              if (res.status >= 500) fifth.push(`${route.method} ${route.path} ${res.status} ${JSON.stringify(res.body)}`);
-            }
-            return withJson.status < 500 && withRaw.status < 500;
-          }),
+          fc.asyncProperty(
+            badParam,
+            badJson,
+            badRaw,
+            fc.dictionary(fc.constantFrom('since', 'limit', 'x'), fc.string({ maxLength: 30 })),
+            async (param, json, raw, query) => {
+              const path = fill(route.path, param);
+              const method = route.method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete' | 'put';
+              const withJson = await request(app)[method](path).query(query).set(auth).set('Content-Type', 'application/json').send(JSON.stringify(json));
+              const withRaw = await sendRaw(
+                server,
+                route.method,
+                path,
+                { ...auth, 'Content-Type': raw.type, ...(raw.encoding ? { 'Content-Encoding': raw.encoding } : {}) },
+                raw.bytes,
+              );
+              for (const res of [withJson, withRaw]) {
+                if (res.status >= 500) fifth.push(`${route.method} ${route.path} ${res.status} ${JSON.stringify(res.body)}`);
+              }
+              return withJson.status < 500 && withRaw.status < 500;
+            },
+          ),
           { numRuns: 8 },
         );
       }

@@ -79,7 +79,10 @@ describe('MARC 21 bibliographic records as book fields', () => {
     });
 
     it('drops the closing period of a title but keeps the edition’s abbreviation ("2nd ed.")', () => {
-      const found = book([['245', '10', 'a', 'Moths of the lower fen.'], ['250', '  ', 'a', '2nd ed.']]);
+      const found = book([
+        ['245', '10', 'a', 'Moths of the lower fen.'],
+        ['250', '  ', 'a', '2nd ed.'],
+      ]);
       expect(found.title).toBe('Moths of the lower fen');
       expect(found.edition).toBe('2nd ed.');
     });
@@ -87,7 +90,10 @@ describe('MARC 21 bibliographic records as book fields', () => {
 
   describe('264 and 260 publication (bd264: second indicator 1 publication, 4 copyright; bd260)', () => {
     it('takes the publisher and year of publication, not of copyright, and falls back to 260 and then 008/07-10', () => {
-      const both = book([['264', ' 1', 'a', 'Eastmere :', 'b', '[Quayside Books],', 'c', '[2019]'], ['264', ' 4', 'c', '©2018']]);
+      const both = book([
+        ['264', ' 1', 'a', 'Eastmere :', 'b', '[Quayside Books],', 'c', '[2019]'],
+        ['264', ' 4', 'c', '©2018'],
+      ]);
       expect([both.publisher, both.year]).toEqual(['Quayside Books', 2019]);
       const older = book([['260', '  ', 'a', 'Eastmere :', 'b', 'Quayside Books,', 'c', 'c1998.']]);
       expect([older.publisher, older.year]).toEqual(['Quayside Books', 1998]);
@@ -119,9 +125,20 @@ describe('MARC 21 bibliographic records as book fields', () => {
     it('makes a nonmusical sound recording (leader/06 "i", bdleader) an audiobook in minutes, and an online text (008/23 "o", bd008b) an ebook', () => {
       const audio = book([['300', '  ', 'a', '1 audio disc (9 hr., 15 min.) :']], leader('i'));
       expect([audio.format, audio.audioMinutes, audio.pageCount]).toEqual(['audiobook', 555, null]);
-      const fromPlayingTime = book([['300', '  ', 'a', '1 audio disc :'], ['306', '  ', 'a', '091500']], leader('i'));
+      const fromPlayingTime = book(
+        [
+          ['300', '  ', 'a', '1 audio disc :'],
+          ['306', '  ', 'a', '091500'],
+        ],
+        leader('i'),
+      );
       expect(fromPlayingTime.audioMinutes).toBe(555);
-      const ebook = parseMarcXml(marcjsXml(BOOK, [['008', field008(2020, 'eng', 'o')], ['300', '  ', 'a', '1 online resource (xii, 345 pages)']]));
+      const ebook = parseMarcXml(
+        marcjsXml(BOOK, [
+          ['008', field008(2020, 'eng', 'o')],
+          ['300', '  ', 'a', '1 online resource (xii, 345 pages)'],
+        ]),
+      );
       expect([marcToBook(ebook[0]!).format, marcToBook(ebook[0]!).pageCount]).toEqual(['ebook', 345]);
       expect(book([['300', '  ', 'a', '288 pages ;']]).format).toBe('print');
     });
@@ -186,7 +203,11 @@ describe('MARC 21 bibliographic records as book fields', () => {
           .get('020')
           .flatMap((field) => (field.subf ?? []).filter(([code]) => code === 'a').map(([, value]) => asIsbn13(value.split(' ')[0]!)))
           .filter((isbn): isbn is string => !!isbn);
-        const title = (reference.get('245')[0]!.subf!.find(([code]) => code === 'a')![1]).replace(/\s*[/:]$/, '').replace(/\.$/, '');
+        const title = reference
+          .get('245')[0]!
+          .subf!.find(([code]) => code === 'a')![1]
+          .replace(/\s*[/:]$/, '')
+          .replace(/\.$/, '');
         expect(found.isbns).toEqual([...new Set(isbns)]);
         expect(found.title).toBe(title);
       }

@@ -58,13 +58,25 @@ describe('/api/catalogue', () => {
       expect(res.body.source).toBe(host(local.url));
       expect(res.body.books.length).toBe(1);
       expect(res.body.books[0]).toEqual(
-        jasmine.objectContaining({ isbn: HARD_CASES.audiobook.isbn13, title: 'The orchard under snow', authors: ['Halvard Nyström'], format: 'audiobook', audioMinutes: 555, pageCount: null, publisher: 'Kestrel & Vane Audio', year: 2024 }),
+        jasmine.objectContaining({
+          isbn: HARD_CASES.audiobook.isbn13,
+          title: 'The orchard under snow',
+          authors: ['Halvard Nyström'],
+          format: 'audiobook',
+          audioMinutes: 555,
+          pageCount: null,
+          publisher: 'Kestrel & Vane Audio',
+          year: 2024,
+        }),
       );
     });
 
     it('When the ISBN is typed as a hyphenated ISBN-10 of a record that has only the ISBN-10, then it is found under its ISBN-13', async () => {
       const isbn10 = HARD_CASES.isbn10Only.isbn10;
-      const res = await request(app).get(`/api/catalogue/isbn/${hyphenated10(isbn10)}`).set(bearer(token)).expect(200);
+      const res = await request(app)
+        .get(`/api/catalogue/isbn/${hyphenated10(isbn10)}`)
+        .set(bearer(token))
+        .expect(200);
       expect(res.body.books[0].isbn).toBe(isbn10To13(isbn10));
       expect(res.body.books[0].pageCount).toBe(233);
     });
@@ -81,7 +93,10 @@ describe('/api/catalogue', () => {
     });
 
     it('When no record has the ISBN (0 records), then it answers 404 no_match', async () => {
-      const res = await request(app).get(`/api/catalogue/isbn/${inventedIsbn13(8888)}`).set(bearer(token)).expect(404);
+      const res = await request(app)
+        .get(`/api/catalogue/isbn/${inventedIsbn13(8888)}`)
+        .set(bearer(token))
+        .expect(404);
       expect(res.body.error.code).toBe('no_match');
     });
   });
@@ -100,9 +115,9 @@ describe('/api/catalogue', () => {
       expect(first.body.source).toBe(host(catalogue.url));
       expect(again.body).toEqual({ books: first.body.books, source: 'cache' });
       expect(again.body.books[0]).toEqual(jasmine.objectContaining({ series: 'Saltmarsh quartet', seriesPosition: 2 }));
-      const rows = await (await testDataSource()).query(`SELECT extract(epoch FROM expires_at - fetched_at) / 86400 AS days FROM catalogue_cache WHERE key = $1`, [
-        `isbn:${HARD_CASES.seriesEntry.isbn13}`,
-      ]);
+      const rows = await (
+        await testDataSource()
+      ).query(`SELECT extract(epoch FROM expires_at - fetched_at) / 86400 AS days FROM catalogue_cache WHERE key = $1`, [`isbn:${HARD_CASES.seriesEntry.isbn13}`]);
       expect(Number(rows[0].days)).toBe(30);
     });
 
@@ -217,7 +232,8 @@ describe('/api/catalogue', () => {
 
     it('When a catalogue does not support the CQL relation "all" (SRU diagnostic 19), then the search is asked again with "="', async () => {
       const strict = await stub({
-        body: (url) => (url.searchParams.get('query')!.includes(' all ') ? sruDiagnostic(19, 'Unsupported relation', 'all') : sruRecords([recordXml(HARD_CASES.qualified.isbn13)])),
+        body: (url) =>
+          url.searchParams.get('query')!.includes(' all ') ? sruDiagnostic(19, 'Unsupported relation', 'all') : sruRecords([recordXml(HARD_CASES.qualified.isbn13)]),
       });
       const strictApp = await appWith([strict.url]);
       const { accessToken } = await registerReader(strictApp);

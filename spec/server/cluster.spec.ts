@@ -110,7 +110,7 @@ describe('Three instances behind nginx, through PgBouncer', () => {
     expect(JSON.parse(logged!.line).req.network).toBe('127.0.0.0/24'); // not 203.0.113.0/24
   });
 
-  it('When a body is larger than any the server takes, then nginx refuses it with the server\'s JSON 413', async () => {
+  it("When a body is larger than any the server takes, then nginx refuses it with the server's JSON 413", async () => {
     const res = await fetch(`${running().baseUrl}/api/uploads`, {
       method: 'POST',
       headers: { 'content-type': 'application/octet-stream' },

@@ -91,7 +91,9 @@ describe('Every synced collection validates each of its fields on push', () => {
       expect(problems.map((p) => p.index)).toEqual([1]);
       expect(problems[0]!.reason).toMatch(wrong.reason);
       const { state } = await client.pullAll();
-      expect([...state.keys()].some((key) => key.includes(row))).withContext('an invalid batch applies nothing').toBeFalse();
+      expect([...state.keys()].some((key) => key.includes(row)))
+        .withContext('an invalid batch applies nothing')
+        .toBeFalse();
     });
   }
 

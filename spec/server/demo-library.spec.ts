@@ -144,7 +144,10 @@ describe('demo library (seedDemoLibrary)', () => {
       const { bookStatusChanges, readings } = pulled.rows;
       expect(summary?.statusChanges).toBe(bookStatusChanges.length);
       expect(summary?.readings).toBe(readings.length);
-      for (const row of [...bookStatusChanges, ...readings]) expect(books.has(row['bookId'] as string)).withContext(row.id).toBeTrue();
+      for (const row of [...bookStatusChanges, ...readings])
+        expect(books.has(row['bookId'] as string))
+          .withContext(row.id)
+          .toBeTrue();
       for (const book of books.values()) {
         const history = bookStatusChanges
           .filter((change) => change['bookId'] === book.id)
@@ -156,7 +159,9 @@ describe('demo library (seedDemoLibrary)', () => {
       }
       const lastChanges = [...books.values()].map((book) => String(book['statusChangedAt']));
       expect(lastChanges.every((at) => at.startsWith('2026-'))).toBeTrue();
-      expect(new Set(lastChanges.map((at) => at.slice(5, 7))).size).withContext('months of 2026').toBeGreaterThanOrEqual(9);
+      expect(new Set(lastChanges.map((at) => at.slice(5, 7))).size)
+        .withContext('months of 2026')
+        .toBeGreaterThanOrEqual(9);
     });
 
     it('When seeded, then every finished book has a reviewed, finished reading, and one book was read twice', () => {
@@ -204,7 +209,10 @@ describe('demo library (seedDemoLibrary)', () => {
       expect(seriesIds.size).toBe(2);
       expect(inSeries.every((book) => seriesIds.has(book['seriesId'] as string))).toBeTrue();
       for (const id of seriesIds) {
-        const places = inSeries.filter((book) => book['seriesId'] === id).map((book) => book['seriesPosition']).sort();
+        const places = inSeries
+          .filter((book) => book['seriesId'] === id)
+          .map((book) => book['seriesPosition'])
+          .sort();
         expect(places).toEqual([1, 2, 3]);
       }
     });
@@ -214,7 +222,9 @@ describe('demo library (seedDemoLibrary)', () => {
       expect(sessions.length).toBeGreaterThan(50);
       const now = Date.now();
       for (const session of sessions) {
-        expect(sessionProblems(session, sessions, now)).withContext(`${session.startedAt}`).toEqual({});
+        expect(sessionProblems(session, sessions, now))
+          .withContext(`${session.startedAt}`)
+          .toEqual({});
         expect(booksById().has(session.bookId!)).toBeTrue();
       }
       expect(pulled.rows.quotes.length).toBeGreaterThan(0);

@@ -58,7 +58,14 @@ describe('E-mail verification by signed link', () => {
   it('When a link is forged, expired, for another address or an access token, then it is refused 400 and nothing is verified', async () => {
     const signedIn = await registerReader(app);
     const sign = (claims: Record<string, unknown>, audience: string, expires: string | number, secret = SECRET) =>
-      new SignJWT(claims).setProtectedHeader({ alg: 'HS256' }).setSubject(signedIn.user.id).setIssuer('lamplight').setAudience(audience).setIssuedAt().setExpirationTime(expires).sign(secret);
+      new SignJWT(claims)
+        .setProtectedHeader({ alg: 'HS256' })
+        .setSubject(signedIn.user.id)
+        .setIssuer('lamplight')
+        .setAudience(audience)
+        .setIssuedAt()
+        .setExpirationTime(expires)
+        .sign(secret);
     const forged = await sign({ email: signedIn.user.email }, 'lamplight-verify-email', '1h', new TextEncoder().encode('another-secret-of-at-least-32-characters'));
     const expired = await sign({ email: signedIn.user.email }, 'lamplight-verify-email', Math.floor(Date.now() / 1000) - 10);
     const otherAddress = await sign({ email: 'someone-else@example.com' }, 'lamplight-verify-email', '1h');
@@ -84,6 +91,9 @@ describe('E-mail verification by signed link', () => {
     await ask().expect(202);
     expect((await ask().expect(429)).body.error.code).toBe('too_many_requests');
 
-    await request(app).post('/api/auth/verify-email').send({ token: linkToken(mail.text) }).expect(200);
+    await request(app)
+      .post('/api/auth/verify-email')
+      .send({ token: linkToken(mail.text) })
+      .expect(200);
   });
 });

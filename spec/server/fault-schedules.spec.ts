@@ -32,7 +32,9 @@ async function schedulesHold(server: () => SimServer, numRuns: number, seed = SE
 describe('Fault schedules (simulated devices, network and crashes)', () => {
   it('When 300 schedules drop, delay, duplicate and reorder requests and crash devices and the server, then nothing acknowledged is lost and all converge', async () => {
     const { details, totals } = await schedulesHold(() => new ServerModel(), 300);
-    expect(details.failed).withContext(fc.defaultReportMessage(details) ?? '').toBeFalse();
+    expect(details.failed)
+      .withContext(fc.defaultReportMessage(details) ?? '')
+      .toBeFalse();
     expect(details.numRuns).toBe(300);
     // The schedules did real work: many confirmed writes and requests to check.
     expect(totals.acknowledged).toBeGreaterThan(1000);
@@ -96,13 +98,17 @@ describe('The in-memory server model against the real server (same schedules, tw
       const real: Outcome = await runSchedule(schedule, new HttpSimServer(() => [server, other][turn++ % 2]!.baseUrl, reader.accessToken), startMs);
       const model: Outcome = await runSchedule(schedule, new ServerModel(), startMs);
 
-      expect(isClean(real)).withContext(`schedule ${n} on the real server: ${JSON.stringify(summary(real))}`).toBeTrue();
+      expect(isClean(real))
+        .withContext(`schedule ${n} on the real server: ${JSON.stringify(summary(real))}`)
+        .toBeTrue();
       expect(real.trace.length).withContext(`schedule ${n}: requests`).toBe(model.trace.length);
       const firstDifference = real.trace.findIndex(
         (entry, i) => !isDeepStrictEqual(comparable(entry.request, entry.response), comparable(model.trace[i]!.request, model.trace[i]!.response)),
       );
       expect(firstDifference)
-        .withContext(`schedule ${n}, answer ${firstDifference}: real ${JSON.stringify(real.trace[firstDifference]?.response.body)} model ${JSON.stringify(model.trace[firstDifference]?.response.body)}`)
+        .withContext(
+          `schedule ${n}, answer ${firstDifference}: real ${JSON.stringify(real.trace[firstDifference]?.response.body)} model ${JSON.stringify(model.trace[firstDifference]?.response.body)}`,
+        )
         .toBe(-1);
       expect([...real.finalState.entries()].sort()).toEqual([...model.finalState.entries()].sort());
       compared += real.trace.length;

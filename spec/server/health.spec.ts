@@ -57,11 +57,7 @@ describe('The API error contract', () => {
   it('When a body is not valid JSON, then it answers 400 invalid_json', async () => {
     const app = await createTestApp();
 
-    const res = await request(app)
-      .post('/api/anything')
-      .set('Content-Type', 'application/json')
-      .send('{"title": ')
-      .expect(400);
+    const res = await request(app).post('/api/anything').set('Content-Type', 'application/json').send('{"title": ').expect(400);
 
     expect(res.body.error).toEqual({ code: 'invalid_json', message: 'Request body is not valid JSON', details: null });
   });

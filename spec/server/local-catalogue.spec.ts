@@ -9,7 +9,11 @@ import { createLocalCatalogue } from '../../sync-server/src/local-catalogue/sru-
    in the "SRU Diagnostics List" (info:srw/diagnostic/1/N). */
 describe('The local catalogue (GET /sru)', () => {
   const app = createLocalCatalogue();
-  const ask = (query: Record<string, string>) => request(app).get('/sru').query({ recordSchema: 'marcxml', ...query }).expect(200);
+  const ask = (query: Record<string, string>) =>
+    request(app)
+      .get('/sru')
+      .query({ recordSchema: 'marcxml', ...query })
+      .expect(200);
   const diagnosticOf = (xml: string) => readSruResponse(xml).diagnostics[0]?.uri;
 
   it('When asked for an ISBN-10 that a record holds only as ISBN-10, then it answers one record in the SRU 2.0 namespace', async () => {

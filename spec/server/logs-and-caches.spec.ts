@@ -53,7 +53,12 @@ describe('Security events in the log', () => {
     const app = await createTestApp();
     const signedIn = await registerReader(app);
     await request(app).post('/api/auth/refresh').send({ refreshToken: signedIn.refreshToken }).expect(200);
-    await (await testDataSource()).query(`UPDATE refresh_tokens SET used_at = used_at - interval '1 hour' WHERE used_at IS NOT NULL AND session_id IN (SELECT id FROM device_sessions WHERE user_id = $1)`, [signedIn.user.id]);
+    await (
+      await testDataSource()
+    ).query(
+      `UPDATE refresh_tokens SET used_at = used_at - interval '1 hour' WHERE used_at IS NOT NULL AND session_id IN (SELECT id FROM device_sessions WHERE user_id = $1)`,
+      [signedIn.user.id],
+    );
     const logged: string[] = [];
     spyOn(console, 'warn').and.callFake((...args: unknown[]) => logged.push(args.map(String).join(' ')));
 
@@ -70,7 +75,9 @@ describe('Security events in the log', () => {
 describe('Cache-Control on private answers', () => {
   it('When tokens, the account or a pull page are answered, then they say no-store (RFC 9111 §5.2.2.5)', async () => {
     const app = await createTestApp();
-    const registered = await request(app).post('/api/auth/register').send({ email: `cache-${Date.now()}@example.com`, password: GOOD_PASSWORD, displayName: 'Oda Fenn' });
+    const registered = await request(app)
+      .post('/api/auth/register')
+      .send({ email: `cache-${Date.now()}@example.com`, password: GOOD_PASSWORD, displayName: 'Oda Fenn' });
     const signedIn = await registerReader(app);
     const answers = [
       registered,

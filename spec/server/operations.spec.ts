@@ -17,7 +17,12 @@ async function appWithCaughtLog(env: Record<string, string> = {}) {
   const lines: string[] = [];
   const sink = new Writable({
     write(chunk: Buffer, _encoding, done) {
-      lines.push(...chunk.toString().split('\n').filter((line) => line !== ''));
+      lines.push(
+        ...chunk
+          .toString()
+          .split('\n')
+          .filter((line) => line !== ''),
+      );
       done();
     },
   });
@@ -44,9 +49,7 @@ describe('Request logs (pino)', () => {
 
       const records = lines.map((line) => JSON.parse(line) as Record<string, unknown>);
       const push = records.find((record) => record['route'] === '/api/sync/push');
-      expect(push).toEqual(
-        jasmine.objectContaining({ reqId: 'spec-request-0001', user: userIdHash(user.id), res: { status: 200 }, level: 30 }),
-      );
+      expect(push).toEqual(jasmine.objectContaining({ reqId: 'spec-request-0001', user: userIdHash(user.id), res: { status: 200 }, level: 30 }));
       expect(push!['responseTime']).toEqual(jasmine.any(Number));
       expect(records.find((record) => record['route'] === '/api/auth/login')?.['res']).toEqual({ status: 200 });
       const everything = lines.join('\n');

@@ -15,7 +15,9 @@ describe('Password hashing in a bounded worker pool', () => {
     const statuses = answers.map((res) => res.status);
     expect(statuses).toContain(200);
     expect(statuses).toContain(503);
-    expect(statuses.every((status) => status === 200 || status === 503)).withContext(statuses.join(',')).toBeTrue();
+    expect(statuses.every((status) => status === 200 || status === 503))
+      .withContext(statuses.join(','))
+      .toBeTrue();
     const busy = answers.find((res) => res.status === 503)!;
     expect(busy.body.error.code).toBe('busy');
     expect(busy.headers['retry-after']).toBe(String(BUSY_RETRY_SECONDS));

@@ -69,10 +69,9 @@ describe('Password reset by e-mail', () => {
     const { user } = await registerReader(app, { email });
     const token = await requestLink(app, email);
 
-    const [row] = await (await testDataSource()).query(
-      `SELECT token_hash, extract(epoch FROM expires_at - created_at) AS seconds FROM password_resets WHERE user_id = $1`,
-      [user.id],
-    );
+    const [row] = await (
+      await testDataSource()
+    ).query(`SELECT token_hash, extract(epoch FROM expires_at - created_at) AS seconds FROM password_resets WHERE user_id = $1`, [user.id]);
 
     expect(row.token_hash).not.toContain(token);
     expect(row.token_hash).toMatch(/^[0-9a-f]{64}$/);

@@ -67,15 +67,24 @@ describe('The server through PgBouncer (transaction pooling)', () => {
     const readers = await Promise.all([1, 2, 3].map(() => registerReader(server)));
     const fieldSets: [string, unknown][][] = [
       [['title', 'The Salt Archive']],
-      [['title', 'Lanterns in Fog'], ['rating', 4]],
+      [
+        ['title', 'Lanterns in Fog'],
+        ['rating', 4],
+      ],
       [['status', 'reading']],
-      [['title', 'Under Alder Bridge'], ['pageCount', 312]],
+      [
+        ['title', 'Under Alder Bridge'],
+        ['pageCount', 312],
+      ],
     ];
     const pushes = readers.flatMap((reader, r) =>
       Array.from({ length: 8 }, (_, n) => {
         const rowId = randomUUID();
         const changes = fieldSets[(r + n) % fieldSets.length]!.map(([field, value]) => fieldChange(rowId, field, value, { wall: Date.now() }));
-        return request(server).post('/api/sync/push').set(bearer(reader.accessToken)).send({ deviceId: `device-${r}`, changes });
+        return request(server)
+          .post('/api/sync/push')
+          .set(bearer(reader.accessToken))
+          .send({ deviceId: `device-${r}`, changes });
       }),
     );
 

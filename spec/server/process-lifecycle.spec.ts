@@ -36,7 +36,10 @@ async function startServerProcess(): Promise<ServerProcess> {
   child.stdout!.on('data', (chunk: Buffer) => (output += chunk.toString()));
   child.stderr!.on('data', (chunk: Buffer) => (output += chunk.toString()));
   const exited = new Promise<number | null>((resolve) => child.on('exit', (code) => resolve(code)));
-  const port = await waitFor(() => /running at http:\/\/127\.0\.0\.1:(\d+)\//.exec(output)?.[1], () => output);
+  const port = await waitFor(
+    () => /running at http:\/\/127\.0\.0\.1:(\d+)\//.exec(output)?.[1],
+    () => output,
+  );
   return { child, port: Number(port), output: () => output, exited };
 }
 
@@ -82,7 +85,10 @@ describe('The server process', () => {
       expect(refused).toBe('ECONNREFUSED');
 
       socket.write(body.slice(10));
-      await waitFor(() => (/\r\n\r\n\{.*\}$/s.test(response) ? true : undefined), () => response);
+      await waitFor(
+        () => (/\r\n\r\n\{.*\}$/s.test(response) ? true : undefined),
+        () => response,
+      );
       // A wrong e-mail or password is a 401: the request ran to its normal end, not cut off.
       expect(response).toMatch(/^HTTP\/1\.1 401 /);
 

@@ -13,10 +13,9 @@ const digest = (token: string) => createHash('sha256').update(token).digest('hex
 
 /** Moves a token's rotation (or expiry) back in time, as if the clock had run on. */
 async function age(token: string, column: 'used_at' | 'expires_at', seconds: number): Promise<void> {
-  await (await testDataSource()).query(`UPDATE refresh_tokens SET ${column} = ${column} - make_interval(secs => $2) WHERE token_hash = $1`, [
-    digest(token),
-    seconds,
-  ]);
+  await (
+    await testDataSource()
+  ).query(`UPDATE refresh_tokens SET ${column} = ${column} - make_interval(secs => $2) WHERE token_hash = $1`, [digest(token), seconds]);
 }
 
 // RFC 9700 §4.14.2: refresh tokens rotate, and a token presented again means it was stolen and
@@ -88,10 +87,11 @@ describe('Refresh-token rotation with a grace window', () => {
     expect([a.status, b.status]).toEqual([200, 200]);
     expect(a.body).toEqual(b.body);
     await refresh((a.body as TokenPair).refreshToken).expect(200);
-    const rows: { n: number }[] = await (await testDataSource()).query(
-      'SELECT count(*)::int AS n FROM refresh_tokens t JOIN device_sessions s ON s.id = t.session_id WHERE s.user_id = $1 AND s.revoked_at IS NULL',
-      [first.user.id],
-    );
+    const rows: { n: number }[] = await (
+      await testDataSource()
+    ).query('SELECT count(*)::int AS n FROM refresh_tokens t JOIN device_sessions s ON s.id = t.session_id WHERE s.user_id = $1 AND s.revoked_at IS NULL', [
+      first.user.id,
+    ]);
     expect(rows[0]!.n).toBe(3);
   });
 
@@ -99,10 +99,9 @@ describe('Refresh-token rotation with a grace window', () => {
     const first = await registerReader(app);
     const second: TokenPair = (await refresh(first.refreshToken).expect(200)).body;
 
-    const rows: { token_hash: string }[] = await (await testDataSource()).query(
-      'SELECT t.token_hash FROM refresh_tokens t JOIN device_sessions s ON s.id = t.session_id WHERE s.user_id = $1',
-      [first.user.id],
-    );
+    const rows: { token_hash: string }[] = await (
+      await testDataSource()
+    ).query('SELECT t.token_hash FROM refresh_tokens t JOIN device_sessions s ON s.id = t.session_id WHERE s.user_id = $1', [first.user.id]);
     expect(rows.map((row) => row.token_hash).sort()).toEqual([digest(first.refreshToken), digest(second.refreshToken)].sort());
   });
 });

@@ -40,14 +40,15 @@ describe('The shared schema, the TypeORM entities and the migrated database agre
     });
 
     it(`${spec.name}: the migrated table has exactly those columns and types`, async () => {
-      const rows: { column_name: string; data_type: string; is_nullable: string }[] = await (await testDataSource()).query(
-        `SELECT column_name, data_type, is_nullable FROM information_schema.columns WHERE table_name = $1`,
-        [spec.table],
-      );
+      const rows: { column_name: string; data_type: string; is_nullable: string }[] = await (
+        await testDataSource()
+      ).query(`SELECT column_name, data_type, is_nullable FROM information_schema.columns WHERE table_name = $1`, [spec.table]);
       const actual = new Map(rows.map((row) => [row.column_name, row]));
 
       for (const [name, field] of Object.entries(spec.fields as Record<string, FieldSpec>)) {
-        expect(actual.get(columnName(name))?.data_type).withContext(`${spec.name}.${name}`).toBe(INFORMATION_SCHEMA_TYPE[field.sqlType]);
+        expect(actual.get(columnName(name))?.data_type)
+          .withContext(`${spec.name}.${name}`)
+          .toBe(INFORMATION_SCHEMA_TYPE[field.sqlType]);
         expect(actual.get(columnName(name))?.is_nullable).toBe('YES');
       }
       expect([...actual.keys()].sort()).toEqual([...SYNC_COLUMNS, ...Object.keys(spec.fields).map(columnName)].sort());

@@ -26,10 +26,7 @@ describe('Security headers and limits', () => {
   it('When another origin calls the API, then no CORS header lets it read the answer', async () => {
     const app = await createTestApp();
 
-    const preflight = await request(app)
-      .options('/api/auth/login')
-      .set('Origin', 'http://elsewhere.example')
-      .set('Access-Control-Request-Method', 'POST');
+    const preflight = await request(app).options('/api/auth/login').set('Origin', 'http://elsewhere.example').set('Access-Control-Request-Method', 'POST');
     const call = await request(app).get('/api/health').set('Origin', 'http://elsewhere.example');
 
     expect(preflight.headers['access-control-allow-origin']).toBeUndefined();
@@ -66,7 +63,10 @@ describe('Security headers and limits', () => {
     expect((await register()).status).toBe(201);
     expect((await request(app).post('/api/auth/password-reset/request').set('X-Forwarded-For', from).send({ email: uniqueEmail() })).status).toBe(202);
     expect((await register()).status).toBe(429);
-    const reset = await request(app).post('/api/auth/password-reset/confirm').set('X-Forwarded-For', from).send({ token: 'x'.repeat(43), newPassword: GOOD_PASSWORD });
+    const reset = await request(app)
+      .post('/api/auth/password-reset/confirm')
+      .set('X-Forwarded-For', from)
+      .send({ token: 'x'.repeat(43), newPassword: GOOD_PASSWORD });
     expect(reset.status).toBe(429);
     expect(reset.body.error.code).toBe('too_many_attempts');
   });

@@ -10,7 +10,7 @@ import { startTestServer, type RunningServer } from '../support/test-server';
 /** A small deterministic random source, so a failure can be replayed from its seed. */
 function random(seed: number) {
   let state = seed;
-  return () => ((state = (state * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+  return () => (state = (state * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
 }
 
 /**
@@ -95,7 +95,7 @@ describe('Sync under concurrency', () => {
     const reference = asObject(mergeChanges(new Map(), everything));
     expect(statuses.flat().every((status) => status === 200)).toBeTrue();
     expect(followed.pulls).toBeGreaterThan(1);
-    expect(asObject(fresh.state)).withContext("fresh pull").toEqual(reference);
-    expect(asObject(followed.state)).withContext("cursor follower").toEqual(reference);
+    expect(asObject(fresh.state)).withContext('fresh pull').toEqual(reference);
+    expect(asObject(followed.state)).withContext('cursor follower').toEqual(reference);
   });
 });

@@ -133,7 +133,7 @@ describe('Sync at its edges', () => {
     const db = await testDataSource();
     const samples: unknown[] = ['tab\there "q" \\ \u0001 é 😀', 4.5, 0.1, 12, true, null, ['a', 'b c'], { zz: 1, a: [1, 2], bb: { y: null } }];
     for (const value of samples) {
-      const [{ text }] = await db.query('SELECT coalesce(($1::jsonb)::text, \'null\') AS text', [JSON.stringify(value)]);
+      const [{ text }] = await db.query("SELECT coalesce(($1::jsonb)::text, 'null') AS text", [JSON.stringify(value)]);
       expect(canonicalText(value)).withContext(JSON.stringify(value)).toBe(text);
     }
   });

@@ -53,7 +53,10 @@ async function startNginx(upstreamPort: number): Promise<{ baseUrl: string; chil
     const baseUrl = `http://127.0.0.1:${port}`;
     for (let wait = 0; wait < 50; wait++) {
       if (child.exitCode !== null) break; // the port was taken: try another
-      const up = await fetch(`${baseUrl}/api/health`).then(() => true, () => false);
+      const up = await fetch(`${baseUrl}/api/health`).then(
+        () => true,
+        () => false,
+      );
       if (up) return { baseUrl, child };
       await new Promise((resolve) => setTimeout(resolve, 100));
     }

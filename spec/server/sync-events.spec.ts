@@ -129,9 +129,7 @@ describe('Live sync events across two server instances', () => {
     await stream.nextSync(0);
     const seen = stream.events.length;
     const db = await testDataSource();
-    const cut: unknown[] = await db.query(
-      `SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE application_name = 'lamplight-sync-listener'`,
-    );
+    const cut: unknown[] = await db.query(`SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE application_name = 'lamplight-sync-listener'`);
     expect(cut.length).toBeGreaterThanOrEqual(1);
     // Pushed while no instance listens: its NOTIFY reaches nobody.
     await new SyncClient(first.baseUrl, reader.accessToken).push([fieldChange(randomUUID(), 'title', 'In The Gap', { wall: Date.now() })]);
@@ -157,9 +155,9 @@ describe('Live sync events across two server instances', () => {
     const readers = await Promise.all([registerReader(first.app), registerReader(first.app)]);
     for (const reader of readers) for (let n = 0; n < 5; n++) await open(second.baseUrl, reader.accessToken);
     await Promise.all(streams.map((s) => s.nextSync(0)));
-    const rows: { n: number }[] = await (await testDataSource()).query(
-      `SELECT count(*)::int AS n FROM pg_stat_activity WHERE application_name = 'lamplight-sync-listener'`,
-    );
+    const rows: { n: number }[] = await (
+      await testDataSource()
+    ).query(`SELECT count(*)::int AS n FROM pg_stat_activity WHERE application_name = 'lamplight-sync-listener'`);
     // One per instance at most: the second has streams; the first may still hold its idle one.
     expect(rows[0]!.n).toBeLessThanOrEqual(2);
     expect(rows[0]!.n).toBeGreaterThanOrEqual(1);

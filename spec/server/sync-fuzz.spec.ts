@@ -22,9 +22,15 @@ const valueArb = fc.oneof(
 );
 const changeArb = fc.record(
   {
-    id: fc.oneof(fc.uuid().map((id) => id.toLowerCase()), fc.string()),
+    id: fc.oneof(
+      fc.uuid().map((id) => id.toLowerCase()),
+      fc.string(),
+    ),
     collection: fc.oneof(fc.constantFrom(...NAMES, ...AWKWARD), fc.string()),
-    rowId: fc.oneof(fc.uuid().map((id) => id.toLowerCase()), fc.constant(randomUUID())),
+    rowId: fc.oneof(
+      fc.uuid().map((id) => id.toLowerCase()),
+      fc.constant(randomUUID()),
+    ),
     field: fc.oneof(fc.constantFrom(...FIELDS, ...AWKWARD), fc.string()),
     value: valueArb,
     hlc: fc.oneof(
@@ -36,15 +42,24 @@ const changeArb = fc.record(
 );
 /** Well-formed envelopes on real fields, so the values themselves reach the merge and PostgreSQL. */
 const PAIRS = Object.values(COLLECTIONS).flatMap((spec) => Object.keys(spec.fields).map((field) => [spec.name, field] as const));
-const nearlyValidArb = fc.record({
-  id: fc.uuid({ version: 4 }),
-  rowId: fc.uuid({ version: 4 }),
-  pair: fc.constantFrom(...PAIRS),
-  value: fc.oneof(
-    { weight: 3, arbitrary: fc.string({ unit: fc.constantFrom('\u0000', '\ud800', '\udfff', 'a', '😀'), maxLength: 6 }) },
-    { weight: 1, arbitrary: valueArb },
-  ),
-}).map(({ id, rowId, pair: [collection, field], value }) => ({ id, rowId, collection, field, value, hlc: formatHlc({ wall: Date.now(), counter: 0, node: 'fuzz' }) }));
+const nearlyValidArb = fc
+  .record({
+    id: fc.uuid({ version: 4 }),
+    rowId: fc.uuid({ version: 4 }),
+    pair: fc.constantFrom(...PAIRS),
+    value: fc.oneof(
+      { weight: 3, arbitrary: fc.string({ unit: fc.constantFrom('\u0000', '\ud800', '\udfff', 'a', '😀'), maxLength: 6 }) },
+      { weight: 1, arbitrary: valueArb },
+    ),
+  })
+  .map(({ id, rowId, pair: [collection, field], value }) => ({
+    id,
+    rowId,
+    collection,
+    field,
+    value,
+    hlc: formatHlc({ wall: Date.now(), counter: 0, node: 'fuzz' }),
+  }));
 const bodyArb = fc.oneof(
   fc.record({ deviceId: fc.constant('fuzz-device'), changes: fc.array(nearlyValidArb, { minLength: 1, maxLength: 4 }) }),
   fc.record({ deviceId: fc.oneof(fc.string(), fc.constant('fuzz-device')), changes: fc.array(changeArb, { maxLength: 8 }) }, { requiredKeys: [] }),

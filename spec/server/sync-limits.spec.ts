@@ -19,7 +19,9 @@ const NOW = Date.now();
 const TEXT_FIELDS = Object.values(COLLECTIONS).flatMap((spec) =>
   Object.entries(spec.fields as Record<string, FieldSpec>).flatMap(([field, fieldSpec]) => {
     const schema = fieldSpec.schema instanceof z.ZodNullable ? fieldSpec.schema.unwrap() : fieldSpec.schema;
-    return schema instanceof z.ZodString && schema.maxLength !== null && !(schema as z.ZodString).format ? [{ collection: spec.name, field, max: schema.maxLength }] : [];
+    return schema instanceof z.ZodString && schema.maxLength !== null && !(schema as z.ZodString).format
+      ? [{ collection: spec.name, field, max: schema.maxLength }]
+      : [];
   }),
 );
 
@@ -92,8 +94,12 @@ describe('Sync sizes and limits', () => {
     );
 
     const statuses = answers.map((res) => res.status);
-    expect(statuses.every((status) => status === 200 || status === 429)).withContext(String(statuses)).toBeTrue();
-    expect(statuses.filter((status) => status === 429).length).withContext(String(statuses)).toBeGreaterThan(0);
+    expect(statuses.every((status) => status === 200 || status === 429))
+      .withContext(String(statuses))
+      .toBeTrue();
+    expect(statuses.filter((status) => status === 429).length)
+      .withContext(String(statuses))
+      .toBeGreaterThan(0);
     expect(answers.find((res) => res.status === 429)?.headers.get('retry-after')).toBe('1');
     await Promise.all(answers.map((res) => res.arrayBuffer()));
   });
@@ -113,7 +119,7 @@ describe('Sync sizes and limits', () => {
     await expectAsync(one.client.pull(tampered)).toBeRejectedWithError(/400/);
   });
 
-  it('sets aside only the change with a NUL character or a lone surrogate; the rest of the device\'s edits sync', async () => {
+  it("sets aside only the change with a NUL character or a lone surrogate; the rest of the device's edits sync", async () => {
     const { accessToken } = await reader();
     const device = new MemoryDevice(server.baseUrl, accessToken, 'nul-device');
     const row = randomUUID();
@@ -148,7 +154,12 @@ describe('Sync sizes and limits', () => {
     await db.query('ANALYZE books');
     const limit = 1001;
 
-    const [{ 'QUERY PLAN': plan }] = await db.query(`EXPLAIN (ANALYZE, BUFFERS, FORMAT JSON) ${pullSql(Object.values(COLLECTIONS))}`, [user.id, 0, limit, MAX_PULL_BYTES]);
+    const [{ 'QUERY PLAN': plan }] = await db.query(`EXPLAIN (ANALYZE, BUFFERS, FORMAT JSON) ${pullSql(Object.values(COLLECTIONS))}`, [
+      user.id,
+      0,
+      limit,
+      MAX_PULL_BYTES,
+    ]);
     const nodes: { 'Node Type': string; 'Index Name'?: string; 'Relation Name'?: string; 'Actual Rows': number; 'Actual Loops': number }[] = [];
     const walk = (node: Record<string, unknown>) => {
       nodes.push(node as never);
@@ -161,7 +172,9 @@ describe('Sync sizes and limits', () => {
     expect(nodes.some((node) => node['Node Type'] === 'Seq Scan' && node['Relation Name'] === 'books')).toBeFalse();
     expect(Math.max(...bookScans.map((node) => node['Actual Rows']))).toBeLessThanOrEqual(limit);
     for (const sort of nodes.filter((node) => node['Node Type'] === 'Sort')) {
-      expect(sort['Actual Rows']).withContext('a sort of more than the page of keys').toBeLessThanOrEqual(limit * Object.keys(COLLECTIONS).length);
+      expect(sort['Actual Rows'])
+        .withContext('a sort of more than the page of keys')
+        .toBeLessThanOrEqual(limit * Object.keys(COLLECTIONS).length);
     }
   });
 

@@ -22,20 +22,21 @@ const stateArb: fc.Arbitrary<OrSetState> = fc
       r: fc.dictionary(fc.constantFrom('a', 'B', 'c-1'), fc.integer({ min: 1, max: 9 })),
     }),
   )
-  .map((raw) =>
-    JSON.parse(
-      JSON.stringify(
-        Object.fromEntries(
-          Object.entries(raw).map(([element, { a, r }]) => [
-            element,
-            {
-              a: Object.fromEntries(Object.entries(a).map(([node, wall]) => [node, clock(wall, node)])),
-              r: Object.fromEntries(Object.entries(r).map(([node, wall]) => [node, clock(wall, node)])),
-            },
-          ]),
+  .map(
+    (raw) =>
+      JSON.parse(
+        JSON.stringify(
+          Object.fromEntries(
+            Object.entries(raw).map(([element, { a, r }]) => [
+              element,
+              {
+                a: Object.fromEntries(Object.entries(a).map(([node, wall]) => [node, clock(wall, node)])),
+                r: Object.fromEntries(Object.entries(r).map(([node, wall]) => [node, clock(wall, node)])),
+              },
+            ]),
+          ),
         ),
-      ),
-    ) as OrSetState,
+      ) as OrSetState,
   );
 
 describe('Set fields merge per element (observed-remove sets)', () => {
@@ -52,10 +53,10 @@ describe('Set fields merge per element (observed-remove sets)', () => {
     const db = await testDataSource();
     await fc.assert(
       fc.asyncProperty(stateArb, stateArb, async (x, y) => {
-        const [row] = await db.query('SELECT lamplight_orset_join($1::jsonb, $2::jsonb) AS joined, lamplight_orset_elements(lamplight_orset_join($1::jsonb, $2::jsonb)) AS elements', [
-          JSON.stringify(x),
-          JSON.stringify(y),
-        ]);
+        const [row] = await db.query(
+          'SELECT lamplight_orset_join($1::jsonb, $2::jsonb) AS joined, lamplight_orset_elements(lamplight_orset_join($1::jsonb, $2::jsonb)) AS elements',
+          [JSON.stringify(x), JSON.stringify(y)],
+        );
         expect(row.joined).toEqual(JSON.parse(JSON.stringify(joinOrSet(x, y))));
         expect(row.elements).toEqual(orSetElements(joinOrSet(x, y)));
       }),
@@ -111,7 +112,10 @@ describe('Set fields merge per element (observed-remove sets)', () => {
     await device.push([fieldChange(row, 'title', 'Legacy', { wall: NOW, node: 'old' })]);
     const db = await testDataSource();
     const legacyClock = clock(NOW, 'old');
-    await db.query(`UPDATE books SET genres = ARRAY['Essays', 'Nature writing'], clocks = clocks || jsonb_build_object('genres', $2::text) WHERE id = $1`, [row, legacyClock]);
+    await db.query(`UPDATE books SET genres = ARRAY['Essays', 'Nature writing'], clocks = clocks || jsonb_build_object('genres', $2::text) WHERE id = $1`, [
+      row,
+      legacyClock,
+    ]);
     await db.query(listToStateSql('books', 'genres', 'genres'));
 
     await device.push([fieldChange(row, 'genres', orSetDelta({}, ['Poetry'], clock(NOW + 1, 'new')), { wall: NOW + 1, node: 'new' })]);

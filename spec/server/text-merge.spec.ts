@@ -168,16 +168,24 @@ describe('mergeable texts (/api/sync with Yjs updates)', () => {
       const tooLong = fieldChange(rowId, 'note', { yjs: encodeTextBytes(Y.encodeStateAsUpdate(doc, vector)) }, { wall: NOW, counter: 1 }, 'sessions');
       const result = await client.push([tooLong]);
       expect(result.status).toBe(400);
-      expect(result.body.error!.details).toEqual([jasmine.objectContaining({ index: 0, reason: 'sessions.note update would make the text longer than 2000 characters' })]);
+      expect(result.body.error!.details).toEqual([
+        jasmine.objectContaining({ index: 0, reason: 'sessions.note update would make the text longer than 2000 characters' }),
+      ]);
     });
 
     it('When a page was saved as plain text before texts became mergeable, then an edit built on its initial state merges without doubling it', async () => {
-      const { client, user: { id: userId } } = await reader();
+      const {
+        client,
+        user: { id: userId },
+      } = await reader();
       const rowId = randomUUID();
       const dataSource = await testDataSource();
       // As the migration left it: a plain text column and no state yet (the server then uses the
       // initial state every device computes from the same text).
-      await dataSource.query(`INSERT INTO notebook_pages (user_id, id, body, clocks, seq) VALUES ($1, $2, 'Old notes', '{"body":"000000000000001:00000:old"}', nextval('sync_seq'))`, [userId, rowId]);
+      await dataSource.query(
+        `INSERT INTO notebook_pages (user_id, id, body, clocks, seq) VALUES ($1, $2, 'Old notes', '{"body":"000000000000001:00000:old"}', nextval('sync_seq'))`,
+        [userId, rowId],
+      );
       const device = new Device('a', rowId, initialTextState(textDocName('notebookPages', rowId, 'body'), 'Old notes'));
       const change = device.edit((t) => t.insert(9, ', new thoughts'));
       expect((await client.push([change])).status).toBe(200);
@@ -187,7 +195,10 @@ describe('mergeable texts (/api/sync with Yjs updates)', () => {
 
   describe('compaction job (pg-boss)', () => {
     it('When the job compacts a much-edited page, then the state shrinks, the text is the same and a fresh pull gets the compact state', async () => {
-      const { client, user: { id: userId } } = await reader();
+      const {
+        client,
+        user: { id: userId },
+      } = await reader();
       const rowId = await newPage(client, '');
       const device = new Device('a', rowId, new Uint8Array([0, 0]));
       const changes = [];

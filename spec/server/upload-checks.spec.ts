@@ -94,7 +94,11 @@ describe('POST /api/uploads reads the image, not just its first bytes', () => {
     const vp8 = damaged.indexOf('VP8 ', 12, 'latin1');
     damaged[vp8 + 8 + 3] = 0; // the key frame start code, RFC 6386 §9.1
 
-    for (const [name, bytes] of [['wrong size', wrongSize], ['cut short', cutShort], ['damaged', damaged]] as const) {
+    for (const [name, bytes] of [
+      ['wrong size', wrongSize],
+      ['cut short', cutShort],
+      ['damaged', damaged],
+    ] as const) {
       const res = await upload(app, token, bytes, 'cover.webp');
       expect(res.status).withContext(name).toBe(400);
       expect(res.body.error.code).withContext(name).toBe('unreadable_image');

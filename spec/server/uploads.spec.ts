@@ -156,11 +156,7 @@ describe('/api/uploads', () => {
         .set(bearer(reader.accessToken))
         .set('Content-Type', 'multipart/form-data; boundary=lamplight')
         .send('--lamplight\r\nContent-Disposition: form-data; name="file"; filename="cover.png"\r\n\r\n\x89PNG');
-      const noBoundary = await request(app)
-        .post('/api/uploads')
-        .set(bearer(reader.accessToken))
-        .set('Content-Type', 'multipart/form-data')
-        .send('whatever');
+      const noBoundary = await request(app).post('/api/uploads').set(bearer(reader.accessToken)).set('Content-Type', 'multipart/form-data').send('whatever');
 
       for (const res of [cut, noBoundary]) {
         expect(res.status).toBe(400);
@@ -188,7 +184,10 @@ describe('/api/uploads', () => {
       const { id } = (await upload(app, owner.accessToken, uniquePng()).expect(201)).body;
 
       const theirs = await request(app).get(`/api/uploads/${id}`).set(bearer(stranger.accessToken)).expect(404);
-      const unknown = await request(app).get(`/api/uploads/${'0'.repeat(64)}`).set(bearer(stranger.accessToken)).expect(404);
+      const unknown = await request(app)
+        .get(`/api/uploads/${'0'.repeat(64)}`)
+        .set(bearer(stranger.accessToken))
+        .expect(404);
       const malformed = await request(app).get('/api/uploads/not-a-digest').set(bearer(stranger.accessToken)).expect(404);
       const upperCase = await request(app).get(`/api/uploads/${id.toUpperCase()}`).set(bearer(owner.accessToken)).expect(404);
 
@@ -211,7 +210,11 @@ describe('/api/uploads', () => {
         .set(bearer(reader.accessToken))
         .set('If-None-Match', `"${'1'.repeat(64)}", W/"${id}"`)
         .expect(304);
-      const other = await request(app).get(`/api/uploads/${id}`).set(bearer(reader.accessToken)).set('If-None-Match', `"${'1'.repeat(64)}"`).expect(200);
+      const other = await request(app)
+        .get(`/api/uploads/${id}`)
+        .set(bearer(reader.accessToken))
+        .set('If-None-Match', `"${'1'.repeat(64)}"`)
+        .expect(200);
 
       // An entity tag is a quoted string (RFC 9110 §8.8.3); ours is the id.
       expect(read.headers['etag']).toBe(`"${id}"`);
@@ -272,7 +275,10 @@ describe('/api/uploads', () => {
       expect(await db.query('SELECT 1 FROM upload_owners WHERE user_id = $1', [leaving.user.id])).toEqual([]);
       expect(await storedCopies(sha256(onlyTheirs))).toBe(0);
       expect(await storedCopies(sha256(shared))).toBe(1);
-      const read = await request(app).get(`/api/uploads/${sha256(shared)}`).set(bearer(staying.accessToken)).expect(200);
+      const read = await request(app)
+        .get(`/api/uploads/${sha256(shared)}`)
+        .set(bearer(staying.accessToken))
+        .expect(200);
       expect(Buffer.compare(read.body as Buffer, shared)).toBe(0);
     });
 
@@ -316,7 +322,9 @@ describe('/api/uploads', () => {
       expect(loadConfig(base).uploadMaxBytes).toBe(2_097_152);
       expect(loadConfig({ ...base, LAMPLIGHT_UPLOAD_MAX_BYTES: '500000' }).uploadMaxBytes).toBe(500_000);
       for (const bad of ['lots', '1.5', '10', String(64 * 1024 * 1024)]) {
-        expect(() => loadConfig({ ...base, LAMPLIGHT_UPLOAD_MAX_BYTES: bad })).withContext(bad).toThrowError(/LAMPLIGHT_UPLOAD_MAX_BYTES/);
+        expect(() => loadConfig({ ...base, LAMPLIGHT_UPLOAD_MAX_BYTES: bad }))
+          .withContext(bad)
+          .toThrowError(/LAMPLIGHT_UPLOAD_MAX_BYTES/);
       }
     });
   });

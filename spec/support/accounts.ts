@@ -15,10 +15,7 @@ export function uniqueEmail(label = 'reader'): string {
 }
 
 /** Registers a new reader through the API and returns the 201 body. */
-export async function registerReader(
-  app: Express,
-  fields: { email?: string; password?: string; displayName?: string; userAgent?: string } = {},
-): Promise<SignedIn> {
+export async function registerReader(app: Express, fields: { email?: string; password?: string; displayName?: string; userAgent?: string } = {}): Promise<SignedIn> {
   const res = await request(app)
     .post('/api/auth/register')
     .set('User-Agent', fields.userAgent ?? 'Mozilla/5.0 (X11; Linux x86_64) AppleWebKit/537.36 (KHTML, like Gecko) Chrome/125.0 Safari/537.36')

@@ -70,7 +70,12 @@ export class MemoryDevice implements SyncPorts {
     await this.acknowledge(refused.map((r) => r.change));
   }
   async restamp(changes: readonly QueuedChange[]) {
-    const renamed = restampClocks(changes.map((c) => c.hlc), this.node, this.correctedNow, this.seen);
+    const renamed = restampClocks(
+      changes.map((c) => c.hlc),
+      this.node,
+      this.correctedNow,
+      this.seen,
+    );
     const bySeq = new Set(changes.map((c) => c.seq));
     for (const [n, change] of this.outbox.entries()) if (bySeq.has(change.seq)) this.outbox[n] = { ...change, hlc: renamed.get(change.hlc)! };
     for (const [key, row] of this.rows) {

@@ -41,7 +41,10 @@ const SRU = 'xmlns:sru="http://docs.oasis-open.org/ns/search-ws/sruResponse"';
 export function sruRecords(records: readonly string[], escaped = false): string {
   const data = (xml: string) => (escaped ? xml.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;') : xml);
   return `<?xml version="1.0"?><sru:searchRetrieveResponse ${SRU}><sru:version>2.0</sru:version><sru:numberOfRecords>${records.length}</sru:numberOfRecords><sru:records>${records
-    .map((xml, i) => `<sru:record><sru:recordSchema>marcxml</sru:recordSchema><sru:recordData>${data(xml)}</sru:recordData><sru:recordPosition>${i + 1}</sru:recordPosition></sru:record>`)
+    .map(
+      (xml, i) =>
+        `<sru:record><sru:recordSchema>marcxml</sru:recordSchema><sru:recordData>${data(xml)}</sru:recordData><sru:recordPosition>${i + 1}</sru:recordPosition></sru:record>`,
+    )
     .join('')}</sru:records></sru:searchRetrieveResponse>`;
 }
 

@@ -11,7 +11,10 @@ const supertestAssert = prototype.assert;
 
 prototype.assert = function (this: typeof prototype, resError, res, fn) {
   supertestAssert.call(this, resError, res, (err, response) => {
-    if (this._asserts.length > 0) expect(err?.message ?? null).withContext(`supertest: ${this.method} ${this.url}`).toBeNull();
+    if (this._asserts.length > 0)
+      expect(err?.message ?? null)
+        .withContext(`supertest: ${this.method} ${this.url}`)
+        .toBeNull();
     fn(err, response);
   });
 };

@@ -26,7 +26,8 @@ export function testDataSource(): Promise<DataSource> {
 }
 
 /** Closes the shared DataSource after all specs, so Jasmine can exit (not loaded under Jasmine by benchmarks). */
-if (typeof afterAll === 'function') afterAll(async () => {
-  if (shared) await (await shared).destroy();
-  shared = undefined;
-});
+if (typeof afterAll === 'function')
+  afterAll(async () => {
+    if (shared) await (await shared).destroy();
+    shared = undefined;
+  });

@@ -80,10 +80,11 @@ export async function startTestServer(options: { withApp?: boolean; env?: Record
 }
 
 // Benchmarks load these helpers outside Jasmine, where there is no afterAll.
-if (typeof afterAll === 'function') afterAll(async () => {
-  // Welcome mails are sent without waiting; give the last ones a moment to land.
-  await new Promise((resolve) => setTimeout(resolve, 300));
-  for (const mailer of mailers.splice(0)) mailer.close();
-  if (inbox) await (await inbox).inbox.close();
-  inbox = undefined;
-});
+if (typeof afterAll === 'function')
+  afterAll(async () => {
+    // Welcome mails are sent without waiting; give the last ones a moment to land.
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    for (const mailer of mailers.splice(0)) mailer.close();
+    if (inbox) await (await inbox).inbox.close();
+    inbox = undefined;
+  });

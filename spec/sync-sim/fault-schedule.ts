@@ -21,14 +21,18 @@ type Edit = { readonly collection: string; readonly field: string; readonly valu
 
 /** Invented titles and authors; ordered lists (authors) merge as a whole, last writer wins. */
 const editArbitrary: fc.Arbitrary<Edit> = fc.oneof(
-  fc.constantFrom('The Copper Orchard', 'Nine Lanterns', 'A Map of Small Rivers', 'Salt and Vellum').map((value) => ({ collection: 'books', field: 'title', value })),
+  fc
+    .constantFrom('The Copper Orchard', 'Nine Lanterns', 'A Map of Small Rivers', 'Salt and Vellum')
+    .map((value) => ({ collection: 'books', field: 'title', value })),
   fc.constantFrom(...BOOK_STATUSES).map((value) => ({ collection: 'books', field: 'status', value })),
   fc.option(fc.integer({ min: 1, max: 10 }).map((n) => n / 2)).map((value) => ({ collection: 'books', field: 'rating', value })),
   fc.option(fc.integer({ min: 1, max: 900 })).map((value) => ({ collection: 'books', field: 'pageCount', value })),
   fc.boolean().map((value) => ({ collection: 'books', field: 'deleted', value })),
   fc.subarray(['Ada Quillfeather', 'Tomas Brierly', 'Noor Haddaway']).map((value) => ({ collection: 'books', field: 'authors', value })),
   fc.constantFrom(...BOOK_STATUSES).map((value) => ({ collection: 'bookStatusChanges', field: 'status', value })),
-  fc.integer({ min: 0, max: 10 ** 6 }).map((s) => ({ collection: 'bookStatusChanges', field: 'changedAt', value: new Date(1_780_000_000_000 + s * 1000).toISOString() })),
+  fc
+    .integer({ min: 0, max: 10 ** 6 })
+    .map((s) => ({ collection: 'bookStatusChanges', field: 'changedAt', value: new Date(1_780_000_000_000 + s * 1000).toISOString() })),
 );
 
 export type Step =
@@ -111,7 +115,13 @@ export async function runSchedule(schedule: Schedule, server: SimServer, startMs
   const network = new SimNetwork(server, () => now);
   const options = { batchSize: schedule.batchSize, pullLimit: schedule.pullLimit };
   const devices = NODES.slice(0, schedule.devices).map((node, n) => {
-    const device = new SimDevice(node, () => now, (d, request) => network.send(d, request), () => changeId(++ids), options);
+    const device = new SimDevice(
+      node,
+      () => now,
+      (d, request) => network.send(d, request),
+      () => changeId(++ids),
+      options,
+    );
     device.skewMs = schedule.skews[n] ?? 0;
     return device;
   });
@@ -211,14 +221,18 @@ function deviceState(device: SimDevice): Record<string, { value: unknown; hlc: s
 }
 
 function plain(state: FieldState): Record<string, { value: unknown; hlc: string }> {
-  return Object.fromEntries(
-    [...state.entries()].sort(([a], [b]) => (a < b ? -1 : 1)).map(([key, { value, hlc }]) => [key, { value, hlc }]),
-  );
+  return Object.fromEntries([...state.entries()].sort(([a], [b]) => (a < b ? -1 : 1)).map(([key, { value, hlc }]) => [key, { value, hlc }]));
 }
 
 /** Whether an outcome passes every check. */
 export const isClean = (o: Outcome) =>
-  o.divergent === 0 && o.lostAcknowledged === 0 && o.lostWrites === 0 && o.refusedValid === 0 && o.acceptedInvalid === 0 && o.outboxLeft === 0 && o.unexpected.length === 0;
+  o.divergent === 0 &&
+  o.lostAcknowledged === 0 &&
+  o.lostWrites === 0 &&
+  o.refusedValid === 0 &&
+  o.acceptedInvalid === 0 &&
+  o.outboxLeft === 0 &&
+  o.unexpected.length === 0;
 
 /** The counts of an outcome, for messages. */
 export const summary = ({ finalState: _s, trace: _t, ...counts }: Outcome) => counts;

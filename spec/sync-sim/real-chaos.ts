@@ -73,25 +73,29 @@ export async function runRealChaos(options: RealChaosOptions): Promise<RealChaos
   const counts = { kills: 0, postgresRestarts: 0, networkErrors: 0, serverErrors: 0, deviceCrashes: 0 };
   try {
     const token = await registeredReader(proxies[0]!.baseUrl, `chaos-${randomUUID().slice(0, 8)}@example.com`);
-    const transport = (index: number) => async (_device: SimDevice, request: SimRequest): Promise<SimResponse> => {
-      let response: SimResponse;
-      try {
-        response = await new HttpSimServer(() => proxies[index % proxies.length]!.baseUrl, token, 10_000).handle(request);
-      } catch (error) {
-        counts.networkErrors++;
-        throw new NetworkError(error instanceof Error ? error.message : String(error));
-      }
-      if (response.status >= 500) {
-        counts.serverErrors++;
-        throw new NetworkError(`server answered ${response.status}`);
-      }
-      return response;
-    };
-    const devices = NODES.concat(['Watch-E']).slice(0, options.devices).map((node, index) => {
-      const device = new SimDevice(node, Date.now, transport(index), randomUUID, { batchSize: 1 + Math.floor(rand() * 5), pullLimit: 1 + Math.floor(rand() * 5) });
-      device.skewMs = Math.round((rand() - 0.5) * 2 * 3_600_000);
-      return device;
-    });
+    const transport =
+      (index: number) =>
+      async (_device: SimDevice, request: SimRequest): Promise<SimResponse> => {
+        let response: SimResponse;
+        try {
+          response = await new HttpSimServer(() => proxies[index % proxies.length]!.baseUrl, token, 10_000).handle(request);
+        } catch (error) {
+          counts.networkErrors++;
+          throw new NetworkError(error instanceof Error ? error.message : String(error));
+        }
+        if (response.status >= 500) {
+          counts.serverErrors++;
+          throw new NetworkError(`server answered ${response.status}`);
+        }
+        return response;
+      };
+    const devices = NODES.concat(['Watch-E'])
+      .slice(0, options.devices)
+      .map((node, index) => {
+        const device = new SimDevice(node, Date.now, transport(index), randomUUID, { batchSize: 1 + Math.floor(rand() * 5), pullLimit: 1 + Math.floor(rand() * 5) });
+        device.skewMs = Math.round((rand() - 0.5) * 2 * 3_600_000);
+        return device;
+      });
 
     const stopAt = Date.now() + options.durationMs;
     const deviceLoop = async (device: SimDevice) => {

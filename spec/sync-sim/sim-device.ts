@@ -146,7 +146,12 @@ export class SimDevice {
       // As the app does after `clock_ahead`: new clocks in the same order, on the outbox and the rows.
       restamp: async (changes) => {
         alive();
-        const renamed = restampClocks(changes.map((c) => c.hlc), this.node, () => this.now() + this.skewMs, durable.lastClock);
+        const renamed = restampClocks(
+          changes.map((c) => c.hlc),
+          this.node,
+          () => this.now() + this.skewMs,
+          durable.lastClock,
+        );
         durable.outbox = durable.outbox.map((c) => ({ ...c, hlc: renamed.get(c.hlc) ?? c.hlc }));
         for (const [key, row] of durable.rows) {
           const clocks = Object.fromEntries(Object.entries(row._hlc).map(([field, hlc]) => [field, renamed.get(hlc) ?? hlc]));

@@ -2,8 +2,7 @@ import type { PushRequest } from '../../shared/sync/field-change';
 
 /** One request of the sync wire contract, as a simulated network carries it. */
 export type SimRequest =
-  | { readonly kind: 'push'; readonly body: PushRequest }
-  | { readonly kind: 'pull'; readonly since: string | undefined; readonly limit: number };
+  { readonly kind: 'push'; readonly body: PushRequest } | { readonly kind: 'pull'; readonly since: string | undefined; readonly limit: number };
 
 /** An HTTP answer: status and parsed JSON body. */
 export interface SimResponse {
@@ -30,7 +29,10 @@ export class HttpSimServer implements SimServer {
     const res =
       request.kind === 'push'
         ? await fetch(`${this.baseUrl()}/api/sync/push`, { method: 'POST', headers, body: JSON.stringify(request.body), signal })
-        : await fetch(`${this.baseUrl()}/api/sync/pull?${new URLSearchParams({ ...(request.since ? { since: request.since } : {}), limit: String(request.limit) })}`, { headers, signal });
+        : await fetch(
+            `${this.baseUrl()}/api/sync/pull?${new URLSearchParams({ ...(request.since ? { since: request.since } : {}), limit: String(request.limit) })}`,
+            { headers, signal },
+          );
     const text = await res.text();
     return { status: res.status, body: text ? JSON.parse(text) : null };
   }

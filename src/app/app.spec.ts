@@ -52,10 +52,7 @@ describe('App shell', () => {
     add.click();
     await fixture.whenStable();
     const items = Array.from(document.querySelectorAll('.mat-mdc-menu-panel [mat-menu-item]'));
-    expect(items.map((item) => item.textContent?.replace(item.querySelector('mat-icon')?.textContent ?? '', '').trim())).toEqual([
-      'Capture a quote',
-      'Add a book',
-    ]);
+    expect(items.map((item) => item.textContent?.replace(item.querySelector('mat-icon')?.textContent ?? '', '').trim())).toEqual(['Capture a quote', 'Add a book']);
     expect(items[1]?.getAttribute('href')).toBe('/library/new');
   });
 
@@ -150,9 +147,7 @@ describe('App shell and this device’s storage', () => {
     TestBed.createComponent(App);
 
     await untilTicked(() => snackBarText() !== null, 'the storage message');
-    expect(snackBarText()).toBe(
-      'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.',
-    );
+    expect(snackBarText()).toBe('Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.');
     expect(localStorage.getItem(ASKED)).toBe('true');
   });
 

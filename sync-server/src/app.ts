@@ -104,7 +104,10 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   app.use(
     '/api/catalogue',
     catalogueRoutes(
-      new Catalogue(config.catalogueUrls.map((url) => new SruProvider(url, config.catalogueTimeoutMs)), new CatalogueCache(dataSource)),
+      new Catalogue(
+        config.catalogueUrls.map((url) => new SruProvider(url, config.catalogueTimeoutMs)),
+        new CatalogueCache(dataSource),
+      ),
       readerLimiter('catalogue look-up', config.catalogueRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'catalogue')),
     ),
   );

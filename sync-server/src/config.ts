@@ -89,7 +89,10 @@ const environmentSchema = z
       .min(32, 'LAMPLIGHT_JWT_SECRET must be at least 32 characters'),
     LAMPLIGHT_BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(10),
     LAMPLIGHT_ADMIN_EMAIL: z.email().optional(),
-    SMTP_URL: z.string().regex(/^smtps?:\/\//, 'SMTP_URL must be an smtp:// or smtps:// URL').optional(),
+    SMTP_URL: z
+      .string()
+      .regex(/^smtps?:\/\//, 'SMTP_URL must be an smtp:// or smtps:// URL')
+      .optional(),
     LAMPLIGHT_MAIL_FROM: z.string().default('Lamplight <no-reply@lamplight.invalid>'),
     LAMPLIGHT_DEV_MAIL_DIR: z.string().optional(),
     LAMPLIGHT_AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(20),
@@ -114,13 +117,21 @@ const environmentSchema = z
     LAMPLIGHT_TRUST_PROXY: z
       .string()
       .default('')
-      .transform((value) => value.split(',').map((entry) => entry.trim()).filter((entry) => entry !== ''))
+      .transform((value) =>
+        value
+          .split(',')
+          .map((entry) => entry.trim())
+          .filter((entry) => entry !== ''),
+      )
       .refine((entries) => entries.every(isProxyEntry), 'must be a comma-separated list of IP addresses, CIDR ranges or loopback/linklocal/uniquelocal'),
     LAMPLIGHT_HASH_THREADS: z.coerce.number().int().min(1).max(16).default(1),
     LAMPLIGHT_HASH_QUEUE: z.coerce.number().int().min(1).max(10_000).default(32),
     LAMPLIGHT_SYNC_RATE_LIMIT: z.coerce.number().int().min(1).default(600),
     LAMPLIGHT_UPLOAD_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
-    LAMPLIGHT_LISTEN_DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'must be a postgres:// URL').optional(),
+    LAMPLIGHT_LISTEN_DATABASE_URL: z
+      .string()
+      .regex(/^postgres(ql)?:\/\//, 'must be a postgres:// URL')
+      .optional(),
     LAMPLIGHT_SYNC_HEARTBEAT_MS: z.coerce.number().int().min(100).max(120_000).default(25_000),
     NODE_ENV: z.string().optional(),
   })

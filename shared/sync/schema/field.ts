@@ -34,9 +34,7 @@ export interface FieldSpec<T = unknown> {
 const spec = <T>(sqlType: SqlType, schema: z.ZodType<T>): FieldSpec<T> => ({ kind: 'lww', sqlType, schema });
 
 const stringList = (maxItems: number, maxLength: number) =>
-  z
-    .array(z.string().max(maxLength, `each entry must be at most ${maxLength} characters`))
-    .max(maxItems, `must have at most ${maxItems} entries`);
+  z.array(z.string().max(maxLength, `each entry must be at most ${maxLength} characters`)).max(maxItems, `must have at most ${maxItems} entries`);
 
 /** Calendar dates as readers think of them, 'YYYY-MM-DD' (RFC 3339 full-date). */
 const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
@@ -73,8 +71,7 @@ export const field = {
     schema: z.string().max(max, `must be at most ${max} characters`).nullable(),
     maxLength: max,
   }),
-  choice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
-    spec('text', z.enum(values, { error: `must be one of ${values.join(', ')}` })),
+  choice: <const Values extends readonly [string, ...string[]]>(values: Values) => spec('text', z.enum(values, { error: `must be one of ${values.join(', ')}` })),
   optionalChoice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
     spec('text', z.enum(values, { error: `must be one of ${values.join(', ')} or null` }).nullable()),
   optionalInteger: (min: number, max: number) =>
@@ -87,7 +84,14 @@ export const field = {
   boolean: () => spec('boolean', z.boolean({ error: 'must be true or false' })),
   optionalBoolean: () => spec('boolean', z.boolean({ error: 'must be true or false' }).nullable()),
   /** A calendar month, 'YYYY-MM' (ISO 8601). */
-  optionalMonth: () => spec('text', z.string().regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'must be a month like 2026-03').nullable()),
+  optionalMonth: () =>
+    spec(
+      'text',
+      z
+        .string()
+        .regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'must be a month like 2026-03')
+        .nullable(),
+    ),
   optionalDate: () => spec('text', z.string().regex(DATE, 'must be a date like 2026-03-08').nullable()),
   optionalTimestamp: () => spec('text', z.string().regex(TIMESTAMP, 'must be a UTC time like 2026-03-08T09:30:00.000Z').nullable()),
   optionalRef: () => spec('uuid', z.uuid('must be a row id (UUID)').nullable()),
@@ -103,9 +107,22 @@ export const field = {
     ),
   /** A language tag such as 'en' or 'pt-BR' (BCP 47 shape: a 2–3 letter language, then subtags). */
   optionalLanguage: () =>
-    spec('text', z.string().regex(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/, 'must be a language tag like en or pt-BR').nullable()),
+    spec(
+      'text',
+      z
+        .string()
+        .regex(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/, 'must be a language tag like en or pt-BR')
+        .nullable(),
+    ),
   /** The id of an uploaded image: the hex SHA-256 of its bytes (FIPS 180-4). */
-  optionalUploadId: () => spec('text', z.string().regex(/^[0-9a-f]{64}$/, 'must be an upload id (64 hex digits)').nullable()),
+  optionalUploadId: () =>
+    spec(
+      'text',
+      z
+        .string()
+        .regex(/^[0-9a-f]{64}$/, 'must be an upload id (64 hex digits)')
+        .nullable(),
+    ),
   json: <T>(schema: z.ZodType<T>) => spec('jsonb', schema),
 };
 

@@ -4,7 +4,10 @@ import type { Page } from 'playwright-core';
  * Waits in the page until the reader's IndexedDB holds `field` = `value` in row `rowId` of
  * `store`, polling every few milliseconds; resolves with the page's `Date.now()` at that moment.
  */
-export function arrivalInIndexedDb(page: Page, args: { userId: string; store: string; rowId: string; field: string; value: unknown; timeoutMs: number }): Promise<number> {
+export function arrivalInIndexedDb(
+  page: Page,
+  args: { userId: string; store: string; rowId: string; field: string; value: unknown; timeoutMs: number },
+): Promise<number> {
   return page.evaluate(
     ({ userId, store, rowId, field, value, timeoutMs }) =>
       new Promise<number>((resolve, reject) => {

@@ -1,7 +1,10 @@
 import type { Page } from 'playwright-core';
 
 /** Fills the book editor (only the fields given) and saves; waits for the book page. */
-export async function fillBook(page: Page, fields: { title?: string; authors?: string; format?: string; status?: string; rating?: string; pageCount?: string; isbn?: string }): Promise<void> {
+export async function fillBook(
+  page: Page,
+  fields: { title?: string; authors?: string; format?: string; status?: string; rating?: string; pageCount?: string; isbn?: string },
+): Promise<void> {
   if (fields.title !== undefined) await page.getByLabel('Title', { exact: true }).fill(fields.title);
   if (fields.authors !== undefined) await page.getByLabel('Authors', { exact: true }).fill(fields.authors);
   if (fields.format !== undefined) await page.getByLabel('Format', { exact: true }).selectOption(fields.format);
@@ -46,10 +49,14 @@ export async function bookFacts(page: Page): Promise<Record<string, string>> {
  */
 export async function shownCover(page: Page, scope: string, timeoutMs = 20_000): Promise<{ src: string; naturalWidth: number; naturalHeight: number }> {
   const selector = `${scope} ll-book-cover img`;
-  await page.waitForFunction((css) => {
-    const img = document.querySelector<HTMLImageElement>(css);
-    return !!img && img.complete && img.naturalWidth > 0;
-  }, selector, { timeout: timeoutMs });
+  await page.waitForFunction(
+    (css) => {
+      const img = document.querySelector<HTMLImageElement>(css);
+      return !!img && img.complete && img.naturalWidth > 0;
+    },
+    selector,
+    { timeout: timeoutMs },
+  );
   return page.$eval(selector, (img) => {
     const image = img as HTMLImageElement;
     return { src: image.src, naturalWidth: image.naturalWidth, naturalHeight: image.naturalHeight };

@@ -38,7 +38,6 @@ export const RECOMMEND_LABELS: Record<NonNullable<Reading['recommend']>, string>
   no: 'No',
 };
 
-
 /** The book's length in its own unit: "320 pages", "11 h 5 min". */
 export function lengthLine(book: Pick<Book, 'format' | 'pageCount' | 'audioMinutes'>): string {
   if (book.format === 'audiobook') {

@@ -33,7 +33,9 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
     `coalesce((${incoming} ? '${field}') AND ${joined(field, incoming, stored)} IS DISTINCT FROM coalesce(${stored}->'${field}', '{}'::jsonb), false)`;
   // Equal clocks are candidates too: the stored value is not read here, so the upsert decides.
   const candidate = (field: string) =>
-    isSet(field) ? grows(field, 'd.sets', 'd.stored_sets') : `coalesce((d.clocks->>'${field}') COLLATE "C" >= coalesce(d.stored_clocks->>'${field}', '') COLLATE "C", false)`;
+    isSet(field)
+      ? grows(field, 'd.sets', 'd.stored_sets')
+      : `coalesce((d.clocks->>'${field}') COLLATE "C" >= coalesce(d.stored_clocks->>'${field}', '') COLLATE "C", false)`;
   const anyWins = fields.map(candidate).join(' OR ');
   // Greater clock, or an equal clock and a greater value as jsonb text (shared/sync/merge.ts, canonicalText).
   const newer = (field: string) =>
@@ -80,9 +82,9 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
       RETURNING 1
     )
     SELECT (SELECT count(*) FROM merged)::int AS rows,
-           (SELECT jsonb_object_agg(d.id, jsonb_build_object('c', d.stored_clocks, 'g', jsonb_build_array(${
-             sets.map((field) => `CASE WHEN ${grows(field, 'd.sets', 'd.stored_sets')} THEN '${field}' END`).join(', ')
-           })))
+           (SELECT jsonb_object_agg(d.id, jsonb_build_object('c', d.stored_clocks, 'g', jsonb_build_array(${sets
+             .map((field) => `CASE WHEN ${grows(field, 'd.sets', 'd.stored_sets')} THEN '${field}' END`)
+             .join(', ')})))
               FROM decided d WHERE d.stored IS NOT NULL) AS before`;
 }
 
@@ -98,8 +100,7 @@ export function pullSql(specs: readonly CollectionSpec[]): string {
   const size = (spec: CollectionSpec) =>
     ['clocks', 'sets', ...Object.keys(spec.fields).map(columnName)].map((column) => `coalesce(pg_column_size(t.${column}), 0)`).join(' + ');
   const branches = specs.map(
-    (spec, n) =>
-      `(SELECT ${n} AS c, t.id, t.seq, ${size(spec)} AS size FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2 ORDER BY t.seq LIMIT $3)`,
+    (spec, n) => `(SELECT ${n} AS c, t.id, t.seq, ${size(spec)} AS size FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2 ORDER BY t.seq LIMIT $3)`,
   );
   const rowOf = specs.map((spec, n) => `WHEN ${n} THEN (SELECT to_jsonb(t) FROM ${spec.table} t WHERE t.user_id = $1 AND t.id = b.id)`);
   return `

@@ -91,7 +91,9 @@ export class SyncStore {
    */
   async push(userId: string, changes: readonly FieldChange[]): Promise<PushResult> {
     // Mergeable texts merge per character in text-store.ts, after the per-field merge; `index` is the change's place in the batch.
-    const texts = [...changes.entries()].filter(([, change]) => textFieldMax(change.collection, change.field) !== undefined).map(([index, change]) => ({ index, change }));
+    const texts = [...changes.entries()]
+      .filter(([, change]) => textFieldMax(change.collection, change.field) !== undefined)
+      .map(([index, change]) => ({ index, change }));
     const fieldChanges = texts.length === 0 ? changes : changes.filter((change) => textFieldMax(change.collection, change.field) === undefined);
     return this.inUserTransaction(userId, async (client) => {
       const byCollection = reduceBatch(fieldChanges, await storedSetStates(client, userId, fieldChanges));

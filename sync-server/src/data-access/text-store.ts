@@ -142,20 +142,17 @@ export const TextStore = {
       if (!found) return false;
       await client.query('SELECT pg_advisory_xact_lock(hashtextextended($1::text, 0))', [found['user_id']]);
       const key = [found['user_id'], found['collection'], found['row_id'], found['field']];
-      const { rows: states } = await client.query(
-        'SELECT state FROM text_states WHERE user_id = $1 AND collection = $2 AND row_id = $3 AND field = $4',
-        key,
-      );
+      const { rows: states } = await client.query('SELECT state FROM text_states WHERE user_id = $1 AND collection = $2 AND row_id = $3 AND field = $4', key);
       const state = new Uint8Array(states[0]!['state'] as Buffer);
       const compacted = compactTextState(state);
       const name = textDocName(found['collection'] as string, found['row_id'] as string, found['field'] as string);
       if (textOf(loadTextDoc([compacted]), name) !== textOf(loadTextDoc([state]), name)) {
         throw new Error(`compacting ${name} would change its text; left as it was`);
       }
-      await client.query(
-        'UPDATE text_states SET state = $5, compacted_at = now() WHERE user_id = $1 AND collection = $2 AND row_id = $3 AND field = $4',
-        [...key, Buffer.from(compacted)],
-      );
+      await client.query('UPDATE text_states SET state = $5, compacted_at = now() WHERE user_id = $1 AND collection = $2 AND row_id = $3 AND field = $4', [
+        ...key,
+        Buffer.from(compacted),
+      ]);
       return true;
     });
   },
@@ -172,10 +169,12 @@ export const TextStore = {
 
 /** A text's stored state, or the initial state of its plain column (a text saved before). */
 async function load(client: Queryable, userId: string, change: FieldChange): Promise<OpenText> {
-  const { rows } = await client.query(
-    'SELECT state FROM text_states WHERE user_id = $1 AND collection = $2 AND row_id = $3 AND field = $4',
-    [userId, change.collection, change.rowId, change.field],
-  );
+  const { rows } = await client.query('SELECT state FROM text_states WHERE user_id = $1 AND collection = $2 AND row_id = $3 AND field = $4', [
+    userId,
+    change.collection,
+    change.rowId,
+    change.field,
+  ]);
   const spec = collectionSpec(change.collection)!;
   const name = textDocName(change.collection, change.rowId, change.field);
   const { rows: current } = await client.query(`SELECT ${columnName(change.field)} AS text, clocks->>$3 AS hlc FROM ${spec.table} WHERE user_id = $1 AND id = $2`, [
@@ -186,7 +185,15 @@ async function load(client: Queryable, userId: string, change: FieldChange): Pro
   const plain = (current[0]?.['text'] as string | null | undefined) ?? '';
   const state = rows[0] ? new Uint8Array(rows[0]['state'] as Buffer) : initialTextState(name, plain);
   const merger = new TextMerger(name, state, textFieldMax(change.collection, change.field)!);
-  return { collection: change.collection, rowId: change.rowId, field: change.field, merger, before: plain, hlc: (current[0]?.['hlc'] as string | null) ?? '', clocked: false };
+  return {
+    collection: change.collection,
+    rowId: change.rowId,
+    field: change.field,
+    merger,
+    before: plain,
+    hlc: (current[0]?.['hlc'] as string | null) ?? '',
+    clocked: false,
+  };
 }
 
 /**

@@ -37,10 +37,10 @@ export class UploadStore {
       if (usage[0]?.owned) return 'known';
       if (Number(usage[0]?.used ?? 0) + upload.bytes.length > quotaBytes) return 'quota_full';
       await storeOnce(manager, upload);
-      const owned: unknown[] = await manager.query(
-        'INSERT INTO upload_owners (upload_id, user_id) VALUES ($1, $2) ON CONFLICT DO NOTHING RETURNING upload_id',
-        [upload.id, userId],
-      );
+      const owned: unknown[] = await manager.query('INSERT INTO upload_owners (upload_id, user_id) VALUES ($1, $2) ON CONFLICT DO NOTHING RETURNING upload_id', [
+        upload.id,
+        userId,
+      ]);
       return owned.length > 0 ? 'added' : 'known';
     });
   }

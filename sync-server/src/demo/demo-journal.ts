@@ -104,7 +104,12 @@ function withoutOverlaps(all: Record<string, unknown>[]): Record<string, unknown
 /** Invented passages for a few demo books, keyed by title. */
 const DEMO_QUOTES: Record<string, readonly { text: string; page?: number; chapter?: string; favourite?: boolean }[]> = {
   'The Bell Under Ashwater Marsh': [
-    { text: 'The marsh kept its bells the way old people keep their letters: unopened, and never thrown away.', page: 41, chapter: 'The Drowned Tower', favourite: true },
+    {
+      text: 'The marsh kept its bells the way old people keep their letters: unopened, and never thrown away.',
+      page: 41,
+      chapter: 'The Drowned Tower',
+      favourite: true,
+    },
     { text: 'Nobody rings a bell for the tide. The tide comes anyway, and the bell answers.', page: 212 },
   ],
   'A Ledger of Ashwater Salt': [{ text: 'Every debt in Ashwater was paid in salt, and salt remembers.', page: 88 }],
@@ -117,20 +122,23 @@ export function seedDemoJournal(write: Write, seeded: readonly { id: string; boo
   for (const session of sessions) write({ name: 'sessions' }, session);
   for (const { id, book } of seeded) {
     for (const quote of DEMO_QUOTES[book.title] ?? []) {
-      write({ name: 'quotes' }, {
-        bookId: id,
-        text: quote.text,
-        page: quote.page ?? null,
-        ebookLocation: null,
-        audioSeconds: null,
-        chapter: quote.chapter ?? null,
-        note: null,
-        tags: [],
-        labelIds: [],
-        favourite: quote.favourite ?? false,
-        capturedAt: iso(now - 30 * 24 * HOUR),
-        deleted: false,
-      });
+      write(
+        { name: 'quotes' },
+        {
+          bookId: id,
+          text: quote.text,
+          page: quote.page ?? null,
+          ebookLocation: null,
+          audioSeconds: null,
+          chapter: quote.chapter ?? null,
+          note: null,
+          tags: [],
+          labelIds: [],
+          favourite: quote.favourite ?? false,
+          capturedAt: iso(now - 30 * 24 * HOUR),
+          deleted: false,
+        },
+      );
       quoteCount++;
     }
   }
@@ -138,13 +146,16 @@ export function seedDemoJournal(write: Write, seeded: readonly { id: string; boo
   const byTitle = new Map(seeded.map((entry) => [entry.book.title, entry.id]));
   const first = (title: string) => byTitle.get(title) ?? null;
   const notebook = write({ name: 'notebooks' }, { title: 'Ashwater, read again', bookId: first('The Bell Under Ashwater Marsh'), deleted: false });
-  write({ name: 'notebookPages' }, {
-    notebookId: notebook,
-    title: 'What I missed the first time',
-    body: '# The bells\n- The bell is rung only **once** in the whole book.\n- [x] Find the map of the tower\n- [ ] Ask Oren about the ending\n\n> The tide comes anyway.',
-    position: 0,
-    deleted: false,
-  });
+  write(
+    { name: 'notebookPages' },
+    {
+      notebookId: notebook,
+      title: 'What I missed the first time',
+      body: '# The bells\n- The bell is rung only **once** in the whole book.\n- [x] Find the map of the tower\n- [ ] Ask Oren about the ending\n\n> The tide comes anyway.',
+      position: 0,
+      deleted: false,
+    },
+  );
 
   const year = new Date(now).getUTCFullYear();
   write(
@@ -166,11 +177,31 @@ export function seedDemoJournal(write: Write, seeded: readonly { id: string; boo
   );
   write(
     { name: 'challenges' },
-    { name: `${year}: twenty-five books`, kind: 'count', periodStart: `${year}-01-01`, periodEnd: `${year}-12-31`, target: 25, alphabetBy: null, prompts: null, celebratedAt: null, deleted: false },
+    {
+      name: `${year}: twenty-five books`,
+      kind: 'count',
+      periodStart: `${year}-01-01`,
+      periodEnd: `${year}-12-31`,
+      target: 25,
+      alphabetBy: null,
+      prompts: null,
+      celebratedAt: null,
+      deleted: false,
+    },
   );
   write(
     { name: 'challenges' },
-    { name: 'A to Z by title', kind: 'alphabet', periodStart: `${year}-01-01`, periodEnd: `${year}-12-31`, target: 26, alphabetBy: 'title', prompts: null, celebratedAt: null, deleted: false },
+    {
+      name: 'A to Z by title',
+      kind: 'alphabet',
+      periodStart: `${year}-01-01`,
+      periodEnd: `${year}-12-31`,
+      target: 26,
+      alphabetBy: 'title',
+      prompts: null,
+      celebratedAt: null,
+      deleted: false,
+    },
   );
 
   // Labels of the starter set on a few books.

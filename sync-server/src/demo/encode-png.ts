@@ -15,12 +15,7 @@ export function encodePng(width: number, height: number, rgb: Uint8Array): Buffe
   header.writeUInt32BE(height, 4);
   header[8] = 8; // bit depth
   header[9] = 2; // colour type: truecolour; compression, filter method and interlace stay 0
-  return Buffer.concat([
-    SIGNATURE,
-    chunk('IHDR', header),
-    chunk('IDAT', deflateSync(filterRows(width, height, rgb), { level: 9 })),
-    chunk('IEND', Buffer.alloc(0)),
-  ]);
+  return Buffer.concat([SIGNATURE, chunk('IHDR', header), chunk('IDAT', deflateSync(filterRows(width, height, rgb), { level: 9 })), chunk('IEND', Buffer.alloc(0))]);
 }
 
 const SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);

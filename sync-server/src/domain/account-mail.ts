@@ -3,8 +3,7 @@ import type { OutgoingMail } from '../mail/mailer';
 /** The minutes a reset link stays valid. */
 export const RESET_LINK_MINUTES = 30;
 
-const PRIVACY_LINE =
-  'Your journal is private to you unless you choose to share it. We only e-mail you about your account, and never share your address.';
+const PRIVACY_LINE = 'Your journal is private to you unless you choose to share it. We only e-mail you about your account, and never share your address.';
 
 const NOT_YOU = 'If you did not create a Lamplight account, ignore this message: without the link, nothing more is sent to this address.';
 

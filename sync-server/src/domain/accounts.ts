@@ -19,13 +19,9 @@ const SIGN_IN_REFUSED = new AppError(401, 'invalid_credentials', 'E-mail or pass
 /** 429 while an account (or a signed-in reader) must wait after wrong passwords. */
 function tooManyWrongPasswords(seconds: number): AppError {
   const minutes = Math.ceil(seconds / 60);
-  return new AppError(
-    429,
-    'too_many_attempts',
-    `Too many wrong passwords; try again in ${minutes === 1 ? 'a minute' : `${minutes} minutes`}`,
-    undefined,
-    { 'Retry-After': String(seconds) },
-  );
+  return new AppError(429, 'too_many_attempts', `Too many wrong passwords; try again in ${minutes === 1 ? 'a minute' : `${minutes} minutes`}`, undefined, {
+    'Retry-After': String(seconds),
+  });
 }
 
 /** A hash to compare against when the e-mail is unknown, so both paths take as long. */

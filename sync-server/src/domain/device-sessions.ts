@@ -140,9 +140,7 @@ export class DeviceSessions {
 
   /** Ends a device session and every refresh token it issued. */
   async revoke(userId: string, sessionId: string): Promise<boolean> {
-    const result = await this.dataSource
-      .getRepository(DeviceSession)
-      .update({ id: sessionId, userId, revokedAt: IsNull() }, { revokedAt: new Date() });
+    const result = await this.dataSource.getRepository(DeviceSession).update({ id: sessionId, userId, revokedAt: IsNull() }, { revokedAt: new Date() });
     return (result.affected ?? 0) > 0;
   }
 

@@ -1,14 +1,7 @@
 import express, { Router } from 'express';
 import * as z from 'zod';
 
-import {
-  MAX_PULL_LIMIT,
-  MAX_PUSH_BYTES,
-  MAX_PUSH_CHANGES,
-  type FieldChange,
-  type PullResponse,
-  type PushResponse,
-} from '../../../shared/sync/field-change';
+import { MAX_PULL_LIMIT, MAX_PUSH_BYTES, MAX_PUSH_CHANGES, type FieldChange, type PullResponse, type PushResponse } from '../../../shared/sync/field-change';
 import { validateChange } from '../../../shared/sync/validate-change';
 import type { SyncStore } from '../data-access/sync-store';
 import { TextChangesRefused } from '../data-access/text-store';
@@ -64,12 +57,7 @@ export function syncRoutes(store: SyncStore, serverSecret: Uint8Array): Router {
     if (problems.length > 0) {
       // Nothing of a batch with a bad change is applied; the client sets the bad ones aside and re-sends the rest.
       const onlyClock = problems.every((problem) => problem.code === 'clock_ahead');
-      throw new AppError(
-        400,
-        onlyClock ? 'clock_ahead' : 'invalid_changes',
-        `${problems.length} of ${changes.length} changes cannot be applied`,
-        problems,
-      );
+      throw new AppError(400, onlyClock ? 'clock_ahead' : 'invalid_changes', `${problems.length} of ${changes.length} changes cannot be applied`, problems);
     }
     const result = await refusingBadData(() => store.push(callerOf(res).userId, changes as FieldChange[])).catch((error: unknown) => {
       // A text update that does not fit its stored text: refused like any invalid change.

@@ -7,14 +7,103 @@ import { field008, leader, type LocalRecord, type MarcField } from './marc-field
  * generated from a fixed seed so every run (and every spec) sees the same catalogue.
  */
 
-const GIVEN = ['Juniper', 'Odile', 'Halvard', 'Ines', 'Tamsin', 'Bartholomew', 'Marisol', 'Caspian', 'Wren', 'Ottoline', 'Emrys', 'Saoirse', 'Lucan', 'Perpetua', 'Ferris', 'Ilse', 'Ansel', 'Clementine', 'Dashiell', 'Morwenna'];
-const SURNAMES = ['Asquith', 'Marchetti', 'Nyström', 'Quist', 'Roa', 'Pellingham', 'Vantongeren', 'Oyelaran', 'Thistlewood', 'Brannagh', 'Castellane', 'Weatherby', 'Lindqvist', 'Okonkwo-Hale', 'Fairweather', 'Duvernoy', 'Abernethy', 'Szabóné', 'Kettleburn', 'Moravec'];
-const ADJECTIVES = ['Quiet', 'Drowned', 'Lantern-lit', 'Salt', 'Borrowed', 'Winter', 'Small', 'Crooked', 'Amber', 'Far', 'Hollow', 'Gilded', 'Patient', 'Tidal', 'Last'];
-const NOUNS = ['Orchard', 'Harbour', 'Cartographer', 'Staircase', 'Almanac', 'Beekeeper', 'Observatory', 'Ferry', 'Glasshouse', 'Archivist', 'Meadow', 'Lighthouse', 'Inheritance', 'Weir', 'Telegraph'];
+const GIVEN = [
+  'Juniper',
+  'Odile',
+  'Halvard',
+  'Ines',
+  'Tamsin',
+  'Bartholomew',
+  'Marisol',
+  'Caspian',
+  'Wren',
+  'Ottoline',
+  'Emrys',
+  'Saoirse',
+  'Lucan',
+  'Perpetua',
+  'Ferris',
+  'Ilse',
+  'Ansel',
+  'Clementine',
+  'Dashiell',
+  'Morwenna',
+];
+const SURNAMES = [
+  'Asquith',
+  'Marchetti',
+  'Nyström',
+  'Quist',
+  'Roa',
+  'Pellingham',
+  'Vantongeren',
+  'Oyelaran',
+  'Thistlewood',
+  'Brannagh',
+  'Castellane',
+  'Weatherby',
+  'Lindqvist',
+  'Okonkwo-Hale',
+  'Fairweather',
+  'Duvernoy',
+  'Abernethy',
+  'Szabóné',
+  'Kettleburn',
+  'Moravec',
+];
+const ADJECTIVES = [
+  'Quiet',
+  'Drowned',
+  'Lantern-lit',
+  'Salt',
+  'Borrowed',
+  'Winter',
+  'Small',
+  'Crooked',
+  'Amber',
+  'Far',
+  'Hollow',
+  'Gilded',
+  'Patient',
+  'Tidal',
+  'Last',
+];
+const NOUNS = [
+  'Orchard',
+  'Harbour',
+  'Cartographer',
+  'Staircase',
+  'Almanac',
+  'Beekeeper',
+  'Observatory',
+  'Ferry',
+  'Glasshouse',
+  'Archivist',
+  'Meadow',
+  'Lighthouse',
+  'Inheritance',
+  'Weir',
+  'Telegraph',
+];
 const SUBTITLES = ['a novel', 'stories', 'a year on the coast', 'notes from a small island', 'a field guide', 'an essay in twelve walks', null, null, null];
 const PUBLISHERS = ['Lanternfield Press', 'Quayside Books', 'Mossgate Editions', 'Tidewrack Press', 'Underhill Lane', 'Kestrel & Vane'];
 const PLACES = ['Porthallow', 'Eastmere', 'Kilbrannan', 'Lowater'];
-const SUBJECTS = ['Coastal life', 'Families', 'Gardens', 'Friendship', 'Islands', 'Grief', 'Letters', 'Astronomy', 'Bees', 'Maps', 'Rivers', 'Ghost stories', 'Detective and mystery stories', 'Nature writing'];
+const SUBJECTS = [
+  'Coastal life',
+  'Families',
+  'Gardens',
+  'Friendship',
+  'Islands',
+  'Grief',
+  'Letters',
+  'Astronomy',
+  'Bees',
+  'Maps',
+  'Rivers',
+  'Ghost stories',
+  'Detective and mystery stories',
+  'Nature writing',
+];
 const LANGUAGES = ['eng', 'eng', 'eng', 'eng', 'fre', 'ger', 'spa', 'ita'];
 
 /** mulberry32: a small seeded generator, so the catalogue is the same on every machine. */
@@ -79,7 +168,8 @@ function hardCaseRecords(): LocalRecord[] {
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-1'], ['008', field008(1998, 'eng')],
+        ['001', 'llc-hard-1'],
+        ['008', field008(1998, 'eng')],
         isbnField(h.isbn10Only.isbn10),
         nameField('100', 'Pellingham', 'Tamsin'),
         titleField('The cartographer of Lowater', null, 'Tamsin Pellingham'),
@@ -92,7 +182,8 @@ function hardCaseRecords(): LocalRecord[] {
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-2'], ['008', field008(2021, 'eng')],
+        ['001', 'llc-hard-2'],
+        ['008', field008(2021, 'eng')],
         isbnField(h.qualified.isbn13, 'pbk.'),
         ['020', '  ', 'a', h.qualified.otherIsbn13, 'q', '(hardback)'],
         nameField('100', 'Roa', 'Ines'),
@@ -100,26 +191,34 @@ function hardCaseRecords(): LocalRecord[] {
         published('Porthallow', '[Lanternfield Press]', 2021),
         ['300', '  ', 'a', 'xii, 345 pages ;', 'c', '21 cm'],
         ['520', '  ', 'a', 'A ferry pilot keeps a lantern lit for a brother who never comes home.'],
-        ['650', ' 0', 'a', 'Coastal life', 'v', 'Fiction.'], ['650', ' 0', 'a', 'Brothers', 'v', 'Fiction.'],
+        ['650', ' 0', 'a', 'Coastal life', 'v', 'Fiction.'],
+        ['650', ' 0', 'a', 'Brothers', 'v', 'Fiction.'],
       ],
     },
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-3'], ['008', field008(2019, 'eng')],
-        isbnField(h.severalIsbns.hardback, 'hardback'), isbnField(h.severalIsbns.paperback, 'paperback'), isbnField(h.severalIsbns.ebook, 'ebook'),
+        ['001', 'llc-hard-3'],
+        ['008', field008(2019, 'eng')],
+        isbnField(h.severalIsbns.hardback, 'hardback'),
+        isbnField(h.severalIsbns.paperback, 'paperback'),
+        isbnField(h.severalIsbns.ebook, 'ebook'),
         ['020', '  ', 'z', '9781999900000'],
         nameField('100', 'Quist', 'Bartholomew'),
         titleField('Moths of the lower fen', 'a field guide', 'Bartholomew Quist'),
-        published('Kilbrannan', 'Mossgate Editions', 2019), ['264', ' 4', 'c', '©2018'],
+        published('Kilbrannan', 'Mossgate Editions', 2019),
+        ['264', ' 4', 'c', '©2018'],
         ['300', '  ', 'a', '288 pages :', 'b', 'illustrations ;', 'c', '24 cm'],
-        ['650', ' 0', 'a', 'Moths.'], ['650', ' 0', 'a', 'Nature writing.'],
+        ['650', ' 0', 'a', 'Moths.'],
+        ['650', ' 0', 'a', 'Nature writing.'],
       ],
     },
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-4'], ['008', field008(2023, 'eng')], ['041', '1 ', 'a', 'eng', 'h', 'fre'],
+        ['001', 'llc-hard-4'],
+        ['008', field008(2023, 'eng')],
+        ['041', '1 ', 'a', 'eng', 'h', 'fre'],
         isbnField(h.datedNames.isbn13),
         nameField('100', 'Asquith', 'Juniper', '1961-'),
         titleField('A grammar of rivers', null, 'Juniper Asquith and Odile Marchetti ; translated by Caspian Duvernoy'),
@@ -133,7 +232,8 @@ function hardCaseRecords(): LocalRecord[] {
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-5'], ['008', field008(2020, 'jpn')],
+        ['001', 'llc-hard-5'],
+        ['008', field008(2020, 'jpn')],
         isbnField(h.nonLatin.japanese),
         ['100', '1 ', 'a', '灯野, 澄子,', 'd', '1975-'],
         ['245', '10', 'a', '灯台の夜 :', 'b', '短編集 /', 'c', '灯野澄子.'],
@@ -144,7 +244,8 @@ function hardCaseRecords(): LocalRecord[] {
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-6'], ['008', field008(2017, 'rus')],
+        ['001', 'llc-hard-6'],
+        ['008', field008(2017, 'rus')],
         isbnField(h.nonLatin.russian),
         nameField('100', 'Лесовая', 'Мирослава'),
         titleField('Сад у реки', 'повесть', 'Мирослава Лесовая'),
@@ -155,7 +256,8 @@ function hardCaseRecords(): LocalRecord[] {
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-7'], ['008', field008(2022, 'gre')],
+        ['001', 'llc-hard-7'],
+        ['008', field008(2022, 'gre')],
         isbnField(h.nonLatin.greek),
         nameField('100', 'Αλεξίου', 'Δανάη'),
         titleField('Το σπίτι με τις κερήθρες', null, 'Δανάη Αλεξίου'),
@@ -166,7 +268,8 @@ function hardCaseRecords(): LocalRecord[] {
     {
       leader: leader('i'),
       fields: [
-        ['001', 'llc-hard-8'], ['008', field008(2024, 'eng')],
+        ['001', 'llc-hard-8'],
+        ['008', field008(2024, 'eng')],
         isbnField(h.audiobook.isbn13, 'audio disc'),
         nameField('100', 'Nyström', 'Halvard'),
         titleField('The orchard under snow', null, 'Halvard Nyström'),
@@ -175,13 +278,15 @@ function hardCaseRecords(): LocalRecord[] {
         ['306', '  ', 'a', '091500'],
         ['511', '0 ', 'a', 'Read by Ottoline Brannagh.'],
         nameField('700', 'Brannagh', 'Ottoline', undefined, 'narrator'),
-        ['650', ' 0', 'a', 'Winter', 'v', 'Fiction.'], ['655', ' 7', 'a', 'Audiobooks.', '2', 'lcgft'],
+        ['650', ' 0', 'a', 'Winter', 'v', 'Fiction.'],
+        ['655', ' 7', 'a', 'Audiobooks.', '2', 'lcgft'],
       ],
     },
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-9'], ['008', field008(2025, 'eng')],
+        ['001', 'llc-hard-9'],
+        ['008', field008(2025, 'eng')],
         isbnField(h.seriesEntry.isbn13),
         nameField('100', 'Weatherby', 'Clementine'),
         titleField('The tidal archivist', null, 'Clementine Weatherby'),
@@ -195,7 +300,8 @@ function hardCaseRecords(): LocalRecord[] {
     {
       leader: leader('a'),
       fields: [
-        ['001', 'llc-hard-10'], ['008', field008(2020, 'eng', 'o')],
+        ['001', 'llc-hard-10'],
+        ['008', field008(2020, 'eng', 'o')],
         isbnField(h.ebook.isbn13, 'ebook'),
         nameField('100', 'Oyelaran', 'Emrys'),
         titleField('Letters to the lighthouse', null, 'Emrys Oyelaran'),
@@ -220,7 +326,11 @@ function generatedRecord(index: number, random: () => number): LocalRecord {
     ['008', field008(year, pick(LANGUAGES))],
     isbnField(inventedIsbn13(index), index % 3 === 0 ? 'pbk.' : undefined),
     nameField('100', surname, given, index % 5 === 0 ? `${1930 + (index % 60)}-` : undefined),
-    titleField(title.replace(/^the (\w)/, (_, c: string) => `The ${c}`), subtitle, `${given} ${surname}`),
+    titleField(
+      title.replace(/^the (\w)/, (_, c: string) => `The ${c}`),
+      subtitle,
+      `${given} ${surname}`,
+    ),
     published(pick(PLACES), pick(PUBLISHERS), year),
     audio
       ? ['300', '  ', 'a', `1 audio disc (${3 + (index % 12)} hr., ${index % 60} min.)`]

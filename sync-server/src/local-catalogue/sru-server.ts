@@ -131,7 +131,8 @@ export function createLocalCatalogue(records: readonly LocalRecord[] = inventedR
     const start = whole(req.query['startRecord'], 1);
     if (!query.trim()) return void res.send(diagnosticResponse(7, 'Mandatory parameter not supplied', 'query'));
     if (!MARCXML_SCHEMAS.has(schema.toLowerCase())) return void res.send(diagnosticResponse(66, 'Unknown schema for retrieval', schema));
-    if (!(maximum >= 0 && maximum <= MAX_RECORDS)) return void res.send(diagnosticResponse(6, 'Unsupported parameter value', `maximumRecords must be 0 to ${MAX_RECORDS}`));
+    if (!(maximum >= 0 && maximum <= MAX_RECORDS))
+      return void res.send(diagnosticResponse(6, 'Unsupported parameter value', `maximumRecords must be 0 to ${MAX_RECORDS}`));
     if (!(start >= 1)) return void res.send(diagnosticResponse(6, 'Unsupported parameter value', 'startRecord must be 1 or more'));
     try {
       const tree = parseCql(query);

@@ -7,8 +7,7 @@ import { Auth } from './auth';
 /** API routes that must go without a bearer token. */
 const PUBLIC_ROUTES = /^\/api\/(health|auth\/(login|register|refresh|verify-email|password-reset\/.*))$/;
 
-const withBearer = (req: HttpRequest<unknown>, token: string | null) =>
-  token ? req.clone({ setHeaders: { Authorization: `Bearer ${token}` } }) : req;
+const withBearer = (req: HttpRequest<unknown>, token: string | null) => (token ? req.clone({ setHeaders: { Authorization: `Bearer ${token}` } }) : req);
 
 /**
  * Adds the bearer token to API calls. On a 401 it refreshes once and retries once; if the
@@ -23,9 +22,7 @@ export const authInterceptor: HttpInterceptorFn = (req, next) => {
     switchMap((token) => next(withBearer(req, token))),
     catchError((error: unknown) => {
       if (!(error instanceof HttpErrorResponse) || error.status !== 401) return throwError(() => error);
-      return from(auth.refresh().catch(() => null)).pipe(
-        switchMap((token) => (token ? next(withBearer(req, token)) : throwError(() => error))),
-      );
+      return from(auth.refresh().catch(() => null)).pipe(switchMap((token) => (token ? next(withBearer(req, token)) : throwError(() => error))));
     }),
   );
 };

@@ -1,8 +1,7 @@
 import { secondsUntilExpiry, tokenReceived } from './stored-session';
 
 /** An unsigned JWT (RFC 7519 §3: header.payload.signature, base64url) with these claims. */
-const token = (claims: Record<string, number>) =>
-  `e30.${btoa(JSON.stringify(claims)).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '')}.sig`;
+const token = (claims: Record<string, number>) => `e30.${btoa(JSON.stringify(claims)).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '')}.sig`;
 
 describe('secondsUntilExpiry', () => {
   const serverNow = Date.UTC(2026, 11, 4, 12, 0, 0) / 1000;

@@ -132,12 +132,8 @@ describe('Covers', () => {
       });
       await round;
 
-      expect(await db().covers.get(tooLarge!)).toEqual(
-        jasmine.objectContaining({ state: 'refused', problem: 'The image is larger than 2097152 bytes' }),
-      );
-      expect(await db().covers.get(unsupported!)).toEqual(
-        jasmine.objectContaining({ state: 'refused', problem: 'Covers must be JPEG, PNG or WebP images' }),
-      );
+      expect(await db().covers.get(tooLarge!)).toEqual(jasmine.objectContaining({ state: 'refused', problem: 'The image is larger than 2097152 bytes' }));
+      expect(await db().covers.get(unsupported!)).toEqual(jasmine.objectContaining({ state: 'refused', problem: 'Covers must be JPEG, PNG or WebP images' }));
     });
 
     it('when the reader’s cover storage is full, keeps the cover on this device with the server’s plain reason', async () => {

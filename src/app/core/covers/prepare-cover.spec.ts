@@ -53,7 +53,9 @@ describe('prepareCover', () => {
   it('reads JPEG and WebP files as well as PNG', async () => {
     for (const type of ['image/jpeg', 'image/webp']) {
       const cover = await prepareCover(await drawnImage(60, 90, type));
-      expect(await decodedSize(cover.blob)).withContext(type).toEqual({ width: 60, height: 90 });
+      expect(await decodedSize(cover.blob))
+        .withContext(type)
+        .toEqual({ width: 60, height: 90 });
     }
   });
 
@@ -72,9 +74,7 @@ describe('prepareCover', () => {
 
   it('refuses a file that is not an image with a message for the reader', async () => {
     const refusal = prepareCover(new Blob(['Chapter one. It was a quiet morning.'], { type: 'text/plain' }));
-    await expectAsync(refusal).toBeRejectedWith(
-      new CoverError('unreadable', 'This file is not an image Lamplight can read. Try a JPEG, PNG or WebP picture.'),
-    );
+    await expectAsync(refusal).toBeRejectedWith(new CoverError('unreadable', 'This file is not an image Lamplight can read. Try a JPEG, PNG or WebP picture.'));
     await expectAsync(refusal).toBeRejectedWithError(CoverError);
   });
 

@@ -60,7 +60,8 @@ async function decode(file: Blob): Promise<ImageBitmap> {
 type Canvas = OffscreenCanvas | HTMLCanvasElement;
 
 function drawScaled(bitmap: ImageBitmap, width: number, height: number): Canvas {
-  const canvas: Canvas = typeof OffscreenCanvas === 'function' ? new OffscreenCanvas(width, height) : Object.assign(document.createElement('canvas'), { width, height });
+  const canvas: Canvas =
+    typeof OffscreenCanvas === 'function' ? new OffscreenCanvas(width, height) : Object.assign(document.createElement('canvas'), { width, height });
   const context = canvas.getContext('2d') as CanvasRenderingContext2D | OffscreenCanvasRenderingContext2D | null;
   if (!context) throw new CoverError('cannot-encode', 'This device could not make a cover from that image.');
   // JPEG has no transparency: see-through parts become white, as on paper, not black.

@@ -106,7 +106,7 @@ describe('JournalStore (IndexedDB through Dexie)', () => {
     expect((await db().meta.get('clock'))!.value > newer).toBeTrue();
   });
 
-  it('writes a set field as a delta, and a pulled state from another device keeps this device\'s unsynced tag', async () => {
+  it("writes a set field as a delta, and a pulled state from another device keeps this device's unsynced tag", async () => {
     const id = await store.create('books', { title: 'Fern Letters', tags: ['signed'] });
     await store.write('books', id, { tags: ['signed', 'reread'] });
     const [delta] = (await db().outbox.toArray()).filter((change) => change.field === 'tags');
@@ -136,7 +136,7 @@ describe('JournalStore (IndexedDB through Dexie)', () => {
     expect(waiting[0]!.hlc).toBe((await db().rows('timers').get(id))!._hlc['state']!);
   });
 
-  it('coalesces a set field\'s waiting deltas by joining them, so no add is lost', async () => {
+  it("coalesces a set field's waiting deltas by joining them, so no add is lost", async () => {
     const id = await store.create('books', { title: 'Loam', tags: ['a'] });
     await store.write('books', id, { tags: ['a', 'b'] });
     await store.write('books', id, { tags: ['b', 'c'] });
@@ -169,7 +169,10 @@ describe('JournalStore (IndexedDB through Dexie)', () => {
     await db().meta.put({ key: 'seenClock', value: seen });
     const id = await store.create('books', { title: 'One' });
     await store.write('books', id, { rating: 4 });
-    const ahead = (await db().outbox.toArray()).map((change) => ({ ...change, hlc: formatHlc({ wall: Date.now() + 3 * 86_400_000, counter: change.seq!, node: 'me' }) }));
+    const ahead = (await db().outbox.toArray()).map((change) => ({
+      ...change,
+      hlc: formatHlc({ wall: Date.now() + 3 * 86_400_000, counter: change.seq!, node: 'me' }),
+    }));
     await db().outbox.bulkPut(ahead);
 
     await new DexieSyncPorts(db(), TestBed.inject(HttpClient)).restamp(ahead);

@@ -18,8 +18,6 @@ import { LocalJournal } from './local-journal';
 export function liveQueryFor<S, T>(source: Signal<S>, query: (db: JournalDb, value: S) => Promise<T> | T): Signal<T | undefined> {
   const journal = inject(LocalJournal);
   return toSignal(
-    combineLatest([toObservable(journal.db), toObservable(source)]).pipe(
-      switchMap(([db, value]) => (db ? from(liveQuery(() => query(db, value))) : of(undefined))),
-    ),
+    combineLatest([toObservable(journal.db), toObservable(source)]).pipe(switchMap(([db, value]) => (db ? from(liveQuery(() => query(db, value))) : of(undefined)))),
   );
 }

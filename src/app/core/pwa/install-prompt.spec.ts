@@ -37,8 +37,7 @@ describe('InstallPrompt', () => {
 
 describe('InstallPrompt on iPhone and iPad', () => {
   // iPadOS Safari asks for desktop sites, so it says Macintosh; only its touch points give it away.
-  const IPAD_OR_MAC_SAFARI =
-    'Mozilla/5.0 (Macintosh; Intel Mac OS X 10_15_7) AppleWebKit/605.1.15 (KHTML, like Gecko) Version/18.5 Safari/605.1.15';
+  const IPAD_OR_MAC_SAFARI = 'Mozilla/5.0 (Macintosh; Intel Mac OS X 10_15_7) AppleWebKit/605.1.15 (KHTML, like Gecko) Version/18.5 Safari/605.1.15';
 
   /** Pretends to be a device; returns the touch points, which can be changed afterwards. */
   function onDevice(userAgent: string, touchPoints: number): jasmine.Spy {

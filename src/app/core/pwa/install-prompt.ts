@@ -11,7 +11,7 @@ export type InstallOption = 'prompt' | 'ios-how-to' | 'installed' | 'none';
 
 const standalone = () =>
   globalThis.matchMedia?.('(display-mode: standalone)').matches === true ||
-  (globalThis.navigator as Navigator & { standalone?: boolean } | undefined)?.standalone === true;
+  (globalThis.navigator as (Navigator & { standalone?: boolean }) | undefined)?.standalone === true;
 
 /** iPhone and iPad Safari have no install prompt; iPadOS reports itself as a Mac with touch. */
 const ios = () => {

@@ -35,7 +35,6 @@ async function until(check: () => boolean, what: string): Promise<void> {
   throw new Error(`gave up waiting for ${what}`);
 }
 
-
 describe('TabCoordination', () => {
   let userId: string;
   let olderTab: IDBDatabase | undefined;

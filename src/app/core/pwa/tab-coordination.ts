@@ -24,7 +24,8 @@ export class TabCoordination {
       if (!journal.replacedElsewhere()) return;
       if (!told) {
         told = true;
-        snackBar.open('Lamplight was updated in another tab, so this tab reloads to keep up.', 'Reload now', { duration: 0 })
+        snackBar
+          .open('Lamplight was updated in another tab, so this tab reloads to keep up.', 'Reload now', { duration: 0 })
           .onAction()
           .subscribe(() => reload());
       }

@@ -11,9 +11,7 @@ export function sessionFormat(session: Session, bookFormats: ReadonlyMap<string,
 
 /** Live sessions with both times readable, the only ones the log and paces can use. */
 export function timedSessions(sessions: readonly Session[]): Session[] {
-  return sessions.filter(
-    (s) => !s.deleted && Number.isFinite(Date.parse(s.startedAt ?? '')) && Number.isFinite(Date.parse(s.endedAt ?? '')),
-  );
+  return sessions.filter((s) => !s.deleted && Number.isFinite(Date.parse(s.startedAt ?? '')) && Number.isFinite(Date.parse(s.endedAt ?? '')));
 }
 
 /**
@@ -26,9 +24,7 @@ export function toLogSession(session: Session, format: Format | undefined): LogS
   const endedAt = session.endedAt!;
   const span = Math.max(0, (Date.parse(endedAt) - Date.parse(startedAt)) / 60_000);
   const pages =
-    format === 'print' && session.fromPosition != null && session.toPosition != null
-      ? Math.max(0, session.toPosition - session.fromPosition)
-      : undefined;
+    format === 'print' && session.fromPosition != null && session.toPosition != null ? Math.max(0, session.toPosition - session.fromPosition) : undefined;
   return { startedAt, endedAt, activeMinutes: session.activeMinutes ?? span, pages };
 }
 
@@ -52,9 +48,7 @@ export function newestFirst(sessions: readonly Session[]): Session[] {
 
 /** The latest session of a book that says where the reader got to. */
 export function latestPosition(sessions: readonly Session[]): Session | undefined {
-  return [...sessions]
-    .filter((s) => !s.deleted && s.toPosition != null)
-    .sort((a, b) => instant(b.endedAt ?? b.startedAt) - instant(a.endedAt ?? a.startedAt))[0];
+  return [...sessions].filter((s) => !s.deleted && s.toPosition != null).sort((a, b) => instant(b.endedAt ?? b.startedAt) - instant(a.endedAt ?? a.startedAt))[0];
 }
 
 /** Milliseconds of a timestamp; a missing or unreadable one sorts first. */

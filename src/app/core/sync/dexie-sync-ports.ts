@@ -54,7 +54,12 @@ export class DexieSyncPorts implements SyncPorts {
       const offset = await this.offset();
       const seen = (await this.db.meta.get('seenClock'))?.value;
       const ordered = [...changes].sort((a, b) => a.seq! - b.seq!);
-      const renamed = restampClocks(ordered.map((change) => change.hlc), deviceId(), () => Date.now() + offset, seen);
+      const renamed = restampClocks(
+        ordered.map((change) => change.hlc),
+        deviceId(),
+        () => Date.now() + offset,
+        seen,
+      );
       await this.db.outbox.bulkPut(ordered.map((change) => ({ ...change, hlc: renamed.get(change.hlc)! })));
       for (const change of ordered) {
         if (!this.known.has(change.collection)) continue;
@@ -111,10 +116,15 @@ export class DexieSyncPorts implements SyncPorts {
     const isText = (change: { collection: string; field: string }) => textFieldMax(change.collection, change.field) !== undefined;
     const texts = page.changes.some(isText) || (await this.db.held.count()) > 0 ? await import('@shared/text/apply-pulled-texts') : null;
     await this.db.transaction('rw', [...tables.map((name) => this.db.rows(name)), this.db.meta, this.db.held], async () => {
-      const released = await this.db.held.where('collection').anyOf([...this.known]).toArray();
-      await this.merge([...released.map(({ seq: _seq, ...change }) => change), ...page.changes.filter((change) => this.known.has(change.collection))], [
-        ...new Set([...collections, ...released.map((change) => change.collection)]),
-      ], texts?.applyPulledTexts ?? null);
+      const released = await this.db.held
+        .where('collection')
+        .anyOf([...this.known])
+        .toArray();
+      await this.merge(
+        [...released.map(({ seq: _seq, ...change }) => change), ...page.changes.filter((change) => this.known.has(change.collection))],
+        [...new Set([...collections, ...released.map((change) => change.collection)])],
+        texts?.applyPulledTexts ?? null,
+      );
       await this.db.held.bulkDelete(released.map((change) => change.seq!));
       await this.db.held.bulkAdd(unknown);
       await this.adoptClocks(page);
@@ -144,7 +154,10 @@ export class DexieSyncPorts implements SyncPorts {
       const current = await table.bulkGet(entries.map((entry) => entry.rowId));
       const isText = (change: PulledChange) => applyPulledTexts !== null && textFieldMax(collection, change.field) !== undefined;
       const merged: LocalRow[] = entries.map((entry, n) => {
-        const row = applyPulled(current[n] ?? emptyRow(entry.rowId), entry.changes.filter((change) => !isText(change)));
+        const row = applyPulled(
+          current[n] ?? emptyRow(entry.rowId),
+          entry.changes.filter((change) => !isText(change)),
+        );
         return applyPulledTexts ? applyPulledTexts(collection, row, entry.changes.filter(isText)) : row;
       });
       await table.bulkPut(merged.filter((row, n) => row !== current[n]));

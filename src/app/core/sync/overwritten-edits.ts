@@ -31,7 +31,9 @@ export async function rememberOverwritten(db: JournalDb, pushed: readonly FieldC
   const at = new Date().toISOString();
   const fresh = overwritten.flatMap(({ id, by }) => {
     const change = byId.get(id);
-    return change ? [{ collection: change.collection, rowId: change.rowId, field: change.field, mine: change.value, byDevice: parseHlc(by)?.node ?? 'unknown', at }] : [];
+    return change
+      ? [{ collection: change.collection, rowId: change.rowId, field: change.field, mine: change.value, byDevice: parseHlc(by)?.node ?? 'unknown', at }]
+      : [];
   });
   const kept = [...fresh, ...(await overwrittenEdits(db))].slice(0, MAX_KEPT);
   await db.meta.put({ key: 'overwritten', value: JSON.stringify(kept) });

@@ -91,11 +91,15 @@ describe('SyncEngine', () => {
       expect(push.request.method).toBe('POST');
       expect(push.request.body).toEqual({ deviceId: deviceId(), changes: queued.map(({ seq: _seq, ...change }) => change) });
       expect(engine.phase()).toBe('syncing');
-      expect(await db.outbox.count()).withContext('before the server answered').toBe(4);
+      expect(await db.outbox.count())
+        .withContext('before the server answered')
+        .toBe(4);
 
       push.flush(pushed(4));
       const pull = await sent(backend, '/api/sync/pull');
-      expect(await db.outbox.count()).withContext('after the server confirmed').toBe(0);
+      expect(await db.outbox.count())
+        .withContext('after the server confirmed')
+        .toBe(0);
       pull.flush(emptyPage('cursor-1'));
 
       await until(() => engine.phase() === 'idle', 'the cycle is done');
@@ -104,7 +108,9 @@ describe('SyncEngine', () => {
 
     it('pushes at most 500 changes at a time, oldest first', async () => {
       const titles = Array.from({ length: 130 }, (_, n) => `Harbour Lights, volume ${n + 1}`);
-      await store.writeAll(titles.map((title) => ({ collection: 'books', rowId: crypto.randomUUID(), patch: { title, format: 'ebook', status: 'tbr', deleted: false } })));
+      await store.writeAll(
+        titles.map((title) => ({ collection: 'books', rowId: crypto.randomUUID(), patch: { title, format: 'ebook', status: 'tbr', deleted: false } })),
+      );
       const queued = await outbox();
       expect(queued.length).toBe(520);
 
@@ -152,10 +158,13 @@ describe('SyncEngine', () => {
       const titleIndex = queued.findIndex((change) => change.id === title!.id);
 
       const engine = start();
-      (await sent(backend, '/api/sync/push')).flush(refusedBody([{ index: titleIndex, code: 'invalid_value', reason: 'books.title must be at most 500 characters' }]), {
-        status: 400,
-        statusText: 'Bad Request',
-      });
+      (await sent(backend, '/api/sync/push')).flush(
+        refusedBody([{ index: titleIndex, code: 'invalid_value', reason: 'books.title must be at most 500 characters' }]),
+        {
+          status: 400,
+          statusText: 'Bad Request',
+        },
+      );
       const again = await sent(backend, '/api/sync/push');
       expect((again.request.body as { changes: { id: string }[] }).changes.map((change) => change.id)).toEqual([deleted!.id]);
       again.flush(pushed(1));
@@ -164,7 +173,13 @@ describe('SyncEngine', () => {
 
       expect(await db.outbox.count()).toBe(0);
       expect(await db.rejected.toArray()).toEqual([
-        jasmine.objectContaining({ id: title!.id, field: 'title', value: 'A Winter in Tolvik', code: 'invalid_value', reason: 'books.title must be at most 500 characters' }),
+        jasmine.objectContaining({
+          id: title!.id,
+          field: 'title',
+          value: 'A Winter in Tolvik',
+          code: 'invalid_value',
+          reason: 'books.title must be at most 500 characters',
+        }),
       ]);
     });
   });

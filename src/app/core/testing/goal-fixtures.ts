@@ -22,7 +22,9 @@ class SpecLanding {}
  * A signed-in reader with a fresh real IndexedDB journal, a fixed time zone and clock, and a
  * router. Call in `beforeEach`; `tearDown` in `afterEach`.
  */
-export async function setUpGoalSpec(options: { timeZone?: string; now?: string } = {}): Promise<{ store: JournalStore; db: () => JournalDb; tearDown: () => Promise<void> }> {
+export async function setUpGoalSpec(
+  options: { timeZone?: string; now?: string } = {},
+): Promise<{ store: JournalStore; db: () => JournalDb; tearDown: () => Promise<void> }> {
   const userId = `goals-${crypto.randomUUID()}`;
   rememberSession({ user: { ...READER, id: userId } });
   TestBed.configureTestingModule({

@@ -13,8 +13,7 @@ import type { JournalStore } from '../data/journal-store';
  * - ferry: "The Blue Ferry" by Kit Ashdown, TBR. owl: "An Owl at Dusk", being read.
  */
 export async function seedLibrary(store: JournalStore): Promise<void> {
-  const book = (id: string, fields: Record<string, unknown>) =>
-    store.write('books', id, { format: 'print', authors: ['Ada Okafor'], deleted: false, ...fields });
+  const book = (id: string, fields: Record<string, unknown>) => store.write('books', id, { format: 'print', authors: ['Ada Okafor'], deleted: false, ...fields });
   await book(BOOK.jan, { title: 'Salt and Lanterns', status: 'finished', statusChangedAt: '2026-01-10T20:00:00.000Z' });
   await book(BOOK.orchard, { title: 'The Quiet Orchard', status: 'finished', statusChangedAt: '2026-03-01T06:30:00.000Z' });
   await book(BOOK.harrow, { title: 'Harrow Light', authors: ['Lio Penhallow'], status: 'finished', statusChangedAt: '2026-06-25T18:00:00.000Z' });

@@ -101,7 +101,9 @@ export class MergeableTextarea {
   private receive(row: LocalRow | undefined, field: string): void {
     const text = this.doc.getText(this.name);
     const focused = this.element.ownerDocument.activeElement === this.element;
-    const anchors = [this.element.selectionStart, this.element.selectionEnd].map((index) => Y.createRelativePositionFromTypeIndex(text, Math.min(index, text.length)));
+    const anchors = [this.element.selectionStart, this.element.selectionEnd].map((index) =>
+      Y.createRelativePositionFromTypeIndex(text, Math.min(index, text.length)),
+    );
     const state = localTextState(this.name, { state: row ? textStatesOf(row)[field] : undefined, text: row?.[field] as string | null | undefined });
     Y.applyUpdate(this.doc, state, STORED);
     if (!this.loaded) {

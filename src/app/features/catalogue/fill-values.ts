@@ -59,7 +59,12 @@ export function catalogueValues(book: CatalogueBook): Partial<Record<FillableFie
 /** Whether two texts say the same for this field (ISBN-10 and ISBN-13 alike, lists in any spacing). */
 function same(field: FillableField, a: string, b: string): boolean {
   if (field === 'isbn') return (normalizeIsbn(a) ?? a.trim()) === (normalizeIsbn(b) ?? b.trim());
-  const tidy = (text: string) => text.split(',').map((part) => part.trim().toLowerCase()).filter(Boolean).join(',');
+  const tidy = (text: string) =>
+    text
+      .split(',')
+      .map((part) => part.trim().toLowerCase())
+      .filter(Boolean)
+      .join(',');
   return tidy(a) === tidy(b);
 }
 

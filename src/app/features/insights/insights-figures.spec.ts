@@ -14,7 +14,13 @@ describe('insights figures', () => {
     expect(books.summary).toBe('3 books in 2026; the most in March: 2 books.');
     expect(books.labels.length).toBe(12);
     expect(monthlyChart(months, 'minutes', 2026).summary).toBe('135 minutes in 2026; the most in January: 90 minutes.');
-    expect(monthlyChart(Array.from({ length: 12 }, () => month(0)), 'pages', 2026).summary).toBe('No pages logged in 2026 yet.');
+    expect(
+      monthlyChart(
+        Array.from({ length: 12 }, () => month(0)),
+        'pages',
+        2026,
+      ).summary,
+    ).toBe('No pages logged in 2026 yet.');
   });
 
   it('says the formats, ratings and terms in words', () => {

@@ -113,9 +113,7 @@ describe('QuoteCapture and its dialog', () => {
     control('The passage').dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', ctrlKey: true, bubbles: true }));
 
     await saved;
-    expect((await quotes())[0]).toEqual(
-      jasmine.objectContaining({ bookId: fen, audioSeconds: 3750, chapter: 'Low Water', tags: ['fen', 'time'] }),
-    );
+    expect((await quotes())[0]).toEqual(jasmine.objectContaining({ bookId: fen, audioSeconds: 3750, chapter: 'Low Water', tags: ['fen', 'time'] }));
   });
 
   it('warns about a page past the book’s end, and keeps it when the reader saves again', async () => {
@@ -176,7 +174,9 @@ describe('QuoteCapture and its dialog', () => {
     await TestBed.inject(ApplicationRef).whenStable();
     expect(dialog()).not.toBeNull();
 
-    Array.from(dialog()!.querySelectorAll('button')).find((button) => button.textContent?.trim() === 'Cancel')!.click();
+    Array.from(dialog()!.querySelectorAll('button'))
+      .find((button) => button.textContent?.trim() === 'Cancel')!
+      .click();
     expect(await saved).toBeUndefined();
     await until(() => !dialog() && !unsaved.present(), 'the dialog gone and nothing unsaved');
     expect(await quotes()).toEqual([]);

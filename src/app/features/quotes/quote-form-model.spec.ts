@@ -19,9 +19,7 @@ describe('quote form model', () => {
       favourite: false,
     });
     expect(toQuoteFields({ ...typed, position: '37%' }, 'ebook')).toEqual(jasmine.objectContaining({ page: null, ebookLocation: '37%', audioSeconds: null }));
-    expect(toQuoteFields({ ...typed, position: '1:02:30' }, 'audiobook')).toEqual(
-      jasmine.objectContaining({ page: null, ebookLocation: null, audioSeconds: 3750 }),
-    );
+    expect(toQuoteFields({ ...typed, position: '1:02:30' }, 'audiobook')).toEqual(jasmine.objectContaining({ page: null, ebookLocation: null, audioSeconds: 3750 }));
     expect(toQuoteFields({ ...typed, bookId: '' }, 'print')).toEqual(jasmine.objectContaining({ bookId: null, page: null }));
   });
 

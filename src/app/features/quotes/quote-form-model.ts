@@ -95,7 +95,14 @@ export function tagsError(tags: string): string | null {
 
 const optionalText = (value: string) => (value.trim() === '' ? null : value.trim());
 /** "late, sea , late" → ['late', 'sea']. */
-const splitList = (value: string) => [...new Set(value.split(/[,\n]/).map((item) => item.trim()).filter(Boolean))];
+const splitList = (value: string) => [
+  ...new Set(
+    value
+      .split(/[,\n]/)
+      .map((item) => item.trim())
+      .filter(Boolean),
+  ),
+];
 
 /**
  * Form values as field values. The position goes to the one field of the book's format and the

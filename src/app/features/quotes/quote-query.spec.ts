@@ -9,7 +9,15 @@ describe('quote search', () => {
   ];
   const quotes: Quote[] = [
     { id: 'q1', bookId: 'b1', text: 'La mer monte sans bruit.', capturedAt: '2026-03-01T08:00:00.000Z', labelIds: ['calm'] },
-    { id: 'q2', bookId: 'b2', text: 'Reeds keep the time.', note: 'Read aloud at the book club', capturedAt: '2026-03-05T08:00:00.000Z', favourite: true, labelIds: ['calm', 'club'] },
+    {
+      id: 'q2',
+      bookId: 'b2',
+      text: 'Reeds keep the time.',
+      note: 'Read aloud at the book club',
+      capturedAt: '2026-03-05T08:00:00.000Z',
+      favourite: true,
+      labelIds: ['calm', 'club'],
+    },
     { id: 'q3', bookId: 'b2', text: 'Nothing hurries here.', chapter: 'Low Water', tags: ['slow'], capturedAt: '2026-03-03T08:00:00.000Z' },
     { id: 'q4', text: 'Half-synced, no time yet.' },
   ];

@@ -11,9 +11,7 @@ export interface QuoteQuery {
 
 /** The words a quote is found by: its text, note, chapter and tags, and its book's title and authors; folded. */
 export function quoteSearchText(quote: Quote, book: Book | undefined): string {
-  return fold(
-    [quote.text, quote.note, quote.chapter, ...(quote.tags ?? []), book?.title, book?.subtitle, ...(book?.authors ?? [])].join(' '),
-  );
+  return fold([quote.text, quote.note, quote.chapter, ...(quote.tags ?? []), book?.title, book?.subtitle, ...(book?.authors ?? [])].join(' '));
 }
 
 /**

@@ -45,13 +45,7 @@ export function bookProgress(book: Book, bookSessions: readonly Session[]): Book
  * and listened minutes mean the same in every book. An ebook's pace is percent per hour, which
  * depends on the book's length, so only this book's sessions count.
  */
-export function bookForecast(
-  book: Book,
-  allSessions: readonly Session[],
-  books: readonly Book[],
-  today: string,
-  timeZone: string,
-): BookForecast | null {
+export function bookForecast(book: Book, allSessions: readonly Session[], books: readonly Book[], today: string, timeZone: string): BookForecast | null {
   const format = book.format ?? 'print';
   const sessions = timedSessions(allSessions);
   const own = sessions.filter((s) => s.bookId === book.id);
@@ -59,9 +53,7 @@ export function bookForecast(
   if (end === null) return null;
 
   const formats = new Map(books.map((b) => [b.id, b.format]));
-  const paceSessions = (format === 'ebook' ? own : sessions)
-    .map((s) => toPaceSession(s, sessionFormat(s, formats)))
-    .filter((s): s is PaceSession => s !== null);
+  const paceSessions = (format === 'ebook' ? own : sessions).map((s) => toPaceSession(s, sessionFormat(s, formats))).filter((s): s is PaceSession => s !== null);
   const personal = personalPace(paceSessions, format);
   const pace =
     personal ??

@@ -58,7 +58,15 @@ describe('ReadingTimer', () => {
 
     const stored = await row();
     expect(stored).toEqual(
-      jasmine.objectContaining({ state: 'running', bookId, startedAt: '2026-03-08T20:14:00.000Z', pausedMs: 0, deviceId: deviceId(), targetMinutes: 30, startPosition: 88 }),
+      jasmine.objectContaining({
+        state: 'running',
+        bookId,
+        startedAt: '2026-03-08T20:14:00.000Z',
+        pausedMs: 0,
+        deviceId: deviceId(),
+        targetMinutes: 30,
+        startPosition: 88,
+      }),
     );
     expect(stored?.deviceName).toMatch(/ on /); // "Chrome on Linux" in this browser
     await until(() => timer.active() !== null);

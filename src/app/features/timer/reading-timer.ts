@@ -16,9 +16,7 @@ import { CLOCK } from '../../core/time/clock';
 export const TIMER_ROW_ID = deterministicId('reading-timer', 'current');
 
 /** What `start` did: started, or refused because another timer runs (`current`). */
-export type StartOutcome =
-  | { readonly started: true; readonly stoppedSessionId: string | null }
-  | { readonly started: false; readonly current: Timer };
+export type StartOutcome = { readonly started: true; readonly stoppedSessionId: string | null } | { readonly started: false; readonly current: Timer };
 
 /** The timer is running or paused (not idle, not deleted). */
 export function isActive(timer: Timer | undefined | null): timer is Timer {
@@ -171,7 +169,9 @@ export class ReadingTimer {
       ...fromTimer,
       format: book?.format ?? null,
       fromPosition: previous?.toPosition ?? timer.startPosition ?? null,
-      ...(tooLong ? { endedAt: new Date(started + MAX_SESSION_MS).toISOString(), activeMinutes: Math.min(fromTimer.activeMinutes ?? 0, MAX_SESSION_HOURS * 60) } : {}),
+      ...(tooLong
+        ? { endedAt: new Date(started + MAX_SESSION_MS).toISOString(), activeMinutes: Math.min(fromTimer.activeMinutes ?? 0, MAX_SESSION_HOURS * 60) }
+        : {}),
       deleted: false,
     };
     return { collection: 'sessions', rowId, patch: session };

@@ -101,7 +101,13 @@ describe('TimerReminders', () => {
     await reminders.setNotify(true);
     const bookId = await store.create('books', { title: 'Small Rain' });
     await store.write('timers', TIMER_ROW_ID, {
-      state: 'running', bookId, startedAt: new Date(clock.now()).toISOString(), pausedMs: 0, deviceId: 'the-laptop', targetMinutes: 5, deleted: false,
+      state: 'running',
+      bookId,
+      startedAt: new Date(clock.now()).toISOString(),
+      pausedMs: 0,
+      deviceId: 'the-laptop',
+      targetMinutes: 5,
+      deleted: false,
     });
     await until(() => timer.active() !== null);
     TestBed.tick();

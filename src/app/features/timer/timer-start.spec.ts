@@ -49,7 +49,8 @@ describe('Starting the timer from a start button', () => {
     return fixture;
   }
   const row = async () => (await store.get('timers', TIMER_ROW_ID)) as Timer | undefined;
-  const dialogButton = (name: string) => Array.from(document.querySelectorAll<HTMLButtonElement>('ll-confirm-dialog button')).find((b) => b.textContent!.trim() === name);
+  const dialogButton = (name: string) =>
+    Array.from(document.querySelectorAll<HTMLButtonElement>('ll-confirm-dialog button')).find((b) => b.textContent!.trim() === name);
 
   it('names the book on the compact button, starts the timer and opens the timer page', async () => {
     const bookId = await store.create('books', { title: 'Small Rain' });

@@ -23,7 +23,9 @@ export class Journal1765065600000 implements MigrationInterface {
         ADD COLUMN preordered boolean`);
     await queryRunner.query(`CREATE TABLE series (name text, planned_count integer, review text, rating double precision, ${SYNCED_ROW_COLUMNS})`);
     await queryRunner.query('CREATE INDEX series_user_seq_idx ON series (user_id, seq) WHERE seq IS NOT NULL');
-    await queryRunner.query(`CREATE TABLE quotes (book_id uuid, text text, page integer, ebook_location text, audio_seconds integer, chapter text, note text, tags text[], label_ids text[], favourite boolean, captured_at text, ${SYNCED_ROW_COLUMNS})`);
+    await queryRunner.query(
+      `CREATE TABLE quotes (book_id uuid, text text, page integer, ebook_location text, audio_seconds integer, chapter text, note text, tags text[], label_ids text[], favourite boolean, captured_at text, ${SYNCED_ROW_COLUMNS})`,
+    );
     await queryRunner.query('CREATE INDEX quotes_user_seq_idx ON quotes (user_id, seq) WHERE seq IS NOT NULL');
     await queryRunner.query(`CREATE TABLE notebooks (title text, book_id uuid, ${SYNCED_ROW_COLUMNS})`);
     await queryRunner.query('CREATE INDEX notebooks_user_seq_idx ON notebooks (user_id, seq) WHERE seq IS NOT NULL');

@@ -7,8 +7,22 @@ import type { MigrationInterface, QueryRunner } from 'typeorm';
  * clock. The tables and fields are spelled out: a migration must keep meaning what it meant.
  */
 const TABLES = [
-  'books', 'book_status_changes', 'readings', 'series', 'quotes', 'notebooks', 'notebook_pages', 'page_templates',
-  'favourites', 'month_picks', 'labels', 'sessions', 'timers', 'year_plans', 'month_plans', 'challenges',
+  'books',
+  'book_status_changes',
+  'readings',
+  'series',
+  'quotes',
+  'notebooks',
+  'notebook_pages',
+  'page_templates',
+  'favourites',
+  'month_picks',
+  'labels',
+  'sessions',
+  'timers',
+  'year_plans',
+  'month_plans',
+  'challenges',
 ];
 export const SET_FIELDS: readonly [table: string, field: string, column: string][] = [
   ['books', 'genres', 'genres'],

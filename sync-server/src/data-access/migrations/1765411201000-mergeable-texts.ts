@@ -57,10 +57,13 @@ export class MergeableTexts1765411201000 implements MigrationInterface {
       );
       for (const row of rows) {
         const state = initialTextState(textDocName(collection, row.id, field), row.text);
-        await queryRunner.query(
-          `INSERT INTO text_states (user_id, collection, row_id, field, state, compacted_at) VALUES ($1, $2, $3, $4, $5, now())`,
-          [row.user_id, collection, row.id, field, Buffer.from(state)],
-        );
+        await queryRunner.query(`INSERT INTO text_states (user_id, collection, row_id, field, state, compacted_at) VALUES ($1, $2, $3, $4, $5, now())`, [
+          row.user_id,
+          collection,
+          row.id,
+          field,
+          Buffer.from(state),
+        ]);
       }
     }
   }

@@ -5,7 +5,8 @@ export interface Extent {
 }
 
 /** A pagination statement: sequences of roman, arabic or [bracketed] numbers before "pages". */
-const PAGINATION = /(?<![A-Za-z])((?:(?:ca\.|approximately)\s*)?(?:\[?\d+\]?|[ivxlcdm]+)(?:\s*,\s*(?:\[?\d+\]?|[ivxlcdm]+))*)\s*(?:unnumbered\s+)?(?:pages?\b|p\.|p\b|leaves\b|leaf\b)/i;
+const PAGINATION =
+  /(?<![A-Za-z])((?:(?:ca\.|approximately)\s*)?(?:\[?\d+\]?|[ivxlcdm]+)(?:\s*,\s*(?:\[?\d+\]?|[ivxlcdm]+))*)\s*(?:unnumbered\s+)?(?:pages?\b|p\.|p\b|leaves\b|leaf\b)/i;
 const HOURS = /(\d+(?:\.\d+)?)\s*(?:hr|hrs|hours?|h)\b/i;
 const MINUTES = /(\d+)\s*(?:min|mins|minutes?)\b/i;
 

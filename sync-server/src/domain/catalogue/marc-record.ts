@@ -43,7 +43,8 @@ export function createXmlParser(): XMLParser {
 
 type XmlNode = Record<string, unknown>;
 
-const asNodes = (value: unknown): XmlNode[] => (Array.isArray(value) ? value : value == null ? [] : [value]).map((item) => (typeof item === 'object' && item ? (item as XmlNode) : { '#text': item }));
+const asNodes = (value: unknown): XmlNode[] =>
+  (Array.isArray(value) ? value : value == null ? [] : [value]).map((item) => (typeof item === 'object' && item ? (item as XmlNode) : { '#text': item }));
 /** Control characters and lone surrogates (a character reference can smuggle them in): PostgreSQL refuses NUL. */
 const UNSTORABLE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
 

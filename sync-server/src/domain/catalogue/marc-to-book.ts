@@ -95,7 +95,10 @@ export function marcToBook(record: MarcRecord, lookedUp?: string): CatalogueBook
   const isbns = isbnsOf(record);
   const format = formatOf(record);
   const extent = parseExtent(subfieldValues(record, '300', 'a').join(' '));
-  const playingTime = subfieldValues(record, '306', 'a').map(playingTimeMinutes).find((minutes) => minutes !== null) ?? null;
+  const playingTime =
+    subfieldValues(record, '306', 'a')
+      .map(playingTimeMinutes)
+      .find((minutes) => minutes !== null) ?? null;
   const subjects = [...subfieldValues(record, '650', 'a'), ...subfieldValues(record, '655', 'a')].map((value) => withoutIsbdEnding(value)).filter(Boolean);
   const summary = fields(record, '520')[0];
   return {

@@ -61,7 +61,11 @@ export class SruProvider implements CatalogueProvider {
     const result = readSruResponse(xml);
     if (result.records.length === 0 && result.diagnostics.length > 0) {
       const first = result.diagnostics[0]!;
-      throw new CatalogueError('diagnostic', `The catalogue could not run the search: ${first.message || first.uri}${first.details ? ` (${first.details})` : ''}`, first.uri);
+      throw new CatalogueError(
+        'diagnostic',
+        `The catalogue could not run the search: ${first.message || first.uri}${first.details ? ` (${first.details})` : ''}`,
+        first.uri,
+      );
     }
     return result.records;
   }

@@ -1,6 +1,5 @@
 /** The text of the snackbar on screen, if any (its message only, not its button). */
-export const snackBarText = (): string | null =>
-  document.querySelector('.mat-mdc-simple-snack-bar .mat-mdc-snack-bar-label')?.textContent?.trim() ?? null;
+export const snackBarText = (): string | null => document.querySelector('.mat-mdc-simple-snack-bar .mat-mdc-snack-bar-label')?.textContent?.trim() ?? null;
 
 /** Makes `(display-mode: standalone)` match, as it does when Lamplight runs installed. Call in a spec. */
 export function runAsInstalled(): void {

@@ -29,7 +29,14 @@ describe('OverwrittenNote', () => {
   it('shows which edit another device overwrote: the field, what was written here, what it reads now, and the device', async () => {
     const db = TestBed.inject(LocalJournal).db()!;
     const rowId = crypto.randomUUID();
-    const change = { id: crypto.randomUUID(), collection: 'books', rowId, field: 'pageCount', value: 312, hlc: formatHlc({ wall: Date.now(), counter: 0, node: 'me' }) };
+    const change = {
+      id: crypto.randomUUID(),
+      collection: 'books',
+      rowId,
+      field: 'pageCount',
+      value: 312,
+      hlc: formatHlc({ wall: Date.now(), counter: 0, node: 'me' }),
+    };
     await rememberOverwritten(db, [change], [{ id: change.id, by: formatHlc({ wall: Date.now() + 5, counter: 0, node: 'laptop-4f2a9c' }) }]);
 
     const fixture = TestBed.createComponent(OverwrittenNote);

@@ -74,7 +74,10 @@ describe('SyncStatus', () => {
 
   /** Waits until the status reads `text`, then checks it as text and as the accessible name. */
   async function shows(text: string): Promise<void> {
-    await settles((current) => current === text, () => `the status reads "${text}" (it reads "${label()}")`);
+    await settles(
+      (current) => current === text,
+      () => `the status reads "${text}" (it reads "${label()}")`,
+    );
     expect(label()).toBe(text);
     expect(button().getAttribute('aria-label')).toBe(`Sync status: ${text}`);
     expect(button().hasAttribute('aria-labelledby')).toBeFalse();
@@ -104,7 +107,12 @@ describe('SyncStatus', () => {
   const waiting = [
     { what: 'one', fields: { title: 'The Tin Heron' }, label: '1 change waiting', menu: '1 change is waiting to reach your other devices.' },
     // title, status and the deleted tombstone
-    { what: 'several', fields: { title: 'Under the Marram Grass', status: 'tbr', deleted: false }, label: '3 changes waiting', menu: '3 changes are waiting to reach your other devices.' },
+    {
+      what: 'several',
+      fields: { title: 'Under the Marram Grass', status: 'tbr', deleted: false },
+      label: '3 changes waiting',
+      menu: '3 changes are waiting to reach your other devices.',
+    },
   ] as const;
   for (const { what, fields, label: text, menu } of waiting) {
     it(`with changes not yet confirmed, says how many are waiting (${what})`, async () => {

@@ -31,9 +31,7 @@ export class ForgotPassword {
 
   protected async requestLink(): Promise<void> {
     await this.submission.submit(this.form, async () => {
-      const answer = await firstValueFrom(
-        this.http.post<{ message: string }>('/api/auth/password-reset/request', this.form.getRawValue()),
-      );
+      const answer = await firstValueFrom(this.http.post<{ message: string }>('/api/auth/password-reset/request', this.form.getRawValue()));
       this.sent.set(answer.message);
     });
   }

@@ -34,10 +34,7 @@ export class Register {
     displayName: this.displayName,
     email: this.email,
     // The policy also refuses a password made of the reader's own name or address.
-    password: this.fb.control('', [
-      Validators.required,
-      passwordPolicy(() => ({ email: this.email.value, displayName: this.displayName.value })),
-    ]),
+    password: this.fb.control('', [Validators.required, passwordPolicy(() => ({ email: this.email.value, displayName: this.displayName.value }))]),
   });
   protected readonly submission = new FormSubmission();
   protected readonly minLength = PASSWORD_MIN_LENGTH;

@@ -25,8 +25,14 @@ import { OpenFillIn } from '../open-fill-in';
     <p class="message" role="status">{{ message() }}</p>
   `,
   styles: `
-    :host { display: block; }
-    .message { margin: 0.25rem 0 0; min-height: 1.25rem; color: var(--mat-sys-on-surface-variant); }
+    :host {
+      display: block;
+    }
+    .message {
+      margin: 0.25rem 0 0;
+      min-height: 1.25rem;
+      color: var(--mat-sys-on-surface-variant);
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

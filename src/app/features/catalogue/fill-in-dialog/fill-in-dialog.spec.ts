@@ -33,7 +33,9 @@ async function settle(): Promise<void> {
 }
 const surface = () => document.querySelector<HTMLElement>('ll-fill-in-dialog')!;
 const box = (label: string) =>
-  Array.from(surface().querySelectorAll<HTMLInputElement>('input[type="checkbox"]')).find((input) => input.closest('mat-checkbox')!.textContent!.trim().startsWith(`${label}:`))!;
+  Array.from(surface().querySelectorAll<HTMLInputElement>('input[type="checkbox"]')).find((input) =>
+    input.closest('mat-checkbox')!.textContent!.trim().startsWith(`${label}:`),
+  )!;
 const button = (text: string) => Array.from(surface().querySelectorAll<HTMLButtonElement>('button')).find((b) => b.textContent!.trim() === text)!;
 
 describe('FillInDialog', () => {

@@ -50,7 +50,13 @@ export class FillInDialog {
 
   protected pick(index: number): void {
     this.picked.set(index);
-    this.taken.set(new Set(this.choices().filter((choice) => !choice.replaces).map((choice) => choice.field)));
+    this.taken.set(
+      new Set(
+        this.choices()
+          .filter((choice) => !choice.replaces)
+          .map((choice) => choice.field),
+      ),
+    );
   }
 
   protected toggle(field: FillableField, checked: boolean): void {

@@ -65,7 +65,9 @@ describe('ChallengeEditor', () => {
     radio('prompts').click();
     await until(fixture, () => element().querySelector('.prompt input'), 'the prompts');
     type(element().querySelector<HTMLInputElement>('.prompt input')!, 'A book set at sea');
-    Array.from(element().querySelectorAll<HTMLButtonElement>('button')).find((button) => textOf(button) === 'Add a prompt')!.click();
+    Array.from(element().querySelectorAll<HTMLButtonElement>('button'))
+      .find((button) => textOf(button) === 'Add a prompt')!
+      .click();
     await fixture.whenStable();
     type(element().querySelectorAll<HTMLInputElement>('.prompt input')[1], 'A debut');
     await save();

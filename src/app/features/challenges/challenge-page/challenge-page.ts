@@ -128,9 +128,7 @@ export class ChallengePage {
     return progress?.kind === 'prompts' ? progress.progress.prompts : [];
   });
   /** Every book of the library, by title, to answer a prompt with. */
-  protected readonly libraryBooks = computed(() =>
-    [...(this.record.rows()?.books ?? [])].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')),
-  );
+  protected readonly libraryBooks = computed(() => [...(this.record.rows()?.books ?? [])].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')));
   protected readonly newPromptForm = inject(FormBuilder).nonNullable.group({ text: '' });
   protected readonly renaming = signal(false);
   protected readonly renameForm = inject(FormBuilder).nonNullable.group({

@@ -71,7 +71,13 @@ describe('FavouritesPage', () => {
         'Quote “Every orchard keeps a winter in its roots.” I think of it every March Remove',
       ]),
     );
-    const saved = (await stored()).map((f) => ({ kind: f.kind, bookId: f.bookId ?? null, quoteId: f.quoteId ?? null, authorName: f.authorName ?? null, why: f.why }));
+    const saved = (await stored()).map((f) => ({
+      kind: f.kind,
+      bookId: f.bookId ?? null,
+      quoteId: f.quoteId ?? null,
+      authorName: f.authorName ?? null,
+      why: f.why,
+    }));
     expect(saved).toEqual(
       jasmine.arrayWithExactContents([
         { kind: 'book', bookId: ORCHARD, quoteId: null, authorName: null, why: 'It made the winter shorter' },

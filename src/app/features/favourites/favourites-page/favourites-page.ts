@@ -39,9 +39,7 @@ export class FavouritesPage {
   protected readonly quotes = computed(() => this.data().quotes);
   private readonly bookById = computed(() => new Map(this.data().books.map((b) => [b.id, b])));
   private readonly quoteById = computed(() => new Map(this.data().quotes.map((q) => [q.id, q])));
-  protected readonly favourites = computed(() =>
-    this.data().favourites.map((favourite) => ({ favourite, subject: this.subject(favourite) })),
-  );
+  protected readonly favourites = computed(() => this.data().favourites.map((favourite) => ({ favourite, subject: this.subject(favourite) })));
 
   /** The reader's local date (their time zone, the app's clock). */
   private readonly today = readerToday();

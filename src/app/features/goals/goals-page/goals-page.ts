@@ -36,17 +36,7 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 10_000, pages: 
  */
 @Component({
   selector: 'll-goals-page',
-  imports: [
-    DatePipe,
-    ReactiveFormsModule,
-    RouterLink,
-    MatButtonModule,
-    MatCheckboxModule,
-    MatFormFieldModule,
-    MatIconModule,
-    MatInputModule,
-    MatProgressBarModule,
-  ],
+  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule],
   templateUrl: './goals-page.html',
   styleUrl: './goals-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -24,9 +24,23 @@ describe('MonthPage', () => {
     // Invented sessions; local times by the IANA tz database (Los Angeles is UTC−7 in June 2026).
     const session = (fields: Record<string, unknown>) => store.create('sessions', { bookId: BOOK.harrow, ...fields });
     // 10:00–11:00 PDT on 20 June: 60 minutes, pages 10 → 40 = 30 pages.
-    await session({ format: 'print', startedAt: '2026-06-20T17:00:00.000Z', endedAt: '2026-06-20T18:00:00.000Z', activeMinutes: 60, fromPosition: 10, toPosition: 40 });
+    await session({
+      format: 'print',
+      startedAt: '2026-06-20T17:00:00.000Z',
+      endedAt: '2026-06-20T18:00:00.000Z',
+      activeMinutes: 60,
+      fromPosition: 10,
+      toPosition: 40,
+    });
     // 20:30–21:00 PDT on 20 June (already 21 June in UTC): 20 minutes of an ebook, no pages.
-    await session({ format: 'ebook', startedAt: '2026-06-21T03:30:00.000Z', endedAt: '2026-06-21T04:00:00.000Z', activeMinutes: 20, fromPosition: 5, toPosition: 9 });
+    await session({
+      format: 'ebook',
+      startedAt: '2026-06-21T03:30:00.000Z',
+      endedAt: '2026-06-21T04:00:00.000Z',
+      activeMinutes: 20,
+      fromPosition: 5,
+      toPosition: 9,
+    });
     // 09:00–09:15 PDT on 2 June: 15 minutes.
     await session({ format: 'ebook', startedAt: '2026-06-02T16:00:00.000Z', endedAt: '2026-06-02T16:15:00.000Z', activeMinutes: 15 });
   });
@@ -74,10 +88,7 @@ describe('MonthPage', () => {
     type(field(element(), 'Minutes this month'), '600');
     element().querySelector<HTMLButtonElement>('.targets-form button[type="submit"]')!.click();
     await until(fixture, () => element().querySelectorAll('.progress li').length === 2, 'the progress');
-    expect(Array.from(element().querySelectorAll('.progress li')).map(textOf)).toEqual([
-      'Books 1 of 2 books · 1 to go',
-      'Minutes 95 of 600 minutes · 505 to go',
-    ]);
+    expect(Array.from(element().querySelectorAll('.progress li')).map(textOf)).toEqual(['Books 1 of 2 books · 1 to go', 'Minutes 95 of 600 minutes · 505 to go']);
     expect(await plan()).toEqual(jasmine.objectContaining({ month: '2026-06', booksTarget: 2, minutesTarget: 600, deleted: false }));
     expect((await plan())?.pagesTarget).toBeUndefined();
   });

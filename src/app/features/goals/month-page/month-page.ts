@@ -32,17 +32,7 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 1_000, pages: 1
  */
 @Component({
   selector: 'll-month-page',
-  imports: [
-    DatePipe,
-    ReactiveFormsModule,
-    RouterLink,
-    MatButtonModule,
-    MatFormFieldModule,
-    MatIconModule,
-    MatInputModule,
-    MatProgressBarModule,
-    MonthHeatmap,
-  ],
+  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MonthHeatmap],
   templateUrl: './month-page.html',
   styleUrl: './month-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -12,7 +12,11 @@ describe('chartConfig', () => {
   });
 
   it('gives each slice of a ring its own colour, with no axes', () => {
-    const config = chartConfig({ kind: 'doughnut', labels: ['Print', 'Ebook', 'Audiobook'], series: [{ label: 'Books', values: [1, 2, 3] }], summary: '' }, colours, false);
+    const config = chartConfig(
+      { kind: 'doughnut', labels: ['Print', 'Ebook', 'Audiobook'], series: [{ label: 'Books', values: [1, 2, 3] }], summary: '' },
+      colours,
+      false,
+    );
     expect(config.data.datasets[0].backgroundColor).toEqual(['rgb(1, 1, 1)', 'rgb(2, 2, 2)', 'rgb(1, 1, 1)']);
     expect(config.options?.scales).toEqual({});
     expect(config.options?.animation).toEqual({ duration: 400 });

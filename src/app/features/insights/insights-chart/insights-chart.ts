@@ -28,7 +28,19 @@ import { chartConfig } from './chart-config';
   // Only the chart.js parts our charts use, registered when the first chart loads (lazily).
   providers: [
     provideCharts({
-      registerables: [BarController, BarElement, LineController, LineElement, PointElement, DoughnutController, ArcElement, CategoryScale, LinearScale, Tooltip, Legend],
+      registerables: [
+        BarController,
+        BarElement,
+        LineController,
+        LineElement,
+        PointElement,
+        DoughnutController,
+        ArcElement,
+        CategoryScale,
+        LinearScale,
+        Tooltip,
+        Legend,
+      ],
       // Canvas text in our own font, as in the rest of the app (styles.scss).
       defaults: { font: { family: "'Atkinson Hyperlegible', system-ui, sans-serif", size: 13 } },
     }),

@@ -49,7 +49,15 @@ describe('InsightsPage', () => {
   });
 
   it('switches the months to minutes', async () => {
-    await store.create('sessions', { bookId: BOOK.harrow, format: 'print', startedAt: '2026-05-04T17:00:00.000Z', endedAt: '2026-05-04T17:40:00.000Z', activeMinutes: 40, fromPosition: 0, toPosition: 30 });
+    await store.create('sessions', {
+      bookId: BOOK.harrow,
+      format: 'print',
+      startedAt: '2026-05-04T17:00:00.000Z',
+      endedAt: '2026-05-04T17:40:00.000Z',
+      activeMinutes: 40,
+      fromPosition: 0,
+      toPosition: 30,
+    });
     await open();
     const minutes = Array.from(element().querySelectorAll<HTMLButtonElement>('mat-button-toggle button')).find((button) => textOf(button) === 'Minutes')!;
     minutes.click();

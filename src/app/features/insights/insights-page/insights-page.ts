@@ -51,8 +51,26 @@ export class InsightsPage {
   });
   protected readonly formats = computed(() => formatsChart(formatSplit(this.data.books()), this.shownYear() ?? 0));
   protected readonly ratings = computed(() => ratingsChart(ratingSpread(this.data.books().map((book) => book.rating)), this.shownYear() ?? 0));
-  protected readonly genres = computed(() => termsChart(topTerms(this.data.books().map((book) => book.genres), TOP_TERMS), 'genres', this.shownYear() ?? 0));
-  protected readonly tags = computed(() => termsChart(topTerms(this.data.books().map((book) => book.tags), TOP_TERMS), 'tags', this.shownYear() ?? 0));
+  protected readonly genres = computed(() =>
+    termsChart(
+      topTerms(
+        this.data.books().map((book) => book.genres),
+        TOP_TERMS,
+      ),
+      'genres',
+      this.shownYear() ?? 0,
+    ),
+  );
+  protected readonly tags = computed(() =>
+    termsChart(
+      topTerms(
+        this.data.books().map((book) => book.tags),
+        TOP_TERMS,
+      ),
+      'tags',
+      this.shownYear() ?? 0,
+    ),
+  );
   protected readonly pace = computed(() => {
     const year = this.shownYear() ?? 0;
     return paceChart(monthlyPace(this.data.record.rows()?.sessions ?? [], year, this.timeZone), year);

@@ -9,7 +9,9 @@ describe('yearHeatmapLayout', () => {
       for (const cell of cells) {
         const date = new Date(`${cell.day}T12:00:00`);
         expect(cell.row).withContext(cell.day).toBe(getISODay(date));
-        expect(cell.column).withContext(cell.day).toBe(differenceInCalendarWeeks(date, new Date(`${year}-01-01T12:00:00`), { weekStartsOn: 1 }) + 1);
+        expect(cell.column)
+          .withContext(cell.day)
+          .toBe(differenceInCalendarWeeks(date, new Date(`${year}-01-01T12:00:00`), { weekStartsOn: 1 }) + 1);
       }
     }
   });

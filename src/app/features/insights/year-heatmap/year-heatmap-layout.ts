@@ -2,7 +2,6 @@ import { MONTH_NAMES } from '@shared/calendar/month-names';
 import { yearHeatmap, type HeatmapCell } from '@shared/reading-log/year-heatmap';
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
-
 /** A year of days laid out in week columns, Monday at the top (ISO 8601 weeks start on Monday). */
 export interface YearHeatmapLayout {
   readonly cells: readonly (HeatmapCell & { readonly column: number; readonly row: number })[];
@@ -27,7 +26,10 @@ export function yearHeatmapLayout(log: readonly DailyLogEntry[], year: number): 
   const days = yearHeatmap(log, year);
   const lead = mondayBased(days[0].day);
   const cells = days.map((cell, index) => ({ ...cell, row: ((lead + index) % 7) + 1, column: Math.floor((lead + index) / 7) + 1 }));
-  const months = MONTH_NAMES.map((name, index) => ({ name: name.slice(0, 3), column: cells.find((cell) => Number(cell.day.slice(5, 7)) === index + 1)?.column ?? 1 }));
+  const months = MONTH_NAMES.map((name, index) => ({
+    name: name.slice(0, 3),
+    column: cells.find((cell) => Number(cell.day.slice(5, 7)) === index + 1)?.column ?? 1,
+  }));
   const totals = MONTH_NAMES.map((name, index) => {
     const inMonth = cells.filter((cell) => Number(cell.day.slice(5, 7)) === index + 1);
     return { name, days: inMonth.filter((cell) => cell.minutes > 0).length, minutes: inMonth.reduce((sum, cell) => sum + cell.minutes, 0) };

@@ -21,8 +21,7 @@ describe('LabelsPage', () => {
   const page = () => fixture.nativeElement as HTMLElement;
   const names = () => [...page().querySelectorAll('ul.labels .chip')].map((chip) => textOf(chip));
   const chip = (name: string) => [...page().querySelectorAll<HTMLElement>('ul.labels .chip')].find((c) => textOf(c) === name);
-  const button = (name: string) =>
-    [...page().querySelectorAll<HTMLButtonElement>('button')].find((b) => (b.getAttribute('aria-label') ?? textOf(b)) === name)!;
+  const button = (name: string) => [...page().querySelectorAll<HTMLButtonElement>('button')].find((b) => (b.getAttribute('aria-label') ?? textOf(b)) === name)!;
   const bookChips = () => [...(chips.nativeElement as HTMLElement).querySelectorAll('li.chip')].map((c) => textOf(c));
   const message = () => textOf(field(page(), 'Label name').closest('mat-form-field')?.querySelector('mat-error'));
   /** The book as the library filters it by one label. */
@@ -93,7 +92,9 @@ describe('LabelsPage', () => {
 
     expect(names()).not.toContain('Comfort read');
     expect(names().length).toBe(STARTER_LABELS.length);
-    expect(await journal.store.get('labels', comfort.id)).toEqual(jasmine.objectContaining({ name: 'Cosy read', colour: comfort.colour, icon: comfort.icon, deleted: false }));
+    expect(await journal.store.get('labels', comfort.id)).toEqual(
+      jasmine.objectContaining({ name: 'Cosy read', colour: comfort.colour, icon: comfort.icon, deleted: false }),
+    );
     await until(() => bookChips().includes('Cosy read'), chips);
     expect(bookChips()).toEqual(['Cosy read', 'Page-turner']);
     expect(await filteredBy(comfort.id)).toEqual(['The Long Winter Ledger']);

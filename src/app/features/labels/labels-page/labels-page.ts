@@ -13,11 +13,26 @@ import { LabelDirectory, type LabelView } from '../../../core/read-model/label-d
 
 /** Words for our colours and icons, so choices read well to everyone. */
 const COLOUR_NAMES: Record<NonNullable<Label['colour']>, string> = {
-  amber: 'Amber', rose: 'Rose', sage: 'Sage', teal: 'Teal', sky: 'Sky', plum: 'Plum', slate: 'Slate', sand: 'Sand',
+  amber: 'Amber',
+  rose: 'Rose',
+  sage: 'Sage',
+  teal: 'Teal',
+  sky: 'Sky',
+  plum: 'Plum',
+  slate: 'Slate',
+  sand: 'Sand',
 };
 const ICON_NAMES: Record<NonNullable<Label['icon']>, string> = {
-  star: 'Star', repeat: 'Again', group: 'Together', favorite: 'Heart', bolt: 'Spark', spa: 'Leaf',
-  local_cafe: 'Cup', flag: 'Flag', auto_stories: 'Open book', bookmark: 'Bookmark',
+  star: 'Star',
+  repeat: 'Again',
+  group: 'Together',
+  favorite: 'Heart',
+  bolt: 'Spark',
+  spa: 'Leaf',
+  local_cafe: 'Cup',
+  flag: 'Flag',
+  auto_stories: 'Open book',
+  bookmark: 'Bookmark',
 };
 
 /** The reader's labels: our starter set and their own, to rename, recolour, add or remove. */

@@ -257,7 +257,9 @@ describe('BookEditor', () => {
       fill('Where to get it', 'The shop on Mill Lane');
       fill('Price note', 'Wait for the paperback');
       const saved = await saveNew();
-      expect(saved).toEqual(jasmine.objectContaining({ copy: 'wishlist', wishPriority: 'high', wishWhere: 'The shop on Mill Lane', wishPriceNote: 'Wait for the paperback' }));
+      expect(saved).toEqual(
+        jasmine.objectContaining({ copy: 'wishlist', wishPriority: 'high', wishWhere: 'The shop on Mill Lane', wishPriceNote: 'Wait for the paperback' }),
+      );
     });
 
     it('does not let a field it has hidden stop the save, nor save what was typed there', async () => {
@@ -276,7 +278,14 @@ describe('BookEditor', () => {
     });
 
     it('keeps what an edit has hidden as it was stored', async () => {
-      const bookId = await journal.store.create('books', { title: 'Glass Harbour', format: 'print', pageCount: 320, status: 'dnf', dnfProgress: 80, dnfUnit: 'page' });
+      const bookId = await journal.store.create('books', {
+        title: 'Glass Harbour',
+        format: 'print',
+        pageCount: 320,
+        status: 'dnf',
+        dnfProgress: 80,
+        dnfUnit: 'page',
+      });
       await router.navigateByUrl(`/library/${bookId}/edit`);
       await untilTicked(() => titleInput()?.value === 'Glass Harbour' && legends().includes('Did not finish'), 'the book in the form');
       fill('Got as far as', '90');
@@ -284,7 +293,9 @@ describe('BookEditor', () => {
       pick('Format', 'audiobook');
       named('button', 'Save').click();
       await untilTicked(() => router.url === `/library/${bookId}`, 'the book page');
-      expect(await journal.store.get('books', bookId)).toEqual(jasmine.objectContaining({ status: 'reading', format: 'audiobook', pageCount: 320, dnfProgress: 80 }));
+      expect(await journal.store.get('books', bookId)).toEqual(
+        jasmine.objectContaining({ status: 'reading', format: 'audiobook', pageCount: 320, dnfProgress: 80 }),
+      );
     });
 
     it('saves an upcoming release date and the pre-order', async () => {

@@ -29,9 +29,7 @@ import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormVal
 const isbnValidator = (control: AbstractControl<string>) =>
   !control.value?.trim() || normalizeIsbn(control.value) ? null : { server: 'Enter a valid ISBN-10 or ISBN-13 (check the digits)' };
 const languageValidator = (control: AbstractControl<string>) =>
-  !control.value?.trim() || /^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/.test(control.value.trim())
-    ? null
-    : { server: 'Use a language tag such as en, fr or pt-BR' };
+  !control.value?.trim() || /^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/.test(control.value.trim()) ? null : { server: 'Use a language tag such as en, fr or pt-BR' };
 const optionalId = (value: string) => value.trim() || null;
 /** Fields shown only where they apply (the DNF and wishlist parts). */
 const DNF_FIELDS = ['dnfProgress', 'dnfUnit', 'dnfOn', 'dnfReason'] as const;
@@ -41,7 +39,20 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 /** Add a book, or edit one. Saves to this device at once; sync takes it from there. */
 @Component({
   selector: 'll-book-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, LabelPicker, IsbnScanButton, CoverPicker, CatalogueFill, CatalogueSearch],
+  imports: [
+    ReactiveFormsModule,
+    RouterLink,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    LabelPicker,
+    IsbnScanButton,
+    CoverPicker,
+    CatalogueFill,
+    CatalogueSearch,
+  ],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -117,7 +128,13 @@ export class BookEditor {
   protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
   private original: BookFormValue = EMPTY_BOOK_FORM;
   /** What the catalogue may fill, as the form holds it now (hidden fields included). */
-  protected readonly fillable = toSignal(this.form.valueChanges.pipe(startWith(null), map(() => this.fillableNow())), { requireSync: true });
+  protected readonly fillable = toSignal(
+    this.form.valueChanges.pipe(
+      startWith(null),
+      map(() => this.fillableNow()),
+    ),
+    { requireSync: true },
+  );
   private readonly catalogueFill = viewChild(CatalogueFill);
   /** An ISBN the catalogue could not be asked about (offline): its book page asks later. */
   protected queuedIsbn: string | null = null;

@@ -107,7 +107,14 @@ const optionalText = (value: string) => (value.trim() === '' ? null : value.trim
 /** A decimal comma ("2,5") reads as a point: the editor's decimal fields accept either. */
 const optionalNumber = (value: string) => (value.trim() === '' ? null : Number(value.trim().replace(',', '.')));
 /** "Nell Ashby, Tomas Reyes" → ['Nell Ashby', 'Tomas Reyes']; repeated names once. */
-const splitList = (value: string) => [...new Set(value.split(/[,\n]/).map((item) => item.trim()).filter(Boolean))];
+const splitList = (value: string) => [
+  ...new Set(
+    value
+      .split(/[,\n]/)
+      .map((item) => item.trim())
+      .filter(Boolean),
+  ),
+];
 
 /** Form values as field values: lists split on commas, blanks as null, ISBN-10 as ISBN-13. */
 export function toFields(value: BookFormValue): PatchOf<typeof books> {
@@ -150,7 +157,7 @@ export function toFields(value: BookFormValue): PatchOf<typeof books> {
 export function changedFields(before: BookFormValue, after: BookFormValue): PatchOf<typeof books> {
   const old = toFields(before);
   const next = toFields(after);
-  return Object.fromEntries(
-    Object.entries(next).filter(([field, value]) => JSON.stringify(value) !== JSON.stringify(old[field as keyof typeof old])),
-  ) as PatchOf<typeof books>;
+  return Object.fromEntries(Object.entries(next).filter(([field, value]) => JSON.stringify(value) !== JSON.stringify(old[field as keyof typeof old]))) as PatchOf<
+    typeof books
+  >;
 }

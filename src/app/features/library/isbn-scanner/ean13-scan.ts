@@ -41,10 +41,7 @@ function nativeScan(video: HTMLVideoElement, onValue: (rawValue: string) => void
 }
 
 async function zxingScan(video: HTMLVideoElement, onValue: (rawValue: string) => void): Promise<Ean13Scan> {
-  const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([
-    import('@zxing/browser'),
-    import('@zxing/library'),
-  ]);
+  const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([import('@zxing/browser'), import('@zxing/library')]);
   // Only EAN-13: fewer formats to try per frame, and no false reads from other symbologies.
   const hints = new Map([[DecodeHintType.POSSIBLE_FORMATS, [BarcodeFormat.EAN_13]]]);
   const reader = new BrowserMultiFormatReader(hints, { delayBetweenScanAttempts: SCAN_INTERVAL_MS });

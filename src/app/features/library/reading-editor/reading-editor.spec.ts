@@ -41,7 +41,12 @@ describe('ReadingEditor (review and takeaways as mergeable texts)', () => {
     const row = (await journal.db.rows('readings').get(readingId))!;
     const remote = loadTextDoc([localTextState(name, { state: textStatesOf(row)['review'], text: row['review'] as string })]);
     remote.getText(name).insert(13, '\nRead it on the train.');
-    const pulled = { field: 'review', value: 'A slow start.\nRead it on the train.', hlc: '999999999999999:00000:other', state: encodeTextBytes(Y.encodeStateAsUpdate(remote)) };
+    const pulled = {
+      field: 'review',
+      value: 'A slow start.\nRead it on the train.',
+      hlc: '999999999999999:00000:other',
+      state: encodeTextBytes(Y.encodeStateAsUpdate(remote)),
+    };
     await journal.db.rows('readings').put(applyPulledTexts('readings', row, [pulled]));
     await until(() => area.value === 'A slow start, then wonderful.\nRead it on the train.', fixture);
 

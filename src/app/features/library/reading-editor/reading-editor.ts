@@ -15,14 +15,7 @@ import { MergeableTextarea, type PendingEdits } from '../../../core/text/mergeab
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../../ui/field-errors';
 import { RECOMMEND_LABELS } from '../../../ui/book-labels';
-import {
-  changedReadingFields,
-  EMPTY_READING_FORM,
-  readingDatesValidator,
-  toReadingFields,
-  toReadingForm,
-  type ReadingFormValue,
-} from './reading-form-model';
+import { changedReadingFields, EMPTY_READING_FORM, readingDatesValidator, toReadingFields, toReadingForm, type ReadingFormValue } from './reading-form-model';
 
 /** One reading of a book: its dates and the review. A re-read is simply another reading. */
 @Component({
@@ -99,11 +92,15 @@ export class ReadingEditor {
     const existing = this.readingId();
     const readingId = this.rowId();
     const value = this.form.getRawValue();
-    const { review: _review, takeaways: _takeaways, ...patch }: Record<string, unknown> = existing
-      ? changedReadingFields(this.original, value)
-      : { ...toReadingFields(value), bookId, deleted: false };
+    const {
+      review: _review,
+      takeaways: _takeaways,
+      ...patch
+    }: Record<string, unknown> = existing ? changedReadingFields(this.original, value) : { ...toReadingFields(value), bookId, deleted: false };
     // The review and takeaways are saved as the edits typed here, which merge with other devices'.
-    const typed = this.texts().map((text) => [text, text.pendingEdits()] as const).filter((entry): entry is [MergeableTextarea, PendingEdits] => entry[1] !== null);
+    const typed = this.texts()
+      .map((text) => [text, text.pendingEdits()] as const)
+      .filter((entry): entry is [MergeableTextarea, PendingEdits] => entry[1] !== null);
     for (const [text, edits] of typed) patch[text.llMergeableText().field] = edits.value;
     const writes: RowWrite[] = [{ collection: 'readings', rowId: readingId, patch }];
     if (patch['rating'] !== undefined && (await this.isLatest(bookId, readingId, value.startedOn))) {

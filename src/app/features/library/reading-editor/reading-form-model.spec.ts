@@ -4,9 +4,7 @@ import { changedReadingFields, EMPTY_READING_FORM, readingDatesValidator, toRead
 
 describe('reading form model', () => {
   const check = (startedOn: string, finishedOn: string) =>
-    readingDatesValidator(() => '2026-12-01')(
-      new FormGroup({ startedOn: new FormControl(startedOn), finishedOn: new FormControl(finishedOn) }) as never,
-    );
+    readingDatesValidator(() => '2026-12-01')(new FormGroup({ startedOn: new FormControl(startedOn), finishedOn: new FormControl(finishedOn) }) as never);
 
   it('refuses a finish before the start and a finish in the future; ISO 8601 dates order as text', () => {
     expect(check('2026-03-10', '2026-03-09')).toEqual({ dates: 'It finished before it started: check the dates' });

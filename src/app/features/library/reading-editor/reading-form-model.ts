@@ -57,9 +57,7 @@ export function toReadingFields(value: ReadingFormValue): PatchOf<typeof reading
 /** Only the fields the reader changed, so other devices' edits to the same reading survive. */
 export function changedReadingFields(before: ReadingFormValue, after: ReadingFormValue): PatchOf<typeof readings> {
   const old = toReadingFields(before);
-  return Object.fromEntries(
-    Object.entries(toReadingFields(after)).filter(([field, value]) => value !== old[field as keyof typeof old]),
-  ) as PatchOf<typeof readings>;
+  return Object.fromEntries(Object.entries(toReadingFields(after)).filter(([field, value]) => value !== old[field as keyof typeof old])) as PatchOf<typeof readings>;
 }
 
 /**

@@ -55,9 +55,7 @@ describe('NotebooksPage', () => {
     open();
     await until(() => element.querySelectorAll('li.notebook').length === 2, fixture);
 
-    const items = Array.from(element.querySelectorAll('li.notebook')).map((item) =>
-      Array.from(item.querySelectorAll('.title, .book, .facts')).map(textOf),
-    );
+    const items = Array.from(element.querySelectorAll('li.notebook')).map((item) => Array.from(item.querySelectorAll('.title, .book, .facts')).map(textOf));
     // The one edited last comes first.
     expect(items[0]!.slice(0, 2)).toEqual(['Tide tables', 'On Atlas of Tides']);
     expect(items[0]![2]).toMatch(/^2 pages · edited \w{3} \d{1,2}, \d{4}/);

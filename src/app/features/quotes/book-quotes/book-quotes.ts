@@ -30,8 +30,12 @@ async function bookQuotes(db: JournalDb, bookId: string): Promise<{ book: Book |
     </section>
   `,
   styles: `
-    h2 { margin-top: 24px; }
-    .quiet { color: var(--mat-sys-on-surface-variant); }
+    h2 {
+      margin-top: 24px;
+    }
+    .quiet {
+      color: var(--mat-sys-on-surface-variant);
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -64,7 +64,13 @@ describe('QuotesPage', () => {
   it('lists quotes from every book newest first; searches, filters by label and favourite; copies with the source line', async () => {
     const almanac = await store.create('books', { title: 'The Salt Road Almanac', authors: ['Ada Pell'], format: 'print', status: 'reading' });
     const ete = await store.create('books', { title: 'Un été à Noirmoutier', authors: ['Hélène Duclos'], format: 'ebook', status: 'finished' });
-    await store.create('quotes', { bookId: almanac, text: 'Salt keeps what the sea forgets.', page: 42, labelIds: [reRead.id], capturedAt: '2026-03-01T08:00:00.000Z' });
+    await store.create('quotes', {
+      bookId: almanac,
+      text: 'Salt keeps what the sea forgets.',
+      page: 42,
+      labelIds: [reRead.id],
+      capturedAt: '2026-03-01T08:00:00.000Z',
+    });
     await store.create('quotes', { bookId: ete, text: 'La mer monte sans bruit.', ebookLocation: '37%', favourite: true, capturedAt: '2026-03-04T08:00:00.000Z' });
     const gone = await store.create('quotes', { bookId: ete, text: 'Deleted before.', capturedAt: '2026-03-05T08:00:00.000Z' });
     await store.remove('quotes', gone);
@@ -123,7 +129,10 @@ describe('QuotesPage', () => {
     await until(() => page().querySelector('.empty'), 'the quote gone');
     expect((await store.get('quotes', id))?.deleted).toBeTrue();
 
-    const undo = await until(() => Array.from(document.querySelectorAll<HTMLButtonElement>('.mat-mdc-snack-bar-container button')).find((b) => b.textContent?.includes('Undo')), 'Undo');
+    const undo = await until(
+      () => Array.from(document.querySelectorAll<HTMLButtonElement>('.mat-mdc-snack-bar-container button')).find((b) => b.textContent?.includes('Undo')),
+      'Undo',
+    );
     undo.click();
     await until(() => passages().length === 1, 'the quote back');
     expect((await store.get('quotes', id))?.deleted).toBeFalse();

@@ -51,12 +51,7 @@ describe('BookReading', () => {
     userId = `book-reading-${crypto.randomUUID()}`;
     rememberSession({ user: { ...READER, id: userId } });
     TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideRouter([]),
-        { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
-        { provide: CLOCK, useValue: fixedClock(NOW) },
-      ],
+      providers: [provideHttpClient(), provideRouter([]), { provide: TIME_ZONE, useValue: 'America/Los_Angeles' }, { provide: CLOCK, useValue: fixedClock(NOW) }],
     });
     store = TestBed.inject(JournalStore);
     await db().open();
@@ -133,7 +128,10 @@ describe('BookReading', () => {
     expect(text()).toContain('No sessions yet');
 
     let undo: HTMLButtonElement | undefined;
-    await until(() => (undo = [...document.querySelectorAll<HTMLButtonElement>('.cdk-overlay-container button')].find((b) => b.textContent?.includes('Undo'))), 'Undo');
+    await until(
+      () => (undo = [...document.querySelectorAll<HTMLButtonElement>('.cdk-overlay-container button')].find((b) => b.textContent?.includes('Undo'))),
+      'Undo',
+    );
     undo!.click();
     await until(() => items().length === 1, 'the session to come back');
   });

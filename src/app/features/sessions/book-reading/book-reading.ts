@@ -52,10 +52,7 @@ export class BookReading {
     timeZone: this.timeZone,
   });
 
-  private readonly allSessions = liveQuerySignal(
-    async (db) => ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted),
-    [] as Session[],
-  );
+  private readonly allSessions = liveQuerySignal(async (db) => ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted), [] as Session[]);
   private readonly books = liveQuerySignal(async (db) => (await db.rows('books').toArray()) as Book[], [] as Book[]);
 
   private readonly sessions = computed(() => newestFirst(this.allSessions().filter((s) => s.bookId === this.book().id)));

@@ -19,14 +19,7 @@ import { fieldError, showServerErrors } from '../../../ui/field-errors';
 import { MOOD_LABELS, positionLabels } from '../book-position';
 import { latestPosition } from '../../../core/read-model/reading-sessions';
 import { SessionFollowUp } from '../session-follow-up';
-import {
-  changedSessionFields,
-  EMPTY_SESSION_FORM,
-  readSessionForm,
-  spanMinutes,
-  toSessionForm,
-  type SessionFormValue,
-} from './session-form-model';
+import { changedSessionFields, EMPTY_SESSION_FORM, readSessionForm, spanMinutes, toSessionForm, type SessionFormValue } from './session-form-model';
 
 /** A new session starts as the half hour just gone. */
 const DEFAULT_MINUTES = 30;

@@ -70,11 +70,7 @@ export interface ReadSessionForm {
  * outside 0.5–4×, are problems; whether the session is possible is `sessionProblems`' part.
  * Ebook location and playback speed apply only to their formats and are null otherwise.
  */
-export function readSessionForm(
-  value: SessionFormValue,
-  book: Pick<Book, 'format' | 'pageCount' | 'audioMinutes'>,
-  timeZone: string,
-): ReadSessionForm {
+export function readSessionForm(value: SessionFormValue, book: Pick<Book, 'format' | 'pageCount' | 'audioMinutes'>, timeZone: string): ReadSessionForm {
   const problems: Record<string, string> = {};
   const number = (field: keyof SessionFormValue, raw: string): number | null => {
     const trimmed = raw.trim().replace(',', '.');
@@ -103,7 +99,10 @@ export function readSessionForm(
 
   const end = bookEnd(book);
   const unit = book.format === 'ebook' ? 'percent' : book.format === 'audiobook' ? 'minutes' : 'pages';
-  for (const [field, position] of [['fromPosition', fromPosition], ['toPosition', toPosition]] as const) {
+  for (const [field, position] of [
+    ['fromPosition', fromPosition],
+    ['toPosition', toPosition],
+  ] as const) {
     if (end !== null && position !== null && position > end && !problems[field]) {
       problems[field] = book.format === 'ebook' ? 'Percent goes up to 100' : `The book has ${end} ${unit}`;
     }
@@ -139,9 +138,6 @@ export function readSessionForm(
 export function changedSessionFields(before: SessionFormValue, after: SessionFormValue, fields: SessionFields): Partial<SessionFields> {
   const timesMoved = before.startedAt !== after.startedAt || before.endedAt !== after.endedAt;
   // Blank active minutes are the span, so they change with the times.
-  const changed = (field: keyof SessionFields) =>
-    before[field] !== after[field] || (field === 'activeMinutes' && after.activeMinutes.trim() === '' && timesMoved);
-  return Object.fromEntries(
-    (Object.keys(fields) as (keyof SessionFields)[]).filter(changed).map((field) => [field, fields[field]]),
-  ) as Partial<SessionFields>;
+  const changed = (field: keyof SessionFields) => before[field] !== after[field] || (field === 'activeMinutes' && after.activeMinutes.trim() === '' && timesMoved);
+  return Object.fromEntries((Object.keys(fields) as (keyof SessionFields)[]).filter(changed).map((field) => [field, fields[field]])) as Partial<SessionFields>;
 }

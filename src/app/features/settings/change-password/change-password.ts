@@ -36,10 +36,7 @@ export class ChangePassword {
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
     currentPassword: ['', Validators.required],
-    newPassword: [
-      '',
-      [Validators.required, passwordPolicy(() => ({ email: this.auth.user()?.email, displayName: this.auth.user()?.displayName }))],
-    ],
+    newPassword: ['', [Validators.required, passwordPolicy(() => ({ email: this.auth.user()?.email, displayName: this.auth.user()?.displayName }))]],
   });
   protected readonly message = signal('');
   protected readonly submission = new FormSubmission();

@@ -25,8 +25,7 @@ const text = (element: Element | null | undefined) => element?.textContent?.repl
 const kept = (panel: HTMLElement) => text(panel.querySelector('[role="status"]'));
 const estimate = (panel: HTMLElement) => text([...panel.querySelectorAll('p')].find((p) => text(p)?.startsWith('In use')));
 const caution = (panel: HTMLElement) => text(panel.querySelector('.caution'));
-const askButton = (panel: HTMLElement) =>
-  [...panel.querySelectorAll('button')].find((button) => text(button) === 'Ask the browser to keep it');
+const askButton = (panel: HTMLElement) => [...panel.querySelectorAll('button')].find((button) => text(button) === 'Ask the browser to keep it');
 
 describe('StoragePanel (Settings › This device)', () => {
   it('says the browser keeps the storage, shows the estimate and the caution, and offers no asking', async () => {

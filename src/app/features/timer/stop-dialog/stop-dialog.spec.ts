@@ -59,7 +59,10 @@ describe('StopDialog', () => {
   const headingsSeen: string[] = [];
   const field = (name: string) => document.querySelector<HTMLInputElement & HTMLSelectElement>(`ll-stop-dialog [formcontrolname="${name}"]`);
   const dialogText = () => document.querySelector('ll-stop-dialog')?.textContent?.replace(/\s+/g, ' ') ?? '';
-  const click = (name: string) => Array.from(document.querySelectorAll<HTMLButtonElement>('ll-stop-dialog button')).find((b) => b.textContent!.trim() === name)!.click();
+  const click = (name: string) =>
+    Array.from(document.querySelectorAll<HTMLButtonElement>('ll-stop-dialog button'))
+      .find((b) => b.textContent!.trim() === name)!
+      .click();
   const type = (name: string, value: string) => {
     const input = field(name)!;
     input.value = value;

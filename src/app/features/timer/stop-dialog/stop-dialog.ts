@@ -98,7 +98,12 @@ export class StopDialog {
     this.others = sessions;
     this.book.set(book);
     this.session.set(session);
-    this.form.reset(stopFormPrefill(session, sessions.filter((s) => s.bookId === session.bookId)));
+    this.form.reset(
+      stopFormPrefill(
+        session,
+        sessions.filter((s) => s.bookId === session.bookId),
+      ),
+    );
   }
 
   protected async save(): Promise<void> {

@@ -78,7 +78,8 @@ export function stopProblems(book: Book | undefined, session: Session, fields: S
   const unit = positionUnit(book);
   if (fields.toPosition != null && fields.toPosition < 0) problems['toPosition'] = 'It cannot be below 0';
   else if (fields.toPosition != null && end != null && fields.toPosition > end) {
-    problems['toPosition'] = unit === 'percent' ? 'A percent is at most 100' : unit === 'minute' ? `The book is ${minutesText(end)} long` : `The book has ${end} pages`;
+    problems['toPosition'] =
+      unit === 'percent' ? 'A percent is at most 100' : unit === 'minute' ? `The book is ${minutesText(end)} long` : `The book has ${end} pages`;
   }
   if (fields.playbackSpeed != null && (fields.playbackSpeed < 0.5 || fields.playbackSpeed > 4)) {
     problems['playbackSpeed'] = 'Choose a speed from 0.5 to 4';

@@ -111,7 +111,9 @@ describe('TimerPage', () => {
     const sessions = (await store.list('sessions')) as Session[];
     expect(sessions.find((s) => s.source === 'timer')?.activeMinutes).toBe(25);
 
-    Array.from(document.querySelectorAll<HTMLButtonElement>('ll-stop-dialog button')).find((b) => b.textContent!.trim() === 'Skip')!.click();
+    Array.from(document.querySelectorAll<HTMLButtonElement>('ll-stop-dialog button'))
+      .find((b) => b.textContent!.trim() === 'Skip')!
+      .click();
     await until(() => !unsaved.present(), 3000, 'the stop form to close');
     await shown('No timer is running');
     await shown('Last session');
@@ -130,7 +132,9 @@ describe('TimerPage', () => {
   it('keeps the screen on when asked, takes the lock again when the page is visible again, and lets go on stop', async () => {
     await runningOn();
     const toggle = () => (fixture.nativeElement as HTMLElement).querySelector<HTMLButtonElement>('mat-slide-toggle button[role="switch"]:not([disabled])');
-    const keepOn = Array.from((fixture.nativeElement as HTMLElement).querySelectorAll('mat-slide-toggle')).find((t) => t.textContent!.includes('Keep the screen on'))!;
+    const keepOn = Array.from((fixture.nativeElement as HTMLElement).querySelectorAll('mat-slide-toggle')).find((t) =>
+      t.textContent!.includes('Keep the screen on'),
+    )!;
     expect(toggle()).not.toBeNull();
     keepOn.querySelector<HTMLButtonElement>('button')!.click();
     await until(() => wakeLock.held === 1, 3000, 'the wake lock');

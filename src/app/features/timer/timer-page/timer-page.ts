@@ -40,16 +40,7 @@ interface TimerPageData {
  */
 @Component({
   selector: 'll-timer-page',
-  imports: [
-    DatePipe,
-    RouterLink,
-    MatButtonModule,
-    MatFormFieldModule,
-    MatIconModule,
-    MatInputModule,
-    MatProgressBarModule,
-    MatSlideToggleModule,
-  ],
+  imports: [DatePipe, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MatSlideToggleModule],
   providers: [ScreenAwake],
   templateUrl: './timer-page.html',
   styleUrl: './timer-page.scss',
@@ -150,7 +141,12 @@ export class TimerPage {
       const sessionId = await this.timer.stop();
       await this.awake.follow(false);
       if (!sessionId) return;
-      const ref = this.dialog.open<StopDialog, StopDialogData, boolean>(StopDialog, { data: { sessionId }, width: '480px', maxWidth: '95vw', autoFocus: 'first-tabbable' });
+      const ref = this.dialog.open<StopDialog, StopDialogData, boolean>(StopDialog, {
+        data: { sessionId },
+        width: '480px',
+        maxWidth: '95vw',
+        autoFocus: 'first-tabbable',
+      });
       await firstValueFrom(ref.afterClosed());
     } finally {
       this.stopFormOpen.set(false);

@@ -23,7 +23,11 @@ describe('InProgress', () => {
   // The words of each line, without its timer button.
   const lines = () =>
     [...element().querySelectorAll('li')].map((li) =>
-      [...li.querySelectorAll(':scope > a, :scope > span')].map((part) => part.textContent).join(' ').replace(/\s+/g, ' ').trim(),
+      [...li.querySelectorAll(':scope > a, :scope > span')]
+        .map((part) => part.textContent)
+        .join(' ')
+        .replace(/\s+/g, ' ')
+        .trim(),
     );
 
   const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
@@ -32,12 +36,7 @@ describe('InProgress', () => {
     userId = `in-progress-${crypto.randomUUID()}`;
     rememberSession({ user: { ...READER, id: userId } });
     TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideRouter([]),
-        { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
-        { provide: CLOCK, useValue: fixedClock(NOW) },
-      ],
+      providers: [provideHttpClient(), provideRouter([]), { provide: TIME_ZONE, useValue: 'America/Los_Angeles' }, { provide: CLOCK, useValue: fixedClock(NOW) }],
     });
     store = TestBed.inject(JournalStore);
     await db().open();

@@ -47,7 +47,10 @@ export class InProgress {
       .filter((book) => book.status === 'reading')
       .sort((a, b) => (a.title ?? '').localeCompare(b.title ?? ''))
       .map((book) => {
-        const fraction = bookProgress(book, sessions.filter((s) => s.bookId === book.id)).fraction;
+        const fraction = bookProgress(
+          book,
+          sessions.filter((s) => s.bookId === book.id),
+        ).fraction;
         return {
           id: book.id,
           title: book.title || 'Untitled',

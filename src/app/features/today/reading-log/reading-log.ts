@@ -40,7 +40,12 @@ export class ReadingLog {
     const entry = this.log().find((e) => e.day === day);
     return { day, minutes: Math.round(entry?.minutes ?? 0), pages: Math.round(entry?.pages ?? 0) };
   });
-  protected readonly streaks = computed(() => streaks(this.log().map((e) => e.day), this.today().day));
+  protected readonly streaks = computed(() =>
+    streaks(
+      this.log().map((e) => e.day),
+      this.today().day,
+    ),
+  );
   protected readonly year = computed(() => Number(this.today().day.slice(0, 4)));
 
   protected plural(count: number, word: string): string {
