@@ -132,7 +132,7 @@ export function startInstance(name: string, port: number, env: Record<string, st
     });
     child.once('exit', (code, signal) => {
       clearTimeout(timer);
-      reject(new Error(`${name} exited (${code ?? signal}) before it listened`));
+      reject(new Error(`${name} exited (${code ?? signal}) before it listened: ${[...lines, partial].slice(-6).join(' | ')}`));
     });
   });
 }

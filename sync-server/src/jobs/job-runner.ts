@@ -27,13 +27,21 @@ export interface JobRunner {
  * twice at once. pg-boss has its own small pool (`max` connections).
  */
 export async function startJobRunner(databaseUrl: string, dataSource: DataSource, jobs: readonly Job[] = JOBS): Promise<JobRunner> {
-  const boss = new PgBoss({ connectionString: databaseUrl, schema: JOBS_SCHEMA, max: 3, application_name: 'lamplight-jobs' });
-  boss.on('error', (error: Error) => console.error(`Background jobs: ${error.message}`));
-  await boss.start();
+  // Instances starting together race to create pg-boss's schema: a loser starts again with a fresh client.
+  const boss = await settled(async () => {
+    const candidate = new PgBoss({ connectionString: databaseUrl, schema: JOBS_SCHEMA, max: 3, application_name: 'lamplight-jobs' });
+    candidate.on('error', (error: Error) => console.error(`Background jobs: ${error.message}`));
+    try {
+      await candidate.start();
+      return candidate;
+    } catch (error) {
+      await candidate.stop({ graceful: false, wait: true }).catch(() => undefined);
+      throw error;
+    }
+  });
   for (const job of jobs) {
-    await boss.createQueue(job.name, { name: job.name, policy: 'singleton', retryLimit: 2, expireInSeconds: RUN_LIMIT_SECONDS });
-    if (job.cron) await boss.schedule(job.name, job.cron, {}, { tz: 'UTC' });
-    else await boss.unschedule(job.name);
+    await settled(() => boss.createQueue(job.name, { name: job.name, policy: 'singleton', retryLimit: 2, expireInSeconds: RUN_LIMIT_SECONDS }));
+    await settled(() => (job.cron ? boss.schedule(job.name, job.cron, {}, { tz: 'UTC' }) : boss.unschedule(job.name)));
     await boss.work(job.name, { pollingIntervalSeconds: 2 }, async () => {
       await job.run({ dataSource });
     });
@@ -42,4 +50,24 @@ export async function startJobRunner(databaseUrl: string, dataSource: DataSource
     send: (name) => boss.send(name, {}),
     stop: (timeoutMs = 10_000) => boss.stop({ graceful: true, timeout: timeoutMs, wait: true }),
   };
+}
+
+/** PostgreSQL's codes for a deadlock and for a table or row another session has just created. */
+const COLLISIONS = new Set(['40P01', '23505', '42P07']);
+
+/**
+ * Instances starting together create pg-boss's schema and the same queues at once, and PostgreSQL
+ * may answer one of them with a duplicate or a deadlock (seen with three instances through
+ * PgBouncer): creating what exists is a no-op, so the step is simply tried again a little later.
+ */
+async function settled<T>(step: () => Promise<T>, attempts = 6): Promise<T> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await step();
+    } catch (error) {
+      const code = (error as { code?: unknown }).code;
+      if (attempt >= attempts || typeof code !== 'string' || !COLLISIONS.has(code)) throw error;
+      await new Promise((resolve) => setTimeout(resolve, 100 * attempt + Math.random() * 200));
+    }
+  }
 }

@@ -67,3 +67,16 @@ export async function waitFor(fixture: ComponentFixture<unknown>, check: () => u
 export function textOf(element: Element | null | undefined): string {
   return (element?.textContent ?? '').replace(/\s+/g, ' ').trim();
 }
+
+/**
+ * Where the outbox ends now. The outbox keeps only the newest change per field (older ones are
+ * dropped when a field is written again), so specs find what a step wrote by sequence, not by count.
+ */
+export async function outboxMark(db: JournalDb): Promise<number> {
+  return (await db.outbox.orderBy('seq').last())?.seq ?? 0;
+}
+
+/** The outbox changes written after `mark` (see {@link outboxMark}), oldest first. */
+export function outboxSince(db: JournalDb, mark: number) {
+  return db.outbox.where('seq').above(mark).toArray();
+}

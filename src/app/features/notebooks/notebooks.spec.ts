@@ -4,7 +4,7 @@ import { STARTER_TEMPLATES } from '@shared/journal/starter-templates';
 import type { NotebookPage, PageTemplate } from '@shared/sync/schema/collections';
 
 import { Notebooks } from './notebooks';
-import { openTestJournal, type TestJournal } from '../../core/testing/test-journal';
+import { openTestJournal, outboxMark, outboxSince, type TestJournal } from '../../core/testing/test-journal';
 
 describe('Notebooks (real IndexedDB)', () => {
   let journal: TestJournal;
@@ -41,15 +41,15 @@ describe('Notebooks (real IndexedDB)', () => {
     expect((await notebooks.pagesOf(notebookId)).map((p) => p.id)).toEqual([first, second, third]);
     expect((await journal.store.get('notebookPages', first))?.title).toBeUndefined(); // blank: nothing written
 
-    const before = await journal.db.outbox.count();
+    const mark = await outboxMark(journal.db);
     await notebooks.movePage(notebookId, third, -1);
 
     expect((await notebooks.pagesOf(notebookId)).map((p) => p.id)).toEqual([first, third, second]);
-    const changes = (await journal.db.outbox.toArray()).slice(before);
+    const changes = await outboxSince(journal.db, mark);
     expect(changes.map((c) => [c.rowId, c.field])).toEqual([[third, 'position']]);
 
     await notebooks.movePage(notebookId, first, -1); // already first: nothing to write
-    expect(await journal.db.outbox.count()).toBe(before + 1);
+    expect(await outboxSince(journal.db, mark)).toEqual(changes);
   });
 
   it('deletes a page and brings it back; deletes a notebook together with its pages', async () => {

@@ -7,6 +7,7 @@ import type { JournalDb } from '../../../core/data/journal-db';
 import type { JournalStore } from '../../../core/data/journal-store';
 import { choose, field, setUpGoalSpec, textOf, type, until } from '../../../core/testing/goal-fixtures';
 import { BOOK, seedLibrary } from '../../../core/testing/seed';
+import { outboxMark, outboxSince } from '../../../core/testing/test-journal';
 import { GoalsPage } from './goals-page';
 
 describe('GoalsPage', () => {
@@ -70,12 +71,12 @@ describe('GoalsPage', () => {
       change.click();
       await until(fixture, () => element().querySelector('.targets-form input'), 'the form');
       expect(field(element(), 'Books this year').value).toBe('12');
-      const before = await db().outbox.count();
+      const mark = await outboxMark(db());
       type(field(element(), 'Pages this year'), '4000');
       element().querySelector<HTMLButtonElement>('.targets-form button[type="submit"]')!.click();
       await until(fixture, () => !element().querySelector('.targets-form'), 'the form to close');
 
-      const changes = (await db().outbox.toArray()).slice(before);
+      const changes = await outboxSince(db(), mark);
       expect(changes.map((entry) => [entry.field, entry.value])).toEqual([['pagesTarget', 4000]]);
     });
 

@@ -5,7 +5,7 @@ import { STARTER_TEMPLATES } from '@shared/journal/starter-templates';
 
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { Notebooks } from '../notebooks';
-import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
+import { openTestJournal, outboxMark, outboxSince, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { NotebookView } from './notebook-view';
 
 describe('NotebookView', () => {
@@ -102,12 +102,13 @@ describe('NotebookView', () => {
     expect(title.value).toBe('Coast reading');
     expect(book.value).toBe(bookId);
 
-    const before = await journal.db.outbox.count();
+    const mark = await outboxMark(journal.db);
     book.value = '';
     book.dispatchEvent(new Event('change'));
     buttonNamed('Save notebook').click();
     await until(() => !element.querySelector('form.details') && !element.querySelector('.book'), fixture);
-    expect((await journal.db.outbox.toArray()).slice(before).map((c) => [c.field, c.value])).toEqual([['bookId', null]]);
+    expect((await outboxSince(journal.db, mark)).map((c) => [c.field, c.value])).toEqual([['bookId', null]]);
+    const renameMark = await outboxMark(journal.db);
 
     buttonNamed('Rename or change book').click();
     await until(() => !!element.querySelector('form.details'), fixture);
@@ -116,7 +117,7 @@ describe('NotebookView', () => {
     input.dispatchEvent(new Event('input'));
     buttonNamed('Save notebook').click();
     await until(() => textOf(element.querySelector('h1')) === 'Shore reading', fixture);
-    expect((await journal.db.outbox.toArray()).slice(before + 1).map((c) => c.field)).toEqual(['title']);
+    expect((await outboxSince(journal.db, renameMark)).map((c) => c.field)).toEqual(['title']);
   });
 
   it('deletes the notebook with its pages after asking', async () => {

@@ -13,7 +13,7 @@ import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { SessionEditor } from './session-editor';
-import { waitFor } from '../../../core/testing/test-journal';
+import { outboxMark, outboxSince, waitFor } from '../../../core/testing/test-journal';
 
 @Component({ template: '' })
 class BookPageStub {}
@@ -180,7 +180,7 @@ describe('SessionEditor', () => {
       toPosition: 30,
       source: 'timer',
     });
-    const before = await db().outbox.count();
+    const mark = await outboxMark(db());
     await open(bookId, sessionId);
     expect(input('Minutes reading').value).toBe('35');
     type('Note', 'Ended on the bus');
@@ -188,7 +188,7 @@ describe('SessionEditor', () => {
     await save();
     await until(() => TestBed.inject(Router).url === `/library/${bookId}`, 'the book page');
 
-    const changes = (await db().outbox.toArray()).slice(before);
+    const changes = await outboxSince(db(), mark);
     expect(changes.map((c) => c.field).sort()).toEqual(['endedAt', 'note']);
     const saved = (await store.get('sessions', sessionId)) as Session;
     expect(saved.startedAt).toBe('2026-03-08T17:00:12.345Z');
