@@ -66,10 +66,7 @@ export interface Schedule {
 }
 
 const device = fc.nat(NODES.length - 1);
-const skew = fc.oneof(
-  { arbitrary: fc.integer({ min: -MAX_SKEW_MS, max: MAX_SKEW_MS }), weight: 2 },
-  { arbitrary: fc.constantFrom(...WRONG_DATES), weight: 1 },
-);
+const skew = fc.oneof({ arbitrary: fc.integer({ min: -MAX_SKEW_MS, max: MAX_SKEW_MS }), weight: 2 }, { arbitrary: fc.constantFrom(...WRONG_DATES), weight: 1 });
 const fault = fc.oneof(
   { arbitrary: fc.constant<Fault>('ok'), weight: 6 },
   { arbitrary: fc.constantFrom<Fault>('drop-request', 'drop-response', 'server-crash', 'duplicate', 'delay'), weight: 4 },
@@ -282,7 +279,10 @@ function deviceState(device: SimDevice): Record<string, unknown> {
   for (const [key, row] of device.durable.rows) {
     for (const [field, hlc] of Object.entries(row._hlc)) {
       const collection = key.split('/')[0]!;
-      entries.push([`${key}/${field}`, fieldSpecOf(collection, field)?.kind === 'set' ? { value: row[field], state: row._sets?.[field] ?? {} } : { value: row[field], hlc }]);
+      entries.push([
+        `${key}/${field}`,
+        fieldSpecOf(collection, field)?.kind === 'set' ? { value: row[field], state: row._sets?.[field] ?? {} } : { value: row[field], hlc },
+      ]);
     }
   }
   return Object.fromEntries(entries.sort(([a], [b]) => (a < b ? -1 : 1)));
@@ -290,9 +290,7 @@ function deviceState(device: SimDevice): Record<string, unknown> {
 
 function plain(state: FieldState): Record<string, unknown> {
   return Object.fromEntries(
-    [...state.entries()]
-      .sort(([a], [b]) => (a < b ? -1 : 1))
-      .map(([key, { value, hlc, state: set }]) => [key, set ? { value, state: set } : { value, hlc }]),
+    [...state.entries()].sort(([a], [b]) => (a < b ? -1 : 1)).map(([key, { value, hlc, state: set }]) => [key, set ? { value, state: set } : { value, hlc }]),
   );
 }
 

@@ -229,7 +229,8 @@ export class SimDevice {
         }
         for (const write of this.writes) {
           const queued = durable.outbox.find((c) => c.id === write.change.id);
-          if (queued) write.change = { id: queued.id, collection: queued.collection, rowId: queued.rowId, field: queued.field, value: queued.value, hlc: queued.hlc };
+          if (queued)
+            write.change = { id: queued.id, collection: queued.collection, rowId: queued.rowId, field: queued.field, value: queued.value, hlc: queued.hlc };
         }
         durable.lastClock = [...renamed.values()].at(-1) ?? durable.lastClock;
         this.clock = this.restoreClock();

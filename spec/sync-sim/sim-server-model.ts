@@ -64,8 +64,12 @@ export class ServerModel implements SimServer {
       const isNew = !this.rowSeq.has(row);
       const beats = (field: string, hlc: string) => isNew || wins(hlc, this.state.get(`${row}/${field}`)?.hlc);
       const grown = [...sets].filter(([field, { delta }]) => isNew || this.joinSet(this.state.get(`${row}/${field}`)?.state, delta) !== 'same');
-      const lwwWon = [...lww.values()].filter((change) => wins(change.hlc, this.state.get(fieldKey(change))?.hlc, change.value, this.state.get(fieldKey(change))?.value));
-      applied += lwwWon.length + grown.reduce((n, [field]) => n + (changes as FieldChange[]).filter((c) => `${c.collection}/${c.rowId}` === row && c.field === field).length, 0);
+      const lwwWon = [...lww.values()].filter((change) =>
+        wins(change.hlc, this.state.get(fieldKey(change))?.hlc, change.value, this.state.get(fieldKey(change))?.value),
+      );
+      applied +=
+        lwwWon.length +
+        grown.reduce((n, [field]) => n + (changes as FieldChange[]).filter((c) => `${c.collection}/${c.rowId}` === row && c.field === field).length, 0);
       if (!isNew && lwwWon.length === 0 && grown.length === 0) continue; // the row is not written at all
       wonRows.add(row);
       for (const change of lwwWon) next.set(fieldKey(change), { value: change.value, hlc: change.hlc });
@@ -113,7 +117,9 @@ export class ServerModel implements SimServer {
     return Object.keys(collectionSpec(collection)!.fields).flatMap((field) => {
       const stamped = this.state.get(`${row}/${field}`);
       if (!stamped) return [];
-      return stamped.state ? [{ collection, rowId, field, value: stamped.value, hlc: stamped.hlc, state: stamped.state }] : [{ collection, rowId, field, value: stamped.value, hlc: stamped.hlc }];
+      return stamped.state
+        ? [{ collection, rowId, field, value: stamped.value, hlc: stamped.hlc, state: stamped.state }]
+        : [{ collection, rowId, field, value: stamped.value, hlc: stamped.hlc }];
     });
   }
 }
