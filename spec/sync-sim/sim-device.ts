@@ -35,7 +35,7 @@ interface DurableState {
   clockOffset: number;
   /** The greatest clock pulled from the server (`meta.seenClock`): re-stamps start after it. */
   seenClock: string | null;
-  /** The last clock a re-stamp gave: the next re-stamp starts after it, so no clock is issued twice. */
+  /** The greatest own clock the server took, or a re-stamp gave: the next re-stamp starts after it, so no clock is issued twice or goes back. */
   restamped: string | null;
 }
 
@@ -201,6 +201,7 @@ export class SimDevice {
         const done = new Set(changes.map((c) => c.seq));
         durable.outbox = durable.outbox.filter((c) => !done.has(c.seq));
         for (const change of changes) this.acknowledged.add(change.id);
+        for (const change of changes) if (!durable.restamped || change.hlc > durable.restamped) durable.restamped = change.hlc;
       },
       // As DexieSyncPorts.restamp: new clocks in outbox order from the corrected time, after the greatest clock
       // pulled; the outbox and rows follow. A set delta carries its own clock inside: renamed with it.
@@ -212,7 +213,15 @@ export class SimDevice {
         // The refused changes and every later one of the outbox (written after them, so no less ahead), in one go.
         const from = changes.reduce((min, c) => (c.hlc < min ? c.hlc : min), changes[0]!.hlc);
         const ordered = durable.outbox.filter((c) => c.hlc >= from);
-        const seen = [durable.seenClock, durable.restamped].reduce<string | null>((max, c) => (c && (!max || c > max) ? c : max), null);
+        // After everything seen from others, the last re-stamp, and every clock the device keeps that is not re-stamped (its
+        // own earlier writes, the adds a delta removes): else a remove could precede the add it removes, or a new write an old one.
+        const kept = [
+          ...durable.outbox.flatMap((c) => [c.hlc, ...(isSet(c) ? setClocks(c.value as OrSetState) : [])]),
+          ...[...durable.rows.values()].flatMap((row) => [...Object.values(row._hlc), ...Object.values(row._sets ?? {}).flatMap(setClocks)]),
+        ];
+        // A re-stamp refused again (from an offset learnt across a jump) is no floor.
+        const earlier = [durable.restamped ?? '', ...kept].filter((hlc) => hlc < from);
+        const seen = [durable.seenClock, ...earlier].reduce<string | null>((max, c) => (c && (!max || c > max) ? c : max), null);
         const renamed = restampClocks(
           ordered.map((c) => c.hlc),
           this.node,
@@ -279,6 +288,9 @@ export class SimDevice {
 }
 
 const isSet = (change: { collection: string; field: string }) => fieldSpecOf(change.collection, change.field)?.kind === 'set';
+
+/** Every clock a set state names. */
+const setClocks = (state: OrSetState): string[] => Object.values(state).flatMap(({ a, r }) => [...Object.values(a), ...Object.values(r)]);
 
 /** A set state with every clock renamed (a re-stamped delta, or a row's state holding its adds). */
 function renameSetClocks(state: OrSetState, rename: (hlc: string) => string): OrSetState {
