@@ -17,13 +17,17 @@ const MODEL_START_MS = Date.UTC(2026, 11, 4, 9, 0);
 
 /** fast-check's own verdict, with the shrunk schedule and its outcome in the message. */
 async function schedulesHold(server: () => SimServer, numRuns: number, seed = SEED, clockAhead: ClockAheadHandling = 'restamp') {
-  const totals = { writes: 0, acknowledged: 0, requests: 0 };
+  const totals = { writes: 0, acknowledged: 0, requests: 0, clockAhead: 0, setPushes: 0 };
   const details = await fc.check(
     fc.asyncProperty(scheduleArbitrary(), async (schedule) => {
       const outcome = await runSchedule(schedule, server(), MODEL_START_MS, clockAhead);
       totals.writes += outcome.writes;
       totals.acknowledged += outcome.acknowledged;
       totals.requests += outcome.trace.length;
+      totals.clockAhead += outcome.trace.filter((e) => e.response.body?.error?.code === 'clock_ahead').length;
+      totals.setPushes += outcome.trace.filter(
+        (e) => e.request.kind === 'push' && e.response.status === 200 && e.request.body.changes.some((c) => c.field === 'tags'),
+      ).length;
       if (!isClean(outcome)) throw new Error(JSON.stringify(summary(outcome)));
     }),
     { numRuns, seed },
@@ -41,6 +45,9 @@ describe('Fault schedules (simulated devices, network and crashes)', () => {
     // The schedules did real work: many confirmed writes and requests to check.
     expect(totals.acknowledged).toBeGreaterThan(1000);
     expect(totals.requests).toBeGreaterThan(3000);
+    // …including tags added and removed, and clocks days off refused and re-stamped.
+    expect(totals.setPushes).toBeGreaterThan(300);
+    expect(totals.clockAhead).toBeGreaterThan(20); // 30 with this seed
   }, 60_000); // a few seconds here; room for a busy machine
 
   it('When the server forgets one change of a batch, then the checks find a schedule that shows it (and shrink it)', async () => {
