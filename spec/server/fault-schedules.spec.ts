@@ -5,7 +5,9 @@ import fc from 'fast-check';
 import { registerReader } from '../support/accounts';
 import { startTestServer, type RunningServer } from '../support/test-server';
 import { isClean, runSchedule, scheduleArbitrary, summary, type Outcome } from '../sync-sim/fault-schedule';
+import type { ClockAheadHandling } from '../sync-sim/sim-device';
 import { ServerModel } from '../sync-sim/sim-server-model';
+import type { OrSetState } from '../../shared/sync/or-set';
 import type { SimRequest, SimResponse, SimServer } from '../sync-sim/sim-wire';
 import { HttpSimServer } from '../sync-sim/sim-wire';
 
@@ -14,14 +16,18 @@ const SEED = 20261204;
 const MODEL_START_MS = Date.UTC(2026, 11, 4, 9, 0);
 
 /** fast-check's own verdict, with the shrunk schedule and its outcome in the message. */
-async function schedulesHold(server: () => SimServer, numRuns: number, seed = SEED) {
-  const totals = { writes: 0, acknowledged: 0, requests: 0 };
+async function schedulesHold(server: () => SimServer, numRuns: number, seed = SEED, clockAhead: ClockAheadHandling = 'restamp') {
+  const totals = { writes: 0, acknowledged: 0, requests: 0, clockAhead: 0, setPushes: 0 };
   const details = await fc.check(
     fc.asyncProperty(scheduleArbitrary(), async (schedule) => {
-      const outcome = await runSchedule(schedule, server(), MODEL_START_MS);
+      const outcome = await runSchedule(schedule, server(), MODEL_START_MS, clockAhead);
       totals.writes += outcome.writes;
       totals.acknowledged += outcome.acknowledged;
       totals.requests += outcome.trace.length;
+      totals.clockAhead += outcome.trace.filter((e) => e.response.body?.error?.code === 'clock_ahead').length;
+      totals.setPushes += outcome.trace.filter(
+        (e) => e.request.kind === 'push' && e.response.status === 200 && e.request.body.changes.some((c) => c.field === 'tags'),
+      ).length;
       if (!isClean(outcome)) throw new Error(JSON.stringify(summary(outcome)));
     }),
     { numRuns, seed },
@@ -39,6 +45,9 @@ describe('Fault schedules (simulated devices, network and crashes)', () => {
     // The schedules did real work: many confirmed writes and requests to check.
     expect(totals.acknowledged).toBeGreaterThan(1000);
     expect(totals.requests).toBeGreaterThan(3000);
+    // …including tags added and removed, and clocks days off refused and re-stamped.
+    expect(totals.setPushes).toBeGreaterThan(300);
+    expect(totals.clockAhead).toBeGreaterThan(20); // 30 with this seed
   }, 60_000); // a few seconds here; room for a busy machine
 
   it('When the server forgets one change of a batch, then the checks find a schedule that shows it (and shrink it)', async () => {
@@ -67,6 +76,25 @@ describe('Fault schedules (simulated devices, network and crashes)', () => {
     const { details } = await schedulesHold(() => new LeakyPullServer(), 300);
     expect(details.failed).toBeTrue();
     expect(String(details.errorInstance)).toMatch(/"divergent":[1-9]/);
+  }, 60_000);
+
+  it('When the server keeps only the newest delta of a set field (concurrent adds dropped), then the checks find a lost acknowledged add', async () => {
+    /** A broken server: a set field's delta replaces the stored state instead of joining it, as a whole-value last-writer-wins would. */
+    class AddDroppingServer extends ServerModel {
+      protected override joinSet(stored: OrSetState | undefined, delta: OrSetState): OrSetState | 'same' {
+        const joined = super.joinSet(stored, delta);
+        return joined === 'same' ? joined : delta;
+      }
+    }
+    const { details } = await schedulesHold(() => new AddDroppingServer(), 300);
+    expect(details.failed).toBeTrue();
+    expect(String(details.errorInstance)).toMatch(/"lostSetAdds":[1-9]/);
+  }, 60_000);
+
+  it('When a device sets changes refused as clock_ahead aside instead of re-stamping them, then the checks find it', async () => {
+    const { details } = await schedulesHold(() => new ServerModel(), 300, SEED, 'set-aside');
+    expect(details.failed).toBeTrue();
+    expect(String(details.errorInstance)).toMatch(/"setAsideClockAhead":[1-9]/);
   }, 60_000);
 });
 

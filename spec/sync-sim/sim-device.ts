@@ -1,14 +1,18 @@
 import type { ChangeProblem, FieldChange, PullResponse } from '../../shared/sync/field-change';
-import { restampClocks } from '../../shared/sync/device-clock';
+import { clockOffsetMs, restampClocks } from '../../shared/sync/device-clock';
 import { HlcClock } from '../../shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '../../shared/sync/local-row';
+import { currentSetState, mergeSetField } from '../../shared/sync/merge-set';
+import { isEmptyOrSet, orSetDelta, orSetElements, type OrSetState } from '../../shared/sync/or-set';
+import { fieldSpecOf } from '../../shared/sync/schema/collections';
 import { runSyncCycle, type PushOutcome, type QueuedChange, type SyncPorts } from '../../shared/sync/sync-cycle';
 import type { SimRequest, SimResponse } from './sim-wire';
 
 /** A write a device made, remembered by the checks. */
 export interface WriteRecord {
   readonly device: string;
-  readonly change: FieldChange;
+  /** As last pushed: a re-stamp after `clock_ahead` gives it new clocks. */
+  change: FieldChange;
   /** A change the server must refuse (a real validation error), injected on purpose. */
   readonly invalid: boolean;
 }
@@ -27,7 +31,16 @@ interface DurableState {
   lastClock: string | null;
   setAside: { change: QueuedChange; problem: ChangeProblem }[];
   nextSeq: number;
+  /** Learnt from the server's time (`meta.clockOffset` in the app): added to the device's own clock. */
+  clockOffset: number;
+  /** The greatest clock pulled from the server (`meta.seenClock`): re-stamps start after it. */
+  seenClock: string | null;
+  /** The greatest own clock the server took, or a re-stamp gave: the next re-stamp starts after it, so no clock is issued twice or goes back. */
+  restamped: string | null;
 }
+
+/** How a device meets `clock_ahead`: as the app does, or as a broken app would (for the spec that shows the check bites). */
+export type ClockAheadHandling = 'restamp' | 'set-aside';
 
 /**
  * A simulated device: its rows, outbox and cursor in "durable" memory, its hybrid logical clock
@@ -36,7 +49,17 @@ interface DurableState {
  * away everything but the durable state, including a cycle half way through.
  */
 export class SimDevice {
-  readonly durable: DurableState = { rows: new Map(), outbox: [], cursor: undefined, lastClock: null, setAside: [], nextSeq: 0 };
+  readonly durable: DurableState = {
+    rows: new Map(),
+    outbox: [],
+    cursor: undefined,
+    lastClock: null,
+    setAside: [],
+    nextSeq: 0,
+    clockOffset: 0,
+    seenClock: null,
+    restamped: null,
+  };
   readonly writes: WriteRecord[] = [];
   /** Ids of changes the server confirmed to this device (acknowledged writes). */
   readonly acknowledged = new Set<string>();
@@ -54,7 +77,7 @@ export class SimDevice {
     private readonly now: () => number,
     private readonly transport: (device: SimDevice, request: SimRequest) => Promise<SimResponse>,
     private readonly newId: () => string,
-    private readonly options: { batchSize: number; pullLimit: number },
+    private readonly options: { batchSize: number; pullLimit: number; clockAhead?: ClockAheadHandling },
   ) {
     this.clock = this.restoreClock();
   }
@@ -69,6 +92,25 @@ export class SimDevice {
     const key = `${collection}/${rowId}`;
     const row = this.durable.rows.get(key) ?? emptyRow(rowId);
     this.durable.rows.set(key, { ...row, [field]: value, _hlc: { ...row._hlc, [field]: change.hlc } });
+    this.durable.outbox.push({ ...change, seq: ++this.durable.nextSeq });
+    this.writes.push({ device: this.node, change, invalid: false });
+  }
+
+  /**
+   * A set field's edit, as `JournalStore.write` makes it: the delta (`orSetDelta`) from the row's
+   * current state to `next`, joined into the row, pushed as the change's value. No change when
+   * nothing differs.
+   */
+  writeSet(collection: string, rowId: string, field: string, edit: (elements: string[]) => string[]): void {
+    const key = `${collection}/${rowId}`;
+    const row = this.durable.rows.get(key) ?? emptyRow(rowId);
+    const current = { value: row[field], hlc: row._hlc[field], state: row._sets?.[field] };
+    const hlc = this.tick();
+    const delta = orSetDelta(currentSetState(current), edit(orSetElements(currentSetState(current))), hlc);
+    if (isEmptyOrSet(delta)) return;
+    const merged = mergeSetField(current, { value: delta, hlc });
+    this.durable.rows.set(key, { ...row, [field]: merged.value, _hlc: { ...row._hlc, [field]: hlc }, _sets: { ...row._sets, [field]: merged.state } });
+    const change: FieldChange = { id: this.newId(), collection, rowId, field, value: delta, hlc };
     this.durable.outbox.push({ ...change, seq: ++this.durable.nextSeq });
     this.writes.push({ device: this.node, change, invalid: false });
   }
@@ -114,7 +156,17 @@ export class SimDevice {
   }
 
   private restoreClock(): HlcClock {
-    return new HlcClock(this.node, () => this.now() + this.skewMs, this.durable.lastClock);
+    return new HlcClock(this.node, () => this.deviceNow(), this.durable.lastClock);
+  }
+
+  /** The device's own clock (`Date.now()` in the app), off by its skew. */
+  private rawNow(): number {
+    return this.now() + this.skewMs;
+  }
+
+  /** The device's idea of the time: its own clock corrected by the offset it learnt. */
+  private deviceNow(): number {
+    return this.rawNow() + this.durable.clockOffset;
   }
 
   private tick(): string {
@@ -129,11 +181,18 @@ export class SimDevice {
       if (this.epoch !== epoch) throw new NetworkError('the device crashed');
     };
     const durable = this.durable;
+    let sentAt = 0;
     const send = async (request: SimRequest) => {
       alive();
+      sentAt = this.rawNow();
       const response = await this.transport(this, request);
       alive();
       return response;
+    };
+    // As DexieSyncPorts.learnTime: the answer's `serverTime`, else its Date header, against the middle of the request.
+    const learnTime = (res: SimResponse) => {
+      const server = typeof res.body?.serverTime === 'string' ? Date.parse(res.body.serverTime) : (res.dateMs ?? NaN);
+      if (Number.isFinite(server)) durable.clockOffset = clockOffsetMs(server, sentAt, this.rawNow());
     };
     return {
       nextBatch: async (limit) => (alive(), durable.outbox.slice(0, limit)),
@@ -142,32 +201,53 @@ export class SimDevice {
         const done = new Set(changes.map((c) => c.seq));
         durable.outbox = durable.outbox.filter((c) => !done.has(c.seq));
         for (const change of changes) this.acknowledged.add(change.id);
+        for (const change of changes) if (!durable.restamped || change.hlc > durable.restamped) durable.restamped = change.hlc;
       },
-      // As the app does after `clock_ahead`: new clocks in the same order, on the outbox and the rows.
+      // As DexieSyncPorts.restamp: new clocks in outbox order from the corrected time, after the greatest clock
+      // pulled; the outbox and rows follow. A set delta carries its own clock inside: renamed with it.
       restamp: async (changes) => {
         alive();
+        if (this.options.clockAhead === 'set-aside') {
+          return this.setAsidePort(changes.map((change, index) => ({ change, problem: { index, code: 'clock_ahead', reason: 'set aside' } })));
+        }
+        // The refused changes and every later one of the outbox (written after them, so no less ahead), in one go.
+        const from = changes.reduce((min, c) => (c.hlc < min ? c.hlc : min), changes[0]!.hlc);
+        const ordered = durable.outbox.filter((c) => c.hlc >= from);
+        // After everything seen from others, the last re-stamp, and every clock the device keeps that is not re-stamped (its
+        // own earlier writes, the adds a delta removes): else a remove could precede the add it removes, or a new write an old one.
+        const kept = [
+          ...durable.outbox.flatMap((c) => [c.hlc, ...(isSet(c) ? setClocks(c.value as OrSetState) : [])]),
+          ...[...durable.rows.values()].flatMap((row) => [...Object.values(row._hlc), ...Object.values(row._sets ?? {}).flatMap(setClocks)]),
+        ];
+        // A re-stamp refused again (from an offset learnt across a jump) is no floor.
+        const earlier = [durable.restamped ?? '', ...kept].filter((hlc) => hlc < from);
+        const seen = [durable.seenClock, ...earlier].reduce<string | null>((max, c) => (c && (!max || c > max) ? c : max), null);
         const renamed = restampClocks(
-          changes.map((c) => c.hlc),
+          ordered.map((c) => c.hlc),
           this.node,
-          () => this.now() + this.skewMs,
-          durable.lastClock,
+          () => this.deviceNow(),
+          seen,
         );
-        durable.outbox = durable.outbox.map((c) => ({ ...c, hlc: renamed.get(c.hlc) ?? c.hlc }));
+        durable.restamped = [...renamed.values()].at(-1) ?? durable.restamped;
+        const rename = (hlc: string) => renamed.get(hlc) ?? hlc;
+        durable.outbox = durable.outbox.map((c) => ({ ...c, hlc: rename(c.hlc), value: isSet(c) ? renameSetClocks(c.value as OrSetState, rename) : c.value }));
         for (const [key, row] of durable.rows) {
-          const clocks = Object.fromEntries(Object.entries(row._hlc).map(([field, hlc]) => [field, renamed.get(hlc) ?? hlc]));
-          durable.rows.set(key, { ...row, _hlc: clocks });
+          const clocks = Object.fromEntries(Object.entries(row._hlc).map(([field, hlc]) => [field, rename(hlc)]));
+          const sets = row._sets && Object.fromEntries(Object.entries(row._sets).map(([field, state]) => [field, renameSetClocks(state, rename)]));
+          durable.rows.set(key, { ...row, _hlc: clocks, ...(sets ? { _sets: sets } : {}) });
+        }
+        for (const write of this.writes) {
+          const queued = durable.outbox.find((c) => c.id === write.change.id);
+          if (queued)
+            write.change = { id: queued.id, collection: queued.collection, rowId: queued.rowId, field: queued.field, value: queued.value, hlc: queued.hlc };
         }
         durable.lastClock = [...renamed.values()].at(-1) ?? durable.lastClock;
         this.clock = this.restoreClock();
       },
-      setAside: async (refused) => {
-        alive();
-        durable.setAside.push(...refused);
-        const done = new Set(refused.map((r) => r.change.seq));
-        durable.outbox = durable.outbox.filter((c) => !done.has(c.seq));
-      },
+      setAside: async (refused) => (alive(), this.setAsidePort(refused)),
       push: async (changes): Promise<PushOutcome> => {
         const res = await send({ kind: 'push', body: { deviceId: this.node, changes } });
+        learnTime(res);
         if (res.status === 200) return { kind: 'applied' };
         if (res.status === 413) return { kind: 'too-large' };
         if (res.status === 400 && Array.isArray(res.body?.error?.details)) return { kind: 'refused', problems: res.body.error.details };
@@ -176,6 +256,7 @@ export class SimDevice {
       cursor: async () => (alive(), durable.cursor),
       pull: async (cursor): Promise<PullResponse> => {
         const res = await send({ kind: 'pull', since: cursor, limit: this.options.pullLimit });
+        learnTime(res);
         if (res.status !== 200) throw new Error(`pull answered ${res.status}: ${JSON.stringify(res.body)}`);
         return res.body as PullResponse;
       },
@@ -184,11 +265,35 @@ export class SimDevice {
         for (const change of page.changes) {
           const key = `${change.collection}/${change.rowId}`;
           durable.rows.set(key, applyPulled(durable.rows.get(key) ?? emptyRow(change.rowId), [change]));
-          this.clock.receive(change.hlc);
+        }
+        // As DexieSyncPorts.adoptClocks: remember the greatest clock; adopt it unless it is over 24 h ahead even of the corrected time.
+        const latest = page.changes.reduce<string | null>((max, change) => (max === null || change.hlc > max ? change.hlc : max), null);
+        if (latest && (!durable.seenClock || latest > durable.seenClock)) durable.seenClock = latest;
+        try {
+          if (latest) this.clock.receive(latest);
+        } catch {
+          // keep our own clock
         }
         durable.lastClock = this.clock.current();
         durable.cursor = page.cursor;
       },
     };
   }
+
+  private setAsidePort(refused: readonly { change: QueuedChange; problem: ChangeProblem }[]): void {
+    this.durable.setAside.push(...refused);
+    const done = new Set(refused.map((r) => r.change.seq));
+    this.durable.outbox = this.durable.outbox.filter((c) => !done.has(c.seq));
+  }
+}
+
+const isSet = (change: { collection: string; field: string }) => fieldSpecOf(change.collection, change.field)?.kind === 'set';
+
+/** Every clock a set state names. */
+const setClocks = (state: OrSetState): string[] => Object.values(state).flatMap(({ a, r }) => [...Object.values(a), ...Object.values(r)]);
+
+/** A set state with every clock renamed (a re-stamped delta, or a row's state holding its adds). */
+function renameSetClocks(state: OrSetState, rename: (hlc: string) => string): OrSetState {
+  const side = (clocks: Readonly<Record<string, string>>) => Object.fromEntries(Object.entries(clocks).map(([node, hlc]) => [node, rename(hlc)]));
+  return Object.fromEntries(Object.entries(state).map(([element, { a, r }]) => [element, { a: side(a), r: side(r) }]));
 }

@@ -7,6 +7,8 @@ export type SimRequest =
 /** An HTTP answer: status and parsed JSON body. */
 export interface SimResponse {
   readonly status: number;
+  /** The server's time as its HTTP Date header gives it (every answer, errors too). */
+  readonly dateMs?: number;
   readonly body: any; // eslint-disable-line @typescript-eslint/no-explicit-any -- the wire's JSON, read by the device as the app reads it
 }
 
@@ -15,7 +17,13 @@ export interface SimServer {
   handle(request: SimRequest, nowMs: number): Promise<SimResponse>;
 }
 
-/** The real server (any instance) over HTTP with one reader's token; `nowMs` is the real clock there. */
+/**
+ * The real server (any instance) over HTTP with one reader's token. It judges clocks by its own
+ * time, but the time it tells the device (`serverTime`, the Date header) is the simulation's
+ * `nowMs`: simulated time runs ahead of the wall clock (ticks), and a device must learn the same
+ * offset from both servers for their answers to be compared. Skews stay far from the 24 h limit,
+ * so the few minutes between the two never change a verdict.
+ */
 export class HttpSimServer implements SimServer {
   constructor(
     private readonly baseUrl: () => string,
@@ -23,7 +31,7 @@ export class HttpSimServer implements SimServer {
     private readonly timeoutMs = 30_000,
   ) {}
 
-  async handle(request: SimRequest): Promise<SimResponse> {
+  async handle(request: SimRequest, nowMs = Date.now()): Promise<SimResponse> {
     const headers = { 'content-type': 'application/json', authorization: `Bearer ${this.accessToken}` };
     const signal = AbortSignal.timeout(this.timeoutMs);
     const res =
@@ -34,6 +42,8 @@ export class HttpSimServer implements SimServer {
             { headers, signal },
           );
     const text = await res.text();
-    return { status: res.status, body: text ? JSON.parse(text) : null };
+    const body = text ? JSON.parse(text) : null;
+    const serverTime = new Date(nowMs).toISOString();
+    return { status: res.status, dateMs: nowMs, body: body && typeof body.serverTime === 'string' ? { ...body, serverTime } : body };
   }
 }
