@@ -124,3 +124,12 @@ export function compareBytes(x: string, y: string): number {
   }
   return a.length - b.length;
 }
+
+/**
+ * The same state with its clocks renamed (a re-stamp after `clock_ahead`): a set change carries
+ * its clock inside its adds and removes too, so those must move with the change's own clock.
+ */
+export function renameOrSetClocks(state: OrSetState, rename: (hlc: string) => string): OrSetState {
+  const side = (clocks: Readonly<Record<string, string>>) => Object.fromEntries(Object.entries(clocks).map(([node, hlc]) => [node, rename(hlc)]));
+  return Object.fromEntries(Object.entries(state).map(([element, { a, r }]) => [element, { a: side(a), r: side(r) }]));
+}

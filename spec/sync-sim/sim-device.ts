@@ -3,7 +3,7 @@ import { clockOffsetMs, restampClocks } from '../../shared/sync/device-clock';
 import { HlcClock } from '../../shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '../../shared/sync/local-row';
 import { currentSetState, mergeSetField } from '../../shared/sync/merge-set';
-import { isEmptyOrSet, orSetDelta, orSetElements, type OrSetState } from '../../shared/sync/or-set';
+import { isEmptyOrSet, orSetDelta, orSetElements, renameOrSetClocks, type OrSetState } from '../../shared/sync/or-set';
 import { fieldSpecOf } from '../../shared/sync/schema/collections';
 import { runSyncCycle, type PushOutcome, type QueuedChange, type SyncPorts } from '../../shared/sync/sync-cycle';
 import type { SimRequest, SimResponse } from './sim-wire';
@@ -230,10 +230,10 @@ export class SimDevice {
         );
         durable.restamped = [...renamed.values()].at(-1) ?? durable.restamped;
         const rename = (hlc: string) => renamed.get(hlc) ?? hlc;
-        durable.outbox = durable.outbox.map((c) => ({ ...c, hlc: rename(c.hlc), value: isSet(c) ? renameSetClocks(c.value as OrSetState, rename) : c.value }));
+        durable.outbox = durable.outbox.map((c) => ({ ...c, hlc: rename(c.hlc), value: isSet(c) ? renameOrSetClocks(c.value as OrSetState, rename) : c.value }));
         for (const [key, row] of durable.rows) {
           const clocks = Object.fromEntries(Object.entries(row._hlc).map(([field, hlc]) => [field, rename(hlc)]));
-          const sets = row._sets && Object.fromEntries(Object.entries(row._sets).map(([field, state]) => [field, renameSetClocks(state, rename)]));
+          const sets = row._sets && Object.fromEntries(Object.entries(row._sets).map(([field, state]) => [field, renameOrSetClocks(state, rename)]));
           durable.rows.set(key, { ...row, _hlc: clocks, ...(sets ? { _sets: sets } : {}) });
         }
         for (const write of this.writes) {
@@ -291,9 +291,3 @@ const isSet = (change: { collection: string; field: string }) => fieldSpecOf(cha
 
 /** Every clock a set state names. */
 const setClocks = (state: OrSetState): string[] => Object.values(state).flatMap(({ a, r }) => [...Object.values(a), ...Object.values(r)]);
-
-/** A set state with every clock renamed (a re-stamped delta, or a row's state holding its adds). */
-function renameSetClocks(state: OrSetState, rename: (hlc: string) => string): OrSetState {
-  const side = (clocks: Readonly<Record<string, string>>) => Object.fromEntries(Object.entries(clocks).map(([node, hlc]) => [node, rename(hlc)]));
-  return Object.fromEntries(Object.entries(state).map(([element, { a, r }]) => [element, { a: side(a), r: side(r) }]));
-}

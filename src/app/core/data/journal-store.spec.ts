@@ -183,4 +183,23 @@ describe('JournalStore (IndexedDB through Dexie)', () => {
     expect(clocks.every((clock) => clock > seen && parseHlc(clock)!.wall < Date.now() + 60_000)).toBeTrue();
     expect((await db().meta.get('clock'))?.value).toBe(clocks.at(-1)!);
   });
+
+  it('moves the clocks inside a set change with it when it stamps again, so the server takes it (found by the fault schedules)', async () => {
+    const id = await store.create('books', { title: 'Two' });
+    await db().meta.put({ key: 'clockOffset', value: String(3 * 86_400_000) }); // stamped as if 3 days ahead
+    await store.write('books', id, { tags: ['signed'] });
+    const [tagChange] = (await db().outbox.toArray()).filter((change) => change.field === 'tags');
+    const inner = (state: OrSetState) => Object.values(state).flatMap(({ a, r }) => [...Object.values(a), ...Object.values(r)]);
+    expect(inner(tagChange!.value as OrSetState)).toEqual([tagChange!.hlc]);
+
+    await db().meta.put({ key: 'clockOffset', value: '0' }); // the server's time, learnt
+    await new DexieSyncPorts(db(), TestBed.inject(HttpClient)).restamp([tagChange!]);
+
+    const [after] = (await db().outbox.toArray()).filter((change) => change.field === 'tags');
+    expect(parseHlc(after!.hlc)!.wall).toBeLessThan(Date.now() + 60_000);
+    expect(inner(after!.value as OrSetState)).toEqual([after!.hlc]);
+    expect(orSetElements(after!.value as OrSetState)).toEqual(['signed']);
+    const row = await db().rows('books').get(id);
+    expect(inner(row!._sets!['tags']!)).toEqual([after!.hlc]);
+  });
 });

@@ -6,7 +6,8 @@ import { clockOffsetMs, restampClocks } from '@shared/sync/device-clock';
 import type { ChangeProblem, FieldChange, PulledChange, PullResponse, PushResponse } from '@shared/sync/field-change';
 import { HlcClock } from '@shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '@shared/sync/local-row';
-import { COLLECTIONS } from '@shared/sync/schema/collections';
+import { renameOrSetClocks, type OrSetState } from '@shared/sync/or-set';
+import { COLLECTIONS, fieldSpecOf } from '@shared/sync/schema/collections';
 import type { PushOutcome, QueuedChange, SyncPorts } from '@shared/sync/sync-cycle';
 import { textFieldMax } from '@shared/text/text-fields';
 
@@ -60,13 +61,28 @@ export class DexieSyncPorts implements SyncPorts {
         () => Date.now() + offset,
         seen,
       );
-      await this.db.outbox.bulkPut(ordered.map((change) => ({ ...change, hlc: renamed.get(change.hlc)! })));
+      const rename = (hlc: string) => renamed.get(hlc) ?? hlc;
+      const isSet = (change: QueuedChange) => fieldSpecOf(change.collection, change.field)?.kind === 'set';
+      // A set change carries its clock inside its adds and removes: they move with it, or the server refuses it.
+      await this.db.outbox.bulkPut(
+        ordered.map((change) => ({
+          ...change,
+          hlc: rename(change.hlc),
+          value: isSet(change) ? renameOrSetClocks(change.value as OrSetState, rename) : change.value,
+        })),
+      );
       for (const change of ordered) {
         if (!this.known.has(change.collection)) continue;
         const row = await this.db.rows(change.collection).get(change.rowId);
-        if (row && row._hlc[change.field] === change.hlc) {
-          await this.db.rows(change.collection).put({ ...row, _hlc: { ...row._hlc, [change.field]: renamed.get(change.hlc)! } });
-        }
+        if (!row) continue;
+        const state = row._sets?.[change.field];
+        const clockMoves = row._hlc[change.field] === change.hlc;
+        if (!clockMoves && !state) continue;
+        await this.db.rows(change.collection).put({
+          ...row,
+          _hlc: clockMoves ? { ...row._hlc, [change.field]: rename(change.hlc) } : row._hlc,
+          ...(state ? { _sets: { ...row._sets, [change.field]: renameOrSetClocks(state, rename) } } : {}),
+        });
       }
       await this.db.meta.put({ key: 'clock', value: [...renamed.values()].at(-1)! });
     });
