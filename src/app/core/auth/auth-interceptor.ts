@@ -18,11 +18,14 @@ export const authInterceptor: HttpInterceptorFn = (req, next) => {
   const path = req.url.replace(/^https?:\/\/[^/]+/, '').split('?')[0]!;
   if (!path.startsWith('/api/') || PUBLIC_ROUTES.test(path)) return next(req);
   const auth = inject(Auth);
+  let sentWith: string | null = null;
   return from(auth.freshAccessToken()).pipe(
-    switchMap((token) => next(withBearer(req, token))),
+    switchMap((token) => next(withBearer(req, (sentWith = token)))),
     catchError((error: unknown) => {
       if (!(error instanceof HttpErrorResponse) || error.status !== 401) return throwError(() => error);
-      return from(auth.refresh().catch(() => null)).pipe(switchMap((token) => (token ? next(withBearer(req, token)) : throwError(() => error))));
+      return from(auth.refresh(sentWith ?? undefined).catch(() => null)).pipe(
+        switchMap((token) => (token ? next(withBearer(req, token)) : throwError(() => error))),
+      );
     }),
   );
 };

@@ -71,9 +71,11 @@ export class Auth {
    * Exchanges the refresh token for a new pair; one exchange at a time in this tab and, through
    * the Web Locks API, across tabs (a token used twice would end the session). Resolves `null`
    * when the server refuses (the reader must sign in again); rejects when it cannot be reached.
+   * `refused` is the access token a 401 came back for: if it is no longer the current one, the
+   * current one is answered instead of a second exchange.
    */
-  refresh(): Promise<string | null> {
-    this.refreshing ??= this.withRefreshLock(() => this.exchange()).finally(() => (this.refreshing = null));
+  refresh(refused?: string): Promise<string | null> {
+    this.refreshing ??= this.withRefreshLock(() => this.exchange(refused)).finally(() => (this.refreshing = null));
     return this.refreshing;
   }
 
@@ -83,10 +85,15 @@ export class Auth {
     if (current) this.store({ ...current, user });
   }
 
-  private async exchange(): Promise<string | null> {
+  private async exchange(refused?: string): Promise<string | null> {
     // Another tab may have refreshed while we waited for the lock: use its tokens.
     const stored = browserStorage.read<StoredSession>(SESSION_STORAGE_KEY) ?? this.session();
     if (!stored || stored.needsSignIn) return null;
+    // A 401 for a request sent before a refresh (here or in another tab) needs no second one.
+    if (refused !== undefined && stored.accessToken !== refused) {
+      this.session.set(stored);
+      return stored.accessToken;
+    }
     if (stored.accessToken !== this.session()?.accessToken && secondsUntilExpiry(stored.accessToken) > REFRESH_MARGIN_SECONDS) {
       this.session.set(stored);
       return stored.accessToken;

@@ -101,7 +101,7 @@ export class SyncEvents {
     if (this.lastEventId !== undefined) headers['last-event-id'] = this.lastEventId;
     const res = await this.fetch('/api/sync/events', { headers, signal, cache: 'no-store' });
     if (res.status === 401) {
-      await this.auth.refresh().catch(() => null); // an expired token: the next attempt uses the new one
+      await this.auth.refresh(token).catch(() => null); // an expired token: the next attempt uses the new one
       return 'failed';
     }
     if (res.status === 404 || res.status === 405) return 'not-offered';
