@@ -94,7 +94,8 @@ export class Auth {
       this.session.set(stored);
       return stored.accessToken;
     }
-    if (stored.accessToken !== this.session()?.accessToken && secondsUntilExpiry(stored.accessToken) > REFRESH_MARGIN_SECONDS) {
+    // A stored token still fresh (another tab's refresh, already mirrored here by the storage event) is used as it is.
+    if (stored.accessToken !== refused && secondsUntilExpiry(stored.accessToken) > REFRESH_MARGIN_SECONDS) {
       this.session.set(stored);
       return stored.accessToken;
     }
