@@ -53,12 +53,18 @@ describe('Account safety in a real browser', () => {
       )) as { used: boolean; grace: boolean; revoked: boolean }[];
     expect((await family()).length).toBe(1);
 
-    // Both tabs wake up needing a refresh at the same moment.
-    await first.evaluate((token) => {
+    // Both tabs wake up needing a refresh at the same moment. The token is changed from a page that
+    // runs no app (robots.txt), with the tabs closed, so no running tab reacts to it first.
+    await Promise.all([first.close(), second.close()]);
+    const setter = await context.newPage();
+    await setter.goto(`${harness.server.baseUrl}/robots.txt`);
+    await setter.evaluate((token) => {
       const session = JSON.parse(localStorage.getItem('lamplight.session')!);
       localStorage.setItem('lamplight.session', JSON.stringify({ ...session, accessToken: token }));
     }, expiredAccessToken());
-    await Promise.all([first.reload(), second.reload()]);
+    await setter.close();
+    const tabs = await Promise.all([context.newPage(), context.newPage()]);
+    await Promise.all(tabs.map((tab) => tab.goto(`${harness.server.baseUrl}/today`)));
     for (let i = 0; i < 100 && (await family()).length < 2; i++) await sleep(100);
     await sleep(2_000); // room for a second presentation, if one were coming
 
