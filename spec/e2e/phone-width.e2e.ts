@@ -98,9 +98,10 @@ describe('Every screen at phone and tablet width', () => {
       for (const route of [...routes({ book: book!, series: series!, notebook }), `/library/${longTitle}`]) {
         await page.goto(`${baseUrl}${route}`);
         await page.locator('main h1, main h2').first().waitFor({ timeout: 10_000 });
-        // Lazy parts (charts, covers, live queries) settle before measuring.
-        await page.waitForLoadState('networkidle');
-        const { scrollWidth, windowWidth } = await page.evaluate(() => ({ scrollWidth: document.documentElement.scrollWidth, windowWidth: window.innerWidth }));
+        // Lazy parts (charts, covers, live queries) settle before measuring. Not 'networkidle': the
+        // live-update stream keeps one request open for as long as the page is.
+        await page.waitForLoadState('load');
+        const { scrollWidth, windowWidth } = await settledWidth(page);
         if (scrollWidth > windowWidth) tooWide.push(`${route} at ${viewport.width}: ${scrollWidth} px wide`);
         for (const finding of await seriousViolations(page)) findings.push(`${route} at ${viewport.width}: ${finding}`);
       }
@@ -110,3 +111,16 @@ describe('Every screen at phone and tablet width', () => {
     await context.close();
   }, 900_000);
 });
+
+/** The page's width once it has stayed the same for a quarter of a second (at most about 3 s). */
+async function settledWidth(page: Page): Promise<{ scrollWidth: number; windowWidth: number }> {
+  const measure = () => page.evaluate(() => ({ scrollWidth: document.documentElement.scrollWidth, windowWidth: window.innerWidth }));
+  let last = await measure();
+  for (let i = 0; i < 12; i++) {
+    await new Promise((resolve) => setTimeout(resolve, 250));
+    const next = await measure();
+    if (next.scrollWidth === last.scrollWidth) return next;
+    last = next;
+  }
+  return last;
+}
