@@ -70,8 +70,10 @@ export class JournalStore {
         const fields = Object.entries(patch).filter(([field, value]) => !sameValue(row[field], value));
         if (fields.length === 0) continue;
         // From the server-corrected time, so a device with a wrong date still stamps sensible clocks.
-        const offset = Number((await db.meta.get('clockOffset'))?.value ?? 0) || 0;
-        hlc ??= new HlcClock(deviceId(), () => Date.now() + offset, (await db.meta.get('clock'))?.value).tick();
+        if (hlc === null) {
+          const offset = Number((await db.meta.get('clockOffset'))?.value ?? 0) || 0;
+          hlc = new HlcClock(deviceId(), () => Date.now() + offset, (await db.meta.get('clock'))?.value).tick();
+        }
         const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
         for (const [field, value] of fields) {
           if (fieldSpecOf(collection, field)?.kind === 'set') {

@@ -130,7 +130,14 @@ export class DexieSyncPorts implements SyncPorts {
     const tables = this.db.tables.filter((table) => this.known.has(table.name)).map((table) => table.name);
     // Yjs loads on the first pulled text, before the transaction (which must not await anything else).
     const isText = (change: { collection: string; field: string }) => textFieldMax(change.collection, change.field) !== undefined;
-    const texts = page.changes.some(isText) || (await this.db.held.count()) > 0 ? await import('@shared/text/apply-pulled-texts') : null;
+    const texts =
+      page.changes.some(isText) ||
+      (await this.db.held
+        .where('collection')
+        .anyOf([...this.known])
+        .count()) > 0
+        ? await import('@shared/text/apply-pulled-texts')
+        : null;
     await this.db.transaction('rw', [...tables.map((name) => this.db.rows(name)), this.db.meta, this.db.held], async () => {
       const released = await this.db.held
         .where('collection')
