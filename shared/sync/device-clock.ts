@@ -30,3 +30,16 @@ export function restampClocks(oldClocks: readonly string[], node: string, correc
   for (const old of oldClocks) if (!renamed.has(old)) renamed.set(old, clock.tick());
   return renamed;
 }
+
+/**
+ * The clock a re-stamp must come after: the greatest clock seen from others, and every clock this
+ * device keeps below the first refused one (`from`) — its own earlier writes, the adds a pending
+ * remove names, the last re-stamp. Else a remove could precede the add it removes, or a new write
+ * an older one. A clock at or above `from` is itself being re-stamped (or was refused again after
+ * an offset learnt across a jump) and is no floor.
+ */
+export function restampFloor(from: string, seen: string | null | undefined, kept: Iterable<string | null | undefined>): string | null {
+  let floor = seen ?? null;
+  for (const clock of kept) if (clock && clock < from && (!floor || clock > floor)) floor = clock;
+  return floor;
+}

@@ -109,6 +109,9 @@ export function greatestClock(state: OrSetState): string | null {
   return greatest;
 }
 
+/** Every clock a state names, in no particular order. */
+export const orSetClocks = (state: OrSetState): string[] => Object.values(state).flatMap(({ a, r }) => [...Object.values(a), ...Object.values(r)]);
+
 /**
  * Code-point order, which is the byte order of the UTF-8 forms: how PostgreSQL's COLLATE "C"
  * compares (JavaScript's `<` compares UTF-16 units, which differs above U+FFFF).

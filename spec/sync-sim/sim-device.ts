@@ -1,9 +1,9 @@
 import type { ChangeProblem, FieldChange, PullResponse } from '../../shared/sync/field-change';
-import { clockOffsetMs, restampClocks } from '../../shared/sync/device-clock';
+import { clockOffsetMs, restampClocks, restampFloor } from '../../shared/sync/device-clock';
 import { HlcClock } from '../../shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '../../shared/sync/local-row';
 import { currentSetState, mergeSetField } from '../../shared/sync/merge-set';
-import { isEmptyOrSet, orSetDelta, orSetElements, renameOrSetClocks, type OrSetState } from '../../shared/sync/or-set';
+import { isEmptyOrSet, orSetClocks, orSetDelta, orSetElements, renameOrSetClocks, type OrSetState } from '../../shared/sync/or-set';
 import { fieldSpecOf } from '../../shared/sync/schema/collections';
 import { runSyncCycle, type PushOutcome, type QueuedChange, type SyncPorts } from '../../shared/sync/sync-cycle';
 import type { SimRequest, SimResponse } from './sim-wire';
@@ -203,8 +203,8 @@ export class SimDevice {
         for (const change of changes) this.acknowledged.add(change.id);
         for (const change of changes) if (!durable.restamped || change.hlc > durable.restamped) durable.restamped = change.hlc;
       },
-      // As DexieSyncPorts.restamp: new clocks in outbox order from the corrected time, after the greatest clock
-      // pulled; the outbox and rows follow. A set delta carries its own clock inside: renamed with it.
+      // As DexieSyncPorts.restamp: new clocks in outbox order from the corrected time, after `restampFloor`;
+      // the outbox and rows follow. A set delta carries its own clock inside: renamed with it.
       restamp: async (changes) => {
         alive();
         if (this.options.clockAhead === 'set-aside') {
@@ -216,17 +216,14 @@ export class SimDevice {
         // After everything seen from others, the last re-stamp, and every clock the device keeps that is not re-stamped (its
         // own earlier writes, the adds a delta removes): else a remove could precede the add it removes, or a new write an old one.
         const kept = [
-          ...durable.outbox.flatMap((c) => [c.hlc, ...(isSet(c) ? setClocks(c.value as OrSetState) : [])]),
-          ...[...durable.rows.values()].flatMap((row) => [...Object.values(row._hlc), ...Object.values(row._sets ?? {}).flatMap(setClocks)]),
+          ...durable.outbox.flatMap((c) => [c.hlc, ...(isSet(c) ? orSetClocks(c.value as OrSetState) : [])]),
+          ...[...durable.rows.values()].flatMap((row) => [...Object.values(row._hlc), ...Object.values(row._sets ?? {}).flatMap(orSetClocks)]),
         ];
-        // A re-stamp refused again (from an offset learnt across a jump) is no floor.
-        const earlier = [durable.restamped ?? '', ...kept].filter((hlc) => hlc < from);
-        const seen = [durable.seenClock, ...earlier].reduce<string | null>((max, c) => (c && (!max || c > max) ? c : max), null);
         const renamed = restampClocks(
           ordered.map((c) => c.hlc),
           this.node,
           () => this.deviceNow(),
-          seen,
+          restampFloor(from, durable.seenClock, [durable.restamped, ...kept]),
         );
         durable.restamped = [...renamed.values()].at(-1) ?? durable.restamped;
         const rename = (hlc: string) => renamed.get(hlc) ?? hlc;

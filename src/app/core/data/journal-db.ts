@@ -32,10 +32,11 @@ export interface StoredCover {
 /**
  * Small key-value facts about this database: the last clock, the pull cursor, the last sync, the
  * offset from the server's time (ms, as text), the greatest clock seen from others, whether the
- * reader was told their date looks wrong, and recent edits another device overwrote (JSON).
+ * reader was told their date looks wrong, recent edits another device overwrote (JSON), and the
+ * last clock a re-stamp gave (a floor for the next one).
  */
 export interface MetaEntry {
-  readonly key: 'clock' | 'cursor' | 'lastSyncedAt' | 'clockOffset' | 'seenClock' | 'clockWarned' | 'overwritten';
+  readonly key: 'clock' | 'cursor' | 'lastSyncedAt' | 'clockOffset' | 'seenClock' | 'clockWarned' | 'overwritten' | 'restamped';
   readonly value: string;
 }
 

@@ -2,11 +2,11 @@ import { HttpClient, HttpErrorResponse, type HttpResponse } from '@angular/commo
 import { firstValueFrom } from 'rxjs';
 
 import { isApiErrorBody } from '@shared/api/api-error';
-import { clockOffsetMs, restampClocks } from '@shared/sync/device-clock';
+import { clockOffsetMs, restampClocks, restampFloor } from '@shared/sync/device-clock';
 import type { ChangeProblem, FieldChange, PulledChange, PullResponse, PushResponse } from '@shared/sync/field-change';
 import { HlcClock } from '@shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '@shared/sync/local-row';
-import { renameOrSetClocks, type OrSetState } from '@shared/sync/or-set';
+import { orSetClocks, renameOrSetClocks, type OrSetState } from '@shared/sync/or-set';
 import { COLLECTIONS, fieldSpecOf } from '@shared/sync/schema/collections';
 import type { PushOutcome, QueuedChange, SyncPorts } from '@shared/sync/sync-cycle';
 import { textFieldMax } from '@shared/text/text-fields';
@@ -46,23 +46,32 @@ export class DexieSyncPorts implements SyncPorts {
   }
 
   /**
-   * Stamps refused changes again from the server-corrected time, in outbox order and after the
-   * greatest clock seen from others; the rows' field clocks follow, and so does the device clock.
+   * Stamps refused changes again from the server-corrected time — and every later change of the
+   * outbox with them (written after them, so no less ahead) — in outbox order, after the greatest
+   * clock seen from others and every clock the device keeps below the first refused one (see
+   * `restampFloor`). The rows' field and set clocks follow, and so does the device clock.
    */
   async restamp(changes: readonly QueuedChange[]): Promise<void> {
-    const tables = [...new Set(changes.map((change) => change.collection))].filter((name) => this.known.has(name)).map((name) => this.db.rows(name));
+    const tables = this.db.tables.filter((table) => this.known.has(table.name)).map((table) => this.db.rows(table.name));
     await this.db.transaction('rw', [this.db.outbox, this.db.meta, ...tables], async () => {
       const offset = await this.offset();
-      const seen = (await this.db.meta.get('seenClock'))?.value;
-      const ordered = [...changes].sort((a, b) => a.seq! - b.seq!);
+      const from = changes.reduce((min, change) => (change.hlc < min ? change.hlc : min), changes[0]!.hlc);
+      const outbox = await this.db.outbox.orderBy('seq').toArray();
+      const ordered = outbox.filter((change) => change.hlc >= from);
+      const isSet = (change: QueuedChange) => fieldSpecOf(change.collection, change.field)?.kind === 'set';
+      const kept: (string | undefined)[] = [(await this.db.meta.get('restamped'))?.value];
+      for (const change of outbox) kept.push(change.hlc, ...(isSet(change) ? orSetClocks(change.value as OrSetState) : []));
+      // A rare event (a wrong date): reading every row once is the price of never ordering a write before its own past.
+      for (const table of tables) {
+        await table.each((row) => kept.push(...Object.values(row._hlc), ...Object.values(row._sets ?? {}).flatMap(orSetClocks)));
+      }
       const renamed = restampClocks(
         ordered.map((change) => change.hlc),
         deviceId(),
         () => Date.now() + offset,
-        seen,
+        restampFloor(from, (await this.db.meta.get('seenClock'))?.value, kept),
       );
       const rename = (hlc: string) => renamed.get(hlc) ?? hlc;
-      const isSet = (change: QueuedChange) => fieldSpecOf(change.collection, change.field)?.kind === 'set';
       // A set change carries its clock inside its adds and removes: they move with it, or the server refuses it.
       await this.db.outbox.bulkPut(
         ordered.map((change) => ({
@@ -71,20 +80,22 @@ export class DexieSyncPorts implements SyncPorts {
           value: isSet(change) ? renameOrSetClocks(change.value as OrSetState, rename) : change.value,
         })),
       );
-      for (const change of ordered) {
-        if (!this.known.has(change.collection)) continue;
-        const row = await this.db.rows(change.collection).get(change.rowId);
+      const touched = new Set(ordered.filter((change) => this.known.has(change.collection)).map((change) => `${change.collection}\u0000${change.rowId}`));
+      for (const key of touched) {
+        const [collection, rowId] = key.split('\u0000') as [string, string];
+        const row = await this.db.rows(collection).get(rowId);
         if (!row) continue;
-        const state = row._sets?.[change.field];
-        const clockMoves = row._hlc[change.field] === change.hlc;
-        if (!clockMoves && !state) continue;
-        await this.db.rows(change.collection).put({
+        await this.db.rows(collection).put({
           ...row,
-          _hlc: clockMoves ? { ...row._hlc, [change.field]: rename(change.hlc) } : row._hlc,
-          ...(state ? { _sets: { ...row._sets, [change.field]: renameOrSetClocks(state, rename) } } : {}),
+          _hlc: Object.fromEntries(Object.entries(row._hlc).map(([field, hlc]) => [field, rename(hlc)])),
+          ...(row._sets ? { _sets: Object.fromEntries(Object.entries(row._sets).map(([field, state]) => [field, renameOrSetClocks(state, rename)])) } : {}),
         });
       }
-      await this.db.meta.put({ key: 'clock', value: [...renamed.values()].at(-1)! });
+      const last = [...renamed.values()].at(-1)!;
+      await this.db.meta.bulkPut([
+        { key: 'clock', value: last },
+        { key: 'restamped', value: last },
+      ]);
     });
   }
 
