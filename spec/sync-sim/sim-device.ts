@@ -285,6 +285,3 @@ export class SimDevice {
 }
 
 const isSet = (change: { collection: string; field: string }) => fieldSpecOf(change.collection, change.field)?.kind === 'set';
-
-/** Every clock a set state names. */
-const setClocks = (state: OrSetState): string[] => Object.values(state).flatMap(({ a, r }) => [...Object.values(a), ...Object.values(r)]);
