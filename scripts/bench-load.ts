@@ -97,7 +97,15 @@ async function drive(base: URL, readers: { quiet: Reader[]; writers: Reader[]; h
     statuses: new Map(),
     seconds,
   };
-  const pick = <T>(list: T[]) => list[Math.floor(Math.random() * list.length)]!;
+  // A device syncs one request at a time: a reader already in flight is not picked again (the server
+  // allows two pulls at once per reader and answers a third with 429, which no real client sends).
+  const busy = new Set<Reader>();
+  const pick = (list: Reader[]) => {
+    let reader = list[Math.floor(Math.random() * list.length)]!;
+    while (busy.has(reader)) reader = list[Math.floor(Math.random() * list.length)]!;
+    busy.add(reader);
+    return reader;
+  };
   const until = Date.now() + seconds * 1000;
   const timer = onTick ? setInterval(onTick, 10_000) : undefined;
   await Promise.all(
@@ -107,18 +115,22 @@ async function drive(base: URL, readers: { quiet: Reader[]; writers: Reader[]; h
         const kind: Kind = roll < 0.8 ? 'empty pull' : roll < 0.95 ? 'small push' : 'big pull';
         const started = process.hrtime.bigint();
         let status: number | string;
+        let reader: Reader | undefined;
         try {
           if (kind === 'empty pull') {
-            const reader = pick(readers.quiet);
+            reader = pick(readers.quiet);
             status = (await send(base, 'GET', `/api/sync/pull?since=${reader.cursor}`, reader.token)).status;
           } else if (kind === 'small push') {
-            const writer = pick(readers.writers);
-            status = (await send(base, 'POST', '/api/sync/push', writer.token, smallPush(writer))).status;
+            reader = pick(readers.writers);
+            status = (await send(base, 'POST', '/api/sync/push', reader.token, smallPush(reader))).status;
           } else {
-            status = (await send(base, 'GET', '/api/sync/pull?limit=1000', pick(readers.heavy).token)).status;
+            reader = pick(readers.heavy);
+            status = (await send(base, 'GET', '/api/sync/pull?limit=1000', reader.token)).status;
           }
         } catch (error) {
           status = (error as { code?: string }).code ?? 'error';
+        } finally {
+          if (reader) busy.delete(reader);
         }
         tally.latencies[kind].push(Number(process.hrtime.bigint() - started) / 1e6);
         if (status !== 200) tally.errors[kind]++;
