@@ -61,6 +61,15 @@ describe('HLC (Kulkarni et al. 2014, "Logical Physical Clocks")', () => {
     expect(parseHlc(clock.current())?.wall).toBe(1_000_000 + MAX_CLOCK_AHEAD_MS);
   });
 
+  it('adopts a clock the server already checked however far ahead it looks, so the next event orders after it', () => {
+    const pt = physical(1_000_000);
+    const clock = new HlcClock('a', pt.now);
+    const far = formatHlc({ wall: 1_000_000 + 3 * MAX_CLOCK_AHEAD_MS, counter: 4, node: 'z' });
+
+    clock.receive(far, { checkedByServer: true });
+    expect(clock.tick() > far).toBeTrue();
+  });
+
   it('string order equals (wall, counter, node) order for any clocks (property)', () => {
     const hlc = fc.record({
       wall: fc.integer({ min: 0, max: 10 ** 15 - 1 }),

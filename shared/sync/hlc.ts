@@ -65,13 +65,17 @@ export class HlcClock {
 
   /**
    * Takes in a clock seen from elsewhere (the paper's receive rule), so this node's next events
-   * order after it. Refuses a clock more than 24 hours ahead of the local wall clock.
+   * order after it. Refuses a clock more than 24 hours ahead of the local wall clock, unless
+   * `checkedByServer`: a pulled clock was bounded by the server's own time when it was pushed
+   * (`clock_ahead`), so when it looks far ahead the fault is this device's time (a wrong date, or
+   * an offset measured across a jump) — refusing it would stamp the next edit below a clock this
+   * device already holds, and that edit would lose to the older one on every other device.
    */
-  receive(remoteText: string): void {
+  receive(remoteText: string, { checkedByServer = false }: { checkedByServer?: boolean } = {}): void {
     const remote = parseHlc(remoteText);
     if (!remote) throw new RangeError(`Not a clock: ${remoteText}`);
     const physical = this.now();
-    if (remote.wall > physical + MAX_CLOCK_AHEAD_MS) throw new ClockAheadError(remoteText);
+    if (!checkedByServer && remote.wall > physical + MAX_CLOCK_AHEAD_MS) throw new ClockAheadError(remoteText);
     const previous = this.wall;
     this.wall = Math.max(previous, remote.wall, physical);
     if (this.wall === previous && this.wall === remote.wall) this.counter = Math.max(this.counter, remote.counter) + 1;

@@ -50,6 +50,32 @@ describe('Fault schedules (simulated devices, network and crashes)', () => {
     expect(totals.clockAhead).toBeGreaterThan(20); // 30 with this seed
   }, 60_000); // a few seconds here; room for a busy machine
 
+  it('When a device’s clock jumps back 3 days while a pull is in flight and it then edits a field it has pulled, then its edit orders after the pulled one and all converge', async () => {
+    // Found by `npm run chaos` (seed 1126624529): the offset measured across the jump was half of it, the device
+    // refused to adopt the pulled clock as "over 24 h ahead", and stamped its edit below a clock it already held.
+    const edit = { collection: 'bookStatusChanges', field: 'changedAt', value: '2026-05-28T20:26:40.000Z' } as const;
+    const schedule = {
+      devices: 2,
+      batchSize: 1,
+      pullLimit: 1,
+      skews: [1, 0, 0, 0],
+      steps: [
+        { t: 'write', d: 0, row: 1, edit },
+        { t: 'sync', d: 0 },
+        { t: 'sync', d: 1 },
+        { t: 'deliver', k: 0, fault: 'ok' },
+        { t: 'jump', d: 1, skewMs: -3 * 24 * 60 * 60 * 1000 },
+        { t: 'deliver', k: 0, fault: 'ok' },
+        { t: 'write', d: 1, row: 1, edit },
+        { t: 'deliver', k: 0, fault: 'drop-request' },
+      ],
+    } as unknown as Parameters<typeof runSchedule>[0];
+    const outcome = await runSchedule(schedule, new ServerModel(), MODEL_START_MS);
+    expect(outcome.writes).toBe(2);
+    expect(summary(outcome)).toEqual(jasmine.objectContaining({ divergent: 0, lostAcknowledged: 0 }));
+    expect(isClean(outcome)).toBeTrue();
+  });
+
   it('When the server forgets one change of a batch, then the checks find a schedule that shows it (and shrink it)', async () => {
     /** A broken server: answers 200 for a push of two or more changes but drops the last one. */
     class ForgetfulServer extends ServerModel {

@@ -263,14 +263,10 @@ export class SimDevice {
           const key = `${change.collection}/${change.rowId}`;
           durable.rows.set(key, applyPulled(durable.rows.get(key) ?? emptyRow(change.rowId), [change]));
         }
-        // As DexieSyncPorts.adoptClocks: remember the greatest clock; adopt it unless it is over 24 h ahead even of the corrected time.
+        // As DexieSyncPorts.adoptClocks: remember the greatest clock and adopt it (the server bounded it by its own time).
         const latest = page.changes.reduce<string | null>((max, change) => (max === null || change.hlc > max ? change.hlc : max), null);
         if (latest && (!durable.seenClock || latest > durable.seenClock)) durable.seenClock = latest;
-        try {
-          if (latest) this.clock.receive(latest);
-        } catch {
-          // keep our own clock
-        }
+        if (latest) this.clock.receive(latest, { checkedByServer: true });
         durable.lastClock = this.clock.current();
         durable.cursor = page.cursor;
       },

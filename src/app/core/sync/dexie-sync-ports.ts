@@ -217,11 +217,7 @@ export class DexieSyncPorts implements SyncPorts {
     const clock = new HlcClock(deviceId(), () => Date.now() + offset, (await this.db.meta.get('clock'))?.value);
     const seen = (await this.db.meta.get('seenClock'))?.value;
     if (!seen || latest > seen) await this.db.meta.put({ key: 'seenClock', value: latest });
-    try {
-      clock.receive(latest);
-      await this.db.meta.put({ key: 'clock', value: clock.current() });
-    } catch {
-      // A clock over 24 h ahead even of the corrected time: keep our own.
-    }
+    clock.receive(latest, { checkedByServer: true });
+    await this.db.meta.put({ key: 'clock', value: clock.current() });
   }
 }
