@@ -32,10 +32,7 @@ describe('trashEntries', () => {
   });
 
   it('lists a session deleted on its own before its book separately', () => {
-    const entries = trashEntries(
-      { books: [gone('b1', bookDelete)], sessions: [gone('s1', at('2026-11-18T08:00:00Z'), { bookId: 'b1' })] },
-      NOW,
-    );
+    const entries = trashEntries({ books: [gone('b1', bookDelete)], sessions: [gone('s1', at('2026-11-18T08:00:00Z'), { bookId: 'b1' })] }, NOW);
     expect(entries.map((e) => e.collection)).toEqual(['books', 'sessions']);
     expect(entries[0]!.companions).toEqual([]);
   });

@@ -19,9 +19,7 @@ const NOW = Date.now();
 /** A row as a device would hold it after folding the pulled fields. */
 function rowOf(state: FieldState, collection: string, id: string): LocalRow {
   const prefix = `${collection}/${id}/`;
-  const changes = [...state.entries()]
-    .filter(([key]) => key.startsWith(prefix))
-    .map(([key, { value, hlc }]) => ({ field: key.slice(prefix.length), value, hlc }));
+  const changes = [...state.entries()].filter(([key]) => key.startsWith(prefix)).map(([key, { value, hlc }]) => ({ field: key.slice(prefix.length), value, hlc }));
   return applyPulled(emptyRow(id), changes);
 }
 
@@ -65,7 +63,9 @@ describe('tombstones across devices and the purge job', () => {
       const { laptop, phone } = await twoDevices();
       const ids = await bookWithSession(laptop, NOW - 60_000);
       // The phone, which never saw the delete, renames the book a minute after the laptop deleted it…
-      expect((await phone.push([fieldChange(ids.bookId, 'title', 'The Lantern Keeper’s Almanac (2nd ed.)', { wall: NOW - 20_000, node: 'phone' })])).status).toBe(200);
+      expect((await phone.push([fieldChange(ids.bookId, 'title', 'The Lantern Keeper’s Almanac (2nd ed.)', { wall: NOW - 20_000, node: 'phone' })])).status).toBe(
+        200,
+      );
       // …and the laptop comes back online with its delete, stamped earlier.
       expect((await laptop.push(deleteBoth(ids, NOW - 30_000))).status).toBe(200);
 
@@ -77,7 +77,9 @@ describe('tombstones across devices and the purge job', () => {
       expect(book['deleted']).toBeTrue();
       expect(book['title']).toBe('The Lantern Keeper’s Almanac (2nd ed.)');
       expect(editedAfterDelete(book)).toBeTrue();
-      expect(deletedWith(session, deletionClock(book)!)).withContext('restored together with the book').toBeTrue();
+      expect(deletedWith(session, deletionClock(book)!))
+        .withContext('restored together with the book')
+        .toBeTrue();
     });
 
     it('When the delete is later than the other device’s edit, then the delete wins and nothing is flagged', async () => {
@@ -125,7 +127,9 @@ describe('tombstones across devices and the purge job', () => {
       expect(after).toEqual({ title: null, tags: null, sets: {}, deleted: true, clocks: { title: deletedAt, tags: deletedAt, deleted: deletedAt } });
       const [session] = await dataSource.query('SELECT active_minutes, book_id FROM sessions WHERE user_id = $1 AND id = $2', [userId, old.sessionId]);
       expect(session).toEqual({ active_minutes: null, book_id: null });
-      expect((await stored(recent.bookId))[0].title).withContext('29 days: still in Trash').toBe('The Lantern Keeper’s Almanac');
+      expect((await stored(recent.bookId))[0].title)
+        .withContext('29 days: still in Trash')
+        .toBe('The Lantern Keeper’s Almanac');
       const texts = await dataSource.query('SELECT count(*)::int AS n FROM text_states WHERE user_id = $1 AND row_id = $2', [userId, pageId]);
       expect(texts[0].n).toBe(0);
 

@@ -18,7 +18,11 @@ type Deleted = Partial<Record<TrashKind, TrashRow[]>>;
 /** Every deleted row of the kinds Trash shows, and every book (titles for sessions, quotes…). */
 async function deletedRows(db: JournalDb): Promise<{ deleted: Deleted; titles: Map<string, string> }> {
   const deleted: Deleted = {};
-  for (const kind of TRASH_KINDS) deleted[kind] = (await db.rows(kind).filter((row) => row['deleted'] === true).toArray()) as TrashRow[];
+  for (const kind of TRASH_KINDS)
+    deleted[kind] = (await db
+      .rows(kind)
+      .filter((row) => row['deleted'] === true)
+      .toArray()) as TrashRow[];
   const books = await db.rows('books').toArray();
   return { deleted, titles: new Map(books.map((book) => [book.id, String(book['title'] ?? 'a book')])) };
 }
