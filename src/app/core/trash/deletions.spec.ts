@@ -1,5 +1,7 @@
 import { TestBed } from '@angular/core/testing';
 
+import type { LocalRow } from '@shared/sync/local-row';
+
 import { openTestJournal, type TestJournal } from '../testing/test-journal';
 import { Deletions } from './deletions';
 
@@ -12,7 +14,8 @@ describe('Deletions', () => {
   let journal: TestJournal;
   let deletions: Deletions;
   const deleted = async (collection: 'books' | 'sessions' | 'quotes', id: string) => (await journal.store.get(collection, id))?.deleted;
-  const clockOf = async (collection: 'books' | 'sessions' | 'quotes', id: string) => (await journal.store.get(collection, id))?._hlc['deleted'];
+  const clockOf = async (collection: 'books' | 'sessions' | 'quotes', id: string) =>
+    ((await journal.db.rows(collection).get(id)) as LocalRow | undefined)?._hlc['deleted'];
 
   beforeEach(async () => {
     journal = openTestJournal();
