@@ -152,7 +152,8 @@ export class NotebookView {
   }
 
   protected async removeNotebook(): Promise<void> {
-    await this.notebooks.removeNotebook(this.id());
+    const title = this.notebook()?.title || 'Untitled notebook';
+    await this.deleteWithUndo('notebooks', this.id(), `Notebook “${title}” deleted.`);
     // The reader chose to delete it, half-typed details and all.
     await this.router.navigate(['/journal/notebooks'], { info: LEAVE_WITHOUT_ASKING });
   }
