@@ -20,6 +20,7 @@ describe('trashEntries', () => {
         books: [gone('b1', bookDelete, { title: 'The Salt Orchard' })],
         sessions: [gone('s1', bookDelete, { bookId: 'b1' }), gone('s2', bookDelete, { bookId: 'b1' })],
         quotes: [gone('q1', bookDelete, { bookId: 'b1' })],
+        bookStatusChanges: [gone('h1', bookDelete, { bookId: 'b1' })],
       },
       NOW,
     );
@@ -28,6 +29,7 @@ describe('trashEntries', () => {
     expect(entries[0]!.companions.map((g) => [g.collection, g.rows.length])).toEqual([
       ['sessions', 2],
       ['quotes', 1],
+      ['bookStatusChanges', 1],
     ]);
   });
 

@@ -37,9 +37,10 @@ export interface TrashEntry {
 /**
  * Trash from the deleted rows of each kind: what was deleted within the window, newest first. A
  * row deleted in the same write as its parent (the same clock) is listed under the parent, not
- * on its own, since restoring the parent brings it back.
+ * on its own, since restoring the parent brings it back. Kinds outside {@link TRASH_KINDS} (a
+ * book's status history) may be given: they count under their parent but are never listed.
  */
-export function trashEntries(deleted: Partial<Record<TrashKind, readonly TrashRow[]>>, nowMs: number): TrashEntry[] {
+export function trashEntries(deleted: Partial<Record<CollectionName, readonly TrashRow[]>>, nowMs: number): TrashEntry[] {
   const companionIds = new Set<string>();
   const entries: TrashEntry[] = [];
   for (const collection of TRASH_KINDS) {
@@ -48,7 +49,7 @@ export function trashEntries(deleted: Partial<Record<TrashKind, readonly TrashRo
       const clock = deletionClock(row)!;
       const companions = dependentsOf(collection).map(({ collection: kind, ref }) => ({
         collection: kind,
-        rows: (deleted[kind as TrashKind] ?? []).filter((child) => child[ref] === row.id && deletionClock(child) === clock),
+        rows: (deleted[kind] ?? []).filter((child) => child[ref] === row.id && deletionClock(child) === clock),
       }));
       for (const group of companions) for (const child of group.rows) companionIds.add(`${group.collection}/${child.id}`);
       const edited = editedAfterDelete(row) || companions.some((group) => group.rows.some(editedAfterDelete));

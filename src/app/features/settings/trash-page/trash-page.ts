@@ -4,6 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 
+import type { CollectionName } from '@shared/sync/schema/collections';
 import { companionLine } from '@shared/trash/companion-words';
 import { TRASH_KINDS, trashEntries, type TrashEntry, type TrashKind, type TrashRow } from '@shared/trash/trash-entries';
 
@@ -13,12 +14,15 @@ import { CLOCK } from '../../../core/time/clock';
 import { Deletions } from '../../../core/trash/deletions';
 import { TRASH_HEADINGS, trashTitle } from './trash-words';
 
-type Deleted = Partial<Record<TrashKind, TrashRow[]>>;
+type Deleted = Partial<Record<CollectionName, TrashRow[]>>;
+
+/** Listed under their book, never on their own. */
+const COUNTED_ONLY = ['bookStatusChanges'] as const;
 
 /** Every deleted row of the kinds Trash shows, and every book (titles for sessions, quotes…). */
 async function deletedRows(db: JournalDb): Promise<{ deleted: Deleted; titles: Map<string, string> }> {
   const deleted: Deleted = {};
-  for (const kind of TRASH_KINDS)
+  for (const kind of [...TRASH_KINDS, ...COUNTED_ONLY])
     deleted[kind] = (await db
       .rows(kind)
       .filter((row) => row['deleted'] === true)
