@@ -45,6 +45,7 @@ export class BookStatus {
   /** The next book of the series, offered in a snackbar. */
   private async suggestNext(bookId: string, seriesId: string): Promise<void> {
     const series = (await this.store.get('series', seriesId)) as Series | undefined;
+    if (series?.deleted) return; // a deleted series links nothing
     const next = nextUnread(seriesBooks(await this.store.list('books'), seriesId), bookId);
     if (!next) return;
     this.snackBar

@@ -5,6 +5,7 @@ import type { NotebookPage, PageTemplate } from '@shared/sync/schema/collections
 
 import { Notebooks } from './notebooks';
 import { openTestJournal, outboxMark, outboxSince, type TestJournal } from '../../core/testing/test-journal';
+import { Deletions } from '../../core/trash/deletions';
 
 describe('Notebooks (real IndexedDB)', () => {
   let journal: TestJournal;
@@ -55,9 +56,9 @@ describe('Notebooks (real IndexedDB)', () => {
   it('deletes a page and brings it back; deletes a notebook together with its pages', async () => {
     const notebookId = await notebooks.createNotebook('Short-lived', null);
     const pageId = await notebooks.addPage(notebookId, null, '2026-03-08');
-    await notebooks.removePage(pageId);
+    await TestBed.inject(Deletions).remove('notebookPages', pageId);
     expect(await notebooks.pagesOf(notebookId)).toEqual([]);
-    await notebooks.restorePage(pageId);
+    await TestBed.inject(Deletions).restore('notebookPages', pageId);
     expect((await notebooks.pagesOf(notebookId)).length).toBe(1);
 
     await notebooks.removeNotebook(notebookId);
@@ -73,7 +74,7 @@ describe('Notebooks (real IndexedDB)', () => {
 
     await notebooks.renameTemplate(id, 'Train rides');
     expect((await outboxOf(id)).at(-1)).toEqual(jasmine.objectContaining({ field: 'name', value: 'Train rides' }));
-    await notebooks.removeTemplate(id);
+    await TestBed.inject(Deletions).remove('pageTemplates', id);
     expect((await journal.store.get('pageTemplates', id))?.deleted).toBeTrue();
   });
 

@@ -9,6 +9,7 @@ import type { Book, Notebook, NotebookPage } from '@shared/sync/schema/collectio
 import type { JournalDb } from '../../core/data/journal-db';
 import { JournalStore, type RowWrite } from '../../core/data/journal-store';
 import { LocalJournal } from '../../core/data/local-journal';
+import { Deletions } from '../../core/trash/deletions';
 import { clip } from './notebook-data';
 
 /** The text of a page or template as the reader typed it. */
@@ -25,6 +26,7 @@ export interface PageText {
 export class Notebooks {
   private readonly store = inject(JournalStore);
   private readonly journal = inject(LocalJournal);
+  private readonly deletions = inject(Deletions);
 
   /** Starts a notebook, optionally about a book; returns its id. */
   createNotebook(title: string, bookId: string | null): Promise<string> {
@@ -78,22 +80,9 @@ export class Notebooks {
     if (writes.length) await this.store.writeAll(writes);
   }
 
-  /** Deletes a page (a tombstone, so {@link restorePage} can bring it back). */
-  removePage(pageId: string): Promise<void> {
-    return this.store.remove('notebookPages', pageId);
-  }
-
-  restorePage(pageId: string): Promise<void> {
-    return this.store.write('notebookPages', pageId, { deleted: false });
-  }
-
-  /** Deletes a notebook and its pages together. */
-  async removeNotebook(notebookId: string): Promise<void> {
-    const pages = await this.pagesOf(notebookId);
-    await this.store.writeAll([
-      { collection: 'notebooks', rowId: notebookId, patch: { deleted: true } },
-      ...pages.map((page): RowWrite => ({ collection: 'notebookPages', rowId: page.id, patch: { deleted: true } })),
-    ]);
+  /** Deletes a notebook and its pages together (one write, so Trash restores them together). */
+  removeNotebook(notebookId: string): Promise<void> {
+    return this.deletions.remove('notebooks', notebookId);
   }
 
   /** Saves a page's text as a new template of the reader's own; returns its id. */
@@ -107,14 +96,6 @@ export class Notebooks {
 
   renameTemplate(templateId: string, name: string): Promise<void> {
     return this.store.write('pageTemplates', templateId, { name: name.trim() });
-  }
-
-  removeTemplate(templateId: string): Promise<void> {
-    return this.store.remove('pageTemplates', templateId);
-  }
-
-  restoreTemplate(templateId: string): Promise<void> {
-    return this.store.write('pageTemplates', templateId, { deleted: false });
   }
 
   private positionWrites(writes: readonly { id: string; position: number }[]): RowWrite[] {

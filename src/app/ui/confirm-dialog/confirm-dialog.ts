@@ -10,7 +10,7 @@ export interface ConfirmDialogData {
   readonly no: string;
 }
 
-/** A yes-or-no question about the timer; closes with `true` for yes. */
+/** A yes-or-no question (a timer to replace, a book to delete); closes with `true` for yes. */
 @Component({
   selector: 'll-confirm-dialog',
   imports: [MatDialogModule, MatButtonModule],

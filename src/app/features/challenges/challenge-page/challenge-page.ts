@@ -23,7 +23,7 @@ import { celebrateOnce } from '../celebrate-once';
 import { ChallengeCelebration } from '../challenge-celebration/challenge-celebration';
 import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challenge-labels';
 import { periodLine } from '../challenge-period';
-import { offerUndo } from '../../../ui/offer-undo';
+import { undoableDelete } from '../../../ui/undoable-delete';
 
 type Prompt = NonNullable<Challenge['prompts']>[number];
 
@@ -58,7 +58,7 @@ export class ChallengePage {
   private readonly store = inject(JournalStore);
   private readonly promptUpdates = new OneAtATime();
   private readonly router = inject(Router);
-  private readonly offerUndo = offerUndo();
+  private readonly deleteWithUndo = undoableDelete();
   private readonly record = goalRecord();
   protected readonly loaded = computed(() => this.record.rows() !== null);
   protected readonly today = this.record.today;
@@ -188,9 +188,8 @@ export class ChallengePage {
   protected async remove(): Promise<void> {
     const id = this.id();
     const name = this.challenge()?.name ?? 'The challenge';
-    await this.store.remove('challenges', id);
+    await this.deleteWithUndo('challenges', id, `${name} deleted.`);
     await this.router.navigate(['/goals/challenges']);
-    this.offerUndo(`${name} removed`, () => this.store.write('challenges', id, { deleted: false }));
   }
 
   /**

@@ -12,6 +12,7 @@ import { FAVOURITE_KINDS, type Book, type Favourite, type MonthPick, type Quote 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { fieldError } from '../../../ui/field-errors';
+import { undoableDelete } from '../../../ui/undoable-delete';
 import { readerToday } from '../../../core/time/reader-today';
 
 const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'Book', author: 'Author', quote: 'Quote' };
@@ -26,6 +27,7 @@ const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'B
 })
 export class FavouritesPage {
   private readonly store = inject(JournalStore);
+  private readonly deleteWithUndo = undoableDelete();
   private readonly data = liveQuerySignal(
     async (db) => ({
       favourites: ((await db.rows('favourites').toArray()) as Favourite[]).filter((f) => !f.deleted),
@@ -96,7 +98,12 @@ export class FavouritesPage {
   }
 
   protected removeFavourite(favourite: Favourite): Promise<void> {
-    return this.store.remove('favourites', favourite.id);
+    return this.deleteWithUndo('favourites', favourite.id, 'Favourite removed.');
+  }
+
+  /** Deletes the month's pick; choosing a book for the month again brings the row back. */
+  protected removePick(pick: MonthPick): Promise<void> {
+    return this.deleteWithUndo('monthPicks', pick.id, 'Pick removed.');
   }
 
   /** One row per month, the same on every device (a name-based id), so picks never double up. */

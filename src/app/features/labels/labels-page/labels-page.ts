@@ -9,6 +9,7 @@ import { LABEL_COLOURS, LABEL_ICONS, type Label } from '@shared/sync/schema/coll
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { fieldError, notBlank } from '../../../ui/field-errors';
+import { undoableDelete } from '../../../ui/undoable-delete';
 import { LabelDirectory, type LabelView } from '../../../core/read-model/label-directory';
 
 /** Words for our colours and icons, so choices read well to everyone. */
@@ -45,6 +46,7 @@ const ICON_NAMES: Record<NonNullable<Label['icon']>, string> = {
 })
 export class LabelsPage {
   private readonly store = inject(JournalStore);
+  private readonly deleteWithUndo = undoableDelete();
   protected readonly directory = inject(LabelDirectory);
   protected readonly colours = LABEL_COLOURS;
   protected readonly icons = LABEL_ICONS;
@@ -83,6 +85,8 @@ export class LabelsPage {
   }
 
   protected async remove(label: LabelView): Promise<void> {
-    await this.store.write('labels', label.id, { name: label.name, colour: label.colour, icon: label.icon, deleted: true });
+    // A starter label has no row until first changed: make it whole first, so Trash can name it.
+    await this.store.write('labels', label.id, { name: label.name, colour: label.colour, icon: label.icon });
+    await this.deleteWithUndo('labels', label.id, `Label “${label.name}” removed.`);
   }
 }

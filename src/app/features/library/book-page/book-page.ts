@@ -2,12 +2,11 @@ import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
-import { RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 
 import { BOOK_STATUSES, type Book, type BookStatusChange, type Reading, type Series } from '@shared/sync/schema/collections';
 
 import type { JournalDb } from '../../../core/data/journal-db';
-import { JournalStore } from '../../../core/data/journal-store';
 import { BookCover } from '../../../core/covers/book-cover/book-cover';
 import { OverwrittenNote } from '../../../core/sync/overwritten-note/overwritten-note';
 import { CatalogueOffer } from '../../catalogue';
@@ -20,6 +19,10 @@ import { LabelChips } from '../../../ui/label-chips/label-chips';
 import { BookReading } from '../../sessions';
 import { TimerStartButton } from '../../timer';
 import { liveQueryFor } from '../../../core/data/live-query-for';
+import { Deletions } from '../../../core/trash/deletions';
+import { askToConfirm } from '../../../ui/confirm-dialog/ask-to-confirm';
+import { undoableDelete } from '../../../ui/undoable-delete';
+import { companionLine } from '@shared/trash/companion-words';
 
 /** Everything the reader keeps about one book, on this device, together with what is linked to it. */
 interface BookDossier {
@@ -70,7 +73,10 @@ export class BookPage {
   /** The book's id, from the route. */
   readonly id = input.required<string>();
 
-  private readonly store = inject(JournalStore);
+  private readonly deletions = inject(Deletions);
+  private readonly router = inject(Router);
+  private readonly confirm = askToConfirm();
+  private readonly deleteWithUndo = undoableDelete();
   private readonly bookStatus = inject(BookStatus);
   private readonly quoteCapture = inject(QuoteCapture);
   private readonly data = liveQueryFor(this.id, dossier);
@@ -98,6 +104,23 @@ export class BookPage {
   }
 
   protected async deleteReading(reading: Reading): Promise<void> {
-    await this.store.remove('readings', reading.id);
+    await this.deleteWithUndo('readings', reading.id, 'Reading deleted.');
+  }
+
+  /** Asks first, saying what goes with the book; everything stays in Trash for 30 days. */
+  protected async deleteBook(): Promise<void> {
+    const book = this.book();
+    if (!book) return;
+    const companions = await this.deletions.companionsOf('books', book.id);
+    const along = companionLine(companions.map(({ collection, ids }) => ({ collection, count: ids.length })));
+    const yes = await this.confirm({
+      title: `Delete “${book.title}”?`,
+      message: `${along ? `Its ${along} go with it. ` : ''}You can restore it from Trash (Settings) for 30 days.`,
+      yes: 'Delete book',
+      no: 'Keep it',
+    });
+    if (!yes) return;
+    await this.deleteWithUndo('books', book.id, `“${book.title}” deleted.`);
+    await this.router.navigate(['/library']);
   }
 }

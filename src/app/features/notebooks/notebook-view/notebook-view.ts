@@ -23,7 +23,7 @@ import { bookOptions } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
 import { liveQueryFor } from '../../../core/data/live-query-for';
-import { offerUndo } from '../../../ui/offer-undo';
+import { undoableDelete } from '../../../ui/undoable-delete';
 
 const EXCERPT_LENGTH = 160;
 
@@ -72,7 +72,7 @@ export class NotebookView {
   private readonly store = inject(JournalStore);
   private readonly notebooks = inject(Notebooks);
   private readonly router = inject(Router);
-  private readonly offerUndo = offerUndo();
+  private readonly deleteWithUndo = undoableDelete();
 
   private readonly data = liveQueryFor(this.id, notebookData);
   protected readonly notebook = computed(() => this.data()?.notebook);
@@ -117,8 +117,7 @@ export class NotebookView {
   }
 
   protected async removePage(page: { id: string; title: string }): Promise<void> {
-    await this.notebooks.removePage(page.id);
-    this.offerUndo(`Page “${page.title || 'Untitled page'}” deleted.`, () => this.notebooks.restorePage(page.id));
+    await this.deleteWithUndo('notebookPages', page.id, `Page “${page.title || 'Untitled page'}” deleted.`);
   }
 
   protected startEditing(): void {
@@ -153,7 +152,8 @@ export class NotebookView {
   }
 
   protected async removeNotebook(): Promise<void> {
-    await this.notebooks.removeNotebook(this.id());
+    const title = this.notebook()?.title || 'Untitled notebook';
+    await this.deleteWithUndo('notebooks', this.id(), `Notebook “${title}” deleted.`);
     // The reader chose to delete it, half-typed details and all.
     await this.router.navigate(['/journal/notebooks'], { info: LEAVE_WITHOUT_ASKING });
   }

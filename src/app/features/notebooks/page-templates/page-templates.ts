@@ -13,7 +13,7 @@ import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { fieldError, notBlank } from '../../../ui/field-errors';
 import { Notebooks } from '../notebooks';
-import { offerUndo } from '../../../ui/offer-undo';
+import { undoableDelete } from '../../../ui/undoable-delete';
 
 /** The reader's own page templates: rename or delete them. The starter ones are listed as they are. */
 @Component({
@@ -25,7 +25,7 @@ import { offerUndo } from '../../../ui/offer-undo';
 })
 export class PageTemplates {
   private readonly notebooks = inject(Notebooks);
-  private readonly offerUndo = offerUndo();
+  private readonly deleteWithUndo = undoableDelete();
 
   protected readonly own = liveQuerySignal(async (db) => ownTemplates((await db.rows('pageTemplates').toArray()) as PageTemplate[]), [] as TemplateView[]);
   protected readonly starters = STARTER_TEMPLATES;
@@ -61,7 +61,6 @@ export class PageTemplates {
   }
 
   protected async remove(template: TemplateView): Promise<void> {
-    await this.notebooks.removeTemplate(template.id);
-    this.offerUndo(`Template “${template.name}” deleted.`, () => this.notebooks.restoreTemplate(template.id));
+    await this.deleteWithUndo('pageTemplates', template.id, `Template “${template.name}” deleted.`);
   }
 }

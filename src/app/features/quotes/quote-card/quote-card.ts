@@ -12,7 +12,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { LabelChips } from '../../../ui/label-chips/label-chips';
 import { authorLine } from '../../../ui/book-labels';
 import { QuoteCapture } from '../quote-capture';
-import { offerUndo } from '../../../ui/offer-undo';
+import { undoableDelete } from '../../../ui/undoable-delete';
 
 /** One quote with where it is from, and what can be done with it: favourite, copy, edit, delete. */
 @Component({
@@ -26,7 +26,7 @@ export class QuoteCard {
   private readonly store = inject(JournalStore);
   private readonly capture = inject(QuoteCapture);
   private readonly snackBar = inject(MatSnackBar);
-  private readonly offerUndo = offerUndo();
+  private readonly deleteWithUndo = undoableDelete();
 
   /** The quote to show. */
   readonly quote = input.required<Quote>();
@@ -58,7 +58,6 @@ export class QuoteCard {
   /** A tombstone, like every delete; Undo simply lifts it. */
   protected async remove(): Promise<void> {
     const id = this.quote().id;
-    await this.store.remove('quotes', id);
-    this.offerUndo('Quote deleted.', () => this.store.write('quotes', id, { deleted: false }));
+    await this.deleteWithUndo('quotes', id, 'Quote deleted.');
   }
 }

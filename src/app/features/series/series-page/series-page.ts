@@ -4,7 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 
 import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-order';
 import type { Book, Series } from '@shared/sync/schema/collections';
@@ -15,6 +15,8 @@ import { fieldError, notBlank } from '../../../ui/field-errors';
 import { STATUS_LABELS } from '../../../ui/book-labels';
 import { StarRating } from '../../../ui/star-rating/star-rating';
 import { liveQueryFor } from '../../../core/data/live-query-for';
+import { askToConfirm } from '../../../ui/confirm-dialog/ask-to-confirm';
+import { undoableDelete } from '../../../ui/undoable-delete';
 
 /** One series: its books in order, progress, the next to read, and the reader's view of it all. */
 @Component({
@@ -29,6 +31,9 @@ export class SeriesPage {
   readonly id = input.required<string>();
 
   private readonly store = inject(JournalStore);
+  private readonly router = inject(Router);
+  private readonly confirm = askToConfirm();
+  private readonly deleteWithUndo = undoableDelete();
   private readonly data = liveQueryFor(this.id, async (db, id) => ({
     series: (await db.rows('series').get(id)) as Series | undefined,
     books: (await db.rows('books').where('seriesId').equals(id).toArray()) as Book[],
@@ -89,5 +94,25 @@ export class SeriesPage {
     this.original = value;
     this.form.markAsPristine();
     this.saved.set(true);
+  }
+
+  /**
+   * Its books stay in the library: while the series is deleted every screen reads their link to
+   * it as no series, and restoring it from Trash links them again.
+   */
+  protected async deleteSeries(): Promise<void> {
+    const series = this.series();
+    if (!series) return;
+    const count = this.ordered().length;
+    const yes = await this.confirm({
+      title: `Delete the series “${series.name}”?`,
+      message: `${count === 1 ? 'Its book stays' : `Its ${count} books stay`} in your library, in no series. You can restore it from Trash (Settings) for 30 days.`,
+      yes: 'Delete series',
+      no: 'Keep it',
+    });
+    if (!yes) return;
+    this.form.markAsPristine(); // the reader chose to delete it, unsaved edits and all
+    await this.deleteWithUndo('series', series.id, `Series “${series.name}” deleted.`);
+    await this.router.navigate(['/journal/series']);
   }
 }

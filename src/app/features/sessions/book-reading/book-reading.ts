@@ -15,7 +15,7 @@ import { TIME_ZONE } from '../../../core/time/time-zone';
 import { bookForecast, bookProgress } from '../book-forecast';
 import { bookEnd, minutesLine, MOOD_LABELS, positionLine, progressLine } from '../book-position';
 import { latestPosition, newestFirst } from '../../../core/read-model/reading-sessions';
-import { offerUndo } from '../../../ui/offer-undo';
+import { undoableDelete } from '../../../ui/undoable-delete';
 
 /** One line of the session list. */
 interface SessionLine {
@@ -43,7 +43,7 @@ export class BookReading {
   readonly book = input.required<Book>();
 
   private readonly store = inject(JournalStore);
-  private readonly offerUndo = offerUndo();
+  private readonly deleteWithUndo = undoableDelete();
   private readonly timeZone = inject(TIME_ZONE);
   private readonly clock = inject(CLOCK);
   private readonly whenFormat = new Intl.DateTimeFormat(inject(LOCALE_ID), {
@@ -97,7 +97,6 @@ export class BookReading {
   }
 
   protected async remove(line: SessionLine): Promise<void> {
-    await this.store.remove('sessions', line.id);
-    this.offerUndo('Session deleted', () => this.store.write('sessions', line.id, { deleted: false }));
+    await this.deleteWithUndo('sessions', line.id, 'Session deleted.');
   }
 }

@@ -1,0 +1,69 @@
+import { inject, Injectable } from '@angular/core';
+
+import { dependentsOf } from '@shared/trash/deleted-with';
+import { deletionClock, type TombstonedRow } from '@shared/trash/tombstone';
+import type { CollectionName } from '@shared/sync/schema/collections';
+
+import type { JournalDb } from '../data/journal-db';
+import { JournalStore, type RowWrite } from '../data/journal-store';
+import { LocalJournal } from '../data/local-journal';
+
+/** The rows of one kind that go with a delete. */
+export interface Companions {
+  readonly collection: CollectionName;
+  readonly ids: readonly string[];
+}
+
+type Row = TombstonedRow & { readonly id: string };
+
+/**
+ * Deletes and restores by tombstone. A row is deleted in one write together with what depends
+ * on it (a book's readings, sessions, quotes and status history; a notebook's pages), so all of
+ * them carry the delete's one clock; restoring lifts the tombstone of exactly the rows with that
+ * clock, bringing back what went together and nothing deleted earlier on its own.
+ */
+@Injectable({ providedIn: 'root' })
+export class Deletions {
+  private readonly store = inject(JournalStore);
+  private readonly journal = inject(LocalJournal);
+
+  /** What would go with a delete of this row now (rows not deleted yet), per kind. */
+  async companionsOf(collection: CollectionName, id: string): Promise<Companions[]> {
+    const db = this.requireDb();
+    return Promise.all(
+      dependentsOf(collection).map(async ({ collection: kind, ref }) => {
+        const rows = (await db.rows(kind).where(ref).equals(id).toArray()) as Row[];
+        return { collection: kind, ids: rows.filter((row) => row.deleted !== true).map((row) => row.id) };
+      }),
+    );
+  }
+
+  /** Deletes the row and its companions in one write (one clock). */
+  async remove(collection: CollectionName, id: string): Promise<void> {
+    const companions = await this.companionsOf(collection, id);
+    await this.store.writeAll([
+      { collection, rowId: id, patch: { deleted: true } },
+      ...companions.flatMap(({ collection: kind, ids }) => ids.map((rowId): RowWrite => ({ collection: kind, rowId, patch: { deleted: true } }))),
+    ]);
+  }
+
+  /** Restores the row and whatever was deleted in the same write. */
+  async restore(collection: CollectionName, id: string): Promise<void> {
+    const db = this.requireDb();
+    const row = (await db.rows(collection).get(id)) as Row | undefined;
+    const clock = row && deletionClock(row);
+    if (!clock) return;
+    const writes: RowWrite[] = [{ collection, rowId: id, patch: { deleted: false } }];
+    for (const { collection: kind, ref } of dependentsOf(collection)) {
+      const rows = (await db.rows(kind).where(ref).equals(id).toArray()) as Row[];
+      for (const child of rows) if (deletionClock(child) === clock) writes.push({ collection: kind, rowId: child.id, patch: { deleted: false } });
+    }
+    await this.store.writeAll(writes);
+  }
+
+  private requireDb(): JournalDb {
+    const db = this.journal.db();
+    if (!db) throw new Error('Nobody is signed in on this device');
+    return db;
+  }
+}

@@ -1,0 +1,78 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
+
+import type { CollectionName } from '@shared/sync/schema/collections';
+import { companionLine } from '@shared/trash/companion-words';
+import { TRASH_KINDS, trashEntries, type TrashEntry, type TrashKind, type TrashRow } from '@shared/trash/trash-entries';
+
+import type { JournalDb } from '../../../core/data/journal-db';
+import { liveQuerySignal } from '../../../core/data/live-query';
+import { CLOCK } from '../../../core/time/clock';
+import { Deletions } from '../../../core/trash/deletions';
+import { TRASH_HEADINGS, trashTitle } from './trash-words';
+
+type Deleted = Partial<Record<CollectionName, TrashRow[]>>;
+
+/** Listed under their book, never on their own. */
+const COUNTED_ONLY = ['bookStatusChanges'] as const;
+
+/** Every deleted row of the kinds Trash shows, and every book (titles for sessions, quotes…). */
+async function deletedRows(db: JournalDb): Promise<{ deleted: Deleted; titles: Map<string, string> }> {
+  const deleted: Deleted = {};
+  for (const kind of [...TRASH_KINDS, ...COUNTED_ONLY])
+    deleted[kind] = (await db
+      .rows(kind)
+      .filter((row) => row['deleted'] === true)
+      .toArray()) as TrashRow[];
+  const books = await db.rows('books').toArray();
+  return { deleted, titles: new Map(books.map((book) => [book.id, String(book['title'] ?? 'a book')])) };
+}
+
+/** One group of Trash: a kind and its entries. */
+interface TrashGroup {
+  readonly kind: TrashKind;
+  readonly heading: string;
+  readonly items: readonly { readonly entry: TrashEntry; readonly title: string; readonly along: string }[];
+}
+
+/** Settings › Trash: what was deleted in the last 30 days, by kind, each restorable with what went with it. */
+@Component({
+  selector: 'll-trash-page',
+  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule],
+  templateUrl: './trash-page.html',
+  styleUrl: './trash-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class TrashPage {
+  private readonly deletions = inject(Deletions);
+  private readonly clock = inject(CLOCK);
+  private readonly data = liveQuerySignal(deletedRows, undefined);
+  protected readonly loaded = computed(() => this.data() !== undefined);
+  protected readonly restored = signal<string | null>(null);
+
+  protected readonly groups = computed<TrashGroup[]>(() => {
+    const data = this.data();
+    if (!data) return [];
+    const bookTitle = (id: unknown) => (typeof id === 'string' && data.titles.get(id)) || 'a book';
+    const entries = trashEntries(data.deleted, this.clock.now());
+    return TRASH_KINDS.map((kind) => ({
+      kind,
+      heading: TRASH_HEADINGS[kind],
+      items: entries
+        .filter((entry) => entry.collection === kind)
+        .map((entry) => ({
+          entry,
+          title: trashTitle(entry, bookTitle),
+          along: companionLine(entry.companions.map(({ collection, rows }) => ({ collection, count: rows.length }))),
+        })),
+    })).filter((group) => group.items.length > 0);
+  });
+
+  protected async restore(entry: TrashEntry, title: string): Promise<void> {
+    await this.deletions.restore(entry.collection, entry.row.id);
+    this.restored.set(`${title} is back.`);
+  }
+}
