@@ -5,6 +5,7 @@ import request from 'supertest';
 
 import { formatHlc } from '../../shared/sync/hlc';
 import { circleMeetingEvents } from '../../sync-server/src/circles/circle-meetings';
+import { seedDemoCircle } from '../../sync-server/src/demo/demo-circle';
 import { sendReminders } from '../../sync-server/src/jobs/circle-reminders.job';
 import { createSmtpMailer } from '../../sync-server/src/mail/mailer';
 import { bearer, registerReader, uniqueEmail } from '../support/accounts';
@@ -327,6 +328,23 @@ describe('Reading circles', () => {
       const events = await circleMeetingEvents(member.user.id, dataSource.manager);
       expect(events).toContain(jasmine.objectContaining({ uid: `circle-part-${partId}@lamplight`, start: `${day}T19:30` }));
       expect(await circleMeetingEvents(randomUUID(), dataSource.manager)).toEqual([]);
+    });
+  });
+
+  describe('demo', () => {
+    it('When the demo circle is seeded twice, then the host has one circle with a pick, two dated parts and posts, and the member pulls it', async () => {
+      const host = await registerReader(app);
+      const member = await registerReader(app);
+      const dataSource = await testDataSource();
+
+      expect(await seedDemoCircle(dataSource, host.user.id, member.user.id)).toBeTrue();
+      expect(await seedDemoCircle(dataSource, host.user.id, member.user.id)).toBeFalse();
+
+      const circles = (await request(app).get('/api/circles').set(bearer(member.accessToken)).expect(200)).body.circles;
+      expect(circles.length).toBe(1);
+      const rows = (await pull(app, member, circles[0].id).expect(200)).body.rows as { collection: string }[];
+      const count = (collection: string) => rows.filter((row) => row.collection === collection).length;
+      expect([count('circlePicks'), count('circleParts'), count('circlePosts')]).toEqual([1, 2, 2]);
     });
   });
 });

@@ -75,7 +75,8 @@ export class CirclePage {
 
   protected async refresh(): Promise<void> {
     await this.sync.syncCircle(this.id());
-    if (this.isHost()) this.joinCode.set((await this.api.details(this.id()).catch(() => null))?.joinCode ?? null);
+    // Only hosts get a code back; members and offline readers get none.
+    this.joinCode.set((await this.api.details(this.id()).catch(() => null))?.joinCode ?? null);
   }
 
   protected nameOf(view: CircleView, userId: string | undefined): string {
