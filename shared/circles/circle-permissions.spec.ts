@@ -1,3 +1,5 @@
+import { CIRCLE_COLLECTION_NAMES } from './circle-collection-names';
+import { CIRCLE_COLLECTIONS } from './circle-collections';
 import { writeRefusal, type WriteContext } from './circle-permissions';
 
 const circleId = '11111111-1111-4111-8111-111111111111';
@@ -29,5 +31,9 @@ describe('who may write what in a circle', () => {
     expect(writeRefusal(change('circleRsvps', 'answer', 'going'), { ...member, authorId: 'other' })?.code).toBe('not_allowed');
     expect(writeRefusal(change('circleProgress', 'shareProgress', true), { ...member, authorId: 'm' })).toBeNull();
     expect(writeRefusal(change('books', 'title'), member)?.code).toBe('not_allowed');
+  });
+
+  it('knows every circle collection by the names the device database declares', () => {
+    expect(Object.keys(CIRCLE_COLLECTIONS)).toEqual([...CIRCLE_COLLECTION_NAMES]);
   });
 });

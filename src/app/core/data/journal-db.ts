@@ -2,7 +2,7 @@ import Dexie, { type Table } from 'dexie';
 
 import type { FieldChange, PulledChange } from '@shared/sync/field-change';
 import type { LocalRow } from '@shared/sync/local-row';
-import { CIRCLE_COLLECTIONS } from '@shared/circles/circle-collections';
+import { CIRCLE_COLLECTION_NAMES } from '@shared/circles/circle-collection-names';
 import { COLLECTIONS } from '@shared/sync/schema/collections';
 
 /** One change waiting to reach the server; `seq` is its place in the local order of writes. */
@@ -79,7 +79,7 @@ export interface CircleMeta {
 
 /** Dexie stores for the circle collections: by id, and by circle for each circle's page. */
 export function circleStores(): Record<string, string> {
-  return Object.fromEntries(Object.values(CIRCLE_COLLECTIONS).map((spec) => [spec.name, 'id, circleId']));
+  return Object.fromEntries(CIRCLE_COLLECTION_NAMES.map((name) => [name, 'id, circleId']));
 }
 
 /** A reader's journal in IndexedDB, the app's first and only place to read and write. */
