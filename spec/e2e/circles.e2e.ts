@@ -41,7 +41,7 @@ describe('Reading circles in three browsers', () => {
     // Ada is invited by e-mail and joins through the link the local inbox caught.
     await host.page.getByLabel('E-mail address').fill(ada.email);
     await host.page.getByRole('button', { name: 'Send the invitation' }).click();
-    const mail = await (await testInbox()).inbox.waitFor((m) => m.to.includes(ada.email));
+    const mail = await (await testInbox()).inbox.waitFor((m) => m.to.includes(ada.email) && m.subject.includes('reading circle'));
     const token = /#invite=([A-Za-z0-9_.-]+)/.exec(mail.text)![1]!;
     await ada.page.goto(`${base}/circles/join#invite=${token}`);
     await ada.page.getByRole('button', { name: 'Join the circle' }).click();
