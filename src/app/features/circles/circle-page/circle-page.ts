@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -71,6 +71,13 @@ export class CirclePage {
 
   constructor() {
     queueMicrotask(() => void this.refresh());
+    // While sharing is on, what the circle sees follows the reader's own reading (sessions move the shield).
+    effect(() => {
+      const view = this.view();
+      if (!view?.mine?.shareProgress) return;
+      const past = pastParts(view);
+      if (!sameMembers(past, view.mine.sharedPastPartIds ?? [])) void this.store.write('circleProgress', view.myProgressId, this.id(), { sharedPastPartIds: past });
+    });
   }
 
   protected async refresh(): Promise<void> {
@@ -108,8 +115,7 @@ export class CirclePage {
   }
 
   protected async setSharing(view: CircleView, on: boolean): Promise<void> {
-    const past = [...view.shield.values()].flatMap((context) => [...context.passed]);
-    await this.store.write('circleProgress', view.myProgressId, this.id(), { shareProgress: on, sharedPastPartIds: on ? past : null });
+    await this.store.write('circleProgress', view.myProgressId, this.id(), { shareProgress: on, sharedPastPartIds: on ? pastParts(view) : null });
   }
 
   protected async markPast(view: CircleView, partId: string): Promise<void> {
@@ -208,3 +214,7 @@ export class CirclePage {
     }
   }
 }
+
+/** Every part the reader is past, over all picks, in a stable order. */
+const pastParts = (view: CircleView): string[] => [...view.shield.values()].flatMap((context) => [...context.passed]).sort();
+const sameMembers = (a: readonly string[], b: readonly string[]) => a.length === b.length && [...b].sort().every((id, index) => id === a[index]);

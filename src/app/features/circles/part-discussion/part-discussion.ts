@@ -54,9 +54,11 @@ export class PartDiscussion {
   protected readonly part = computed(() => this.view()?.parts.find((part) => part.id === this.partId()));
   protected readonly isHost = computed(() => this.view()?.meta?.role === 'host');
   protected readonly replyingTo = signal<string | null>(null);
+  protected readonly editing = signal<string | null>(null);
 
   protected readonly form = inject(FormBuilder).nonNullable.group({ text: ['', [notBlank]] });
   protected readonly replyForm = inject(FormBuilder).nonNullable.group({ text: ['', [notBlank]] });
+  protected readonly editForm = inject(FormBuilder).nonNullable.group({ text: ['', [notBlank]] });
 
   constructor() {
     queueMicrotask(() => void this.sync.syncCircle(this.id()));
@@ -132,6 +134,18 @@ export class PartDiscussion {
     const pastPartIds = [...new Set([...(view.mine?.pastPartIds ?? []), this.partId()])];
     const shared = view.mine?.shareProgress ? { sharedPastPartIds: [...new Set([...(view.mine.sharedPastPartIds ?? []), this.partId()])] } : {};
     return this.store.write('circleProgress', view.myProgressId, this.id(), { pastPartIds, ...shared });
+  }
+
+  protected startEdit(post: Post): void {
+    this.editForm.reset({ text: post.text ?? '' });
+    this.editing.set(post.id);
+  }
+
+  /** Only the author edits a post's text (the server refuses anyone else's edit). */
+  protected async saveEdit(post: Post): Promise<void> {
+    if (this.editForm.invalid) return this.editForm.markAllAsTouched();
+    await this.store.write('circlePosts', post.id, this.id(), { text: this.editForm.getRawValue().text.trim(), editedAt: new Date().toISOString() });
+    this.editing.set(null);
   }
 
   protected hide(post: Post, hidden: boolean): Promise<void> {
