@@ -119,6 +119,8 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   app.use('/api/texts', textsRoutes(dataSource));
   app.use(
     '/api/circles',
+    // Circle syncs and actions count like a reader's own sync requests, in their own bucket.
+    readerLimiter('circle', config.syncRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'circle')),
     circlesRoutes({
       membership: new CircleMembership(dataSource),
       invitations: new CircleInvitations(dataSource, config, mailer),
