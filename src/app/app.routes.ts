@@ -17,6 +17,7 @@ export const routes: Routes = [
       { path: 'journal', loadChildren: () => import('./features/journal/journal.routes') },
       { path: 'goals', loadChildren: () => import('./features/goals/goals.routes') },
       { path: 'insights', loadChildren: () => import('./features/insights/insights.routes') },
+      { path: 'circles', loadChildren: () => import('./features/circles/circles.routes') },
       { path: 'timer', loadChildren: () => import('./features/timer/timer.routes') },
       { path: 'settings', loadChildren: () => import('./features/settings/settings.routes') },
       { path: 'admin', canMatch: [adminGuard], loadChildren: () => import('./features/admin/admin.routes') },

@@ -56,6 +56,7 @@ export class App {
     { path: '/goals', label: 'Goals', icon: 'flag', exact: true },
     { path: '/goals/challenges', label: 'Challenges', icon: 'emoji_events' },
     { path: '/insights', label: 'Insights', icon: 'insights' },
+    { path: '/circles', label: 'Circles', icon: 'groups' },
   ];
 
   constructor() {

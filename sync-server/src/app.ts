@@ -32,6 +32,10 @@ import { staticApp } from './entry-points/static-app';
 import { metricsRoutes } from './entry-points/metrics.routes';
 import { robotsTxt } from './entry-points/robots';
 import { apiNotFound, errorHandler } from './errors';
+import { circlesRoutes } from './entry-points/circles.routes';
+import { CircleInvitations } from './circles/circle-invitations';
+import { CircleMembership } from './circles/circle-membership';
+import { CircleSyncStore } from './circles/circle-sync-store';
 import { createLogger } from './observability/logger';
 import { MeasuredSyncStore } from './observability/measured-sync-store';
 import { trackPool } from './observability/metrics';
@@ -70,7 +74,8 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   app.use('/api', compressApi());
   const smallJson = express.json({ limit: '64kb' });
   // /api/sync parses its own bodies with the sync contract's limits, once the caller is known.
-  app.use('/api', (req, res, next) => (req.path.startsWith('/sync/') ? next() : smallJson(req, res, next)));
+  // /api/circles/:id/sync/push parses its own too.
+  app.use('/api', (req, res, next) => (req.path.startsWith('/sync/') || /^\/circles\/[^/]+\/sync\//.test(req.path) ? next() : smallJson(req, res, next)));
   const probes = healthRoutes(dataSource);
   app.use('/api/health', probes.health);
   app.use('/api/ready', probes.ready);
@@ -112,6 +117,19 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
     ),
   );
   app.use('/api/texts', textsRoutes(dataSource));
+  app.use(
+    '/api/circles',
+    // Circle syncs and actions count like a reader's own sync requests, in their own bucket.
+    readerLimiter('circle', config.syncRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'circle')),
+    circlesRoutes({
+      membership: new CircleMembership(dataSource),
+      invitations: new CircleInvitations(dataSource, config, mailer),
+      store: new CircleSyncStore(dataSource),
+      serverSecret: config.jwtSecret,
+      // Twenty invitations an hour per reader: a book club's worth, too few to spam with.
+      inviteLimiter: readerLimiter('circle invitation', 20, 3600_000, new PostgresAttemptStore(dataSource, 'circle-invite')),
+    }),
+  );
   app.use('/api/admin', requireAdmin, adminRoutes(new AdminUsers(dataSource), config.devMailDir));
   app.use('/api', apiNotFound);
 

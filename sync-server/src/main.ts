@@ -10,6 +10,8 @@ import { closeGracefully, exitOnUnexpectedError } from './process-lifecycle';
 import { createLogger } from './observability/logger';
 import { closePasswordPools } from './domain/passwords';
 import { startJobRunner } from './jobs/job-runner';
+import { JOBS } from './jobs/jobs';
+import { circleReminders } from './jobs/circle-reminders.job';
 
 /**
  * Starts the server: connect, migrate, listen. Ctrl-C (SIGINT) or SIGTERM stops it gracefully:
@@ -26,8 +28,8 @@ async function main(): Promise<void> {
     await dataSource.getRepository(User).update({ email: config.adminEmail }, { role: 'admin' });
   }
 
-  const jobs = await startJobRunner(config.databaseUrl, dataSource);
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
+  const jobs = await startJobRunner(config.databaseUrl, dataSource, [...JOBS, circleReminders(mailer, config.publicUrl)]);
   const app = createApp({ config, dataSource, mailer, logger });
   const server: Server = app.listen(config.port, config.host, () => {
     const address = server.address();

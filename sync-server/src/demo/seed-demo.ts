@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 
 import { hashPassword } from '../domain/passwords';
 import { seedDemoLibrary } from './seed-demo-library';
+import { seedDemoCircle } from './demo-circle';
 import { User, type Role } from '../data-access/entities/user.entity';
 
 /** The invented demo accounts `npm start` creates. Names and addresses are made up. */
@@ -31,5 +32,7 @@ export async function seedDemo(dataSource: DataSource, bcryptCost: number): Prom
       demoBooksAdded += (await seedDemoLibrary(dataSource, user.id))?.books ?? 0;
     }
   }
+  const [host, member] = await Promise.all(DEMO_ACCOUNTS.map((account) => users.findOneByOrFail({ email: account.email })));
+  await seedDemoCircle(dataSource, host!.id, member?.id ?? null);
   return { demoBooksAdded };
 }

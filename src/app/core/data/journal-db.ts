@@ -2,6 +2,7 @@ import Dexie, { type Table } from 'dexie';
 
 import type { FieldChange, PulledChange } from '@shared/sync/field-change';
 import type { LocalRow } from '@shared/sync/local-row';
+import { CIRCLE_COLLECTION_NAMES } from '@shared/circles/circle-collection-names';
 import { COLLECTIONS } from '@shared/sync/schema/collections';
 
 /** One change waiting to reach the server; `seq` is its place in the local order of writes. */
@@ -52,11 +53,34 @@ export const journalDbName = (userId: string) => `lamplight-journal-${userId}`;
  * Bump when the stores below change (a new collection or index). Dexie works out the upgrade
  * from the latest declaration; other open tabs get a `versionchange` and close.
  */
-export const JOURNAL_DB_VERSION = 7;
+export const JOURNAL_DB_VERSION = 8;
 
 /** Dexie store specs for every synced collection, from the shared schema: `id` plus its indexes. */
 export function collectionStores(): Record<string, string> {
   return Object.fromEntries(Object.values(COLLECTIONS).map((spec) => [spec.name, ['id', ...spec.indexes].join(', ')]));
+}
+
+/** A change to a circle's data waiting to reach `/api/circles/:id/sync` (circles sync on their own, by circle). */
+export interface CircleOutboxEntry extends FieldChange {
+  readonly seq?: number;
+  readonly circleId: string;
+}
+
+/**
+ * What this device knows about one circle besides its rows: the pull cursor, the reader's role
+ * and the members (display names and roles), as of the last sync, so the circle opens offline.
+ */
+export interface CircleMeta {
+  readonly circleId: string;
+  readonly cursor?: string;
+  readonly role?: 'host' | 'member';
+  readonly members?: readonly { readonly userId: string; readonly displayName: string; readonly role: 'host' | 'member' }[];
+  readonly lastSyncedAt?: string;
+}
+
+/** Dexie stores for the circle collections: by id, and by circle for each circle's page. */
+export function circleStores(): Record<string, string> {
+  return Object.fromEntries(CIRCLE_COLLECTION_NAMES.map((name) => [name, 'id, circleId']));
 }
 
 /** A reader's journal in IndexedDB, the app's first and only place to read and write. */
@@ -68,6 +92,9 @@ export class JournalDb extends Dexie {
   covers!: Table<StoredCover, string>;
   /** Pulled changes of collections unknown to this app version (applied once it knows them). */
   held!: Table<HeldChange, number>;
+  /** Circle changes waiting to be sent, and what is known of each circle (features/circles). */
+  circleOutbox!: Table<CircleOutboxEntry, number>;
+  circleMeta!: Table<CircleMeta, string>;
 
   constructor(readonly userId: string) {
     super(journalDbName(userId));
@@ -78,6 +105,9 @@ export class JournalDb extends Dexie {
       meta: 'key',
       covers: 'id, state',
       held: '++seq, collection',
+      ...circleStores(),
+      circleOutbox: '++seq, circleId',
+      circleMeta: 'circleId',
     });
   }
 

@@ -44,7 +44,8 @@ export class LocalJournal {
   /** Changes written on this device that the server has not confirmed yet. */
   async pendingChanges(): Promise<number> {
     const db = this.db();
-    return db ? db.outbox.count() : 0;
+    // Circle posts and answers waiting count too: signing out with erase would lose them.
+    return db ? (await db.outbox.count()) + (await db.circleOutbox.count()) : 0;
   }
 
   /** Removes a reader's local copy from this device (their server copy is untouched). */

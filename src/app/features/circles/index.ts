@@ -1,0 +1,2 @@
+// This area is reached only through its routes (circles.routes.ts); nothing else is given out.
+export {};
