@@ -32,6 +32,9 @@ import { staticApp } from './entry-points/static-app';
 import { metricsRoutes } from './entry-points/metrics.routes';
 import { robotsTxt } from './entry-points/robots';
 import { apiNotFound, errorHandler } from './errors';
+import { CalendarFeeds } from './calendar/calendar-feeds';
+import { FEED_SOURCES } from './calendar/feed-sources';
+import { calendarFeedRoutes, calendarSettingsRoutes } from './entry-points/calendar.routes';
 import { createLogger } from './observability/logger';
 import { MeasuredSyncStore } from './observability/measured-sync-store';
 import { trackPool } from './observability/metrics';
@@ -87,8 +90,12 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
       requireAuth: authenticated,
     }),
   );
+  const calendarFeeds = new CalendarFeeds(dataSource, FEED_SOURCES);
+  // Calendar apps cannot sign in: the feed's secret is its key.
+  app.use('/api/calendar', calendarFeedRoutes(calendarFeeds));
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
+  app.use('/api/calendar-feed', calendarSettingsRoutes(calendarFeeds));
   app.use('/api/devices', devicesRoutes(sessions));
   app.use('/api/sync/events', syncEventsRoutes(dataSource, new SyncListener(config.syncEvents.listenDatabaseUrl), config.syncEvents, config.jwtSecret));
   app.use(

@@ -33,7 +33,7 @@ export class Loans1765500003000 implements MigrationInterface {
         stopped_at timestamptz NOT NULL)`,
       `CREATE TABLE calendar_feeds (
         user_id uuid PRIMARY KEY REFERENCES users (id) ON DELETE CASCADE,
-        secret_hash bytea NOT NULL UNIQUE,
+        secret_hash text NOT NULL UNIQUE,
         created_at timestamptz NOT NULL DEFAULT now())`,
     ];
     for (const statement of statements) await queryRunner.query(statement);
