@@ -16,7 +16,7 @@ export function buildFeed(events: readonly CalendarEvent[]): string {
   const calendar = ical({
     name: 'Lamplight',
     prodId: { company: 'Lamplight', product: 'Reading journal', language: 'EN' },
-    // A polite refresh hint for calendar apps (draft-ietf-calext-extensions REFRESH-INTERVAL via X-PUBLISHED-TTL).
+    // How often calendar apps should fetch again (REFRESH-INTERVAL, RFC 7986 §5.7).
     ttl: 6 * 60 * 60,
   });
   const sorted = [...events].sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : a.uid < b.uid ? -1 : 1));
@@ -33,5 +33,6 @@ export function buildFeed(events: readonly CalendarEvent[]): string {
       stamp: event.changedAt,
     });
   }
-  return calendar.toString();
+  // §3.1 and §3.4: every content line ends in CRLF, END:VCALENDAR too; ical-generator leaves the last one off.
+  return `${calendar.toString()}\r\n`;
 }
