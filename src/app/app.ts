@@ -51,7 +51,6 @@ export class App {
   protected readonly destinations: readonly Destination[] = [
     { path: '/today', label: 'Today', icon: 'wb_twilight' },
     { path: '/library', label: 'Library', icon: 'local_library' },
-    { path: '/loans', label: 'Loans', icon: 'swap_horiz' },
     { path: '/timer', label: 'Timer', icon: 'timer' },
     { path: '/journal', label: 'Journal', icon: 'edit_note' },
     { path: '/goals', label: 'Goals', icon: 'flag', exact: true },
