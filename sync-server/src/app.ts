@@ -35,6 +35,7 @@ import { apiNotFound, errorHandler } from './errors';
 import { CalendarFeeds } from './calendar/calendar-feeds';
 import { FEED_SOURCES } from './calendar/feed-sources';
 import { calendarFeedRoutes, calendarSettingsRoutes } from './entry-points/calendar.routes';
+import { remindersRoutes } from './entry-points/reminders.routes';
 import { createLogger } from './observability/logger';
 import { MeasuredSyncStore } from './observability/measured-sync-store';
 import { trackPool } from './observability/metrics';
@@ -93,6 +94,8 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   const calendarFeeds = new CalendarFeeds(dataSource, FEED_SOURCES);
   // Calendar apps cannot sign in: the feed's secret is its key.
   app.use('/api/calendar', calendarFeedRoutes(calendarFeeds));
+  // Unsubscribe links in reminder mails work without signing in (a signed token).
+  app.use('/api/reminders', remindersRoutes(dataSource, config.jwtSecret));
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
   app.use('/api/calendar-feed', calendarSettingsRoutes(calendarFeeds));

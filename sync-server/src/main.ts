@@ -9,6 +9,8 @@ import { createSmtpMailer } from './mail/mailer';
 import { closeGracefully, exitOnUnexpectedError } from './process-lifecycle';
 import { createLogger } from './observability/logger';
 import { closePasswordPools } from './domain/passwords';
+import { jobServices } from './jobs/job-services';
+import { JOBS } from './jobs/jobs';
 import { startJobRunner } from './jobs/job-runner';
 
 /**
@@ -26,8 +28,8 @@ async function main(): Promise<void> {
     await dataSource.getRepository(User).update({ email: config.adminEmail }, { role: 'admin' });
   }
 
-  const jobs = await startJobRunner(config.databaseUrl, dataSource);
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
+  const jobs = await startJobRunner(config.databaseUrl, dataSource, JOBS, jobServices(config, mailer));
   const app = createApp({ config, dataSource, mailer, logger });
   const server: Server = app.listen(config.port, config.host, () => {
     const address = server.address();

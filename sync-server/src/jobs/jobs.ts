@@ -1,6 +1,7 @@
 import { compactTexts } from './compact-texts.job';
 import type { Job } from './job';
+import { loanReminders } from './loan-reminders.job';
 import { pruneTextVersions } from './prune-text-versions.job';
 
 /** Every background job the server runs. To add one: write `NAME.job.ts` and list it here. */
-export const JOBS: readonly Job[] = [compactTexts, pruneTextVersions];
+export const JOBS: readonly Job[] = [compactTexts, pruneTextVersions, loanReminders];
