@@ -3,6 +3,7 @@ import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { RouterLink } from '@angular/router';
 
 import { byUrgency } from '@shared/loans/urgency';
 import { LOAN_KINDS } from '@shared/sync/schema/collections';
@@ -25,7 +26,7 @@ const DATE = /^\d{4}-\d{2}-\d{2}$/;
 /** Every loan, hold and lending, what needs doing soonest first; a form to add one; the reader's libraries. */
 @Component({
   selector: 'll-loans-page',
-  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule, LoanItem],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, LoanItem],
   templateUrl: './loans-page.html',
   styleUrl: './loans-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
