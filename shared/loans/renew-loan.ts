@@ -27,7 +27,7 @@ export function renewLoan(
   if (loan.returnedOn) return { refused: 'This loan has been returned.' };
   const used = loan.renewalsUsed ?? 0;
   if (loan.renewalsAllowed != null && used >= loan.renewalsAllowed) {
-    return { refused: `All ${loan.renewalsAllowed} renewals have been used.` };
+    return { refused: loan.renewalsAllowed === 1 ? 'The one renewal allowed has been used.' : `All ${loan.renewalsAllowed} renewals have been used.` };
   }
   const dueOn = options.newDueOn ?? (loan.dueOn && options.loanDays ? dayFromIndex(dayIndex(loan.dueOn) + options.loanDays) : null);
   if (!dueOn) return { refused: 'Choose the new due date.' };

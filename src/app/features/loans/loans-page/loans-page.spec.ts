@@ -32,7 +32,7 @@ describe('LoansPage', () => {
   });
 
   afterEach(async () => {
-    fixture.destroy();
+    fixture?.destroy();
     await tearDown();
   });
 
@@ -84,7 +84,7 @@ describe('LoansPage', () => {
     // 2 July + 21 days (the usual period when the library has none) = 23 July.
     expect((await stored())[0]!.dueOn).toBe('2026-07-23');
     button('Renew').click();
-    await until(() => textOf(page().querySelector('[role="alert"]')) === 'All 1 renewals have been used.', fixture);
+    await until(() => textOf(page().querySelector('[role="alert"]')) === 'The one renewal allowed has been used.', fixture);
   });
 
   it('turns a collected hold into a loan in one step', async () => {

@@ -22,7 +22,7 @@ describe('LoansToday', () => {
   });
 
   afterEach(async () => {
-    fixture.destroy();
+    fixture?.destroy();
     await tearDown();
   });
 
