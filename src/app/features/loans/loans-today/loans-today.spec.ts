@@ -19,7 +19,7 @@ describe('LoansToday', () => {
     await store.write('books', BOOK, { title: 'Rain on the Salt Road', format: 'print', status: 'reading', deleted: false });
     fixture = TestBed.createComponent(LoansToday);
     await fixture.whenStable();
-  });
+  }, 20_000);
 
   afterEach(async () => {
     fixture?.destroy();
@@ -36,13 +36,13 @@ describe('LoansToday', () => {
 
   it("shows a loan due within 3 days, in the reader's own day", async () => {
     await store.create('loans', { kind: 'library', bookId: BOOK, dueOn: '2026-07-02' });
-    await until(() => !!page().querySelector('section'), fixture);
+    await until(() => !!page().querySelector('section'), fixture, 10_000);
     expect(textOf(page().querySelector('li'))).toContain('Due in 2 days');
   });
 
   it('shows a hold ready to pick up', async () => {
     await store.create('loans', { kind: 'hold', bookId: BOOK, readyOn: '2026-06-30', pickUpBy: '2026-07-04' });
-    await until(() => !!page().querySelector('section'), fixture);
+    await until(() => !!page().querySelector('section'), fixture, 10_000);
     expect(textOf(page().querySelector('li'))).toContain('Ready to pick up');
   });
 });
