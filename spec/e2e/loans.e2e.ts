@@ -52,5 +52,5 @@ describe('Loans, offline first', () => {
     expect(event?.getFirstPropertyValue('summary')).toBe('Due back at the library: The Ferryman’s Ledger');
     expect((event?.getFirstPropertyValue('dtstart') as ICAL.Time).toString()).toBe(tomorrow);
     await context.close();
-  });
+  }, 240_000);
 });
