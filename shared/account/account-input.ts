@@ -138,4 +138,8 @@ export interface CaughtMail {
   readonly to: string[];
   readonly subject: string;
   readonly text: string;
+  /** The HTML part, when the mail had one. */
+  readonly html?: string;
+  /** The List-Unsubscribe header (RFC 2369), when the mail had one. */
+  readonly listUnsubscribe?: string;
 }

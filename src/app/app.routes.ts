@@ -14,6 +14,7 @@ export const routes: Routes = [
       { path: '', pathMatch: 'full', redirectTo: 'today' },
       { path: 'today', loadChildren: () => import('./features/today/today.routes') },
       { path: 'library', loadChildren: () => import('./features/library/library.routes') },
+      { path: 'loans', loadChildren: () => import('./features/loans/loans.routes') },
       { path: 'journal', loadChildren: () => import('./features/journal/journal.routes') },
       { path: 'goals', loadChildren: () => import('./features/goals/goals.routes') },
       { path: 'insights', loadChildren: () => import('./features/insights/insights.routes') },

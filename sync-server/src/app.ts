@@ -36,6 +36,10 @@ import { circlesRoutes } from './entry-points/circles.routes';
 import { CircleInvitations } from './circles/circle-invitations';
 import { CircleMembership } from './circles/circle-membership';
 import { CircleSyncStore } from './circles/circle-sync-store';
+import { CalendarFeeds } from './calendar/calendar-feeds';
+import { FEED_SOURCES } from './calendar/feed-sources';
+import { calendarFeedRoutes, calendarSettingsRoutes } from './entry-points/calendar.routes';
+import { remindersRoutes } from './entry-points/reminders.routes';
 import { createLogger } from './observability/logger';
 import { MeasuredSyncStore } from './observability/measured-sync-store';
 import { trackPool } from './observability/metrics';
@@ -92,8 +96,14 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
       requireAuth: authenticated,
     }),
   );
+  const calendarFeeds = new CalendarFeeds(dataSource, FEED_SOURCES);
+  // Calendar apps cannot sign in: the feed's secret is its key.
+  app.use('/api/calendar', calendarFeedRoutes(calendarFeeds));
+  // Unsubscribe links in reminder mails work without signing in (a signed token).
+  app.use('/api/reminders', remindersRoutes(dataSource, config.jwtSecret));
   // Everything else under /api needs a signed-in caller.
   app.use('/api', authenticated);
+  app.use('/api/calendar-feed', calendarSettingsRoutes(calendarFeeds));
   app.use('/api/devices', devicesRoutes(sessions));
   app.use('/api/sync/events', syncEventsRoutes(dataSource, new SyncListener(config.syncEvents.listenDatabaseUrl), config.syncEvents, config.jwtSecret));
   app.use(

@@ -52,6 +52,8 @@ export interface ServerConfig {
   readonly syncRateLimit: number;
   readonly uploadRateLimit: number;
   /** Live updates: where the one LISTEN connection goes (a session, not a transaction pooler) and the heartbeat. */
+  /** The instant the jobs' clock starts from (development and tests), else null: the real clock. */
+  readonly jobsNow: number | null;
   readonly syncEvents: { readonly listenDatabaseUrl: string; readonly heartbeatMs: number };
 }
 
@@ -133,11 +135,14 @@ const environmentSchema = z
       .regex(/^postgres(ql)?:\/\//, 'must be a postgres:// URL')
       .optional(),
     LAMPLIGHT_SYNC_HEARTBEAT_MS: z.coerce.number().int().min(100).max(120_000).default(25_000),
+    /** Development and tests only: the jobs' clock starts at this instant (and runs on from it). */
+    LAMPLIGHT_JOBS_NOW: z.iso.datetime({ offset: true, error: 'must be an ISO 8601 instant like 2026-03-05T08:00:00Z' }).optional(),
     NODE_ENV: z.string().optional(),
   })
   .superRefine((env, ctx) => {
     const production = env.NODE_ENV === 'production';
     if (production && !env.SMTP_URL) ctx.addIssue({ code: 'custom', path: ['SMTP_URL'], message: 'SMTP_URL is required in production' });
+    if (production && env.LAMPLIGHT_JOBS_NOW) ctx.addIssue({ code: 'custom', path: ['LAMPLIGHT_JOBS_NOW'], message: 'must not be set in production' });
     if (production && env.LAMPLIGHT_BCRYPT_COST < 10) {
       ctx.addIssue({ code: 'custom', path: ['LAMPLIGHT_BCRYPT_COST'], message: 'must be at least 10 in production (OWASP)' });
     }
@@ -179,6 +184,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     hashQueue: values.LAMPLIGHT_HASH_QUEUE,
     syncRateLimit: values.LAMPLIGHT_SYNC_RATE_LIMIT,
     uploadRateLimit: values.LAMPLIGHT_UPLOAD_RATE_LIMIT,
+    jobsNow: values.LAMPLIGHT_JOBS_NOW ? Date.parse(values.LAMPLIGHT_JOBS_NOW) : null,
     syncEvents: { listenDatabaseUrl: values.LAMPLIGHT_LISTEN_DATABASE_URL ?? values.DATABASE_URL, heartbeatMs: values.LAMPLIGHT_SYNC_HEARTBEAT_MS },
   };
 }

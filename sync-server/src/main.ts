@@ -9,8 +9,9 @@ import { createSmtpMailer } from './mail/mailer';
 import { closeGracefully, exitOnUnexpectedError } from './process-lifecycle';
 import { createLogger } from './observability/logger';
 import { closePasswordPools } from './domain/passwords';
-import { startJobRunner } from './jobs/job-runner';
+import { jobServices } from './jobs/job-services';
 import { JOBS } from './jobs/jobs';
+import { startJobRunner } from './jobs/job-runner';
 import { circleReminders } from './jobs/circle-reminders.job';
 
 /**
@@ -29,7 +30,7 @@ async function main(): Promise<void> {
   }
 
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
-  const jobs = await startJobRunner(config.databaseUrl, dataSource, [...JOBS, circleReminders(mailer, config.publicUrl)]);
+  const jobs = await startJobRunner(config.databaseUrl, dataSource, [...JOBS, circleReminders(mailer, config.publicUrl)], jobServices(config, mailer));
   const app = createApp({ config, dataSource, mailer, logger });
   const server: Server = app.listen(config.port, config.host, () => {
     const address = server.address();

@@ -302,6 +302,73 @@ export const challenges = defineCollection('challenges', {
 });
 export type Challenge = RowOf<typeof challenges>;
 
+/** What a loan row records: a library loan, a hold, a book lent to a friend, or one borrowed from one. */
+export const LOAN_KINDS = ['library', 'hold', 'lentOut', 'borrowed'] as const;
+/** How a hold ended. A collected hold is followed by a library loan row of its own. */
+export const HOLD_OUTCOMES = ['collected', 'cancelled', 'expired'] as const;
+
+/**
+ * A library the reader borrows from. `cardNumber` stays on the reader's devices and the server:
+ * it never goes into a mail or the calendar feed (those show `name` at most).
+ */
+export const libraries = defineCollection('libraries', {
+  name: field.text(120),
+  /** How the reader tells their cards apart ("blue card"), instead of the number. */
+  cardLabel: field.optionalText(60),
+  cardNumber: field.optionalText(40),
+  /** The library's usual loan period and renewals, to prefill a new loan. */
+  loanDays: field.optionalInteger(1, 365),
+  renewalsAllowed: field.optionalInteger(0, 99),
+});
+export type Library = RowOf<typeof libraries>;
+
+/**
+ * One loan, hold or lending of a book (`kind`). Dates are the reader's local calendar days.
+ * `startedOn` is borrowed / placed / lent on; `dueOn` is due (a library loan), or expected back
+ * (lent out, borrowed from a friend).
+ */
+export const loans = defineCollection(
+  'loans',
+  {
+    kind: field.choice(LOAN_KINDS),
+    bookId: field.optionalRef(),
+    libraryId: field.optionalRef(),
+    /** The friend, as the reader names them (lent out, borrowed). */
+    friendName: field.optionalText(120),
+    startedOn: field.optionalDate(),
+    dueOn: field.optionalDate(),
+    renewalsUsed: field.optionalInteger(0, 99),
+    renewalsAllowed: field.optionalInteger(0, 99),
+    returnedOn: field.optionalDate(),
+    /** A hold: place in the queue, when it became ready, the last day to pick it up. */
+    queuePosition: field.optionalInteger(1, 100_000),
+    readyOn: field.optionalDate(),
+    pickUpBy: field.optionalDate(),
+    holdOutcome: field.optionalChoice(HOLD_OUTCOMES),
+    /** The day a hold was collected, cancelled or expired. */
+    closedOn: field.optionalDate(),
+  },
+  { indexes: ['bookId', 'kind'] },
+);
+export type Loan = RowOf<typeof loans>;
+
+/**
+ * The reader's choice of loan reminders by e-mail: one row, id
+ * `deterministicId('loan-reminders', 'settings')`. Off until the reader turns it on.
+ * `timeZone` is the reader's IANA zone, so the server knows which day it is for them.
+ */
+export const loanReminders = defineCollection('loanReminders', {
+  email: field.optionalBoolean(),
+  daysBefore: field.optionalInteger(0, 30),
+  holdReady: field.optionalBoolean(),
+  lentOverdue: field.optionalBoolean(),
+  digest: field.optionalBoolean(),
+  timeZone: field.optionalText(64),
+  /** When the reader last turned mails on; an unsubscribe link used after it stops them. */
+  emailSince: field.optionalTimestamp(),
+});
+export type LoanReminders = RowOf<typeof loanReminders>;
+
 /** Every synced collection, by name: the one source of truth for Dexie, zod and TypeORM. */
 export const COLLECTIONS = {
   books,
@@ -320,6 +387,9 @@ export const COLLECTIONS = {
   yearPlans,
   monthPlans,
   challenges,
+  libraries,
+  loans,
+  loanReminders,
 } as const;
 export type CollectionName = keyof typeof COLLECTIONS;
 

@@ -1,7 +1,7 @@
 import PgBoss from 'pg-boss';
 import type { DataSource } from 'typeorm';
 
-import type { Job } from './job';
+import type { Job, JobServices } from './job';
 import { JOBS } from './jobs';
 
 /**
@@ -26,7 +26,7 @@ export interface JobRunner {
  * creates its schema under an advisory lock; each queue is `singleton`, so a job never runs
  * twice at once. pg-boss has its own small pool (`max` connections).
  */
-export async function startJobRunner(databaseUrl: string, dataSource: DataSource, jobs: readonly Job[] = JOBS): Promise<JobRunner> {
+export async function startJobRunner(databaseUrl: string, dataSource: DataSource, jobs: readonly Job[] = JOBS, services?: JobServices): Promise<JobRunner> {
   // Instances starting together race to create pg-boss's schema: a loser starts again with a fresh client.
   const boss = await settled(async () => {
     const candidate = new PgBoss({ connectionString: databaseUrl, schema: JOBS_SCHEMA, max: 3, application_name: 'lamplight-jobs' });
@@ -43,7 +43,7 @@ export async function startJobRunner(databaseUrl: string, dataSource: DataSource
     await settled(() => boss.createQueue(job.name, { name: job.name, policy: 'singleton', retryLimit: 2, expireInSeconds: RUN_LIMIT_SECONDS }));
     await settled(() => (job.cron ? boss.schedule(job.name, job.cron, {}, { tz: 'UTC' }) : boss.unschedule(job.name)));
     await boss.work(job.name, { pollingIntervalSeconds: 2 }, async () => {
-      await job.run({ dataSource });
+      await job.run({ dataSource, services });
     });
   }
   return {

@@ -1,8 +1,22 @@
 import type { DataSource } from 'typeorm';
 
-/** What a job's run gets: the server's one DataSource. */
+import type { Mailer } from '../mail/mailer';
+
+/** What jobs that reach readers need besides the database (`main.ts` gives them; specs give their own). */
+export interface JobServices {
+  readonly mailer: Mailer;
+  /** The app's address, for links in mails. */
+  readonly publicUrl: string;
+  /** The server secret, for signed links (unsubscribe). */
+  readonly serverSecret: Uint8Array;
+  /** The jobs' clock: the real one, or a moved one in development and tests (`LAMPLIGHT_JOBS_NOW`). */
+  readonly now: () => Date;
+}
+
+/** What a job's run gets: the server's one DataSource, and the services when the runner was given them. */
 export interface JobContext {
   readonly dataSource: DataSource;
+  readonly services?: JobServices;
 }
 
 /**

@@ -32,6 +32,8 @@ export class DevInbox {
               to: addresses(parsed.to),
               subject: parsed.subject ?? '',
               text: parsed.text ?? '',
+              ...(typeof parsed.html === 'string' ? { html: parsed.html } : {}),
+              ...listUnsubscribe(parsed.headerLines),
             };
             this.caught.push(mail);
             if (this.dir) await writeCaughtMail(this.dir, mail);
@@ -85,4 +87,10 @@ export class DevInbox {
 function addresses(field: AddressObject | AddressObject[] | undefined): string[] {
   const list = Array.isArray(field) ? field : field ? [field] : [];
   return list.flatMap((group) => group.value.map((entry) => entry.address ?? '')).filter(Boolean);
+}
+
+/** The raw List-Unsubscribe header, if any (mailparser folds List-* headers into an object of its own). */
+function listUnsubscribe(lines: readonly { key: string; line: string }[]): { listUnsubscribe?: string } {
+  const line = lines.find((header) => header.key === 'list-unsubscribe')?.line;
+  return line ? { listUnsubscribe: line.slice(line.indexOf(':') + 1).trim() } : {};
 }

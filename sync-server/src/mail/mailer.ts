@@ -4,6 +4,9 @@ export interface OutgoingMail {
   readonly to: string;
   readonly subject: string;
   readonly text: string;
+  /** An HTML alternative of `text` (the same words). */
+  readonly html?: string;
+  readonly headers?: Readonly<Record<string, string>>;
 }
 
 /** Sends account e-mail. One implementation: SMTP through nodemailer. */

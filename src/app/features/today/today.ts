@@ -1,3 +1,4 @@
+import { LoansToday } from '../loans';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 
 import { Auth } from '../../core/auth/auth';
@@ -7,7 +8,7 @@ import { ReadingLog } from './reading-log/reading-log';
 /** The home page: what the reader is in the middle of today. */
 @Component({
   selector: 'll-today',
-  imports: [InProgress, ReadingLog],
+  imports: [InProgress, ReadingLog, LoansToday],
   templateUrl: './today.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

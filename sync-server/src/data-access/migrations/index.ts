@@ -12,6 +12,7 @@ import { MergeableTexts1765411201000 } from './1765411201000-mergeable-texts';
 import { DeviceIds1765411202000 } from './1765411202000-device-ids';
 import { Hardening1765411215000 } from './1765411215000-hardening';
 import { CatalogueCache1765412022000 } from './1765412022000-catalogue-cache';
+import { Loans1765500003000 } from './1765500003000-loans';
 import { Circles1765500004000 } from './1765500004000-circles';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
@@ -30,5 +31,6 @@ export const migrations = [
   DeviceIds1765411202000,
   Hardening1765411215000,
   CatalogueCache1765412022000,
+  Loans1765500003000,
   Circles1765500004000,
 ];

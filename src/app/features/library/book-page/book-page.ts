@@ -17,6 +17,7 @@ import { BookStatus } from '../../../core/read-model/book-status';
 import { StarRating } from '../../../ui/star-rating/star-rating';
 import { LabelChips } from '../../../ui/label-chips/label-chips';
 import { BookReading } from '../../sessions';
+import { BookLoans } from '../../loans';
 import { TimerStartButton } from '../../timer';
 import { liveQueryFor } from '../../../core/data/live-query-for';
 import { Deletions } from '../../../core/trash/deletions';
@@ -61,6 +62,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
     BookQuotes,
     BookNotebooks,
     BookReading,
+    BookLoans,
     TimerStartButton,
     CatalogueOffer,
     OverwrittenNote,
