@@ -1,4 +1,5 @@
 import type { LocalRow } from '../sync/local-row';
+import { compareBytes } from '../sync/or-set';
 import { COLLECTIONS, type CollectionName } from '../sync/schema/collections';
 
 /** The `format` every Lamplight export file declares, so an import knows what it holds. */
@@ -29,7 +30,7 @@ export const EXPORT_COLLECTIONS = Object.keys(COLLECTIONS) as CollectionName[];
 
 /**
  * A device's row as the file keeps it: only the collection's own fields (never `_hlc`, set or
- * text states, which are this device's bookkeeping), each with its clock.
+ * text states, which are this device's bookkeeping), each with its clock; sets' elements sorted.
  */
 export function exportRowOf(collection: CollectionName, row: LocalRow): ExportRow {
   if (row['deleted'] === true) {
@@ -37,9 +38,11 @@ export function exportRowOf(collection: CollectionName, row: LocalRow): ExportRo
   }
   const fields: Record<string, unknown> = {};
   const clocks: Record<string, string> = {};
-  for (const name of Object.keys(COLLECTIONS[collection].fields)) {
-    if (row[name] === undefined) continue;
-    fields[name] = row[name];
+  for (const [name, spec] of Object.entries(COLLECTIONS[collection].fields)) {
+    const value = row[name];
+    if (value === undefined) continue;
+    // A set has no order: written sorted, so the same set always reads the same in the file.
+    fields[name] = spec.kind === 'set' && Array.isArray(value) ? [...(value as string[])].sort(compareBytes) : value;
     const clock = row._hlc[name];
     if (clock) clocks[name] = clock;
   }

@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
 
 import { Auth } from '../../core/auth/auth';
 import { SignOutFlow } from '../account';
@@ -12,7 +13,7 @@ import { StoragePanel } from './storage-panel/storage-panel';
 /** The reader's account, devices and this device's storage. */
 @Component({
   selector: 'll-settings',
-  imports: [MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount, StoragePanel],
+  imports: [MatButtonModule, MatIconModule, RouterLink, ChangePassword, Devices, DeleteAccount, StoragePanel],
   templateUrl: './settings.html',
   styleUrl: './settings.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
