@@ -7,12 +7,13 @@ import { describeSummary, type ImportSummary } from '@shared/import/import-summa
 
 import { SyncEngine } from '../../../core/sync/sync-engine';
 import type { ExportProgress } from '../journal-export';
+import { CsvImport } from '../csv-import/csv-import';
 import { JournalImport } from '../journal-import';
 
 /** Choose a file: a Lamplight export (JSON) merges at once; a spreadsheet (CSV) opens the mapping steps. */
 @Component({
   selector: 'll-import-panel',
-  imports: [MatButtonModule, MatIconModule, MatProgressBarModule],
+  imports: [MatButtonModule, MatIconModule, MatProgressBarModule, CsvImport],
   templateUrl: './import-panel.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
