@@ -42,6 +42,7 @@ function routes(ids: { book: string; series: string; notebook: string | null }):
     `/insights/${year}/review`,
     '/timer',
     '/settings',
+    '/settings/your-data',
     '/no-such-page',
   ];
 }
