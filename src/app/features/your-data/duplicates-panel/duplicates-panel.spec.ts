@@ -1,0 +1,34 @@
+import { TestBed } from '@angular/core/testing';
+
+import { openTestJournal, waitFor, type TestJournal } from '../../../core/testing/test-journal';
+import { DuplicatesPanel } from './duplicates-panel';
+
+describe('DuplicatesPanel', () => {
+  let journal: TestJournal;
+  beforeEach(() => (journal = openTestJournal()));
+  afterEach(() => journal.close());
+
+  it('finds two entries of one book and merges them: the picked ISBN kept, the session moved, the other book deleted', async () => {
+    const kept = await journal.store.create('books', { title: 'Salt Roads', authors: ['Mirela Oakes'], format: 'print', status: 'reading' });
+    const other = await journal.store.create('books', {
+      title: 'Salt roads',
+      authors: ['Oakes, Mirela'],
+      format: 'print',
+      status: 'reading',
+      isbn: '9780306406157',
+    });
+    const session = await journal.store.create('sessions', { bookId: other, activeMinutes: 30 });
+    const fixture = TestBed.createComponent(DuplicatesPanel);
+    const element = fixture.nativeElement as HTMLElement;
+    await waitFor(fixture, () => element.querySelector('.groups li'), 'the duplicate group');
+    expect(element.querySelector('.groups li')!.textContent).toContain('2 books');
+    element.querySelector<HTMLButtonElement>('.groups button')!.click();
+    await waitFor(fixture, () => element.querySelector('fieldset'), 'the merge choices');
+    const isbn = [...element.querySelectorAll('fieldset')].find((set) => set.querySelector('legend')!.textContent === 'ISBN')!;
+    isbn.querySelectorAll('input')[1]!.click();
+    [...element.querySelectorAll('button')].find((button) => button.textContent!.trim() === 'Merge')!.click();
+    await waitFor(fixture, async () => (await journal.store.get('books', other))?.deleted === true, 'the other book deleted');
+    expect((await journal.store.get('books', kept))?.isbn).toBe('9780306406157');
+    expect((await journal.store.get('sessions', session))?.bookId).toBe(kept);
+  });
+});
