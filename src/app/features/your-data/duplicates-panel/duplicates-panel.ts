@@ -54,6 +54,10 @@ export class DuplicatesPanel {
     this.pair.set([group[0]!, group[1]!]);
   }
 
+  protected close(): void {
+    this.pair.set(null);
+  }
+
   protected swap(): void {
     this.pair.update((pair) => pair && [pair[1], pair[0]]);
     this.picks.set({});
