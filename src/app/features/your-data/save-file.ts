@@ -5,8 +5,8 @@ export function saveFile(blob: Blob, fileName: string): void {
   link.href = url;
   link.download = fileName;
   link.click();
-  // The click has started the download by the next task; then the URL can go.
-  setTimeout(() => URL.revokeObjectURL(url), 0);
+  // Some browsers read the blob after the click's task: give them a minute before the URL goes.
+  setTimeout(() => URL.revokeObjectURL(url), 60_000);
 }
 
 /** Lets the page paint (progress) between chunks of work. */
