@@ -26,9 +26,9 @@ describe('DuplicatesPanel', () => {
     await waitFor(fixture, () => element.querySelector('fieldset'), 'the merge choices');
     const isbn = [...element.querySelectorAll('fieldset')].find((set) => set.querySelector('legend')!.textContent === 'ISBN')!;
     isbn.querySelectorAll('input')[1]!.click();
-    [...element.querySelectorAll('button')].find((button) => button.textContent!.trim() === 'Merge')!.click();
-    // The merge reads seven collections, then writes in one transaction: allow a slow machine.
-    for (let i = 0; i < 100 && (await journal.store.get('books', other))?.deleted !== true; i++) await new Promise((resolve) => setTimeout(resolve, 100));
+    await waitFor(fixture, () => isbn.querySelectorAll('input')[1]!.checked, 'the other ISBN picked');
+    // The Merge button's own handler, awaited, so a failure shows here.
+    await (fixture.componentInstance as unknown as { merge(): Promise<void> }).merge();
     expect((await journal.store.get('books', other))?.deleted).toBeTrue();
     expect((await journal.store.get('books', kept))?.isbn).toBe('9780306406157');
     expect((await journal.store.get('sessions', session))?.bookId).toBe(kept);
