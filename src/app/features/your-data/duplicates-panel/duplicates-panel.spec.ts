@@ -9,13 +9,17 @@ describe('DuplicatesPanel', () => {
   afterEach(() => journal.close());
 
   it('finds two entries of one book and merges them: the picked ISBN kept, the session moved, the other book deleted', async () => {
-    const kept = await journal.store.create('books', { title: 'Salt Roads', authors: ['Mirela Oakes'], format: 'print', status: 'reading' });
-    const other = await journal.store.create('books', {
+    // Ids in key order: the panel offers to keep the first book of a group.
+    const kept = '10000000-0000-4000-8000-000000000001';
+    const other = '20000000-0000-4000-8000-000000000002';
+    await journal.store.write('books', kept, { title: 'Salt Roads', authors: ['Mirela Oakes'], format: 'print', status: 'reading', deleted: false });
+    await journal.store.write('books', other, {
       title: 'Salt roads',
       authors: ['Oakes, Mirela'],
       format: 'print',
       status: 'reading',
       isbn: '9780306406157',
+      deleted: false,
     });
     const session = await journal.store.create('sessions', { bookId: other, activeMinutes: 30 });
     const fixture = TestBed.createComponent(DuplicatesPanel);
