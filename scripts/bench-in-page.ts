@@ -37,12 +37,15 @@ export async function measureStep(page: Page, step: () => Promise<unknown>): Pro
       peak = Math.max(peak, metrics.find((metric) => metric.name === 'JSHeapUsedSize')?.value ?? 0);
       await new Promise((resolve) => setTimeout(resolve, 25));
     }
-  })();
+  })().catch(() => undefined); // a failed step closes the page: its own error is the one to show
   const start = performance.now();
-  await step();
+  try {
+    await step();
+  } finally {
+    sampling = false;
+    await sampler;
+  }
   const ms = performance.now() - start;
-  sampling = false;
-  await sampler;
   await cdp.detach();
   const tasks = await page.evaluate(() => (window as unknown as { benchLongTasks: number[] }).benchLongTasks.filter((duration) => duration > 200));
   return { ms, peakHeapMb: peak / 1024 / 1024, longTasks: tasks.length, longestTaskMs: Math.max(0, ...tasks) };
