@@ -43,6 +43,7 @@ function routes(ids: { book: string; series: string; notebook: string | null }):
     '/timer',
     '/settings',
     '/settings/trash',
+    '/settings/your-data',
     '/no-such-page',
   ];
 }

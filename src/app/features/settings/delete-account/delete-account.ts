@@ -11,11 +11,12 @@ import { Auth } from '../../../core/auth/auth';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { fieldError } from '../../../ui/field-errors';
 import { FormSubmission } from '../../../ui/form-submission';
+import { ExportPanel } from '../../your-data';
 
 /** Delete the account and all its data, on the server and on this device, after the password. */
 @Component({
   selector: 'll-delete-account',
-  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule, ExportPanel],
   templateUrl: './delete-account.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

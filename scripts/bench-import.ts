@@ -1,0 +1,70 @@
+/**
+ * `npm run bench:import`: a generated 10,000-row spreadsheet (invented titles and authors, an
+ * ISBN-10 on every third row, one row in a hundred refused for a rating out of range) through
+ * Settings › Your data in Debian's Chromium against the production build: time to the preview,
+ * to the dry run and to the end of the import, the page's peak JavaScript heap and main-thread
+ * long tasks over 200 ms for each (goal: none).
+ */
+import { isbn10CheckDigit } from '../shared/isbn/isbn10-check-digit';
+import { launchBrowser } from '../spec/e2e/support/browser';
+import { registerThroughApi, signInThroughUi } from '../spec/e2e/support/reader';
+import { startTestServer } from '../spec/support/test-server';
+import { inventedBook, measureStep, printStep, watchLongTasks } from './bench-in-page';
+
+const ROWS = 10_000;
+
+function spreadsheet(): string {
+  const lines = ['Title,Author,ISBN,Status,Rating,Date finished,Tags'];
+  for (let n = 0; n < ROWS; n++) {
+    const { title, author } = inventedBook(n);
+    const body = String(100_000_000 + n).slice(-9);
+    const isbn = n % 3 === 0 ? `${body}${isbn10CheckDigit(body)}` : '';
+    const rating = n % 100 === 99 ? '9' : String((n % 5) + 1);
+    lines.push(`"${title}",${author},${isbn},${n % 2 ? 'read' : 'to read'},${rating},2025-0${(n % 9) + 1}-1${n % 10},"bench, generated"`);
+  }
+  return lines.join('\r\n');
+}
+
+async function main(): Promise<void> {
+  const server = await startTestServer({ withApp: true });
+  const browser = await launchBrowser();
+  try {
+    const reader = await registerThroughApi(server.baseUrl, 'Bench Importer');
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await signInThroughUi(page, server.baseUrl, reader.user.email, reader.password);
+    await page.goto(`${server.baseUrl}/settings/your-data`);
+    await page.getByLabel('Choose a file to import').waitFor();
+    await watchLongTasks(page);
+    const csv = Buffer.from(spreadsheet());
+    const preview = await measureStep(page, async () => {
+      await page.getByLabel('Choose a file to import').setInputFiles({ name: 'generated.csv', mimeType: 'text/csv', buffer: csv });
+      await page.getByText(`(${ROWS.toLocaleString('en').replace(',', '')} in all)`).waitFor({ timeout: 120_000 });
+    });
+    const dryRun = await measureStep(page, async () => {
+      await page.getByRole('button', { name: 'Check the rows' }).click();
+      await page.getByRole('list', { name: 'Refused rows' }).waitFor({ timeout: 120_000 });
+    });
+    const expected = ROWS - ROWS / 100;
+    const imported = await measureStep(page, async () => {
+      await page.getByRole('button', { name: `Import ${expected} books` }).click();
+      await page.getByText(`Imported ${expected} books.`).waitFor({ timeout: 600_000 });
+    });
+    console.log(`bench-import: a ${ROWS.toLocaleString('en')}-row CSV (${(csv.byteLength / 1024 / 1024).toFixed(1)} MB) in Chromium`);
+    printStep('preview (parse)', preview);
+    printStep('dry run', dryRun);
+    printStep('import', imported);
+    await context.close();
+  } finally {
+    await browser.close();
+    await server.close();
+  }
+}
+
+main().then(
+  () => process.exit(0),
+  (err: unknown) => {
+    console.error(err);
+    process.exit(1);
+  },
+);

@@ -1,0 +1,66 @@
+/**
+ * Helpers for benchmarks that run the app in Chromium: the page's JavaScript heap sampled over
+ * a step (Chrome DevTools Protocol, `Performance.getMetrics`) and main-thread long tasks counted
+ * (the Long Tasks API), so a step reports time, peak memory and stalls together.
+ */
+import { performance } from 'node:perf_hooks';
+
+import type { Page } from 'playwright-core';
+
+export interface StepMeasure {
+  readonly ms: number;
+  readonly peakHeapMb: number;
+  /** Main-thread tasks over 200 ms during the step. */
+  readonly longTasks: number;
+  readonly longestTaskMs: number;
+}
+
+/** Starts recording long tasks in the page (call once per page, after it has loaded). */
+export async function watchLongTasks(page: Page): Promise<void> {
+  await page.evaluate(() => {
+    const tasks: number[] = [];
+    (window as unknown as { benchLongTasks: number[] }).benchLongTasks = tasks;
+    new PerformanceObserver((list) => list.getEntries().forEach((entry) => tasks.push(entry.duration))).observe({ type: 'longtask', buffered: false });
+  });
+}
+
+/** Runs a step, sampling the page's heap every 25 ms; returns its time, peak heap and long tasks. */
+export async function measureStep(page: Page, step: () => Promise<unknown>): Promise<StepMeasure> {
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Performance.enable');
+  await page.evaluate(() => ((window as unknown as { benchLongTasks: number[] }).benchLongTasks.length = 0));
+  let peak = 0;
+  let sampling = true;
+  const sampler = (async () => {
+    while (sampling) {
+      const { metrics } = await cdp.send('Performance.getMetrics');
+      peak = Math.max(peak, metrics.find((metric) => metric.name === 'JSHeapUsedSize')?.value ?? 0);
+      await new Promise((resolve) => setTimeout(resolve, 25));
+    }
+  })().catch(() => undefined); // a failed step closes the page: its own error is the one to show
+  const start = performance.now();
+  try {
+    await step();
+  } finally {
+    sampling = false;
+    await sampler;
+  }
+  const ms = performance.now() - start;
+  await cdp.detach();
+  const tasks = await page.evaluate(() => (window as unknown as { benchLongTasks: number[] }).benchLongTasks.filter((duration) => duration > 200));
+  return { ms, peakHeapMb: peak / 1024 / 1024, longTasks: tasks.length, longestTaskMs: Math.max(0, ...tasks) };
+}
+
+export function printStep(name: string, { ms, peakHeapMb, longTasks, longestTaskMs }: StepMeasure): void {
+  console.log(
+    `  ${name.padEnd(20)} ${ms.toFixed(0).padStart(7)} ms   peak heap ${peakHeapMb.toFixed(1).padStart(6)} MB   long tasks > 200 ms: ${longTasks}${longTasks ? ` (longest ${longestTaskMs.toFixed(0)} ms)` : ''}`,
+  );
+}
+
+const WORDS = ['Lantern', 'Orchard', 'River', 'Salt', 'Harbour', 'Moth', 'Copper', 'Winter', 'Glass', 'Fen', 'Heron', 'Ledger'];
+
+/** An invented title and author for row `n`, the same in every run. */
+export function inventedBook(n: number): { title: string; author: string } {
+  const pick = (k: number) => WORDS[(n * k + Math.floor(n / WORDS.length)) % WORDS.length]!;
+  return { title: `The ${pick(7)} of ${pick(11)} ${n}`, author: `${pick(3)} ${pick(5)}son` };
+}
