@@ -5,7 +5,6 @@
  * (the largest the contract allows) and puts each page's rows into IndexedDB in one transaction.
  * Rounds alternate; prints both medians and the ratio (goal ≤ 1.5).
  */
-import { performance } from 'node:perf_hooks';
 
 import type { Browser } from 'playwright-core';
 
