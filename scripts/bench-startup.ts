@@ -61,8 +61,14 @@ function buildBlankApp(): string {
     },
   };
   for (const [name, json] of Object.entries(files)) writeFileSync(path.join(dir, name), JSON.stringify(json, null, 2));
-  writeFileSync(path.join(dir, 'src/index.html'), '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Blank</title></head><body><app-root></app-root></body></html>');
-  writeFileSync(path.join(dir, 'src/styles.scss'), "@use '@angular/material' as mat;\nhtml { @include mat.theme((color: mat.$violet-palette, typography: Roboto, density: 0)); }\n");
+  writeFileSync(
+    path.join(dir, 'src/index.html'),
+    '<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Blank</title></head><body><app-root></app-root></body></html>',
+  );
+  writeFileSync(
+    path.join(dir, 'src/styles.scss'),
+    "@use '@angular/material' as mat;\nhtml { @include mat.theme((color: mat.$violet-palette, typography: Roboto, density: 0)); }\n",
+  );
   writeFileSync(
     path.join(dir, 'src/main.ts'),
     `import { ChangeDetectionStrategy, Component, provideZonelessChangeDetection } from '@angular/core';
@@ -167,7 +173,9 @@ async function main(): Promise<void> {
     const kb = (n: number) => `${(n / 1024).toFixed(1)} KB`;
     console.log('bench-startup: first-screen JS + CSS (gzip) and an offline cold start, vs a blank zoneless Angular + Material app');
     console.log(`  blank app    ${kb(bytes.blank.gzip).padStart(9)} in ${bytes.blank.files} files`);
-    console.log(`  signed out   ${kb(bytes.signedOut.gzip).padStart(9)} in ${bytes.signedOut.files} files   ratio ${(bytes.signedOut.gzip / bytes.blank.gzip).toFixed(2)}`);
+    console.log(
+      `  signed out   ${kb(bytes.signedOut.gzip).padStart(9)} in ${bytes.signedOut.files} files   ratio ${(bytes.signedOut.gzip / bytes.blank.gzip).toFixed(2)}`,
+    );
     console.log(`  signed in    ${kb(signedIn.gzip).padStart(9)} in ${signedIn.files} files   ratio ${(signedIn.gzip / bytes.blank.gzip).toFixed(2)}`);
     console.log(
       `  offline cold start to the book being read: median ${median(cold)} ms (${cold.join(', ')}); blank first render ${median(blankTimes)} ms (${blankTimes.join(', ')}); ratio ${(median(cold) / median(blankTimes)).toFixed(2)}`,
