@@ -43,8 +43,8 @@ async function appRound(browser: Browser, baseUrl: string, email: string, passwo
   await page.getByLabel('Password').fill(password);
   const start = performance.now();
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${baseUrl}/today`);
-  await page.getByRole('link', { name: 'Library' }).first().click();
+  await page.waitForURL(`${baseUrl}/today`, { waitUntil: 'commit', timeout: 300_000 });
+  await page.getByRole('link', { name: 'Library' }).first().click({ timeout: 300_000 });
   await page.getByText(`${BOOKS} books`, { exact: true }).waitFor({ timeout: 300_000 });
   const elapsed = performance.now() - start;
   await context.close();
