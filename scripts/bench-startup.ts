@@ -25,7 +25,7 @@ import { startTestServer } from '../spec/support/test-server';
 import { median } from './bench-support/seed-books';
 
 const ROUNDS = 5;
-const ROOT = path.resolve(__dirname, '../..');
+const ROOT = path.resolve(__dirname, '../../..'); // dist/node/scripts → the repository
 const BOOK = 'The Heron Ledger';
 
 /** The blank app: one toolbar and one button of Angular Material, zoneless, built by the same CLI. */
