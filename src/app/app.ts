@@ -1,4 +1,4 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, inject, Injector } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, DestroyRef, inject, Injector } from '@angular/core';
 import { RouterOutlet } from '@angular/router';
 
 import { Auth } from './core/auth/auth';
@@ -22,7 +22,9 @@ export class App {
   constructor() {
     inject(InstallPrompt); // listens from the start: the browser offers installing once, maybe before sign-in
     const injector = inject(Injector);
+    let destroyed = false;
+    inject(DestroyRef).onDestroy(() => (destroyed = true));
     // Update prompts need the snackbar: loaded after the first render, signed in or not.
-    afterNextRender(() => void import('./core/pwa/app-updates').then(({ AppUpdates }) => injector.get(AppUpdates)));
+    afterNextRender(() => void import('./core/pwa/app-updates').then(({ AppUpdates }) => destroyed || injector.get(AppUpdates)));
   }
 }
