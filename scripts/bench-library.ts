@@ -11,45 +11,9 @@ import type { Page } from 'playwright-core';
 import { launchBrowser } from '../spec/e2e/support/browser';
 import { registerThroughApi, signInThroughUi } from '../spec/e2e/support/reader';
 import { startTestServer } from '../spec/support/test-server';
+import { seedBooks } from './bench-support/seed-books';
 
 const SIZES = [100, 10_000];
-const WORDS = ['Lantern', 'Orchard', 'River', 'Salt', 'Harbour', 'Moth', 'Copper', 'Winter', 'Glass', 'Fen', 'Heron', 'Ledger'];
-
-/** Fills the reader's own IndexedDB database the way the app's store would leave it. */
-async function seedBooks(page: Page, userId: string, count: number): Promise<void> {
-  await page.evaluate(
-    async ({ name, count, words }) => {
-      const db: IDBDatabase = await new Promise((resolve, reject) => {
-        const open = indexedDB.open(name);
-        open.onsuccess = () => resolve(open.result);
-        open.onerror = () => reject(open.error);
-      });
-      const tx = db.transaction('books', 'readwrite');
-      const store = tx.objectStore('books');
-      const statuses = ['tbr', 'reading', 'paused', 'finished', 'dnf'];
-      const formats = ['print', 'ebook', 'audiobook'];
-      for (let n = 0; n < count; n++) {
-        const pick = (list: string[], k: number) => list[(n * k + Math.floor(n / list.length)) % list.length]!;
-        store.put({
-          id: crypto.randomUUID(),
-          title: `The ${pick(words, 7)} of ${pick(words, 11)} ${n}`,
-          authors: [`${pick(words, 3)} ${pick(words, 5)}son`],
-          format: pick(formats, 1),
-          status: pick(statuses, 1),
-          rating: n % 3 === 0 ? null : ((n % 10) + 1) / 2,
-          deleted: false,
-          _hlc: {},
-        });
-      }
-      await new Promise((resolve, reject) => {
-        tx.oncomplete = resolve;
-        tx.onerror = () => reject(tx.error);
-      });
-      db.close();
-    },
-    { name: `lamplight-journal-${userId}`, count, words: WORDS },
-  );
-}
 
 async function time(work: () => Promise<unknown>): Promise<number> {
   const start = performance.now();
@@ -98,7 +62,7 @@ async function main(): Promise<void> {
       const context = await browser.newContext();
       const page = await context.newPage();
       await signInThroughUi(page, server.baseUrl, reader.user.email, reader.password);
-      await seedBooks(page, reader.user.id, count);
+      await seedBooks(page, `lamplight-journal-${reader.user.id}`, count);
       await measure(page, server.baseUrl, count); // warm-up: code and caches
       results[count] = await measure(page, server.baseUrl, count);
       await context.close();

@@ -2,17 +2,21 @@
  * `npm run bench:sync`: push merge throughput against a raw PostgreSQL upsert of the same rows,
  * and the time to pull everything to a fresh device, measured in one run on one database.
  *
- * Workload: 50,000 field changes (10,000 books × 5 fields) in batches of 500, first as new rows,
- * then as newer edits of every field (the update path). The baseline is a plain multi-row
- * `INSERT … ON CONFLICT DO UPDATE` of the same rows, with the same batching, into a table of the
- * same columns and foreign key, without clocks. Rounds alternate between the two so machine noise hits both.
+ * Workload: 50,000 field changes (10,000 books × 5 fields) in batches of the contract's 1,000,
+ * first as new rows, then as newer edits of every field (the update path): merged in process
+ * (`SyncStore.push`) and through the HTTP route (JSON, validation, authentication). The baseline
+ * is a plain multi-row `INSERT … ON CONFLICT DO UPDATE` of the same rows, with the same batching,
+ * into a table of the same columns and foreign key, without clocks. The order of the three
+ * alternates round by round so machine noise hits all. Then the pull: everything to a fresh
+ * device over HTTP at the app's page size, against plain SQL paging by (user_id, seq) with the
+ * same number of rows a page, alternating, median ratio.
  */
 import { randomUUID } from 'node:crypto';
 import type { AddressInfo } from 'node:net';
 
 import type { DataSource } from 'typeorm';
 
-import type { FieldChange, PullResponse } from '../shared/sync/field-change';
+import { MAX_PULL_LIMIT, MAX_PUSH_CHANGES, type FieldChange, type PullResponse } from '../shared/sync/field-change';
 import { HlcClock } from '../shared/sync/hlc';
 import { mergeChanges, type FieldState } from '../shared/sync/merge-changes';
 import { createApp } from '../sync-server/src/app';
@@ -25,7 +29,7 @@ import { signAccessToken } from '../sync-server/src/domain/access-tokens';
 
 const ROWS = 10_000;
 const FIELDS = ['title', 'authors', 'format', 'status', 'rating'] as const;
-const BATCH = 500;
+const BATCH = MAX_PUSH_CHANGES;
 const ROUNDS = 5;
 
 function changesFor(rowIds: readonly string[], clock: HlcClock, edition: number): FieldChange[][] {
@@ -78,6 +82,21 @@ async function timed(work: () => Promise<unknown>): Promise<number> {
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
 
+/** Plain SQL paging of the books table by (user_id, seq), `rows` a page: the floor of a pull. */
+async function plainPull(dataSource: DataSource, userId: string, rows: number): Promise<number> {
+  let seq = '0';
+  let fields = 0;
+  for (;;) {
+    const page: Record<string, unknown>[] = await dataSource.query(
+      'SELECT id, title, authors, format, status, rating, seq FROM books WHERE user_id = $1 AND seq > $2 ORDER BY seq LIMIT $3',
+      [userId, seq, rows],
+    );
+    fields += page.length * FIELDS.length;
+    if (page.length < rows) return fields;
+    seq = String(page.at(-1)!['seq']);
+  }
+}
+
 async function main(): Promise<void> {
   const config = loadConfig({ ...process.env, LAMPLIGHT_JWT_SECRET: process.env['LAMPLIGHT_JWT_SECRET'] ?? 'bench-secret-bench-secret-bench-secret-0' });
   const dataSource = createDataSource(config.databaseUrl);
@@ -86,71 +105,101 @@ async function main(): Promise<void> {
   await dataSource.query(`CREATE TABLE IF NOT EXISTS bench_raw_books (LIKE books INCLUDING ALL,
       FOREIGN KEY (user_id) REFERENCES users (id) ON DELETE CASCADE)`);
   const store = new SyncStore(dataSource);
-
-  const insertRatios: number[] = [];
-  const updateRatios: number[] = [];
-  const rows: { path: string; round: number; oursMs: number; rawMs: number }[] = [];
-  let lastUser = '';
-  for (let round = 1; round <= ROUNDS; round++) {
-    const [{ id: userId }] = await dataSource.query(`INSERT INTO users (email, display_name, password_hash) VALUES ($1, 'Bench Reader', 'x') RETURNING id`, [
-      `bench-${randomUUID()}@example.com`,
-    ]);
-    lastUser = userId;
-    const rowIds = Array.from({ length: ROWS }, () => randomUUID());
-    const clock = new HlcClock('bench-device');
-    const first = changesFor(rowIds, clock, 1);
-    const second = changesFor(rowIds, clock, 2);
-
-    const rawInsert = await timed(() => rawUpsert(dataSource, userId, first));
-    const oursInsert = await timed(async () => {
-      for (const batch of first) await store.push(userId, batch);
-    });
-    const oursUpdate = await timed(async () => {
-      for (const batch of second) await store.push(userId, batch);
-    });
-    const rawUpdate = await timed(() => rawUpsert(dataSource, userId, second));
-    insertRatios.push(rawInsert / oursInsert);
-    updateRatios.push(rawUpdate / oursUpdate);
-    rows.push({ path: 'new rows', round, oursMs: oursInsert, rawMs: rawInsert }, { path: 'edits', round, oursMs: oursUpdate, rawMs: rawUpdate });
-  }
-
-  // Pull everything the last round's reader has to a fresh device, over HTTP like a browser.
   const mailer = createSmtpMailer('smtp://127.0.0.1:9', 'bench@example.com');
   const app = createApp({ config, dataSource, mailer });
   const server = await new Promise<import('node:http').Server>((resolve) => {
     const listening = app.listen(0, '127.0.0.1', () => resolve(listening));
   });
   const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  const [session] = await dataSource.query(`INSERT INTO device_sessions (user_id, name) VALUES ($1, 'bench') RETURNING id`, [lastUser]);
-  const token = await signAccessToken({ userId: lastUser, sessionId: session.id, role: 'reader' }, config.jwtSecret);
+  const newReader = async () => {
+    const [{ id: userId }] = await dataSource.query(`INSERT INTO users (email, display_name, password_hash) VALUES ($1, 'Bench Reader', 'x') RETURNING id`, [
+      `bench-${randomUUID()}@example.com`,
+    ]);
+    const [session] = await dataSource.query(`INSERT INTO device_sessions (user_id, name) VALUES ($1, 'bench') RETURNING id`, [userId]);
+    const token = await signAccessToken({ userId, sessionId: session.id, role: 'reader' }, config.jwtSecret);
+    return { userId: userId as string, token };
+  };
+  const httpPush = async (token: string, batches: FieldChange[][]) => {
+    for (const batch of batches) {
+      const res = await fetch(`${baseUrl}/api/sync/push`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
+        body: JSON.stringify({ deviceId: 'bench-device', changes: batch }),
+      });
+      if (res.status !== 200) throw new Error(`push answered ${res.status}: ${await res.text()}`);
+    }
+  };
+
+  type Path = 'raw' | 'ours' | 'http';
+  const times: Record<'insert' | 'update', Record<Path, number[]>> = {
+    insert: { raw: [], ours: [], http: [] },
+    update: { raw: [], ours: [], http: [] },
+  };
+  let lastUser = '';
+  let lastToken = '';
+  for (let round = 0; round < ROUNDS; round++) {
+    const readers = { raw: await newReader(), ours: await newReader(), http: await newReader() };
+    const rowIds = Array.from({ length: ROWS }, () => randomUUID());
+    const clock = new HlcClock('bench-device');
+    const first = changesFor(rowIds, clock, 1);
+    const second = changesFor(rowIds, clock, 2);
+    const run: Record<Path, (batches: FieldChange[][]) => Promise<unknown>> = {
+      raw: (batches) => rawUpsert(dataSource, readers.raw.userId, batches),
+      ours: async (batches) => {
+        for (const batch of batches) await store.push(readers.ours.userId, batch);
+      },
+      http: (batches) => httpPush(readers.http.token, batches),
+    };
+    const paths: Path[] = ['raw', 'ours', 'http'];
+    const order = [...paths.slice(round % 3), ...paths.slice(0, round % 3)];
+    for (const path of order) times.insert[path].push(await timed(() => run[path](first)));
+    for (const path of order.reverse()) times.update[path].push(await timed(() => run[path](second)));
+    lastUser = readers.http.userId;
+    lastToken = readers.http.token;
+  }
+
+  // Pull everything the last round's reader has to a fresh device, over HTTP like a browser, at the app's
+  // large page size; the baseline pages the same rows with plain SQL, as many rows a page.
   let state: FieldState = new Map();
   let pages = 0;
-  const pullMs = await timed(async () => {
+  const pullOnce = async () => {
     let cursor = '';
+    state = new Map();
+    pages = 0;
     for (;;) {
-      const res = await fetch(`${baseUrl}/api/sync/pull?limit=5000${cursor ? `&since=${cursor}` : ''}`, { headers: { authorization: `Bearer ${token}` } });
+      const res = await fetch(`${baseUrl}/api/sync/pull?limit=${MAX_PULL_LIMIT}${cursor ? `&since=${cursor}` : ''}`, {
+        headers: { authorization: `Bearer ${lastToken}`, 'accept-encoding': 'gzip' },
+      });
       const page = (await res.json()) as PullResponse;
       state = mergeChanges(state, page.changes);
       pages++;
       cursor = page.cursor;
       if (!page.hasMore) break;
     }
-  });
+  };
+  const pullTimes: number[] = [];
+  const plainTimes: number[] = [];
+  for (let round = 0; round < ROUNDS; round++) {
+    if (round % 2 === 0) pullTimes.push(await timed(pullOnce));
+    plainTimes.push(await timed(() => plainPull(dataSource, lastUser, MAX_PULL_LIMIT / FIELDS.length)));
+    if (round % 2 === 1) pullTimes.push(await timed(pullOnce));
+  }
   server.close();
   mailer.close();
 
   const changes = ROWS * FIELDS.length;
-  console.log(`bench-sync: ${changes} field changes (${ROWS} rows × ${FIELDS.length} fields), batches of ${BATCH}, ${ROUNDS} rounds`);
-  for (const row of rows) {
+  const rate = (ms: number) => `${((changes / ms) * 1000).toFixed(0)} changes/s`;
+  console.log(`bench-sync: ${changes} field changes (${ROWS} rows × ${FIELDS.length} fields), batches of ${BATCH}, ${ROUNDS} rounds, order rotating`);
+  for (const kind of ['insert', 'update'] as const) {
+    const t = times[kind];
     console.log(
-      `  round ${row.round} ${row.path.padEnd(9)} ours ${row.oursMs.toFixed(0).padStart(6)} ms (${((changes / row.oursMs) * 1000).toFixed(0)} changes/s)  raw upsert ${row.rawMs.toFixed(0).padStart(6)} ms  ratio ${(row.rawMs / row.oursMs).toFixed(2)}`,
+      `  ${kind === 'insert' ? 'new rows' : 'edits   '}  raw upsert ${median(t.raw).toFixed(0).padStart(6)} ms (${rate(median(t.raw))})  merge ${median(t.ours).toFixed(0).padStart(6)} ms (${rate(median(t.ours))})  HTTP ${median(t.http).toFixed(0).padStart(6)} ms (${rate(median(t.http))})`,
     );
+    const ratios = (path: Path) => median(t.raw.map((raw, n) => raw / t[path][n]!)).toFixed(2);
+    console.log(`            throughput / raw, median of rounds: merge ${ratios('ours')}, HTTP ${ratios('http')} (goal ≥ 0.80)`);
   }
   console.log(
-    `push merge throughput / raw INSERT … ON CONFLICT DO UPDATE, median: new rows ${median(insertRatios).toFixed(2)}, edits ${median(updateRatios).toFixed(2)} (goal ≥ 0.50)`,
-  );
-  console.log(
-    `pull to a fresh device over HTTP: ${state.size} field values in ${pages} pages, ${pullMs.toFixed(0)} ms (${((state.size / pullMs) * 1000).toFixed(0)} values/s)`,
+    `pull to a fresh device over HTTP (${MAX_PULL_LIMIT} fields a page): ${state.size} field values in ${pages} pages, median ${median(pullTimes).toFixed(0)} ms; plain SQL paging ${median(plainTimes).toFixed(0)} ms; ratio ${(median(pullTimes) / median(plainTimes)).toFixed(2)} (goal ≤ 1.5)`,
   );
   await dataSource.destroy();
   if (state.size !== changes) {

@@ -20,6 +20,7 @@ startDatabase();
 console.log('Building the server and the app (production)…');
 run(bin('tsc'), ['-p', 'sync-server/tsconfig.json']);
 run(bin('ng'), ['build', '--configuration', 'production']);
+run('node', ['scripts/precompress.mjs']);
 
 const smtpPort = process.env.LAMPLIGHT_DEV_SMTP_PORT ?? '2525';
 const env = {

@@ -48,6 +48,8 @@ export interface PullResponse {
   /** Opaque: send it back as `since` to continue. */
   readonly cursor: string;
   readonly hasMore: boolean;
+  /** While `hasMore`: about how many rows are still to pull after this page (for progress). */
+  readonly remaining?: number;
   readonly serverTime: string;
 }
 

@@ -43,7 +43,23 @@ export interface CycleReport {
  * clocks ahead of the server's, which are stamped again and re-sent; a batch the server finds
  * too large, or refuses without naming a change, is halved; one such change alone is set aside.
  */
-export async function runSyncCycle(ports: SyncPorts, batchSize = 500): Promise<CycleReport> {
+/** How far a pull has come: rows pulled in this cycle, and about how many in all (null when one page did it). */
+export interface PullProgress {
+  readonly rows: number;
+  readonly aboutTotal: number | null;
+}
+
+export interface CycleOptions {
+  /** Push batches of at most this many changes. */
+  readonly batchSize?: number;
+  /** Fetch the next pull page while the current one is applied (the network and the store work together). */
+  readonly prefetch?: boolean;
+  /** Told after each applied pull page. */
+  readonly onPulled?: (progress: PullProgress) => void;
+}
+
+export async function runSyncCycle(ports: SyncPorts, options: CycleOptions | number = {}): Promise<CycleReport> {
+  const { batchSize = 500, prefetch = false, onPulled } = typeof options === 'number' ? { batchSize: options } : options;
   let size = Math.min(batchSize, MAX_PUSH_CHANGES);
   let pushed = 0;
   let refused = 0;
@@ -78,13 +94,20 @@ export async function runSyncCycle(ports: SyncPorts, batchSize = 500): Promise<C
     }
   }
   let pulled = 0;
-  let cursor = await ports.cursor();
+  let rows = 0;
+  let next: Promise<PullResponse> = ports.pull(await ports.cursor());
   for (;;) {
-    const page = await ports.pull(cursor);
+    const page = await next;
+    if (prefetch && page.hasMore) {
+      next = ports.pull(page.cursor);
+      next.catch(() => undefined); // a failed prefetch surfaces when it is awaited, not as an unhandled rejection
+    }
     await ports.apply(page);
     pulled += page.changes.length;
-    cursor = page.cursor;
+    rows += new Set(page.changes.map((change) => `${change.collection}/${change.rowId}`)).size;
+    onPulled?.({ rows, aboutTotal: page.hasMore && page.remaining !== undefined ? rows + page.remaining : page.hasMore ? null : rows });
     if (!page.hasMore) break;
+    if (!prefetch) next = ports.pull(page.cursor);
   }
   return { pushed, refused, pulled };
 }

@@ -169,13 +169,18 @@ describe('/api/sync', () => {
       await client.push(changes);
 
       const pages: string[][] = [];
+      const remaining: (number | undefined)[] = [];
       let cursor: string | undefined;
       for (;;) {
         const page = await client.pull(cursor, 5);
         pages.push(page.changes.map((c) => c.rowId));
+        remaining.push(page.remaining);
         cursor = page.cursor;
         if (!page.hasMore) break;
       }
+      // Each page says how many of the 12 rows are still to come (none on the last, which has no more).
+      const rowsSoFar = pages.map((_, n) => pages.slice(0, n + 1).reduce((sum, page) => sum + new Set(page).size, 0));
+      expect(remaining).toEqual(rowsSoFar.map((sofar, n) => (n === pages.length - 1 ? undefined : 12 - sofar)));
       const { state } = await client.pullAll(undefined, 5);
 
       expect(asObject(state)).toEqual(asObject(mergeChanges(new Map(), changes)));

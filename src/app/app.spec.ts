@@ -1,5 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
-import { TestBed } from '@angular/core/testing';
+import { DeferBlockState, TestBed, type ComponentFixture } from '@angular/core/testing';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MAT_ICON_DEFAULT_OPTIONS } from '@angular/material/icon';
 import { provideRouter } from '@angular/router';
@@ -26,6 +26,13 @@ function configureShell(): void {
   });
 }
 
+/** The signed-in shell is an `@defer` block: render it now, as the app does once its chunk loads. */
+async function renderShell(fixture: ComponentFixture<App>): Promise<void> {
+  await fixture.whenStable();
+  for (const block of await fixture.getDeferBlocks()) await block.render(DeferBlockState.Complete);
+  await fixture.whenStable();
+}
+
 describe('App shell', () => {
   beforeEach(configureShell);
 
@@ -34,7 +41,7 @@ describe('App shell', () => {
   it('for a signed-in reader, shows the Lamplight name, their name and a link to each main destination', async () => {
     rememberSession();
     const fixture = TestBed.createComponent(App);
-    await fixture.whenStable();
+    await renderShell(fixture);
     const element = fixture.nativeElement as HTMLElement;
 
     expect(element.querySelector('.brand-name')?.textContent).toBe('Lamplight');
@@ -46,7 +53,7 @@ describe('App shell', () => {
   it('for a signed-in reader, offers an Add action with "Capture a quote" and "Add a book"', async () => {
     rememberSession();
     const fixture = TestBed.createComponent(App);
-    await fixture.whenStable();
+    await renderShell(fixture);
     const add = (fixture.nativeElement as HTMLElement).querySelector<HTMLButtonElement>('button[aria-label="Add"]')!;
 
     add.click();
@@ -68,7 +75,7 @@ describe('App shell', () => {
     spyOnProperty(navigator, 'userAgent').and.returnValue(IPHONE_SAFARI);
     rememberSession();
     const fixture = TestBed.createComponent(App);
-    await fixture.whenStable();
+    await renderShell(fixture);
 
     const install = (await accountMenuItems(fixture.nativeElement)).find((item) => itemText(item) === 'Install Lamplight')!;
     install.click();
@@ -81,7 +88,7 @@ describe('App shell', () => {
     runAsInstalled();
     rememberSession();
     const fixture = TestBed.createComponent(App);
-    await fixture.whenStable();
+    await renderShell(fixture);
 
     expect((await accountMenuItems(fixture.nativeElement)).map(itemText)).toEqual(['Settings', 'Sign out']);
   });
@@ -89,7 +96,7 @@ describe('App shell', () => {
   it('with nobody signed in, shows no journal navigation', async () => {
     forgetSession();
     const fixture = TestBed.createComponent(App);
-    await fixture.whenStable();
+    await renderShell(fixture);
 
     expect((fixture.nativeElement as HTMLElement).querySelector('nav[aria-label="Main"]')).toBeNull();
     expect((fixture.nativeElement as HTMLElement).querySelector('button[aria-label="Add"]')).toBeNull();
@@ -124,7 +131,7 @@ describe('App shell and this device’s storage', () => {
   it('after sign-in asks the browser to keep storage and says once on this device that it will', async () => {
     const persist = browserAnswers(true);
     rememberSession();
-    TestBed.createComponent(App);
+    await renderShell(TestBed.createComponent(App));
 
     await untilTicked(() => snackBarText() !== null, 'the storage message');
     expect(persist).toHaveBeenCalledTimes(1);
@@ -134,7 +141,7 @@ describe('App shell and this device’s storage', () => {
     TestBed.inject(MatSnackBar).dismiss();
     TestBed.resetTestingModule();
     configureShell();
-    TestBed.createComponent(App);
+    await renderShell(TestBed.createComponent(App));
     await untilTicked(() => persist.calls.count() === 2, 'the second question');
     await new Promise((resolve) => setTimeout(resolve, 50));
     TestBed.tick();
@@ -144,7 +151,7 @@ describe('App shell and this device’s storage', () => {
   it('says what a refusal means, with the two ways to keep the journal safe', async () => {
     browserAnswers(false);
     rememberSession();
-    TestBed.createComponent(App);
+    await renderShell(TestBed.createComponent(App));
 
     await untilTicked(() => snackBarText() !== null, 'the storage message');
     expect(snackBarText()).toBe('Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.');
@@ -155,7 +162,7 @@ describe('App shell and this device’s storage', () => {
     const persist = browserAnswers(true);
     forgetSession();
     const fixture = TestBed.createComponent(App);
-    await fixture.whenStable();
+    await renderShell(fixture);
     await new Promise((resolve) => setTimeout(resolve, 50));
 
     expect(persist).not.toHaveBeenCalled();

@@ -1,107 +1,30 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject } from '@angular/core';
-import { MatDialog } from '@angular/material/dialog';
-import { MatSnackBar } from '@angular/material/snack-bar';
-import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
-import { MatMenuModule } from '@angular/material/menu';
-import { MatToolbarModule } from '@angular/material/toolbar';
-import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { afterNextRender, ChangeDetectionStrategy, Component, DestroyRef, inject, Injector } from '@angular/core';
+import { RouterOutlet } from '@angular/router';
 
 import { Auth } from './core/auth/auth';
-import { Covers } from './core/covers/covers';
-import { LocalJournal } from './core/data/local-journal';
-import { browserStorage } from './core/device/browser-storage';
-import { DeviceStorage } from './core/device/device-storage';
-import { AppUpdates } from './core/pwa/app-updates';
-import { InstallHelpDialog } from './core/pwa/install-help-dialog';
 import { InstallPrompt } from './core/pwa/install-prompt';
-import { TabCoordination } from './core/pwa/tab-coordination';
-import { SyncStatus } from './core/sync/sync-status/sync-status';
-import { SignOutFlow } from './features/account';
-import { QuoteCapture } from './features/quotes';
-import { TimerBar } from './features/timer';
+import { SignedInShell } from './signed-in-shell';
 
-/** A place in the app the shell links to. */
-interface Destination {
-  readonly path: string;
-  readonly label: string;
-  readonly icon: string;
-  /** Active only on this very path, not on the pages under it (Goals, not its Challenges). */
-  readonly exact?: boolean;
-}
-
-/** The app shell: brand bar, main navigation and the routed page. */
+/**
+ * The app's root: the sign-in pages alone, or, for a signed-in reader, {@link SignedInShell}
+ * (deferred: the local journal, sync, dialogs and the rest load after the first screen).
+ */
 @Component({
   selector: 'll-root',
-  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbarModule, MatIconModule, MatButtonModule, MatMenuModule, SyncStatus, TimerBar],
+  imports: [RouterOutlet, SignedInShell],
   templateUrl: './app.html',
   styleUrl: './app.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class App {
-  private readonly auth = inject(Auth);
-  private readonly signOutFlow = inject(SignOutFlow);
-  private readonly dialog = inject(MatDialog);
-  private readonly quoteCapture = inject(QuoteCapture);
-  protected readonly installPrompt = inject(InstallPrompt);
-
-  protected readonly user = this.auth.user;
-  protected readonly isAdmin = this.auth.isAdmin;
-  protected readonly needsSignIn = this.auth.needsSignIn;
-  protected readonly destinations: readonly Destination[] = [
-    { path: '/today', label: 'Today', icon: 'wb_twilight' },
-    { path: '/library', label: 'Library', icon: 'local_library' },
-    { path: '/timer', label: 'Timer', icon: 'timer' },
-    { path: '/journal', label: 'Journal', icon: 'edit_note' },
-    { path: '/goals', label: 'Goals', icon: 'flag', exact: true },
-    { path: '/goals/challenges', label: 'Challenges', icon: 'emoji_events' },
-    { path: '/insights', label: 'Insights', icon: 'insights' },
-    { path: '/circles', label: 'Circles', icon: 'groups' },
-  ];
+  protected readonly user = inject(Auth).user;
 
   constructor() {
-    inject(AppUpdates);
-    inject(TabCoordination);
-    inject(Covers); // uploads covers an earlier visit saved offline
-    this.askToKeepStorage();
-  }
-
-  protected signOut(): Promise<void> {
-    return this.signOutFlow.start();
-  }
-
-  protected captureQuote(): void {
-    void this.quoteCapture.open();
-  }
-
-  protected install(): void {
-    if (this.installPrompt.option() === 'ios-how-to') this.dialog.open(InstallHelpDialog, { width: '440px' });
-    else void this.installPrompt.install();
-  }
-
-  /**
-   * After sign-in, ask the browser to keep the journal's storage, and say once per device what
-   * it answered (Settings shows it from then on).
-   */
-  private askToKeepStorage(): void {
-    const journal = inject(LocalJournal);
-    const storage = inject(DeviceStorage);
-    const snackBar = inject(MatSnackBar);
+    inject(InstallPrompt); // listens from the start: the browser offers installing once, maybe before sign-in
+    const injector = inject(Injector);
     let destroyed = false;
     inject(DestroyRef).onDestroy(() => (destroyed = true));
-    effect(() => {
-      if (!journal.db()) return;
-      void storage.requestPersistence().then((kept) => {
-        if (destroyed || browserStorage.read<boolean>('lamplight.storageAsked')) return;
-        browserStorage.write('lamplight.storageAsked', true);
-        snackBar.open(
-          kept
-            ? 'Your browser will keep Lamplight’s storage, so your journal is not cleared to free space.'
-            : 'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.',
-          'OK',
-          { duration: 8000 },
-        );
-      });
-    });
+    // Update prompts need the snackbar: loaded after the first render, signed in or not.
+    afterNextRender(() => void import('./core/pwa/app-updates').then(({ AppUpdates }) => destroyed || injector.get(AppUpdates)));
   }
 }

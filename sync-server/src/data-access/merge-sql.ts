@@ -114,3 +114,13 @@ export function pullSql(specs: readonly CollectionSpec[]): string {
      WHERE b.before < $4
      ORDER BY b.seq`;
 }
+
+/**
+ * How many rows changed after a sequence, across every collection (`$1` user, `$2` sequence):
+ * index-only counts on (user_id, seq), run only while a pull has more pages, so a device can say
+ * how far a long first sync has come.
+ */
+export function remainingSql(specs: readonly CollectionSpec[]): string {
+  const counts = specs.map((spec) => `(SELECT count(*) FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2)`);
+  return `SELECT (${counts.join(' + ')})::int AS remaining`;
+}

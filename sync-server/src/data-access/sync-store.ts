@@ -6,7 +6,7 @@ import { setDeltaOf } from '../../../shared/sync/merge-set';
 import { joinOrSet, type OrSetState } from '../../../shared/sync/or-set';
 import { columnName, type FieldSpec } from '../../../shared/sync/schema/field';
 import { COLLECTIONS, collectionSpec, fieldSpecOf } from '../../../shared/sync/schema/collections';
-import { mergeSql, pullSql } from './merge-sql';
+import { mergeSql, pullSql, remainingSql } from './merge-sql';
 import { notifyPushed } from './sync-notifications';
 import { queryableOf, TextStore } from './text-store';
 import { textFieldMax } from '../../../shared/text/text-fields';
@@ -33,6 +33,7 @@ function mergeStatement(collection: string, fields: readonly string[]): { name?:
   return statement;
 }
 const PULL_SQL = pullSql(SPECS);
+const REMAINING_SQL = remainingSql(SPECS);
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
 /** The part of a node-postgres client the hot path uses. */
@@ -65,6 +66,8 @@ export interface PulledPage {
   /** The sequence to continue after. */
   readonly lastSeq: number;
   readonly hasMore: boolean;
+  /** Rows still to pull after this page (only while there are more pages). */
+  readonly remaining?: number;
 }
 
 /** The server's side of sync: merging pushed changes and reading them back, per user. */
@@ -175,7 +178,10 @@ export class SyncStore {
       lastSeq = Number(seq);
       taken++;
     }
-    return { changes, lastSeq, hasMore: taken < Number(rows[0]?.keys ?? 0) };
+    const hasMore = taken < Number(rows[0]?.keys ?? 0);
+    if (!hasMore) return { changes, lastSeq, hasMore };
+    const [{ remaining }] = (await this.dataSource.query(REMAINING_SQL, [userId, lastSeq])) as [{ remaining: number }];
+    return { changes, lastSeq, hasMore, remaining };
   }
 }
 

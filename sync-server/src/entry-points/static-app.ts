@@ -1,7 +1,8 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 
-import express, { Router } from 'express';
+import { Router } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 
 /**
  * Serves the built Angular app from the same origin as the API. Hashed bundles are cached for a
@@ -20,16 +21,22 @@ export function staticApp(appDir: string): Router {
     throw new Error(`No built app in ${appDir} (run: npm run build)`);
   }
   const router = Router();
+  // Files compressed at build time (scripts/precompress.mjs) are sent as they are: brotli when
+  // the browser takes it, else gzip, else the plain file.
   router.use(
-    express.static(root, {
+    expressStaticGzip(root, {
       index: false,
-      setHeaders(res, filePath) {
-        const name = path.basename(filePath);
-        if (/-[A-Z0-9]{8}\.(js|css|woff2?)$/.test(name)) {
-          res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
-        } else {
-          res.setHeader('Cache-Control', 'no-cache');
-        }
+      enableBrotli: true,
+      orderPreference: ['br', 'gzip'],
+      serveStatic: {
+        setHeaders(res, filePath) {
+          const name = path.basename(filePath);
+          if (/-[A-Z0-9]{8}\.(js|css|woff2?)(\.(br|gz))?$/.test(name)) {
+            res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+          } else {
+            res.setHeader('Cache-Control', 'no-cache');
+          }
+        },
       },
     }),
   );

@@ -87,6 +87,7 @@ export function syncRoutes(store: SyncStore, serverSecret: Uint8Array): Router {
         changes: page.changes,
         cursor: cursors.seal(userId, page.lastSeq),
         hasMore: page.hasMore,
+        ...(page.remaining === undefined ? {} : { remaining: page.remaining }),
         serverTime: new Date().toISOString(),
       };
       res.json(body);

@@ -52,6 +52,25 @@ export class JournalStore {
    * status and its history entry, say).
    */
   async writeAll(writes: readonly RowWrite[]): Promise<void> {
+    await this.commit(writes, null);
+  }
+
+  /**
+   * {@link writeAll}, but first reads one row in the same transaction and writes nothing when
+   * `skip(row)` says so: no second transaction to read it, and no other write slipping in
+   * between. Resolves with the row as it was read.
+   */
+  async writeAllUnless<C extends CollectionName>(
+    writes: readonly RowWrite[],
+    read: { readonly collection: C; readonly rowId: string },
+    skip: (row: RowOf<Spec<C>> | undefined) => boolean,
+  ): Promise<RowOf<Spec<C>> | undefined> {
+    let before: RowOf<Spec<C>> | undefined;
+    await this.commit(writes, { ...read, skip: (row) => skip((before = row as RowOf<Spec<C>> | undefined)) });
+    return before;
+  }
+
+  private async commit(writes: readonly RowWrite[], guard: Guard | null): Promise<void> {
     const db = this.requireDb();
     for (const { collection, patch } of writes) {
       const problems = validatePatch(COLLECTIONS[collection], patch);
@@ -61,19 +80,26 @@ export class JournalStore {
     const texts = writes.some(({ collection, patch }) => Object.keys(patch).some((field) => textFieldMax(collection, field) !== undefined))
       ? await loadTextWriter()
       : null;
-    const tables = [...new Set(writes.map((w) => w.collection))].map((name) => db.rows(name));
-    const changed = await db.transaction('rw', [...tables, db.outbox, db.meta], async () => {
-      const outbox: OutboxEntry[] = [];
+    const names = [...new Set([...writes.map((w) => w.collection), ...(guard ? [guard.collection] : [])])];
+    const changed = await db.transaction('rw', [...names.map((name) => db.rows(name)), db.outbox, db.meta], async () => {
+      // Every read is issued at once: the rows, the clock and its offset, the waiting changes.
+      const [rows, [offsetEntry, clockEntry], waiting] = await Promise.all([
+        readRows(db, writes, guard),
+        db.meta.bulkGet(['clockOffset', 'clock']),
+        waitingFor(db, writes),
+      ]);
+      if (guard?.skip(rows.get(rowKey(guard.collection, guard.rowId)))) return false;
+      // From the server-corrected time, so a device with a wrong date still stamps sensible clocks.
+      const offset = Number(offsetEntry?.value ?? 0) || 0;
       let hlc: string | null = null;
+      const outbox: OutboxEntry[] = [];
+      const puts = new Map<CollectionName, LocalRow[]>();
       for (const { collection, rowId, patch } of writes) {
-        const row: LocalRow = (await db.rows(collection).get(rowId)) ?? emptyRow(rowId);
+        const key = rowKey(collection, rowId);
+        const row: LocalRow = rows.get(key) ?? emptyRow(rowId);
         const fields = Object.entries(patch).filter(([field, value]) => !sameValue(row[field], value));
         if (fields.length === 0) continue;
-        // From the server-corrected time, so a device with a wrong date still stamps sensible clocks.
-        if (hlc === null) {
-          const offset = Number((await db.meta.get('clockOffset'))?.value ?? 0) || 0;
-          hlc = new HlcClock(deviceId(), () => Date.now() + offset, (await db.meta.get('clock'))?.value).tick();
-        }
+        hlc ??= new HlcClock(deviceId(), () => Date.now() + offset, clockEntry?.value).tick();
         const next: Record<string, unknown> = { ...row, _hlc: { ...row._hlc } };
         for (const [field, value] of fields) {
           if (fieldSpecOf(collection, field)?.kind === 'set') {
@@ -94,11 +120,18 @@ export class JournalStore {
           (next['_hlc'] as Record<string, string>)[field] = hlc;
           outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value: text ? text.value : value, hlc });
         }
-        await db.rows(collection).put(next as LocalRow);
+        rows.set(key, next as LocalRow); // a later write to the same row builds on this one
+        puts.set(collection, [...(puts.get(collection) ?? []).filter((other) => other.id !== rowId), next as LocalRow]);
       }
       if (!hlc) return false;
-      await db.meta.put({ key: 'clock', value: hlc });
-      await db.outbox.bulkAdd(await coalesce(db, outbox));
+      const { stale, entries } = coalesce(waiting, outbox);
+      // Issued together: IndexedDB runs them in order within the transaction without a round trip each.
+      await Promise.all([
+        ...[...puts].map(([collection, list]) => db.rows(collection).bulkPut(list)),
+        db.meta.put({ key: 'clock', value: hlc }),
+        db.outbox.bulkDelete(stale),
+        db.outbox.bulkAdd(entries),
+      ]);
       return true;
     });
     if (changed) this.writes.next();
@@ -133,27 +166,58 @@ export class JournalStore {
   }
 }
 
+/** One row read before a write, and whether to skip the write because of it. */
+interface Guard {
+  readonly collection: CollectionName;
+  readonly rowId: string;
+  readonly skip: (row: LocalRow | undefined) => boolean;
+}
+
+const rowKey = (collection: string, rowId: string) => `${collection}\u0000${rowId}`;
+const changeKey = (change: OutboxEntry) => `${change.collection}\u0000${change.rowId}\u0000${change.field}`;
+
+/** The rows written (and the guard's row), one `bulkGet` per collection, all issued together. */
+async function readRows(db: JournalDb, writes: readonly RowWrite[], guard: Guard | null): Promise<Map<string, LocalRow>> {
+  const ids = new Map<CollectionName, Set<string>>();
+  for (const { collection, rowId } of [...writes, ...(guard ? [guard] : [])]) ids.set(collection, (ids.get(collection) ?? new Set()).add(rowId));
+  const lists = await Promise.all(
+    [...ids].map(async ([collection, set]) => {
+      const keys = [...set];
+      const found = await db.rows(collection).bulkGet(keys);
+      return keys.flatMap((rowId, n) => (found[n] ? [[rowKey(collection, rowId), found[n]] as const] : []));
+    }),
+  );
+  return new Map(lists.flat());
+}
+
+/** Waiting outbox changes to the rows being written (the outbox is short: one read of it all). */
+async function waitingFor(db: JournalDb, writes: readonly RowWrite[]): Promise<OutboxEntry[]> {
+  const rowIds = new Set(writes.map((write) => write.rowId));
+  return (await db.outbox.toArray()).filter((change) => rowIds.has(change.rowId));
+}
+
 /**
  * Drops waiting outbox changes to the same field of the same row, so only the newest is sent
  * (with its newer clock): a timer that writes every few seconds keeps one change, not hundreds.
  * A set field's waiting deltas are joined into the new one instead, so no add or remove is lost;
- * a mergeable text's updates are never dropped.
+ * a mergeable text's updates are never dropped. Returns the waiting changes to delete and the
+ * changes to add.
  */
-async function coalesce(db: JournalDb, fresh: OutboxEntry[]): Promise<OutboxEntry[]> {
-  const key = (change: OutboxEntry) => `${change.collection}\u0000${change.rowId}\u0000${change.field}`;
+function coalesce(waiting: readonly OutboxEntry[], fresh: readonly OutboxEntry[]): { stale: number[]; entries: OutboxEntry[] } {
   // A mergeable text's updates each carry typed characters: they all go, never only the newest.
   const coalescable = (change: OutboxEntry) => fieldSpecOf(change.collection, change.field)?.kind !== 'text';
-  const byKey = new Map(fresh.filter(coalescable).map((change) => [key(change), change]));
-  const rowIds = new Set(fresh.map((change) => change.rowId));
-  const waiting = await db.outbox.filter((change) => rowIds.has(change.rowId) && byKey.has(key(change))).toArray();
-  for (const old of waiting) {
-    const replacement = byKey.get(key(old))!;
+  const byKey = new Map(fresh.filter(coalescable).map((change) => [changeKey(change), change]));
+  const stale = waiting.filter((change) => byKey.has(changeKey(change)));
+  for (const old of stale) {
+    const replacement = byKey.get(changeKey(old))!;
     if (fieldSpecOf(old.collection, old.field)?.kind === 'set') {
-      byKey.set(key(old), { ...replacement, value: joinOrSet(old.value as OrSetState, replacement.value as OrSetState) });
+      byKey.set(changeKey(old), { ...replacement, value: joinOrSet(old.value as OrSetState, replacement.value as OrSetState) });
     }
   }
-  await db.outbox.bulkDelete(waiting.map((change) => change.seq!));
-  return [...new Set(fresh.map((change) => (coalescable(change) ? byKey.get(key(change))! : change)))];
+  return {
+    stale: stale.map((change) => change.seq!),
+    entries: [...new Set(fresh.map((change) => (coalescable(change) ? byKey.get(changeKey(change))! : change)))],
+  };
 }
 
 /**

@@ -22,9 +22,9 @@ export class BookStatus {
 
   /** Does nothing when the book already has that status. */
   async change(bookId: string, status: NonNullable<Book['status']>, at = new Date()): Promise<void> {
-    const book = (await this.store.get('books', bookId)) as Book | undefined;
+    // The book is read in the write's own transaction: one round trip, and no edit in between.
+    const book = await this.store.writeAllUnless(this.writes(bookId, status, at), { collection: 'books', rowId: bookId }, (row) => row?.status === status);
     if (book?.status === status) return;
-    await this.store.writeAll(this.writes(bookId, status, at));
     await this.afterChange(bookId, status, book?.seriesId);
   }
 

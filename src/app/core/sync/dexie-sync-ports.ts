@@ -3,7 +3,7 @@ import { firstValueFrom } from 'rxjs';
 
 import { isApiErrorBody } from '@shared/api/api-error';
 import { clockOffsetMs, restampClocks, restampFloor } from '@shared/sync/device-clock';
-import type { ChangeProblem, FieldChange, PulledChange, PullResponse, PushResponse } from '@shared/sync/field-change';
+import { MAX_PULL_LIMIT, type ChangeProblem, type FieldChange, type PulledChange, type PullResponse, type PushResponse } from '@shared/sync/field-change';
 import { HlcClock } from '@shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '@shared/sync/local-row';
 import { orSetClocks, renameOrSetClocks, type OrSetState } from '@shared/sync/or-set';
@@ -15,8 +15,13 @@ import { deviceId } from '../device/device-id';
 import type { JournalDb } from '../data/journal-db';
 import { rememberOverwritten } from './overwritten-edits';
 
+/** Fields per pull page, until the server says many more are to come. */
+const SMALL_PAGE = 1000;
+
 /** The browser's side of the shared sync cycle: the outbox and rows in Dexie, the server over HTTP. */
 export class DexieSyncPorts implements SyncPorts {
+  private pageLimit = SMALL_PAGE;
+
   /**
    * @param known the collections this version of the app knows; changes to others are held on
    * the device and applied after an update that knows them.
@@ -121,11 +126,13 @@ export class DexieSyncPorts implements SyncPorts {
   }
 
   async pull(cursor: string | undefined): Promise<PullResponse> {
-    const params: Record<string, string> = { limit: '1000' };
+    const params: Record<string, string> = { limit: String(this.pageLimit) };
     if (cursor) params['since'] = cursor;
     const sentAt = Date.now();
     const res = await firstValueFrom(this.http.get<PullResponse>('/api/sync/pull', { params, observe: 'response' }));
     await this.learnTime(res, sentAt, res.body?.serverTime);
+    // A long pull (a first sync) goes on in the largest pages: fewer transactions, fewer re-renders.
+    if ((res.body?.remaining ?? 0) > SMALL_PAGE) this.pageLimit = MAX_PULL_LIMIT;
     return res.body!;
   }
 

@@ -4,7 +4,7 @@ import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { debounceTime, firstValueFrom } from 'rxjs';
 
 import { dateLooksWrong } from '@shared/sync/device-clock';
-import { retryDelayMs, runSyncCycle } from '@shared/sync/sync-cycle';
+import { retryDelayMs, runSyncCycle, type PullProgress } from '@shared/sync/sync-cycle';
 
 import { Auth } from '../auth/auth';
 import { isUnreachable } from '../http/api-error-message';
@@ -38,6 +38,7 @@ export class SyncEngine {
   private readonly phaseState = signal<SyncPhase>('idle');
   private readonly lastError = signal<string | null>(null);
   private readonly clockNoticeState = signal<string | null>(null);
+  private readonly progressState = signal<PullProgress | null>(null);
   private attempt = 0;
   private timer: ReturnType<typeof setTimeout> | undefined;
   private running: Promise<void> | null = null;
@@ -53,6 +54,8 @@ export class SyncEngine {
   readonly error = this.lastError.asReadonly();
   /** Said once per device: its date is far from the server's (sync corrects for it meanwhile). */
   readonly clockNotice = this.clockNoticeState.asReadonly();
+  /** A pull of several pages under way: rows so far and about how many in all; null otherwise. */
+  readonly pullProgress = this.progressState.asReadonly();
 
   constructor() {
     const destroyRef = inject(DestroyRef);
@@ -126,13 +129,16 @@ export class SyncEngine {
     try {
       // Back from offline: a cheap probe first, so a still-missing network costs one small request.
       if (wasOffline) await firstValueFrom(this.http.get('/api/health'));
-      const ran = await this.withTabLock(db.userId, () => runSyncCycle(new DexieSyncPorts(db, this.http)));
+      // Pages are fetched while the last one is stored; progress shows only while more pages are to come.
+      const onPulled = (progress: PullProgress) => this.progressState.set(progress.aboutTotal !== null && progress.aboutTotal > progress.rows ? progress : null);
+      const ran = await this.withTabLock(db.userId, () => runSyncCycle(new DexieSyncPorts(db, this.http), { prefetch: true, onPulled }));
       await this.noticeWrongDate(db);
       this.attempt = 0;
       this.lastError.set(null);
       this.phaseState.set('idle');
       if (!ran) this.schedule(retryDelayMs(0)); // another tab holds the lock; look again soon
     } catch (error) {
+      this.progressState.set(null); // the next cycle resumes from the stored cursor and says so again
       this.phaseState.set(this.describeFailure(error));
       if (this.phaseState() !== 'needs-sign-in') this.schedule(retryDelayMs(this.attempt++));
     }

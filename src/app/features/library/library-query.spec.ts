@@ -1,6 +1,6 @@
 import type { Book } from '@shared/sync/schema/collections';
 
-import { queryLibrary, searchText, type LibraryQuery } from './library-query';
+import { LibraryRows, LibrarySorter, queryLibrary, searchText, type LibraryQuery } from './library-query';
 
 const COMFORT = '00000000-0000-4000-8000-00000000c001';
 const BUDDY = '00000000-0000-4000-8000-00000000c002';
@@ -11,9 +11,10 @@ const shelf = [
   book('c', { title: 'The Copper Orchard', authors: ['Mina Achebe-Ross'], status: 'tbr', labelIds: [] }),
   book('d', { title: 'copper kettles', authors: ['Ana Zorrilla'], status: 'finished', rating: 2.5, labelIds: [BUDDY] }),
 ];
-const index = new Map(shelf.map((b) => [b.id, searchText(b)]));
-const query = (overrides: Partial<LibraryQuery>): string[] =>
-  queryLibrary(shelf, index, { text: '', status: 'all', sort: { by: 'title', direction: 'asc' }, ...overrides }).map((b) => b.id);
+const query = (overrides: Partial<LibraryQuery>, books: readonly Book[] = shelf): string[] =>
+  queryLibrary(books, new Map(books.map((b) => [b.id, searchText(b)])), { text: '', status: 'all', sort: { by: 'title', direction: 'asc' }, ...overrides }).map(
+    (b) => b.id,
+  );
 
 describe('queryLibrary', () => {
   it('finds books by any words of the title or author, ignoring case and accents', () => {
@@ -49,5 +50,32 @@ describe('queryLibrary', () => {
   it('puts unrated books last whichever way ratings are sorted', () => {
     expect(query({ sort: { by: 'rating', direction: 'desc' } })).toEqual(['b', 'a', 'd', 'c']);
     expect(query({ sort: { by: 'rating', direction: 'asc' } })).toEqual(['d', 'a', 'b', 'c']);
+  });
+});
+
+describe('LibraryRows and LibrarySorter', () => {
+  it('keeps the row of a book that did not change, and works out again only the changed one', () => {
+    const rows = new LibraryRows();
+    const first = rows.update(shelf);
+    const copies = shelf.map((b) => ({ ...b, authors: b.authors && [...b.authors] })); // fresh objects, as IndexedDB gives
+    copies[1] = { ...copies[1]!, status: 'reading' };
+
+    const second = rows.update(copies);
+
+    expect(second[0]).toBe(first[0]!);
+    expect(second[1]).not.toBe(first[1]!);
+    expect(second[1]!.book.status).toBe('reading');
+    expect(rows.update(copies.slice(2)).map((row) => row.book.id)).toEqual(['c', 'd']); // removed books leave
+  });
+
+  it('sorts from its last order to the same result a fresh sort gives (as queryLibrary)', () => {
+    const sorter = new LibrarySorter();
+    const rows = new LibraryRows();
+    const sort = { by: 'title', direction: 'asc' } as const;
+    expect(sorter.sort(rows.update(shelf), sort).map((row) => row.book.id)).toEqual(['b', 'd', 'a', 'c']);
+    const renamed = [...shelf.slice(0, 3), { ...shelf[3]!, title: 'Zinc kettles' }, book('e', { title: 'Amber' })];
+
+    expect(sorter.sort(rows.update(renamed), sort).map((row) => row.book.id)).toEqual(query({}, renamed));
+    expect(query({}, renamed)).toEqual(['b', 'e', 'a', 'c', 'd']); // "A Harbour" before "Amber": a space sorts before letters
   });
 });

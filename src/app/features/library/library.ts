@@ -16,7 +16,7 @@ import { liveQuerySignal } from '../../core/data/live-query';
 import { browserStorage } from '../../core/device/browser-storage';
 import { authorLine, FORMAT_LABELS, STATUS_LABELS } from '../../ui/book-labels';
 import { BookStatus } from '../../core/read-model/book-status';
-import { queryLibrary, searchText, type LibraryQuery, type LibrarySortKey } from './library-query';
+import { filterRows, LibraryRows, LibrarySorter, type LibraryQuery, type LibrarySortKey } from './library-query';
 import { StarRating } from '../../ui/star-rating/star-rating';
 import { LabelChips } from '../../ui/label-chips/label-chips';
 import { LabelDirectory } from '../../core/read-model/label-directory';
@@ -51,8 +51,12 @@ export class Library {
   private readonly bookStatus = inject(BookStatus);
 
   protected readonly books = liveQuerySignal(async (db) => ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted), [] as Book[]);
-  /** Search text per book, rebuilt when the library changes rather than on every keystroke. */
-  private readonly index = computed(() => new Map(this.books().map((book) => [book.id, searchText(book)])));
+  /** Rows keyed by id: only books that changed get their search text and sort keys again. */
+  private readonly derived = new LibraryRows();
+  private readonly rows = computed(() => this.derived.update(this.books()));
+  /** Every row in the chosen order; a keystroke only filters it, and a change re-sorts from the last order. */
+  private readonly sorter = new LibrarySorter();
+  private readonly sorted = computed(() => this.sorter.sort(this.rows(), this.sort()));
 
   protected readonly text = signal('');
   protected readonly status = signal<LibraryQuery['status']>('all');
@@ -62,9 +66,7 @@ export class Library {
   protected readonly view = signal<View>(browserStorage.read<View>(VIEW_KEY) ?? 'table');
   protected readonly page = signal({ index: 0, size: 50 });
 
-  protected readonly found = computed(() =>
-    queryLibrary(this.books(), this.index(), { text: this.text(), status: this.status(), labelId: this.labelId(), sort: this.sort() }),
-  );
+  protected readonly found = computed(() => filterRows(this.sorted(), { text: this.text(), status: this.status(), labelId: this.labelId() }));
   protected readonly shown = computed(() => {
     const { index, size } = this.page();
     return this.found().slice(index * size, (index + 1) * size);
@@ -74,6 +76,9 @@ export class Library {
   protected readonly statuses = BOOK_STATUSES;
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly authorLine = authorLine;
+
+  /** Table rows follow books by id, so a changed book re-renders its row only. */
+  protected readonly byId = (_index: number, book: Book) => book.id;
 
   protected formatOf(book: Book): string {
     return book.format ? FORMAT_LABELS[book.format] : '';

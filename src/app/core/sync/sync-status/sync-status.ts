@@ -31,8 +31,11 @@ export class SyncStatus {
         return { icon: 'key', label: 'Sign in to sync' };
       case 'offline':
         return { icon: 'cloud_off', label: pending > 0 ? `Offline · ${waiting}` : 'Offline · saved here' };
-      case 'syncing':
-        return { icon: 'sync', label: 'Syncing…' };
+      case 'syncing': {
+        const progress = this.engine.pullProgress();
+        if (!progress) return { icon: 'sync', label: 'Syncing…' };
+        return { icon: 'sync', label: `Syncing ${progress.rows.toLocaleString()} of about ${progress.aboutTotal!.toLocaleString()}` };
+      }
       case 'retrying':
         return { icon: 'schedule', label: pending > 0 ? waiting : 'Will retry' };
       case 'idle': {
