@@ -12,7 +12,7 @@ import type { AddressInfo } from 'node:net';
 
 import type { DataSource } from 'typeorm';
 
-import type { FieldChange, PullResponse } from '../shared/sync/field-change';
+import type { FieldChange, PullResponse } from '../shared/api/sync';
 import { HlcClock } from '../shared/sync/hlc';
 import { mergeChanges, type FieldState } from '../shared/sync/merge-changes';
 import { createApp } from '../sync-server/src/app';

@@ -1,6 +1,6 @@
 import Dexie, { type Table } from 'dexie';
 
-import type { FieldChange, PulledChange } from '@shared/sync/field-change';
+import type { FieldChange, PulledChange } from '@shared/api/sync';
 import type { LocalRow } from '@shared/sync/local-row';
 import { COLLECTIONS } from '@shared/sync/schema/collections';
 

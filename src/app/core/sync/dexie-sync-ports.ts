@@ -3,7 +3,7 @@ import { firstValueFrom } from 'rxjs';
 
 import { isApiErrorBody } from '@shared/api/api-error';
 import { clockOffsetMs, restampClocks } from '@shared/sync/device-clock';
-import type { ChangeProblem, FieldChange, PulledChange, PullResponse, PushResponse } from '@shared/sync/field-change';
+import type { ChangeProblem, FieldChange, PulledChange, PullResponse, PushResponse } from '@shared/api/sync';
 import { HlcClock } from '@shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '@shared/sync/local-row';
 import { renameOrSetClocks, type OrSetState } from '@shared/sync/or-set';

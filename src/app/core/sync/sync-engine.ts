@@ -3,6 +3,7 @@ import { computed, DestroyRef, effect, inject, Injectable, signal } from '@angul
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { debounceTime, firstValueFrom } from 'rxjs';
 
+import type { HealthAnswer } from '@shared/api/health';
 import { dateLooksWrong } from '@shared/sync/device-clock';
 import { retryDelayMs, runSyncCycle } from '@shared/sync/sync-cycle';
 
@@ -125,7 +126,7 @@ export class SyncEngine {
     this.phaseState.set('syncing');
     try {
       // Back from offline: a cheap probe first, so a still-missing network costs one small request.
-      if (wasOffline) await firstValueFrom(this.http.get('/api/health'));
+      if (wasOffline) await firstValueFrom(this.http.get<HealthAnswer>('/api/health'));
       const ran = await this.withTabLock(db.userId, () => runSyncCycle(new DexieSyncPorts(db, this.http)));
       await this.noticeWrongDate(db);
       this.attempt = 0;
