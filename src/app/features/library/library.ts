@@ -50,7 +50,7 @@ const VIEW_KEY = 'lamplight.libraryView';
 export class Library {
   private readonly bookStatus = inject(BookStatus);
 
-  protected readonly books = liveQuerySignal(async (db) => ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted), [] as Book[]);
+  protected readonly books = liveQuerySignal((db) => db.current('books'), [] as Book[]);
   /** Search text per book, rebuilt when the library changes rather than on every keystroke. */
   private readonly index = computed(() => new Map(this.books().map((book) => [book.id, searchText(book)])));
 

@@ -8,10 +8,7 @@ import { newestFirst } from '../quote-query';
 import { liveQueryFor } from '../../../core/data/live-query-for';
 
 async function bookQuotes(db: JournalDb, bookId: string): Promise<{ book: Book | undefined; quotes: Quote[] }> {
-  const [book, quotes] = await Promise.all([
-    db.rows('books').get(bookId) as Promise<Book | undefined>,
-    db.rows('quotes').where('bookId').equals(bookId).toArray() as Promise<Quote[]>,
-  ]);
+  const [book, quotes] = await Promise.all([db.rows('books').get(bookId), db.rows('quotes').where('bookId').equals(bookId).toArray()]);
   return { book, quotes: quotes.filter((quote) => !quote.deleted).sort(newestFirst) };
 }
 

@@ -31,7 +31,7 @@ export class QuotesPage {
 
   private readonly data = liveQuerySignal(
     async (db) => {
-      const [quotes, books] = await Promise.all([db.rows('quotes').toArray() as Promise<Quote[]>, db.rows('books').toArray() as Promise<Book[]>]);
+      const [quotes, books] = await Promise.all([db.rows('quotes').toArray(), db.rows('books').toArray()]);
       return { quotes: quotes.filter((quote) => !quote.deleted), books };
     },
     undefined as { quotes: Quote[]; books: Book[] } | undefined,

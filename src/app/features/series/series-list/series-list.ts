@@ -9,6 +9,7 @@ import { Router, RouterLink } from '@angular/router';
 import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-order';
 import type { Book, Series } from '@shared/sync/schema/collections';
 
+import { isCurrent } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { fieldError, notBlank } from '../../../ui/field-errors';
@@ -27,8 +28,8 @@ export class SeriesList {
 
   private readonly data = liveQuerySignal(
     async (db) => ({
-      series: ((await db.rows('series').toArray()) as Series[]).filter((s) => !s.deleted),
-      books: ((await db.rows('books').where('seriesId').above('').toArray()) as Book[]).filter((b) => !b.deleted),
+      series: await db.current('series'),
+      books: await db.rows('books').where('seriesId').above('').filter(isCurrent).toArray(),
     }),
     { series: [] as Series[], books: [] as Book[] },
   );

@@ -7,7 +7,6 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 
 import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-order';
-import type { Book, Series } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
@@ -30,8 +29,8 @@ export class SeriesPage {
 
   private readonly store = inject(JournalStore);
   private readonly data = liveQueryFor(this.id, async (db, id) => ({
-    series: (await db.rows('series').get(id)) as Series | undefined,
-    books: (await db.rows('books').where('seriesId').equals(id).toArray()) as Book[],
+    series: await db.rows('series').get(id),
+    books: await db.rows('books').where('seriesId').equals(id).toArray(),
   }));
   protected readonly series = computed(() => this.data()?.series);
   protected readonly ordered = computed(() => seriesBooks(this.data()?.books ?? [], this.id()));

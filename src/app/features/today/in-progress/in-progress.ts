@@ -34,8 +34,8 @@ export class InProgress {
 
   private readonly data = liveQuerySignal(
     async (db) => ({
-      sessions: ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted),
-      books: ((await db.rows('books').toArray()) as Book[]).filter((b) => !b.deleted),
+      sessions: await db.current('sessions'),
+      books: await db.current('books'),
     }),
     { sessions: [] as Session[], books: [] as Book[] },
   );

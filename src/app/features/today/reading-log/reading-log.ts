@@ -28,8 +28,8 @@ export class ReadingLog {
 
   private readonly data = liveQuerySignal(
     async (db) => ({
-      sessions: (await db.rows('sessions').toArray()) as Session[],
-      books: (await db.rows('books').toArray()) as Book[],
+      sessions: await db.rows('sessions').toArray(),
+      books: await db.rows('books').toArray(),
     }),
     { sessions: [] as Session[], books: [] as Book[] },
   );
