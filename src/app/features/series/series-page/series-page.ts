@@ -14,6 +14,7 @@ import { fieldError, notBlank } from '../../../ui/field-errors';
 import { STATUS_LABELS } from '../../../ui/book-labels';
 import { StarRating } from '../../../ui/star-rating/star-rating';
 import { liveQueryFor } from '../../../core/data/live-query-for';
+import { oneSeries } from '../series-data';
 
 /** One series: its books in order, progress, the next to read, and the reader's view of it all. */
 @Component({
@@ -28,10 +29,7 @@ export class SeriesPage {
   readonly id = input.required<string>();
 
   private readonly store = inject(JournalStore);
-  private readonly data = liveQueryFor(this.id, async (db, id) => ({
-    series: await db.rows('series').get(id),
-    books: await db.rows('books').where('seriesId').equals(id).toArray(),
-  }));
+  private readonly data = liveQueryFor(this.id, oneSeries);
   protected readonly series = computed(() => this.data()?.series);
   protected readonly ordered = computed(() => seriesBooks(this.data()?.books ?? [], this.id()));
   protected readonly progress = computed(() => seriesProgress(this.ordered(), this.series()?.plannedCount));
