@@ -4,7 +4,12 @@ import { isCurrent, type JournalDb } from '../../core/data/journal-db';
 import { newestFirst } from './quote-query';
 
 /** Every quote kept, and every book, deleted ones too: their quotes still name where they came from. */
-export async function allQuotes(db: JournalDb): Promise<{ quotes: Quote[]; books: Book[] }> {
+export interface AllQuotes {
+  readonly quotes: Quote[];
+  readonly books: Book[];
+}
+
+export async function allQuotes(db: JournalDb): Promise<AllQuotes> {
   const [quotes, books] = await Promise.all([db.current('quotes'), db.rows('books').toArray()]);
   return { quotes, books };
 }
