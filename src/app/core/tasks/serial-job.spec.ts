@@ -42,7 +42,7 @@ describe('SerialJob', () => {
     }
   });
 
-  it('waits longer after each failure and starts over after a success', () => {
+  it('waits longer after each failure and starts over after a success', async () => {
     jasmine.clock().install();
     try {
       let rounds = 0;
@@ -53,6 +53,7 @@ describe('SerialJob', () => {
       expect(rounds).toBe(0);
       jasmine.clock().tick(4001);
       expect(rounds).toBe(1);
+      for (let i = 0; i < 5; i++) await Promise.resolve(); // the round settles (microtasks, not the mock clock)
       job.succeeded();
       job.retryLater(); // attempt 0 again: 0.5 to 1 s
       jasmine.clock().tick(1000);
