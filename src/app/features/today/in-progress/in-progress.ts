@@ -3,7 +3,6 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { RouterLink } from '@angular/router';
 
 import { localDay } from '@shared/calendar/local-day';
-import type { Book, Session } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
@@ -20,7 +19,8 @@ interface InProgressLine {
   readonly finishDate: string | null;
 }
 
-/** The books the reader is reading now, each with when they should finish it. */
+/** The books the reader is reading now, each with when they should finish it. */ import { currentSessionsAndBooks, NO_SESSIONS } from '../today-data';
+
 @Component({
   selector: 'll-in-progress',
   imports: [DatePipe, RouterLink, TimerStartButton],
@@ -32,13 +32,7 @@ export class InProgress {
   private readonly timeZone = inject(TIME_ZONE);
   private readonly clock = inject(CLOCK);
 
-  private readonly data = liveQuerySignal(
-    async (db) => ({
-      sessions: await db.current('sessions'),
-      books: await db.current('books'),
-    }),
-    { sessions: [] as Session[], books: [] as Book[] },
-  );
+  private readonly data = liveQuerySignal(currentSessionsAndBooks, NO_SESSIONS);
 
   protected readonly lines = computed<InProgressLine[]>(() => {
     const { sessions, books } = this.data();
