@@ -9,6 +9,7 @@ import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { bookForecast, bookProgress } from '../../sessions';
 import { TimerStartButton } from '../../timer';
+import { currentSessionsAndBooks, NO_SESSIONS } from '../today-data';
 
 /** One book being read, as the list shows it. */
 interface InProgressLine {
@@ -19,7 +20,7 @@ interface InProgressLine {
   readonly finishDate: string | null;
 }
 
-/** The books the reader is reading now, each with when they should finish it. */ import { currentSessionsAndBooks, NO_SESSIONS } from '../today-data';
+/** The books the reader is reading now, each with when they should finish it. */
 
 @Component({
   selector: 'll-in-progress',

@@ -9,11 +9,12 @@ import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { YearHeatmap } from '../../insights';
 import { logSessions } from '../../../core/read-model/reading-sessions';
+import { allSessionsAndBooks, NO_SESSIONS } from '../today-data';
 
 /**
  * The daily reading log: minutes and pages today, the current and longest streak, and a heatmap
  * of the year (`ll-year-heatmap`). Days are the reader's local days.
- */ import { allSessionsAndBooks, NO_SESSIONS } from '../today-data';
+ */
 
 @Component({
   selector: 'll-reading-log',
