@@ -12,7 +12,7 @@ import type { AddressInfo } from 'node:net';
 
 import { quantile } from 'simple-statistics';
 
-import type { FieldChange } from '../shared/sync/field-change';
+import type { FieldChange } from '../shared/api/sync';
 import { HlcClock } from '../shared/sync/hlc';
 import { createApp } from '../sync-server/src/app';
 import { loadConfig } from '../sync-server/src/config';

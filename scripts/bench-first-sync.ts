@@ -8,8 +8,8 @@
 
 import type { Browser } from 'playwright-core';
 
-import type { FieldChange } from '../shared/sync/field-change';
-import { MAX_PULL_LIMIT, MAX_PUSH_CHANGES } from '../shared/sync/field-change';
+import type { FieldChange } from '../shared/api/sync';
+import { MAX_PULL_LIMIT, MAX_PUSH_CHANGES } from '../shared/api/sync';
 import { HlcClock } from '../shared/sync/hlc';
 import { launchBrowser } from '../spec/e2e/support/browser';
 import { registerThroughApi } from '../spec/e2e/support/reader';

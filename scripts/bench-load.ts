@@ -18,7 +18,7 @@ import http from 'node:http';
 import { quantile } from 'simple-statistics';
 
 import { HlcClock } from '../shared/sync/hlc';
-import type { FieldChange } from '../shared/sync/field-change';
+import type { FieldChange } from '../shared/api/sync';
 import { loadConfig } from '../sync-server/src/config';
 import { createDataSource } from '../sync-server/src/data-access/data-source';
 import { migrate } from '../sync-server/src/data-access/migrate';

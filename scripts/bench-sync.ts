@@ -16,7 +16,7 @@ import type { AddressInfo } from 'node:net';
 
 import type { DataSource } from 'typeorm';
 
-import { MAX_PULL_LIMIT, MAX_PUSH_CHANGES, type FieldChange, type PullResponse } from '../shared/sync/field-change';
+import { MAX_PULL_LIMIT, MAX_PUSH_CHANGES, type FieldChange, type PullResponse } from '../shared/api/sync';
 import { HlcClock } from '../shared/sync/hlc';
 import { mergeChanges, type FieldState } from '../shared/sync/merge-changes';
 import { createApp } from '../sync-server/src/app';

@@ -16,7 +16,7 @@ import type { AddressInfo } from 'node:net';
 
 import * as Y from 'yjs';
 
-import type { FieldChange, PullResponse } from '../shared/sync/field-change';
+import type { FieldChange, PullResponse } from '../shared/api/sync';
 import { HlcClock } from '../shared/sync/hlc';
 import { loadTextDoc, textDocName, textOf } from '../shared/text/text-doc';
 import { decodeTextBytes, encodeTextBytes } from '../shared/text/text-value';

@@ -1,4 +1,4 @@
-import type { FieldChange } from '../sync/field-change';
+import type { FieldChange } from '../api/sync';
 import type { CircleRole } from './circle-roles';
 
 /** A member as the circle sees them: a display name and a role, nothing of their journal. */

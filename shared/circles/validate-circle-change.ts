@@ -1,4 +1,4 @@
-import type { ChangeProblem } from '../sync/field-change';
+import type { ChangeProblem } from '../api/sync';
 import { MAX_CLOCK_AHEAD_MS, parseHlc } from '../sync/hlc';
 import { unstorableText } from '../sync/storable-text';
 import { circleCollectionSpec, circleFieldSpec } from './circle-collections';

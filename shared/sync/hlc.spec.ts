@@ -70,6 +70,13 @@ describe('HLC (Kulkarni et al. 2014, "Logical Physical Clocks")', () => {
     expect(clock.tick() > far).toBeTrue();
   });
 
+  it('orders by wall time, then counter, where unpadded numbers would sort the other way', () => {
+    // Hand-worked: as plain text '9' > '10', so only the fixed widths make 9 ms come first.
+    expect(formatHlc({ wall: 9, counter: 0, node: 'b' }) < formatHlc({ wall: 10, counter: 0, node: 'a' })).toBeTrue();
+    expect(formatHlc({ wall: 10, counter: 9, node: 'b' }) < formatHlc({ wall: 10, counter: 10, node: 'a' })).toBeTrue();
+    expect(formatHlc({ wall: 10, counter: 0, node: 'z' })).toBe('000000000000010:00000:z');
+  });
+
   it('string order equals (wall, counter, node) order for any clocks (property)', () => {
     const hlc = fc.record({
       wall: fc.integer({ min: 0, max: 10 ** 15 - 1 }),

@@ -1,4 +1,4 @@
-import type { PulledChange } from './field-change';
+import type { PulledChange } from '../api/sync';
 import { mergeField, type Stamped } from './merge';
 import { mergeSetField } from './merge-set';
 import type { OrSetState } from './or-set';

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 
-import type { PulledChange } from './field-change';
+import type { PulledChange } from '../api/sync';
 import { formatHlc } from './hlc';
 import { mergeField } from './merge';
 import { mergeChanges, type FieldState } from './merge-changes';

@@ -1,5 +1,5 @@
-import type { ChangeProblem, FieldChange, PullResponse } from './field-change';
-import { MAX_PUSH_CHANGES } from './field-change';
+import type { ChangeProblem, FieldChange, PullResponse } from '../api/sync';
+import { MAX_PUSH_CHANGES } from '../api/sync';
 
 /** An outbox entry as the cycle sees it: a change plus its local order. */
 export type QueuedChange = FieldChange & { readonly seq?: number };

@@ -1,5 +1,5 @@
 import { parseHlc, MAX_CLOCK_AHEAD_MS } from './hlc';
-import type { ChangeProblem } from './field-change';
+import type { ChangeProblem } from '../api/sync';
 import { setDeltaProblem } from './merge-set';
 import { unstorableText } from './storable-text';
 import { collectionSpec } from './schema/collections';

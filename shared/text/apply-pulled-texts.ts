@@ -1,4 +1,4 @@
-import type { PulledChange } from '../sync/field-change';
+import type { PulledChange } from '../api/sync';
 import type { LocalRow } from '../sync/local-row';
 import { mergePulledText } from './local-text';
 import { textDocName } from './text-doc';

@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 
 import type { Page } from 'playwright-core';
 
-import type { FieldChange } from '../../shared/sync/field-change';
+import type { FieldChange } from '../../shared/api/sync';
 import { fieldChange, SyncClient } from '../support/sync-client';
 import { seriousViolations } from './support/axe';
 import { useServerAndBrowser } from './support/harness';

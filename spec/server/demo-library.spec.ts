@@ -5,7 +5,7 @@ import { parse as isbn3Parse } from 'isbn3';
 import request from 'supertest';
 
 import { isValidIsbn13 } from '../../shared/isbn/is-valid-isbn13';
-import type { PulledChange } from '../../shared/sync/field-change';
+import type { PulledChange } from '../../shared/api/sync';
 import { parseHlc } from '../../shared/sync/hlc';
 import { sessionProblems } from '../../shared/reading/session-problems';
 import type { Session } from '../../shared/sync/schema/collections';

@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 
-import type { CaughtMail } from '../../shared/account/account-input';
+import type { CaughtMail } from '../../shared/api/admin';
 import { deterministicId } from '../../shared/sync/deterministic-id';
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
 import type { JobServices } from '../../sync-server/src/jobs/job';

@@ -3,7 +3,7 @@ import { createHash } from 'node:crypto';
 import type { Express } from 'express';
 import request from 'supertest';
 
-import type { TokenPair } from '../../shared/account/account-input';
+import type { TokenPair } from '../../shared/api/auth';
 import { REFRESH_GRACE_SECONDS } from '../../sync-server/src/domain/device-sessions';
 import { bearer, registerReader } from '../support/accounts';
 import { testDataSource } from '../support/test-database';

@@ -1,6 +1,6 @@
 import { COLLECTIONS } from '../../shared/sync/schema/collections';
 import { columnName, type FieldSpec, type SqlType } from '../../shared/sync/schema/field';
-import { SYNCED_ENTITIES } from '../../sync-server/src/data-access/entities';
+import { SYNCED_ENTITIES } from '../../sync-server/src/data-access/synced-entities';
 import { testDataSource } from '../support/test-database';
 
 /** Columns every synced table has besides its fields. */
@@ -17,13 +17,18 @@ const INFORMATION_SCHEMA_TYPE: Record<SqlType, string> = {
   jsonb: 'jsonb',
 };
 
-describe('The shared schema, the TypeORM entities and the migrated database agree', () => {
-  it('has an entity for every synced collection and no other', () => {
+/**
+ * The shared schema is the one description of a synced collection: the TypeORM entities are
+ * generated from it (synced-entities.ts) and the tables come from explicit migrations, so this spec
+ * is what notices a migration that forgot a field or gave it another type.
+ */
+describe('The shared schema, the generated TypeORM entities and the migrated database agree', () => {
+  it('generates an entity for every synced collection and no other', () => {
     expect(Object.keys(SYNCED_ENTITIES).sort()).toEqual(Object.keys(COLLECTIONS).sort());
   });
 
   for (const spec of Object.values(COLLECTIONS)) {
-    it(`${spec.name}: every field is a nullable entity column of the same type, and nothing else is`, async () => {
+    it(`${spec.name}: the generated entity maps every field to a nullable column of its type, and nothing else`, async () => {
       const metadata = (await testDataSource()).getMetadata(SYNCED_ENTITIES[spec.name as keyof typeof SYNCED_ENTITIES]);
       expect(metadata.tableName).toBe(spec.table);
       const byColumn = new Map(metadata.columns.map((column) => [column.databaseName, column]));

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 
-import type { FieldChange } from '../../shared/sync/field-change';
+import type { FieldChange } from '../../shared/api/sync';
 import { HlcClock } from '../../shared/sync/hlc';
 import { mergeChanges, type FieldState } from '../../shared/sync/merge-changes';
 import { registerReader } from '../support/accounts';

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 
 import * as z from 'zod';
 
-import { MAX_PULL_BYTES } from '../../shared/sync/field-change';
+import { MAX_PULL_BYTES } from '../../shared/api/sync';
 import { COLLECTIONS } from '../../shared/sync/schema/collections';
 import type { FieldSpec } from '../../shared/sync/schema/field';
 import { pullSql } from '../../sync-server/src/data-access/merge-sql';

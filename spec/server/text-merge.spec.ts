@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 
 import * as Y from 'yjs';
 
-import type { PulledChange } from '../../shared/sync/field-change';
+import type { PulledChange } from '../../shared/api/sync';
 import { initialTextState } from '../../shared/text/initial-text-state';
 import { loadTextDoc, textDocName, textOf } from '../../shared/text/text-doc';
 import { decodeTextBytes, encodeTextBytes } from '../../shared/text/text-value';

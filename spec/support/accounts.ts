@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import type { Express } from 'express';
 import request from 'supertest';
 
-import type { SignedIn } from '../../shared/account/account-input';
+import type { SignedIn } from '../../shared/api/auth';
 import { testDataSource } from './test-database';
 
 /** A password that passes the policy; invented words. */

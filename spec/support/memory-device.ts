@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 
-import type { ChangeProblem, FieldChange, PullResponse } from '../../shared/sync/field-change';
+import type { ChangeProblem, FieldChange, PullResponse } from '../../shared/api/sync';
 import { clockOffsetMs, restampClocks } from '../../shared/sync/device-clock';
 import { HlcClock } from '../../shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '../../shared/sync/local-row';

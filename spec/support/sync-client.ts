@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 
-import type { FieldChange, PullResponse, PushResponse } from '../../shared/sync/field-change';
+import type { FieldChange, PullResponse, PushResponse } from '../../shared/api/sync';
 import { formatHlc } from '../../shared/sync/hlc';
 import { mergeChanges, type FieldState } from '../../shared/sync/merge-changes';
 

@@ -2,7 +2,7 @@ import { isDeepStrictEqual } from 'node:util';
 
 import fc from 'fast-check';
 
-import type { PullResponse } from '../../shared/sync/field-change';
+import type { PullResponse } from '../../shared/api/sync';
 import { mergeChanges, type FieldState } from '../../shared/sync/merge-changes';
 import { BOOK_STATUSES } from '../../shared/sync/schema/collections';
 import type { OrSetState } from '../../shared/sync/or-set';

@@ -1,4 +1,4 @@
-import type { ChangeProblem, FieldChange, PullResponse } from '../../shared/sync/field-change';
+import type { ChangeProblem, FieldChange, PullResponse } from '../../shared/api/sync';
 import { clockOffsetMs, restampClocks, restampFloor } from '../../shared/sync/device-clock';
 import { HlcClock } from '../../shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '../../shared/sync/local-row';

@@ -1,6 +1,6 @@
 import { isDeepStrictEqual } from 'node:util';
 
-import { MAX_PUSH_CHANGES, type FieldChange, type PulledChange } from '../../shared/sync/field-change';
+import { MAX_PUSH_CHANGES, type FieldChange, type PulledChange } from '../../shared/api/sync';
 import { wins } from '../../shared/sync/merge';
 import { fieldKey, type FieldState } from '../../shared/sync/merge-changes';
 import { setDeltaOf } from '../../shared/sync/merge-set';

@@ -1,4 +1,4 @@
-import type { PushRequest } from '../../shared/sync/field-change';
+import type { PushRequest } from '../../shared/api/sync';
 
 /** One request of the sync wire contract, as a simulated network carries it. */
 export type SimRequest =

@@ -2,7 +2,7 @@ import * as z from 'zod';
 
 import { isValidIsbn13 } from '../../isbn/is-valid-isbn13';
 
-/** How a field is stored in PostgreSQL; a spec checks the TypeORM entities against this. */
+/** How a field is stored in PostgreSQL: the server's TypeORM entities are generated from it and a spec checks the migrated tables against it. */
 export type SqlType = 'text' | 'text[]' | 'double precision' | 'integer' | 'boolean' | 'uuid' | 'jsonb';
 
 /**

@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import request from 'supertest';
 
-import type { SignedIn } from '../../../shared/account/account-input';
+import type { SignedIn } from '../../../shared/api/auth';
 import { GOOD_PASSWORD, uniqueEmail } from '../../support/accounts';
 
 /** Registers an invented reader through the real API. */

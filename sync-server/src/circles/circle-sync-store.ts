@@ -4,7 +4,7 @@ import { SHARED_PROGRESS_FIELDS } from '../../../shared/circles/circle-collectio
 import { writeRefusal } from '../../../shared/circles/circle-permissions';
 import type { CircleRole } from '../../../shared/circles/circle-roles';
 import { NOT_A_MEMBER, NOT_A_MEMBER_TEXT, type CirclePulledRow } from '../../../shared/circles/circle-wire';
-import type { ChangeProblem, FieldChange, PushResponse } from '../../../shared/sync/field-change';
+import type { ChangeProblem, FieldChange, PushResponse } from '../../../shared/api/sync';
 import { mergeField, type Stamped } from '../../../shared/sync/merge';
 import { AppError } from '../errors';
 

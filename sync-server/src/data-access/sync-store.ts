@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 
-import { MAX_PULL_BYTES, type FieldChange, type PulledChange } from '../../../shared/sync/field-change';
+import { MAX_PULL_BYTES, type FieldChange, type PulledChange } from '../../../shared/api/sync';
 import { wins } from '../../../shared/sync/merge';
 import { setDeltaOf } from '../../../shared/sync/merge-set';
 import { joinOrSet, type OrSetState } from '../../../shared/sync/or-set';

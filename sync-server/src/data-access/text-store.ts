@@ -3,7 +3,7 @@ import { randomInt } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import * as Y from 'yjs';
 
-import type { ChangeProblem, FieldChange, PulledChange } from '../../../shared/sync/field-change';
+import type { ChangeProblem, FieldChange, PulledChange } from '../../../shared/api/sync';
 import { columnName } from '../../../shared/sync/schema/field';
 import { collectionSpec } from '../../../shared/sync/schema/collections';
 import { initialTextState } from '../../../shared/text/initial-text-state';

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 
 import type { DataSource } from 'typeorm';
 
-import type { FieldChange } from '../../../shared/sync/field-change';
+import type { FieldChange } from '../../../shared/api/sync';
 import { HlcClock } from '../../../shared/sync/hlc';
 import { validateCircleChange } from '../../../shared/circles/validate-circle-change';
 import { CircleMembership } from '../circles/circle-membership';

@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 
 import { gs1CheckDigit } from '../../../shared/isbn/gs1-check-digit';
-import type { FieldChange } from '../../../shared/sync/field-change';
+import type { FieldChange } from '../../../shared/api/sync';
 import { HlcClock } from '../../../shared/sync/hlc';
 import type { Book, BookStatusChange, Reading, Series } from '../../../shared/sync/schema/collections';
 import { bookStatusChanges, books, readings, series } from '../../../shared/sync/schema/collections';

@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 
-import type { AccountUser, LoginInput, RegisterInput, SignedIn } from '../../../shared/account/account-input';
+import type { AccountUser, LoginInput, RegisterInput, SignedIn } from '../../../shared/api/auth';
 import type { ServerConfig } from '../config';
 import { AppError } from '../errors';
 import { describeError, logSecurityEvent } from '../safe-log';

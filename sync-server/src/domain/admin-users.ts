@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 
-import type { AdminUserView } from '../../../shared/account/account-input';
+import type { AdminUserView } from '../../../shared/api/admin';
 import { AppError } from '../errors';
 import { User, type Role } from '../data-access/entities/user.entity';
 import { storedBytesByUser } from '../data-access/user-data-size';

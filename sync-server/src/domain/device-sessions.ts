@@ -1,6 +1,6 @@
 import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 
-import type { TokenPair } from '../../../shared/account/account-input';
+import type { TokenPair } from '../../../shared/api/auth';
 import { AppError } from '../errors';
 import { logSecurityEvent } from '../safe-log';
 import { DeviceSession } from '../data-access/entities/device-session.entity';

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 
-import { adminUserUpdateInput } from '../../../shared/account/account-input';
+import { adminUserUpdateInput } from '../../../shared/api/admin';
 import type { AdminUsers } from '../domain/admin-users';
 import { readCaughtMail } from '../mail/caught-mail';
 import { AppError } from '../errors';

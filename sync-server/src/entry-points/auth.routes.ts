@@ -9,7 +9,9 @@ import {
   resetConfirmInput,
   resetRequestInput,
   verifyEmailInput,
-} from '../../../shared/account/account-input';
+  type EmailVerified,
+  type ResetRequested,
+} from '../../../shared/api/auth';
 import { publicUser, type Accounts } from '../domain/accounts';
 import type { DeviceSessions } from '../domain/device-sessions';
 import type { EmailVerification } from '../domain/email-verification';
@@ -53,7 +55,8 @@ export function authRoutes({ accounts, sessions, resets, verification, verifyMai
     const { email } = parseInput(resetRequestInput, req.body);
     // Not awaited, and the same answer either way: nothing here tells whether the address exists.
     resets.request(email).catch((err: unknown) => console.warn(`reset e-mail not sent: ${describeError(err)}`));
-    res.status(202).json({ message: 'If an account uses that address, a link to choose a new password is on its way.' });
+    const body: ResetRequested = { message: 'If an account uses that address, a link to choose a new password is on its way.' };
+    res.status(202).json(body);
   });
 
   router.post('/password-reset/confirm', attemptLimiter, async (req, res) => {
@@ -66,12 +69,14 @@ export function authRoutes({ accounts, sessions, resets, verification, verifyMai
   router.post('/verify-email', attemptLimiter, async (req, res) => {
     const { token } = parseInput(verifyEmailInput, req.body);
     await verification.confirm(token);
-    res.json({ verified: true });
+    const body: EmailVerified = { verified: true };
+    res.json(body);
   });
 
   router.post('/verify-email/send', requireAuth, verifyMailLimiter, async (_req, res) => {
     const outcome = await verification.resend(callerOf(res).userId);
-    res.status(outcome === 'sent' ? 202 : 200).json({ verified: outcome === 'already_verified' });
+    const body: EmailVerified = { verified: outcome === 'already_verified' };
+    res.status(outcome === 'sent' ? 202 : 200).json(body);
   });
 
   router.post('/logout', requireAuth, async (_req, res) => {

@@ -3,8 +3,8 @@ import * as z from 'zod';
 
 import type { CirclePullResponse } from '../../../shared/circles/circle-wire';
 import { validateCircleChange } from '../../../shared/circles/validate-circle-change';
-import type { FieldChange, PushResponse } from '../../../shared/sync/field-change';
-import { MAX_PUSH_BYTES } from '../../../shared/sync/field-change';
+import type { FieldChange, PushResponse } from '../../../shared/api/sync';
+import { MAX_PUSH_BYTES } from '../../../shared/api/sync';
 import type { CircleInvitations } from '../circles/circle-invitations';
 import type { CircleMembership } from '../circles/circle-membership';
 import type { CircleSyncStore } from '../circles/circle-sync-store';

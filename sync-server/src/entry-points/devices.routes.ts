@@ -1,6 +1,6 @@
 import { Router } from 'express';
 
-import { renameDeviceInput, type DeviceSessionView } from '../../../shared/account/account-input';
+import { renameDeviceInput, type DeviceSessionView } from '../../../shared/api/devices';
 import type { DeviceSession } from '../data-access/entities/device-session.entity';
 import type { DeviceSessions } from '../domain/device-sessions';
 import { AppError } from '../errors';

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 
+import type { HealthAnswer, ReadyAnswer } from '../../../shared/api/health';
+
 /** How long a readiness probe waits for PostgreSQL before calling it down. */
 const DB_PROBE_TIMEOUT_MS = 2000;
 
@@ -13,7 +15,8 @@ export function healthRoutes(dataSource: DataSource): { health: Router; ready: R
   const health = Router();
   health.get('/', (_req, res) => {
     res.setHeader('Cache-Control', 'no-store');
-    res.json({ status: 'ok' });
+    const body: HealthAnswer = { status: 'ok' };
+    res.json(body);
   });
 
   const ready = Router();
@@ -22,7 +25,8 @@ export function healthRoutes(dataSource: DataSource): { health: Router; ready: R
     const migrations = db === 'ok' ? await withTimeout(probeMigrations(dataSource)) : 'unknown';
     const isReady = db === 'ok' && migrations === 'ok';
     res.setHeader('Cache-Control', 'no-store');
-    res.status(isReady ? 200 : 503).json({ status: isReady ? 'ready' : 'not_ready', db, migrations });
+    const body: ReadyAnswer = { status: isReady ? 'ready' : 'not_ready', db, migrations };
+    res.status(isReady ? 200 : 503).json(body);
   });
   return { health, ready };
 }

@@ -1,7 +1,7 @@
 import express, { Router } from 'express';
 import * as z from 'zod';
 
-import { MAX_PULL_LIMIT, MAX_PUSH_BYTES, MAX_PUSH_CHANGES, type FieldChange, type PullResponse, type PushResponse } from '../../../shared/sync/field-change';
+import { MAX_PULL_LIMIT, MAX_PUSH_BYTES, MAX_PUSH_CHANGES, type FieldChange, type PullResponse, type PushResponse } from '../../../shared/api/sync';
 import { validateChange } from '../../../shared/sync/validate-change';
 import type { SyncStore } from '../data-access/sync-store';
 import { TextChangesRefused } from '../data-access/text-store';

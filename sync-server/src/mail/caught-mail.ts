@@ -1,7 +1,7 @@
 import { mkdir, readdir, readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 
-import type { CaughtMail } from '../../../shared/account/account-input';
+import type { CaughtMail } from '../../../shared/api/admin';
 
 /** How many caught messages the admin page shows, newest first. */
 const SHOWN = 50;

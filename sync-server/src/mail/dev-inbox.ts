@@ -4,7 +4,7 @@ import type { AddressInfo } from 'node:net';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 
-import type { CaughtMail } from '../../../shared/account/account-input';
+import type { CaughtMail } from '../../../shared/api/admin';
 import { writeCaughtMail } from './caught-mail';
 
 /**

@@ -1,4 +1,4 @@
-import type { FieldChange } from '../../../shared/sync/field-change';
+import type { FieldChange } from '../../../shared/api/sync';
 import { parseHlc } from '../../../shared/sync/hlc';
 import { SyncStore } from '../data-access/sync-store';
 import { mergeDuration, outboxLag, pullChanges, pushChanges, pushOutcome } from './metrics';

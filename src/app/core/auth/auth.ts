@@ -2,7 +2,7 @@ import { HttpClient, HttpErrorResponse } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 
-import type { AccountUser, SignedIn, TokenPair } from '@shared/account/account-input';
+import type { AccountUser, SignedIn, TokenPair } from '@shared/api/auth';
 
 import { browserStorage } from '../device/browser-storage';
 import { secondsUntilExpiry, SESSION_STORAGE_KEY, tokenReceived, type StoredSession } from './stored-session';

@@ -1,4 +1,4 @@
-import type { AccountUser } from '@shared/account/account-input';
+import type { AccountUser } from '@shared/api/auth';
 
 /** What this device remembers about the signed-in reader between visits, online or not. */
 export interface StoredSession {

@@ -1,12 +1,9 @@
-import { provideHttpClient } from '@angular/common/http';
 import { HttpEventType } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
-import Dexie from 'dexie';
 
-import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../data/journal-db';
-import { LocalJournal } from '../data/local-journal';
+import type { JournalDb } from '../data/journal-db';
+import { openTestJournal, type TestJournal } from '../testing/test-journal';
 import { CoverError } from './cover-error';
 import { Covers } from './covers';
 import { sha256Hex } from './sha256-hex';
@@ -16,10 +13,10 @@ import { drawnImage } from './testing/test-images';
 describe('Covers', () => {
   let covers: Covers;
   let backend: HttpTestingController;
-  let userId: string;
+  let journal: TestJournal;
 
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
-  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
+  const db = (): JournalDb => journal.db;
 
   /** The request to `url` once it has been sent (Dexie reads and the tab lock take a few turns). */
   async function sent(url: string): Promise<TestRequest> {
@@ -45,9 +42,7 @@ describe('Covers', () => {
   const blobError = (code: string, message: string) => new Blob([JSON.stringify(apiError(code, message))], { type: 'application/json' });
 
   beforeEach(async () => {
-    userId = `covers-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting()] });
+    journal = openTestJournal([provideHttpClientTesting()]);
     covers = TestBed.inject(Covers);
     backend = TestBed.inject(HttpTestingController);
     await db().open(); // before any spec ends, so teardown never closes it mid-open
@@ -55,9 +50,7 @@ describe('Covers', () => {
 
   afterEach(async () => {
     backend.verify();
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   describe('saving', () => {

@@ -3,12 +3,12 @@ import { DestroyRef, effect, inject, Injectable, signal } from '@angular/core';
 import { filter, firstValueFrom, map, tap } from 'rxjs';
 
 import { UPLOAD_FIELD, type UploadView } from '@shared/api/upload';
-import { retryDelayMs } from '@shared/sync/sync-cycle';
 
 import { Auth } from '../auth/auth';
 import type { JournalDb, StoredCover } from '../data/journal-db';
 import { LocalJournal } from '../data/local-journal';
 import { isUnreachable, readableError } from '../http/api-error-message';
+import { SerialJob, withTabLock } from '../tasks/serial-job';
 import { prepareCover } from './prepare-cover';
 import { sha256Hex } from './sha256-hex';
 
@@ -37,10 +37,8 @@ export class Covers {
   private readonly downloading = new Map<string, Promise<boolean>>();
   private readonly waitingForSlot: (() => void)[] = [];
   private downloadsRunning = 0;
-  private attempt = 0;
-  private timer: ReturnType<typeof setTimeout> | undefined;
-  private running: Promise<void> | null = null;
-  private again = false;
+  /** Upload rounds one at a time; a save mid-round goes round once more afterwards. */
+  private readonly uploads = new SerialJob(() => this.uploadRound());
   private destroyed = false;
 
   /** How far each cover now uploading from this tab has got, from 0 to 1, by cover id. */
@@ -51,19 +49,19 @@ export class Covers {
   constructor() {
     // Signed in, or the app opened with a reader: upload what earlier visits left pending.
     effect(() => {
-      if (this.journal.db() && !this.auth.needsSignIn()) this.schedule(0);
+      if (this.journal.db() && !this.auth.needsSignIn()) this.uploads.schedule(0);
     });
     const online = () => {
       this.onlineState.set(true);
-      this.attempt = 0;
-      this.schedule(0);
+      this.uploads.succeeded();
+      this.uploads.schedule(0);
     };
     const offline = () => this.onlineState.set(false);
     globalThis.addEventListener?.('online', online);
     globalThis.addEventListener?.('offline', offline);
     inject(DestroyRef).onDestroy(() => {
       this.destroyed = true;
-      clearTimeout(this.timer);
+      this.uploads.stop();
       globalThis.removeEventListener?.('online', online);
       globalThis.removeEventListener?.('offline', offline);
     });
@@ -81,7 +79,7 @@ export class Covers {
     await db.transaction('rw', db.covers, async () => {
       if (!(await db.covers.get(cover.id))) await db.covers.add({ id: cover.id, blob: cover.blob, mediaType: cover.mediaType, state: 'pending' });
     });
-    this.schedule(0);
+    this.uploads.schedule(0);
     return cover.id;
   }
 
@@ -107,48 +105,26 @@ export class Covers {
 
   /** Uploads every pending cover now, forgetting any backoff; resolves when this round is over. */
   uploadPending(): Promise<void> {
-    this.attempt = 0;
-    return this.run();
-  }
-
-  private schedule(delayMs: number): void {
-    if (this.destroyed) return;
-    clearTimeout(this.timer);
-    this.timer = setTimeout(() => void this.run(), delayMs);
-  }
-
-  private run(): Promise<void> {
-    if (this.running) {
-      this.again = true; // a save arrived mid-round: go round once more afterwards
-      return this.running;
-    }
-    this.running = this.uploadRound().finally(() => {
-      this.running = null;
-      if (this.again) {
-        this.again = false;
-        this.schedule(0);
-      }
-    });
-    return this.running;
+    return this.uploads.runNow();
   }
 
   private async uploadRound(): Promise<void> {
     const db = this.journal.db();
     // Offline for sure: the `online` event starts the next round.
     if (!db || this.destroyed || this.auth.needsSignIn() || globalThis.navigator?.onLine === false) return;
-    clearTimeout(this.timer);
+    this.uploads.cancelTimer();
     try {
-      const ran = await this.withTabLock(db.userId, () => this.uploadEach(db));
-      this.attempt = 0;
+      const ran = await withTabLock(`lamplight-covers-${db.userId}`, () => this.uploadEach(db));
+      this.uploads.succeeded();
       if (ran) this.onlineState.set(true);
-      if (!ran) this.schedule(retryDelayMs(0)); // another tab is uploading; look again soon
+      else this.uploads.lookAgainSoon(); // another tab is uploading
     } catch (error) {
       // A refused sign-in waits for the reader (signing in again restarts us).
       if (error instanceof HttpErrorResponse && (error.status === 401 || error.status === 403)) return;
       // No answer (or the service worker's 504): offline, whatever navigator.onLine says, as
       // the sync status judges it too.
       if (isUnreachable(error)) this.onlineState.set(false);
-      this.schedule(retryDelayMs(this.attempt++));
+      this.uploads.retryLater();
     }
   }
 
@@ -230,20 +206,6 @@ export class Covers {
     if (fraction === null) next.delete(id);
     else next.set(id, Math.min(1, Math.max(0, fraction)));
     this.progressState.set(next);
-  }
-
-  /** Runs `work` only if no other tab of this reader is uploading covers; resolves whether it ran. */
-  private async withTabLock(userId: string, work: () => Promise<unknown>): Promise<boolean> {
-    const locks = globalThis.navigator?.locks;
-    if (!locks) {
-      await work();
-      return true;
-    }
-    return (await locks.request(`lamplight-covers-${userId}`, { ifAvailable: true }, async (lock) => {
-      if (!lock) return false;
-      await work();
-      return true;
-    })) as boolean;
   }
 
   private requireDb(): JournalDb {

@@ -1,9 +1,10 @@
 import Dexie, { type Table } from 'dexie';
 
-import type { FieldChange, PulledChange } from '@shared/sync/field-change';
+import type { FieldChange, PulledChange } from '@shared/api/sync';
 import type { LocalRow } from '@shared/sync/local-row';
 import { CIRCLE_COLLECTION_NAMES } from '@shared/circles/circle-collection-names';
-import { COLLECTIONS } from '@shared/sync/schema/collections';
+import { COLLECTIONS, type CollectionName } from '@shared/sync/schema/collections';
+import type { RowOf } from '@shared/sync/schema/collection';
 
 /** One change waiting to reach the server; `seq` is its place in the local order of writes. */
 export interface OutboxEntry extends FieldChange {
@@ -45,6 +46,12 @@ export interface MetaEntry {
 export interface HeldChange extends PulledChange {
   readonly seq?: number;
 }
+
+/** A row of collection `C` as this device keeps it: the collection's typed fields plus the field clocks. */
+export type StoredRow<C extends CollectionName> = RowOf<(typeof COLLECTIONS)[C]> & LocalRow;
+
+/** Whether a row is still there: deletion is a tombstone (`deleted`), rows are never removed. */
+export const isCurrent = (row: { readonly deleted?: boolean | null }): boolean => !row.deleted;
 
 /** The name of a reader's local database: one per user id, so readers sharing a tablet never mix. */
 export const journalDbName = (userId: string) => `lamplight-journal-${userId}`;
@@ -111,8 +118,15 @@ export class JournalDb extends Dexie {
     });
   }
 
-  /** The rows of one synced collection. */
+  /** The rows of one synced collection, typed from the shared schema (any name: the sync layer's untyped view). */
+  rows<C extends CollectionName>(collection: C): Table<StoredRow<C>, string>;
+  rows(collection: string): Table<LocalRow, string>;
   rows(collection: string): Table<LocalRow, string> {
     return this.table(collection);
+  }
+
+  /** The rows of a collection that are not deleted. */
+  current<C extends CollectionName>(collection: C): Promise<StoredRow<C>[]> {
+    return this.rows(collection).filter(isCurrent).toArray();
   }
 }

@@ -2,7 +2,7 @@ import { HttpClient, provideHttpClient } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
 import Dexie from 'dexie';
 
-import type { PulledChange } from '@shared/sync/field-change';
+import type { PulledChange } from '@shared/api/sync';
 import { formatHlc, parseHlc } from '@shared/sync/hlc';
 import { orSetElements, type OrSetState } from '@shared/sync/or-set';
 import { COLLECTIONS } from '@shared/sync/schema/collections';

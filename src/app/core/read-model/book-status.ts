@@ -3,7 +3,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
 
 import { nextUnread, seriesBooks } from '@shared/journal/series-order';
-import type { Book, Series } from '@shared/sync/schema/collections';
+import type { Book } from '@shared/sync/schema/collections';
 
 import { JournalStore, type RowWrite } from '../data/journal-store';
 
@@ -44,7 +44,7 @@ export class BookStatus {
 
   /** The next book of the series, offered in a snackbar. */
   private async suggestNext(bookId: string, seriesId: string): Promise<void> {
-    const series = (await this.store.get('series', seriesId)) as Series | undefined;
+    const series = await this.store.get('series', seriesId);
     if (series?.deleted) return; // a deleted series links nothing
     const next = nextUnread(seriesBooks(await this.store.list('books'), seriesId), bookId);
     if (!next) return;

@@ -11,7 +11,7 @@ export type LabelView = ReturnType<typeof mergeLabels>[number];
 /** The reader's labels (starter set plus their own), live from this device. */
 @Injectable({ providedIn: 'root' })
 export class LabelDirectory {
-  private readonly stored = liveQuerySignal(async (db) => (await db.rows('labels').toArray()) as Label[], [] as Label[]);
+  private readonly stored = liveQuerySignal((db) => db.rows('labels').toArray(), [] as Label[]);
   /** Every label, starters first. */
   readonly all = computed(() => mergeLabels(this.stored()));
   readonly byId = computed(() => new Map(this.all().map((label) => [label.id, label])));

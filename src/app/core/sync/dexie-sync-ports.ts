@@ -3,7 +3,7 @@ import { firstValueFrom } from 'rxjs';
 
 import { isApiErrorBody } from '@shared/api/api-error';
 import { clockOffsetMs, restampClocks, restampFloor } from '@shared/sync/device-clock';
-import { MAX_PULL_LIMIT, type ChangeProblem, type FieldChange, type PulledChange, type PullResponse, type PushResponse } from '@shared/sync/field-change';
+import { MAX_PULL_LIMIT, type ChangeProblem, type FieldChange, type PulledChange, type PullResponse, type PushResponse } from '@shared/api/sync';
 import { HlcClock } from '@shared/sync/hlc';
 import { applyPulled, emptyRow, type LocalRow } from '@shared/sync/local-row';
 import { orSetClocks, renameOrSetClocks, type OrSetState } from '@shared/sync/or-set';

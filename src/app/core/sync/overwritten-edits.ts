@@ -1,4 +1,4 @@
-import type { FieldChange } from '@shared/sync/field-change';
+import type { FieldChange } from '@shared/api/sync';
 import { parseHlc } from '@shared/sync/hlc';
 
 import type { JournalDb } from '../data/journal-db';

@@ -3,8 +3,9 @@ import { computed, DestroyRef, effect, inject, Injectable, signal } from '@angul
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { debounceTime, firstValueFrom } from 'rxjs';
 
+import type { HealthAnswer } from '@shared/api/health';
 import { dateLooksWrong } from '@shared/sync/device-clock';
-import { retryDelayMs, runSyncCycle, type PullProgress } from '@shared/sync/sync-cycle';
+import { runSyncCycle, type PullProgress } from '@shared/sync/sync-cycle';
 
 import { Auth } from '../auth/auth';
 import { isUnreachable } from '../http/api-error-message';
@@ -12,6 +13,7 @@ import type { JournalDb } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
 import { liveQuerySignal } from '../data/live-query';
 import { LocalJournal } from '../data/local-journal';
+import { SerialJob, withTabLock } from '../tasks/serial-job';
 import { DexieSyncPorts } from './dexie-sync-ports';
 import { SyncEvents } from './sync-events';
 
@@ -39,10 +41,8 @@ export class SyncEngine {
   private readonly lastError = signal<string | null>(null);
   private readonly clockNoticeState = signal<string | null>(null);
   private readonly progressState = signal<PullProgress | null>(null);
-  private attempt = 0;
-  private timer: ReturnType<typeof setTimeout> | undefined;
-  private running: Promise<void> | null = null;
-  private again = false;
+  /** Rounds one at a time; a trigger mid-sync goes round once more afterwards. */
+  private readonly job = new SerialJob(() => this.cycle());
 
   /** Changes saved here that the server has not confirmed. */
   readonly pending = liveQuerySignal((db) => db.outbox.count(), 0);
@@ -61,34 +61,33 @@ export class SyncEngine {
     const destroyRef = inject(DestroyRef);
     // A reader signed in (or the app opened with one): sync now.
     effect(() => {
-      if (this.journal.db() && !this.auth.needsSignIn()) this.schedule(0);
+      if (this.journal.db() && !this.auth.needsSignIn()) this.job.schedule(0);
     });
     inject(SyncEvents).connect(() => void this.syncNow()); // another device pushed: pull now
     // While offline, writes and the minute timer leave the backoff's probe alone (no retry storm).
     inject(JournalStore)
       .localWrites.pipe(debounceTime(WRITE_DEBOUNCE_MS), takeUntilDestroyed(destroyRef))
       .subscribe(() => {
-        if (this.phaseState() !== 'offline') this.schedule(0);
+        if (this.phaseState() !== 'offline') this.job.schedule(0);
       });
     const online = () => {
-      this.attempt = 0;
+      this.job.succeeded();
       if (this.phaseState() === 'offline') this.phaseState.set('idle'); // the browser says so: no probe needed
-      this.schedule(0);
+      this.job.schedule(0);
     };
     const offline = () => {
-      clearTimeout(this.timer); // nothing to try until the browser says it is back (or a probe finds it)
-      this.phaseState.set('offline');
-      this.schedule(retryDelayMs(this.attempt++));
+      this.phaseState.set('offline'); // only the backoff's probe tries until the browser says it is back
+      this.job.retryLater();
     };
     globalThis.addEventListener?.('online', online);
     globalThis.addEventListener?.('offline', offline);
     const periodic = setInterval(() => {
       const phase = this.phaseState();
-      if (globalThis.document?.visibilityState !== 'hidden' && phase !== 'syncing' && phase !== 'offline') this.schedule(0);
+      if (globalThis.document?.visibilityState !== 'hidden' && phase !== 'syncing' && phase !== 'offline') this.job.schedule(0);
     }, PERIODIC_MS);
     destroyRef.onDestroy(() => {
       clearInterval(periodic);
-      clearTimeout(this.timer);
+      this.job.stop();
       globalThis.removeEventListener?.('online', online);
       globalThis.removeEventListener?.('offline', offline);
     });
@@ -96,51 +95,30 @@ export class SyncEngine {
 
   /** "Sync now": runs at once, forgetting any backoff. */
   syncNow(): Promise<void> {
-    this.attempt = 0;
-    return this.run();
-  }
-
-  private schedule(delayMs: number): void {
-    clearTimeout(this.timer);
-    this.timer = setTimeout(() => void this.run(), delayMs);
-  }
-
-  private run(): Promise<void> {
-    if (this.running) {
-      this.again = true; // a trigger arrived mid-sync: go round once more afterwards
-      return this.running;
-    }
-    this.running = this.cycle().finally(() => {
-      this.running = null;
-      if (this.again) {
-        this.again = false;
-        this.schedule(0);
-      }
-    });
-    return this.running;
+    return this.job.runNow();
   }
 
   private async cycle(): Promise<void> {
     const db = this.journal.db();
     if (!db || this.auth.needsSignIn()) return;
-    clearTimeout(this.timer);
+    this.job.cancelTimer();
     const wasOffline = this.phaseState() === 'offline';
     this.phaseState.set('syncing');
     try {
       // Back from offline: a cheap probe first, so a still-missing network costs one small request.
-      if (wasOffline) await firstValueFrom(this.http.get('/api/health'));
+      if (wasOffline) await firstValueFrom(this.http.get<HealthAnswer>('/api/health'));
       // Pages are fetched while the last one is stored; progress shows only while more pages are to come.
       const onPulled = (progress: PullProgress) => this.progressState.set(progress.aboutTotal !== null && progress.aboutTotal > progress.rows ? progress : null);
-      const ran = await this.withTabLock(db.userId, () => runSyncCycle(new DexieSyncPorts(db, this.http), { prefetch: true, onPulled }));
+      const ran = await withTabLock(`lamplight-sync-${db.userId}`, () => runSyncCycle(new DexieSyncPorts(db, this.http), { prefetch: true, onPulled }));
       await this.noticeWrongDate(db);
-      this.attempt = 0;
+      this.job.succeeded();
       this.lastError.set(null);
       this.phaseState.set('idle');
-      if (!ran) this.schedule(retryDelayMs(0)); // another tab holds the lock; look again soon
+      if (!ran) this.job.lookAgainSoon(); // another tab holds the lock
     } catch (error) {
       this.progressState.set(null); // the next cycle resumes from the stored cursor and says so again
       this.phaseState.set(this.describeFailure(error));
-      if (this.phaseState() !== 'needs-sign-in') this.schedule(retryDelayMs(this.attempt++));
+      if (this.phaseState() !== 'needs-sign-in') this.job.retryLater();
     }
   }
 
@@ -174,19 +152,5 @@ export class SyncEngine {
     }
     this.lastError.set(error instanceof Error ? error.message : 'Sync failed; trying again shortly');
     return 'retrying';
-  }
-
-  /** Runs `work` only if no other tab of this reader is syncing; resolves whether it ran. */
-  private async withTabLock(userId: string, work: () => Promise<unknown>): Promise<boolean> {
-    const locks = globalThis.navigator?.locks;
-    if (!locks) {
-      await work();
-      return true;
-    }
-    return (await locks.request(`lamplight-sync-${userId}`, { ifAvailable: true }, async (lock) => {
-      if (!lock) return false;
-      await work();
-      return true;
-    })) as boolean;
   }
 }

@@ -2,7 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 
-import type { AdminUserView, CaughtMail } from '@shared/account/account-input';
+import type { AdminUserView, CaughtMail } from '@shared/api/admin';
 
 /** The admin pages' calls (`/api/admin`), online only; the server checks the role on each. */
 @Injectable({ providedIn: 'root' })

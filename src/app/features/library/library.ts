@@ -50,7 +50,7 @@ const VIEW_KEY = 'lamplight.libraryView';
 export class Library {
   private readonly bookStatus = inject(BookStatus);
 
-  protected readonly books = liveQuerySignal(async (db) => ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted), [] as Book[]);
+  protected readonly books = liveQuerySignal((db) => db.current('books'), [] as Book[]);
   /** Rows keyed by id: only books that changed get their search text and sort keys again. */
   private readonly derived = new LibraryRows();
   private readonly rows = computed(() => this.derived.update(this.books()));

@@ -4,7 +4,7 @@ import { instantiateTemplate } from '@shared/journal/instantiate-template';
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 import { appendPage, byPosition, movePage } from '@shared/journal/page-order';
 import type { TemplateView } from '@shared/journal/starter-templates';
-import type { Book, Notebook, NotebookPage } from '@shared/sync/schema/collections';
+import type { NotebookPage } from '@shared/sync/schema/collections';
 
 import type { JournalDb } from '../../core/data/journal-db';
 import { JournalStore, type RowWrite } from '../../core/data/journal-store';
@@ -35,7 +35,7 @@ export class Notebooks {
 
   /** The pages of a notebook in reading order (deleted ones left out). */
   async pagesOf(notebookId: string): Promise<NotebookPage[]> {
-    const pages = (await this.db().rows('notebookPages').where('notebookId').equals(notebookId).toArray()) as NotebookPage[];
+    const pages = await this.db().rows('notebookPages').where('notebookId').equals(notebookId).toArray();
     return byPosition(pages.filter((page) => !page.deleted));
   }
 
@@ -44,8 +44,8 @@ export class Notebooks {
    * for `today` ('YYYY-MM-DD') and the notebook's book; returns the page's id.
    */
   async addPage(notebookId: string, template: TemplateView | null, today: string): Promise<string> {
-    const notebook = (await this.store.get('notebooks', notebookId)) as Notebook | undefined;
-    const book = notebook?.bookId ? ((await this.store.get('books', notebook.bookId)) as Book | undefined) : undefined;
+    const notebook = await this.store.get('notebooks', notebookId);
+    const book = notebook?.bookId ? await this.store.get('books', notebook.bookId) : undefined;
     const text = template
       ? instantiateTemplate(template, {
           today,

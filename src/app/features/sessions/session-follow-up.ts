@@ -2,8 +2,6 @@ import { inject, Injectable } from '@angular/core';
 import { MatDialog } from '@angular/material/dialog';
 import { firstValueFrom } from 'rxjs';
 
-import type { Book } from '@shared/sync/schema/collections';
-
 import { JournalStore } from '../../core/data/journal-store';
 import { BookStatus } from '../../core/read-model/book-status';
 import { bookEnd } from './book-position';
@@ -30,7 +28,7 @@ export class SessionFollowUp {
 
   /** Resolves once the reader has answered (or nothing needed asking). */
   async afterSave(saved: SavedSession): Promise<void> {
-    const book = (await this.store.get('books', saved.bookId)) as Book | undefined;
+    const book = await this.store.get('books', saved.bookId);
     if (!book || book.deleted) return;
     const status = book.status ?? 'tbr';
     if (saved.isNew && (status === 'tbr' || status === 'paused')) await this.bookStatus.change(book.id, 'reading');

@@ -45,8 +45,8 @@ export class ReadingTimer {
   private readonly clock = inject(CLOCK);
   private readonly live = liveQuerySignal(
     async (db) => {
-      const timer = (await db.rows('timers').get(TIMER_ROW_ID)) as Timer | undefined;
-      const book = timer?.bookId ? ((await db.rows('books').get(timer.bookId)) as Book | undefined) : undefined;
+      const timer = await db.rows('timers').get(TIMER_ROW_ID);
+      const book = timer?.bookId ? await db.rows('books').get(timer.bookId) : undefined;
       return { loaded: true, timer, book };
     },
     { loaded: false, timer: undefined as Timer | undefined, book: undefined as Book | undefined },
@@ -145,7 +145,7 @@ export class ReadingTimer {
 
   /** Reads the row afresh rather than trusting the signal, which may lag a write by a moment. */
   private async readActive(): Promise<Timer | null> {
-    const timer = (await this.store.get('timers', TIMER_ROW_ID)) as Timer | undefined;
+    const timer = await this.store.get('timers', TIMER_ROW_ID);
     return isActive(timer) ? timer : null;
   }
 
@@ -159,7 +159,7 @@ export class ReadingTimer {
    * running; it is kept as 20 hours, the longest session there can be.
    */
   private async sessionWrite(timer: Timer, now: number): Promise<RowWrite & { rowId: string }> {
-    const book = timer.bookId ? ((await this.store.get('books', timer.bookId)) as Book | undefined) : undefined;
+    const book = timer.bookId ? await this.store.get('books', timer.bookId) : undefined;
     const rowId = sessionIdOf(timer);
     const previous = timer.bookId ? latestSession(await this.sessionsOf(timer.bookId), timer.bookId, { exceptId: rowId, having: 'toPosition' }) : undefined;
     const fromTimer = sessionFromTimer(timer, now);

@@ -4,8 +4,6 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 
-import type { Book, Session } from '@shared/sync/schema/collections';
-
 import { JournalStore } from '../../core/data/journal-store';
 import { minutesWords } from './book-progress';
 import { ConfirmDialog, type ConfirmDialogData } from '../../ui/confirm-dialog/confirm-dialog';
@@ -39,7 +37,7 @@ export class TimerStart {
       if (!(await firstValueFrom(ref.afterClosed()))) return false;
       const replaced = await this.timer.start(bookId, { ...options, replace: true });
       if (replaced.started && replaced.stoppedSessionId) {
-        const session = (await this.store.get('sessions', replaced.stoppedSessionId)) as Session | undefined;
+        const session = await this.store.get('sessions', replaced.stoppedSessionId);
         this.snackBar.open(`Saved ${minutesWords(session?.activeMinutes)} of ${current}.`, 'OK', { duration: 6000 });
       }
     }
@@ -48,7 +46,7 @@ export class TimerStart {
   }
 
   private async titleOf(bookId: string | null | undefined): Promise<string> {
-    const book = bookId ? ((await this.store.get('books', bookId)) as Book | undefined) : undefined;
+    const book = bookId ? await this.store.get('books', bookId) : undefined;
     return book?.title || 'another book';
   }
 }

@@ -1,4 +1,4 @@
-import type { AccountUser } from '@shared/account/account-input';
+import type { AccountUser } from '@shared/api/auth';
 
 import { SESSION_STORAGE_KEY, type StoredSession } from '../stored-session';
 

@@ -1,11 +1,8 @@
-import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
-import Dexie from 'dexie';
 
-import { forgetSession, READER, rememberSession } from '../../auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../../data/journal-db';
-import { LocalJournal } from '../../data/local-journal';
+import type { JournalDb } from '../../data/journal-db';
+import { openTestJournal, type TestJournal } from '../../testing/test-journal';
 import { placeholderColour } from '../cover-placeholder';
 import { sha256Hex } from '../sha256-hex';
 import { drawnImage } from '../testing/test-images';
@@ -14,10 +11,10 @@ import { BookCover } from './book-cover';
 describe('BookCover', () => {
   let fixture: ComponentFixture<BookCover>;
   let backend: HttpTestingController;
-  let userId: string;
+  let journal: TestJournal;
 
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
-  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
+  const db = (): JournalDb => journal.db;
   const element = (): HTMLElement => fixture.nativeElement;
   const image = () => element().querySelector('img');
   const placeholder = () => element().querySelector<HTMLElement>('.placeholder');
@@ -59,18 +56,14 @@ describe('BookCover', () => {
   }
 
   beforeEach(async () => {
-    userId = `cover-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting()] });
+    journal = openTestJournal([provideHttpClientTesting()]);
     backend = TestBed.inject(HttpTestingController);
     await db().open(); // before any spec ends, so teardown never closes it mid-open
   });
 
   afterEach(async () => {
     backend.verify();
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   it('shows the cover stored on this device, from a blob: URL, described by the title', async () => {

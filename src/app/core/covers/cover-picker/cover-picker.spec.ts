@@ -1,13 +1,11 @@
-import { provideHttpClient, HttpEventType } from '@angular/common/http';
+import { HttpEventType } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
 import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
-import Dexie from 'dexie';
 
-import { forgetSession, READER, rememberSession } from '../../auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../../data/journal-db';
-import { LocalJournal } from '../../data/local-journal';
+import type { JournalDb } from '../../data/journal-db';
+import { openTestJournal, type TestJournal } from '../../testing/test-journal';
 import { sha256Hex } from '../sha256-hex';
 import { drawnImage } from '../testing/test-images';
 import { CoverPicker } from './cover-picker';
@@ -23,12 +21,12 @@ class FormHost {
 
 describe('CoverPicker', () => {
   let backend: HttpTestingController;
-  let userId: string;
+  let journal: TestJournal;
   let root: () => HTMLElement;
   let stable: () => Promise<unknown>;
 
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
-  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
+  const db = (): JournalDb => journal.db;
   const query = <T extends Element>(selector: string) => root().querySelector<T>(selector);
   const text = (selector: string) => query(selector)?.textContent?.trim() ?? '';
   const offline = () => spyOnProperty(navigator, 'onLine').and.returnValue(false);
@@ -75,18 +73,14 @@ describe('CoverPicker', () => {
   }
 
   beforeEach(async () => {
-    userId = `picker-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideHttpClientTesting()] });
+    journal = openTestJournal([provideHttpClientTesting()]);
     backend = TestBed.inject(HttpTestingController);
     await db().open(); // before any spec ends, so teardown never closes it mid-open
   });
 
   afterEach(async () => {
     backend.verify();
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   it('offers a file, the camera and a drop, each input labelled and taking images only', async () => {

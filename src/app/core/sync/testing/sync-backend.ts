@@ -1,6 +1,6 @@
 import type { HttpTestingController, TestRequest } from '@angular/common/http/testing';
 
-import type { PullResponse } from '@shared/sync/field-change';
+import type { PullResponse } from '@shared/api/sync';
 
 /** The browser's own timer, kept before any spec installs jasmine.clock, so waits stay real. */
 const realSetTimeout = globalThis.setTimeout.bind(globalThis);

@@ -7,6 +7,8 @@ import { MatInputModule } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 
+import type { ResetRequested } from '@shared/api/auth';
+
 import { AccountPage } from '../account-page/account-page';
 import { fieldError } from '../../../ui/field-errors';
 import { FormSubmission } from '../../../ui/form-submission';
@@ -31,7 +33,7 @@ export class ForgotPassword {
 
   protected async requestLink(): Promise<void> {
     await this.submission.submit(this.form, async () => {
-      const answer = await firstValueFrom(this.http.post<{ message: string }>('/api/auth/password-reset/request', this.form.getRawValue()));
+      const answer = await firstValueFrom(this.http.post<ResetRequested>('/api/auth/password-reset/request', this.form.getRawValue()));
       this.sent.set(answer.message);
     });
   }

@@ -4,6 +4,8 @@ import { MatButtonModule } from '@angular/material/button';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 
+import type { EmailVerified } from '@shared/api/auth';
+
 import { Auth } from '../../../core/auth/auth';
 import { readableError } from '../../../core/http/api-error-message';
 import { AccountPage } from '../account-page/account-page';
@@ -39,7 +41,7 @@ export class VerifyEmail implements OnInit {
 
   protected async sendNewLink(): Promise<void> {
     try {
-      await firstValueFrom(this.http.post('/api/auth/verify-email/send', {}));
+      await firstValueFrom(this.http.post<EmailVerified>('/api/auth/verify-email/send', {}));
       this.step.set('link-sent');
     } catch (error) {
       this.refuse(readableError(error).message);
@@ -48,7 +50,7 @@ export class VerifyEmail implements OnInit {
 
   private async confirm(): Promise<void> {
     try {
-      await firstValueFrom(this.http.post('/api/auth/verify-email', { token: this.token }));
+      await firstValueFrom(this.http.post<EmailVerified>('/api/auth/verify-email', { token: this.token }));
       this.step.set('verified');
     } catch (error) {
       this.refuse(readableError(error).message);

@@ -5,7 +5,7 @@ import { MatSlideToggleModule, type MatSlideToggleChange } from '@angular/materi
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 
-import type { AdminUserView } from '@shared/account/account-input';
+import type { AdminUserView } from '@shared/api/admin';
 
 import { Auth } from '../../../core/auth/auth';
 import { readableError } from '../../../core/http/api-error-message';

@@ -2,7 +2,7 @@ import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { RouterLink } from '@angular/router';
 
-import type { CaughtMail } from '@shared/account/account-input';
+import type { CaughtMail } from '@shared/api/admin';
 
 import { readableError } from '../../../core/http/api-error-message';
 import { AdminApi } from '../admin-api';

@@ -199,7 +199,7 @@ export class ChallengePage {
   private updatePrompts(change: (prompts: Prompt[]) => Prompt[]): Promise<void> {
     const id = this.id();
     return this.promptUpdates.run(async () => {
-      const stored = (await this.store.get('challenges', id)) as Challenge | undefined;
+      const stored = await this.store.get('challenges', id);
       await this.store.write('challenges', id, { prompts: change([...(stored?.prompts ?? [])]) });
     });
   }

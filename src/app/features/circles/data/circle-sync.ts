@@ -6,7 +6,7 @@ import { firstValueFrom, debounceTime } from 'rxjs';
 import { isApiErrorBody } from '@shared/api/api-error';
 import { CIRCLE_COLLECTIONS } from '@shared/circles/circle-collections';
 import { NOT_A_MEMBER, NOT_A_MEMBER_TEXT, type CirclePullResponse } from '@shared/circles/circle-wire';
-import type { ChangeProblem, PushResponse } from '@shared/sync/field-change';
+import type { ChangeProblem, PushResponse } from '@shared/api/sync';
 
 import type { CircleOutboxEntry, JournalDb } from '../../../core/data/journal-db';
 import { LocalJournal } from '../../../core/data/local-journal';

@@ -30,10 +30,10 @@ export class FavouritesPage {
   private readonly deleteWithUndo = undoableDelete();
   private readonly data = liveQuerySignal(
     async (db) => ({
-      favourites: ((await db.rows('favourites').toArray()) as Favourite[]).filter((f) => !f.deleted),
-      picks: ((await db.rows('monthPicks').toArray()) as MonthPick[]).filter((p) => !p.deleted),
-      books: ((await db.rows('books').toArray()) as Book[]).filter((b) => !b.deleted),
-      quotes: ((await db.rows('quotes').toArray()) as Quote[]).filter((q) => !q.deleted),
+      favourites: await db.current('favourites'),
+      picks: await db.current('monthPicks'),
+      books: await db.current('books'),
+      quotes: await db.current('quotes'),
     }),
     { favourites: [] as Favourite[], picks: [] as MonthPick[], books: [] as Book[], quotes: [] as Quote[] },
   );

@@ -184,7 +184,7 @@ export class GoalsPage {
   private updateGoals(change: (goals: OtherGoal[]) => OtherGoal[]): Promise<void> {
     const id = this.planId();
     return this.listUpdates.run(async () => {
-      const stored = (await this.store.get('yearPlans', id)) as YearPlan | undefined;
+      const stored = await this.store.get('yearPlans', id);
       await this.writePlan({ otherGoals: change([...(stored?.otherGoals ?? [])]) });
     });
   }

@@ -10,7 +10,7 @@ import { Router, RouterLink } from '@angular/router';
 import { map, startWith } from 'rxjs';
 
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
-import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, PROGRESS_UNITS, WISH_PRIORITIES, type Book, type Series } from '@shared/sync/schema/collections';
+import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, PROGRESS_UNITS, WISH_PRIORITIES, type Series } from '@shared/sync/schema/collections';
 
 import { CoverPicker } from '../../../core/covers/cover-picker/cover-picker';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
@@ -107,7 +107,7 @@ export class BookEditor {
   protected readonly dnf = computed(() => this.status() === 'dnf');
   protected readonly wished = computed(() => this.copy() === 'wishlist');
   protected readonly allSeries = liveQuerySignal(
-    async (db) => ((await db.rows('series').toArray()) as Series[]).filter((s) => !s.deleted).sort((a, b) => (a.name ?? '').localeCompare(b.name ?? '')),
+    async (db) => (await db.current('series')).sort((a, b) => (a.name ?? '').localeCompare(b.name ?? '')),
     [] as Series[],
   );
   protected readonly progressUnits = PROGRESS_UNITS;
@@ -152,7 +152,7 @@ export class BookEditor {
   }
 
   private async load(id: string): Promise<void> {
-    const book = (await this.store.get('books', id)) as Book | undefined;
+    const book = await this.store.get('books', id);
     if (!book || book.deleted) {
       this.missing.set(true);
       return;

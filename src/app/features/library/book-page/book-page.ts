@@ -35,11 +35,11 @@ interface BookDossier {
 
 async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
   const [book, readings, history] = await Promise.all([
-    db.rows('books').get(id) as Promise<Book | undefined>,
-    db.rows('readings').where('bookId').equals(id).toArray() as Promise<Reading[]>,
-    db.rows('bookStatusChanges').where('bookId').equals(id).toArray() as Promise<BookStatusChange[]>,
+    db.rows('books').get(id),
+    db.rows('readings').where('bookId').equals(id).toArray(),
+    db.rows('bookStatusChanges').where('bookId').equals(id).toArray(),
   ]);
-  const series = book?.seriesId ? ((await db.rows('series').get(book.seriesId)) as Series | undefined) : undefined;
+  const series = book?.seriesId ? await db.rows('series').get(book.seriesId) : undefined;
   return {
     book,
     series: series?.deleted ? undefined : series,

@@ -6,7 +6,7 @@ import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 import { format } from 'date-fns';
 
-import { RECOMMEND_ANSWERS, type Book, type Reading } from '@shared/sync/schema/collections';
+import { RECOMMEND_ANSWERS } from '@shared/sync/schema/collections';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore, type RowWrite } from '../../../core/data/journal-store';
@@ -68,14 +68,14 @@ export class ReadingEditor {
   }
 
   private async load(bookId: string, readingId: string | undefined): Promise<void> {
-    const book = (await this.store.get('books', bookId)) as Book | undefined;
+    const book = await this.store.get('books', bookId);
     this.bookTitle.set(book?.title ?? '');
     if (!readingId) {
       this.form.reset({ ...EMPTY_READING_FORM, startedOn: format(new Date(), 'yyyy-MM-dd') });
       this.original = EMPTY_READING_FORM;
       return;
     }
-    const reading = (await this.store.get('readings', readingId)) as Reading | undefined;
+    const reading = await this.store.get('readings', readingId);
     if (reading) {
       this.original = toReadingForm(reading);
       this.form.reset(this.original);

@@ -11,7 +11,6 @@ import { lightPlainText, parseLightFormat } from '@shared/journal/light-format';
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 import { byPosition } from '@shared/journal/page-order';
 import { ownTemplates, STARTER_TEMPLATES } from '@shared/journal/starter-templates';
-import type { Notebook, NotebookPage, PageTemplate } from '@shared/sync/schema/collections';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import type { JournalDb } from '../../../core/data/journal-db';
@@ -29,10 +28,10 @@ const EXCERPT_LENGTH = 160;
 
 async function notebookData(db: JournalDb, id: string) {
   const [notebook, pages, books, templates] = await Promise.all([
-    db.rows('notebooks').get(id) as Promise<Notebook | undefined>,
-    db.rows('notebookPages').where('notebookId').equals(id).toArray() as Promise<NotebookPage[]>,
+    db.rows('notebooks').get(id),
+    db.rows('notebookPages').where('notebookId').equals(id).toArray(),
     db.rows('books').toArray(),
-    db.rows('pageTemplates').toArray() as Promise<PageTemplate[]>,
+    db.rows('pageTemplates').toArray(),
   ]);
   return {
     notebook,

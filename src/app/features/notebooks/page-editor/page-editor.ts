@@ -10,7 +10,6 @@ import { startWith } from 'rxjs';
 
 import { TEMPLATE_PLACEHOLDERS } from '@shared/journal/instantiate-template';
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
-import type { Notebook, NotebookPage } from '@shared/sync/schema/collections';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
@@ -70,10 +69,7 @@ export class PageEditor {
   }
 
   private async load(notebookId: string, pageId: string): Promise<void> {
-    const [page, notebook] = await Promise.all([
-      this.store.get('notebookPages', pageId) as Promise<NotebookPage | undefined>,
-      this.store.get('notebooks', notebookId) as Promise<Notebook | undefined>,
-    ]);
+    const [page, notebook] = await Promise.all([this.store.get('notebookPages', pageId), this.store.get('notebooks', notebookId)]);
     this.notebookTitle.set(notebook?.title ?? '');
     if (!page || page.deleted || page.notebookId !== notebookId) {
       this.state.set('missing');

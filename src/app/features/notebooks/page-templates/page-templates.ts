@@ -7,7 +7,6 @@ import { MatInputModule } from '@angular/material/input';
 
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 import { ownTemplates, STARTER_TEMPLATES, type TemplateView } from '@shared/journal/starter-templates';
-import type { PageTemplate } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
@@ -27,7 +26,7 @@ export class PageTemplates {
   private readonly notebooks = inject(Notebooks);
   private readonly deleteWithUndo = undoableDelete();
 
-  protected readonly own = liveQuerySignal(async (db) => ownTemplates((await db.rows('pageTemplates').toArray()) as PageTemplate[]), [] as TemplateView[]);
+  protected readonly own = liveQuerySignal(async (db) => ownTemplates(await db.rows('pageTemplates').toArray()), [] as TemplateView[]);
   protected readonly starters = STARTER_TEMPLATES;
   /** The template being renamed, if any: one at a time. */
   protected readonly renaming = signal<string | null>(null);

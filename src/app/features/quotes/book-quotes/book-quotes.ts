@@ -1,19 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 
-import type { Book, Quote } from '@shared/sync/schema/collections';
-
-import type { JournalDb } from '../../../core/data/journal-db';
 import { QuoteCard } from '../quote-card/quote-card';
-import { newestFirst } from '../quote-query';
+import { bookQuotes } from '../quotes-data';
 import { liveQueryFor } from '../../../core/data/live-query-for';
-
-async function bookQuotes(db: JournalDb, bookId: string): Promise<{ book: Book | undefined; quotes: Quote[] }> {
-  const [book, quotes] = await Promise.all([
-    db.rows('books').get(bookId) as Promise<Book | undefined>,
-    db.rows('quotes').where('bookId').equals(bookId).toArray() as Promise<Quote[]>,
-  ]);
-  return { book, quotes: quotes.filter((quote) => !quote.deleted).sort(newestFirst) };
-}
 
 /** The quotes kept from one book, newest first, for its book page. Live from this device. */
 @Component({

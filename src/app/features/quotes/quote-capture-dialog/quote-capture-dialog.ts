@@ -68,10 +68,7 @@ export class QuoteCaptureDialog {
   private readonly ref = inject<MatDialogRef<QuoteCaptureDialog, string>>(MatDialogRef);
   protected readonly data = inject<QuoteCaptureData>(MAT_DIALOG_DATA);
 
-  private readonly books = liveQuerySignal(
-    async (db) => ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted),
-    undefined as Book[] | undefined,
-  );
+  private readonly books = liveQuerySignal((db) => db.current('books'), undefined as Book[] | undefined);
   protected readonly choices = computed(() => bookOrder(this.books() ?? []));
 
   protected readonly form = inject(FormBuilder).nonNullable.group({

@@ -13,6 +13,7 @@ import { LabelDirectory } from '../../../core/read-model/label-directory';
 import { QuoteCapture } from '../quote-capture';
 import { QuoteCard } from '../quote-card/quote-card';
 import { queryQuotes, quoteSearchText } from '../quote-query';
+import { allQuotes, type AllQuotes } from '../quotes-data';
 
 /** How many quotes show at first, and how many more each "Show more" adds. */
 const PAGE = 50;
@@ -29,13 +30,7 @@ export class QuotesPage {
   private readonly capture = inject(QuoteCapture);
   private readonly labels = inject(LabelDirectory);
 
-  private readonly data = liveQuerySignal(
-    async (db) => {
-      const [quotes, books] = await Promise.all([db.rows('quotes').toArray() as Promise<Quote[]>, db.rows('books').toArray() as Promise<Book[]>]);
-      return { quotes: quotes.filter((quote) => !quote.deleted), books };
-    },
-    undefined as { quotes: Quote[]; books: Book[] } | undefined,
-  );
+  private readonly data = liveQuerySignal<AllQuotes | undefined>(allQuotes, undefined);
   protected readonly loaded = computed(() => this.data() !== undefined);
   protected readonly quotes = computed(() => this.data()?.quotes ?? []);
   /** Deleted books too: their quotes still name where they came from. */

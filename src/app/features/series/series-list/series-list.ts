@@ -7,11 +7,11 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 
 import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-order';
-import type { Book, Series } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { fieldError, notBlank } from '../../../ui/field-errors';
+import { allSeries } from '../series-data';
 
 /** Every series the reader follows, how far they are in each, and what comes next. */
 @Component({
@@ -25,13 +25,7 @@ export class SeriesList {
   private readonly store = inject(JournalStore);
   private readonly router = inject(Router);
 
-  private readonly data = liveQuerySignal(
-    async (db) => ({
-      series: ((await db.rows('series').toArray()) as Series[]).filter((s) => !s.deleted),
-      books: ((await db.rows('books').where('seriesId').above('').toArray()) as Book[]).filter((b) => !b.deleted),
-    }),
-    { series: [] as Series[], books: [] as Book[] },
-  );
+  private readonly data = liveQuerySignal(allSeries, { series: [], books: [] });
   protected readonly rows = computed(() =>
     this.data()
       .series.map((series) => {

@@ -7,7 +7,6 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 
 import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-order';
-import type { Book, Series } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
@@ -17,6 +16,7 @@ import { StarRating } from '../../../ui/star-rating/star-rating';
 import { liveQueryFor } from '../../../core/data/live-query-for';
 import { askToConfirm } from '../../../ui/confirm-dialog/ask-to-confirm';
 import { undoableDelete } from '../../../ui/undoable-delete';
+import { oneSeries } from '../series-data';
 
 /** One series: its books in order, progress, the next to read, and the reader's view of it all. */
 @Component({
@@ -34,10 +34,7 @@ export class SeriesPage {
   private readonly router = inject(Router);
   private readonly confirm = askToConfirm();
   private readonly deleteWithUndo = undoableDelete();
-  private readonly data = liveQueryFor(this.id, async (db, id) => ({
-    series: (await db.rows('series').get(id)) as Series | undefined,
-    books: (await db.rows('books').where('seriesId').equals(id).toArray()) as Book[],
-  }));
+  private readonly data = liveQueryFor(this.id, oneSeries);
   protected readonly series = computed(() => this.data()?.series);
   protected readonly ordered = computed(() => seriesBooks(this.data()?.books ?? [], this.id()));
   protected readonly progress = computed(() => seriesProgress(this.ordered(), this.series()?.plannedCount));

@@ -52,8 +52,8 @@ export class BookReading {
     timeZone: this.timeZone,
   });
 
-  private readonly allSessions = liveQuerySignal(async (db) => ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted), [] as Session[]);
-  private readonly books = liveQuerySignal(async (db) => (await db.rows('books').toArray()) as Book[], [] as Book[]);
+  private readonly allSessions = liveQuerySignal((db) => db.current('sessions'), [] as Session[]);
+  private readonly books = liveQuerySignal((db) => db.rows('books').toArray(), [] as Book[]);
 
   private readonly sessions = computed(() => newestFirst(this.allSessions().filter((s) => s.bookId === this.book().id)));
   /** No session says where the reader got to yet: a length and a time to read, not a 0 % bar. */

@@ -74,8 +74,8 @@ export class SessionEditor {
   }
 
   private async load(bookId: string, sessionId: string | undefined): Promise<void> {
-    const book = (await this.store.get('books', bookId)) as Book | undefined;
-    const session = sessionId ? ((await this.store.get('sessions', sessionId)) as Session | undefined) : undefined;
+    const book = await this.store.get('books', bookId);
+    const session = sessionId ? await this.store.get('sessions', sessionId) : undefined;
     if (!book || book.deleted || (sessionId && (!session || session.deleted))) {
       this.missing.set(true);
       return;

@@ -2,7 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 
-import type { DeviceSessionView } from '@shared/account/account-input';
+import type { DeviceSessionView } from '@shared/api/devices';
 
 /** The reader's signed-in devices, online only (`/api/devices`): not synced data, so no local copy. */
 @Injectable({ providedIn: 'root' })

@@ -6,7 +6,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { DatePipe } from '@angular/common';
 
-import type { DeviceSessionView } from '@shared/account/account-input';
+import type { DeviceSessionView } from '@shared/api/devices';
 
 import { readableError } from '../../../core/http/api-error-message';
 import { DevicesApi } from './devices-api';

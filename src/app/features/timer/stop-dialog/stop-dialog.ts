@@ -89,12 +89,9 @@ export class StopDialog {
   }
 
   private async load(): Promise<void> {
-    const session = (await this.store.get('sessions', this.data.sessionId)) as Session | undefined;
+    const session = await this.store.get('sessions', this.data.sessionId);
     if (!session) return;
-    const [book, sessions] = await Promise.all([
-      session.bookId ? (this.store.get('books', session.bookId) as Promise<Book | undefined>) : Promise.resolve(undefined),
-      this.store.list('sessions') as Promise<Session[]>,
-    ]);
+    const [book, sessions] = await Promise.all([session.bookId ? this.store.get('books', session.bookId) : Promise.resolve(undefined), this.store.list('sessions')]);
     this.others = sessions;
     this.book.set(book);
     this.session.set(session);

@@ -11,7 +11,7 @@ import { RouterLink } from '@angular/router';
 import { format } from 'date-fns';
 import { firstValueFrom } from 'rxjs';
 
-import type { Book, Session, Timer } from '@shared/sync/schema/collections';
+import type { Book, Session } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
@@ -57,15 +57,15 @@ export class TimerPage {
 
   private readonly data = liveQuerySignal<TimerPageData>(
     async (db) => {
-      const timer = (await db.rows('timers').get(TIMER_ROW_ID)) as Timer | undefined;
-      const bookSessions = timer?.bookId ? ((await db.rows('sessions').where('bookId').equals(timer.bookId).toArray()) as Session[]) : [];
+      const timer = await db.rows('timers').get(TIMER_ROW_ID);
+      const bookSessions = timer?.bookId ? await db.rows('sessions').where('bookId').equals(timer.bookId).toArray() : [];
       const last = (await db
         .rows('sessions')
         .orderBy('startedAt')
         .reverse()
         .filter((s) => !s['deleted'])
         .first()) as Session | undefined;
-      const lastBook = last?.bookId ? ((await db.rows('books').get(last.bookId)) as Book | undefined) : undefined;
+      const lastBook = last?.bookId ? await db.rows('books').get(last.bookId) : undefined;
       return { bookSessions, last, lastBook };
     },
     { bookSessions: [], last: undefined, lastBook: undefined },

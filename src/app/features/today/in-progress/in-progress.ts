@@ -3,13 +3,13 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { RouterLink } from '@angular/router';
 
 import { localDay } from '@shared/calendar/local-day';
-import type { Book, Session } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { bookForecast, bookProgress } from '../../sessions';
 import { TimerStartButton } from '../../timer';
+import { currentSessionsAndBooks, NO_SESSIONS } from '../today-data';
 
 /** One book being read, as the list shows it. */
 interface InProgressLine {
@@ -21,6 +21,7 @@ interface InProgressLine {
 }
 
 /** The books the reader is reading now, each with when they should finish it. */
+
 @Component({
   selector: 'll-in-progress',
   imports: [DatePipe, RouterLink, TimerStartButton],
@@ -32,13 +33,7 @@ export class InProgress {
   private readonly timeZone = inject(TIME_ZONE);
   private readonly clock = inject(CLOCK);
 
-  private readonly data = liveQuerySignal(
-    async (db) => ({
-      sessions: ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted),
-      books: ((await db.rows('books').toArray()) as Book[]).filter((b) => !b.deleted),
-    }),
-    { sessions: [] as Session[], books: [] as Book[] },
-  );
+  private readonly data = liveQuerySignal(currentSessionsAndBooks, NO_SESSIONS);
 
   protected readonly lines = computed<InProgressLine[]>(() => {
     const { sessions, books } = this.data();

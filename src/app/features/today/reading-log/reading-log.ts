@@ -3,18 +3,19 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { localDay } from '@shared/calendar/local-day';
 import { dailyLog } from '@shared/reading-log/daily-log';
 import { streaks } from '@shared/reading-log/streaks';
-import type { Book, Session } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { YearHeatmap } from '../../insights';
 import { logSessions } from '../../../core/read-model/reading-sessions';
+import { allSessionsAndBooks, NO_SESSIONS } from '../today-data';
 
 /**
  * The daily reading log: minutes and pages today, the current and longest streak, and a heatmap
  * of the year (`ll-year-heatmap`). Days are the reader's local days.
  */
+
 @Component({
   selector: 'll-reading-log',
   imports: [YearHeatmap],
@@ -26,13 +27,7 @@ export class ReadingLog {
   private readonly timeZone = inject(TIME_ZONE);
   private readonly clock = inject(CLOCK);
 
-  private readonly data = liveQuerySignal(
-    async (db) => ({
-      sessions: (await db.rows('sessions').toArray()) as Session[],
-      books: (await db.rows('books').toArray()) as Book[],
-    }),
-    { sessions: [] as Session[], books: [] as Book[] },
-  );
+  private readonly data = liveQuerySignal(allSessionsAndBooks, NO_SESSIONS);
   protected readonly log = computed(() => dailyLog(logSessions(this.data().sessions, this.data().books), this.timeZone));
 
   protected readonly today = computed(() => {

@@ -1,6 +1,12 @@
 import * as z from 'zod';
 
-import { checkPassword } from './password-policy';
+import { checkPassword } from '../account/password-policy';
+import { isPlainText, PLAIN_TEXT_MESSAGE } from '../account/plain-text';
+
+/**
+ * The accounts API (`/api/auth`: register, login, refresh, sign out, password change and resets,
+ * e-mail confirmation): the inputs both sides validate and the answers the server sends.
+ */
 
 /** Display names are shown to people a reader shares with; keep them short and printable. */
 export const DISPLAY_NAME_MAX_LENGTH = 80;
@@ -10,14 +16,6 @@ const email = z
   .trim()
   .toLowerCase()
   .pipe(z.email({ error: 'Enter an e-mail address like name@example.com' }).max(254, 'E-mail is too long'));
-
-/**
- * Control characters and lone UTF-16 surrogates are not text a person types, and PostgreSQL
- * refuses NUL in text (SQLSTATE 22021), so names with them are refused here, with a reason.
- */
-const NOT_PLAIN_TEXT = /[\u0000-\u001f\u007f]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
-const PLAIN_TEXT_MESSAGE = 'Use letters, digits, spaces and punctuation only';
-const isPlainText = (value: string) => !NOT_PLAIN_TEXT.test(value);
 
 const displayName = z
   .string({ error: 'Name is required' })
@@ -82,17 +80,6 @@ export const resetConfirmInput = z
   .object({ token: z.string({ error: 'The link is incomplete' }).min(20).max(200), newPassword })
   .superRefine(refinePassword('newPassword'));
 
-export const renameDeviceInput = z.object({
-  name: z.string({ error: 'Name is required' }).trim().min(1, 'Name is required').max(80, 'Use at most 80 characters').refine(isPlainText, PLAIN_TEXT_MESSAGE),
-});
-
-export const adminUserUpdateInput = z
-  .object({ disabled: z.boolean().optional(), role: z.enum(['reader', 'admin']).optional() })
-  .refine((value) => value.disabled !== undefined || value.role !== undefined, {
-    message: 'Send disabled and/or role',
-    path: ['disabled'],
-  });
-
 /** The account as the API shows it to its owner. */
 export interface AccountUser {
   readonly id: string;
@@ -113,33 +100,12 @@ export interface TokenPair {
   readonly refreshToken: string;
 }
 
-/** A signed-in device, as listed on the reader's devices page. */
-export interface DeviceSessionView {
-  readonly id: string;
-  readonly name: string;
-  readonly createdAt: string;
-  readonly lastSeenAt: string;
-  readonly current: boolean;
+/** Answer of `POST /api/auth/password-reset/request` (the same whether or not the address has an account). */
+export interface ResetRequested {
+  readonly message: string;
 }
 
-/** One account as the admin page lists it. */
-export interface AdminUserView extends AccountUser {
-  readonly createdAt: string;
-  readonly lastSeenAt: string | null;
-  readonly disabled: boolean;
-  readonly storedBytes: number;
-}
-
-/** One message caught by the development mail inbox. */
-export interface CaughtMail {
-  readonly id: string;
-  readonly receivedAt: string;
-  readonly from: string;
-  readonly to: string[];
-  readonly subject: string;
-  readonly text: string;
-  /** The HTML part, when the mail had one. */
-  readonly html?: string;
-  /** The List-Unsubscribe header (RFC 2369), when the mail had one. */
-  readonly listUnsubscribe?: string;
+/** Answer of `POST /api/auth/verify-email` and `…/verify-email/send` (202 when a new link was mailed). */
+export interface EmailVerified {
+  readonly verified: boolean;
 }

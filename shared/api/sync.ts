@@ -1,4 +1,9 @@
-import type { OrSetState } from './or-set';
+import type { OrSetState } from '../sync/or-set';
+
+/**
+ * The sync API (`POST /api/sync/push`, `GET /api/sync/pull`, `GET /api/sync/events`): what the
+ * device sends and what the server answers, with the limits both sides keep.
+ */
 
 /**
  * One change to one field of one row: the unit the outbox keeps, the client pushes and the
