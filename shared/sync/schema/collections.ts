@@ -302,6 +302,21 @@ export const challenges = defineCollection('challenges', {
 });
 export type Challenge = RowOf<typeof challenges>;
 
+/** Lamplight's own colour themes; none (or 'system') follows the device's light or dark. */
+export const THEMES = ['system', 'lamplight', 'moss', 'harbour'] as const;
+export type Theme = (typeof THEMES)[number];
+
+/**
+ * The reader's settings that follow them to every device. One row per reader, id
+ * `deterministicId('reader-settings', 'current')`.
+ */
+export const readerSettings = defineCollection('readerSettings', {
+  /** The locale dates are written in ('en-GB', 'de'); none: the browser's. */
+  dateLocale: field.optionalLanguage(),
+  theme: field.optionalChoice(THEMES),
+});
+export type ReaderSettings = RowOf<typeof readerSettings>;
+
 /** Every synced collection, by name: the one source of truth for Dexie, zod and TypeORM. */
 export const COLLECTIONS = {
   books,
@@ -320,6 +335,7 @@ export const COLLECTIONS = {
   yearPlans,
   monthPlans,
   challenges,
+  readerSettings,
 } as const;
 export type CollectionName = keyof typeof COLLECTIONS;
 

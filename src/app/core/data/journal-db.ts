@@ -51,7 +51,7 @@ export const journalDbName = (userId: string) => `lamplight-journal-${userId}`;
  * Bump when the stores below change (a new collection or index). Dexie works out the upgrade
  * from the latest declaration; other open tabs get a `versionchange` and close.
  */
-export const JOURNAL_DB_VERSION = 7;
+export const JOURNAL_DB_VERSION = 8;
 
 /** Dexie store specs for every synced collection, from the shared schema: `id` plus its indexes. */
 export function collectionStores(): Record<string, string> {

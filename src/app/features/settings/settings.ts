@@ -7,12 +7,13 @@ import { SignOutFlow } from '../account';
 import { ChangePassword } from './change-password/change-password';
 import { DeleteAccount } from './delete-account/delete-account';
 import { Devices } from './devices/devices';
+import { LookAndDates } from './look-and-dates/look-and-dates';
 import { StoragePanel } from './storage-panel/storage-panel';
 
 /** The reader's account, devices and this device's storage. */
 @Component({
   selector: 'll-settings',
-  imports: [MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount, StoragePanel],
+  imports: [MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount, LookAndDates, StoragePanel],
   templateUrl: './settings.html',
   styleUrl: './settings.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

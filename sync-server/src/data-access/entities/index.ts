@@ -14,6 +14,7 @@ import { ChallengeRow } from './challenge.entity';
 import { MonthPlanRow } from './month-plan.entity';
 import { YearPlanRow } from './year-plan.entity';
 import { ReadingRow } from './reading.entity';
+import { ReaderSettingsRow } from './reader-settings.entity';
 import { DeviceSession } from './device-session.entity';
 import { PasswordReset } from './password-reset.entity';
 import { RefreshToken } from './refresh-token.entity';
@@ -39,6 +40,7 @@ export const SYNCED_ENTITIES = {
   yearPlans: YearPlanRow,
   monthPlans: MonthPlanRow,
   challenges: ChallengeRow,
+  readerSettings: ReaderSettingsRow,
 } as const;
 
 /** Every entity the DataSource knows; add new ones here. Uploads are not synced rows: they have their own API. */

@@ -12,6 +12,7 @@ import { MergeableTexts1765411201000 } from './1765411201000-mergeable-texts';
 import { DeviceIds1765411202000 } from './1765411202000-device-ids';
 import { Hardening1765411215000 } from './1765411215000-hardening';
 import { CatalogueCache1765412022000 } from './1765412022000-catalogue-cache';
+import { ReaderSettings1765500007000 } from './1765500007000-reader-settings';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
 export const migrations = [
@@ -29,4 +30,5 @@ export const migrations = [
   DeviceIds1765411202000,
   Hardening1765411215000,
   CatalogueCache1765412022000,
+  ReaderSettings1765500007000,
 ];

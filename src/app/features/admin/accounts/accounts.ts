@@ -1,4 +1,4 @@
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatSlideToggleModule, type MatSlideToggleChange } from '@angular/material/slide-toggle';
@@ -10,11 +10,12 @@ import type { AdminUserView } from '@shared/account/account-input';
 import { Auth } from '../../../core/auth/auth';
 import { readableError } from '../../../core/http/api-error-message';
 import { AdminApi } from '../admin-api';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** Admins see accounts (never their journals), and can disable one or change its role. */
 @Component({
   selector: 'll-accounts',
-  imports: [DatePipe, DecimalPipe, RouterLink, MatButtonModule, MatSlideToggleModule, MatTableModule],
+  imports: [ReaderDatePipe, DecimalPipe, RouterLink, MatButtonModule, MatSlideToggleModule, MatTableModule],
   templateUrl: './accounts.html',
   styleUrl: './accounts.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { RouterLink } from '@angular/router';
 
@@ -6,11 +5,12 @@ import type { CaughtMail } from '@shared/account/account-input';
 
 import { readableError } from '../../../core/http/api-error-message';
 import { AdminApi } from '../admin-api';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** Development only: the mail the local inbox caught, so a reset link can be followed locally. */
 @Component({
   selector: 'll-mail',
-  imports: [DatePipe, RouterLink],
+  imports: [ReaderDatePipe, RouterLink],
   templateUrl: './mail.html',
   styleUrl: './mail.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,4 +1,3 @@
-import { DatePipe, formatDate } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -22,6 +21,8 @@ import { amountsLine, goalAmount, goalFigure, UNIT_LABELS } from '../../../ui/go
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { MonthHeatmap } from '../month-heatmap/month-heatmap';
 import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
+import { ReaderDatePipe } from '../../../ui/reader-date';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 /** Largest monthly targets the schema takes, by unit. */
 const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 1_000, pages: 1_000_000, minutes: 50_000 };
@@ -32,7 +33,7 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 1_000, pages: 1
  */
 @Component({
   selector: 'll-month-page',
-  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MonthHeatmap],
+  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MonthHeatmap],
   templateUrl: './month-page.html',
   styleUrl: './month-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -118,9 +119,10 @@ export class MonthPage {
       this.targetsSaved.set(false);
     });
     const title = inject(Title);
+    const dates = inject(ReaderSettings);
     effect(() => {
       const key = this.key();
-      if (key) title.setTitle(`${formatDate(`${key}-01`, 'LLLL yyyy', 'en')} · Lamplight`);
+      if (key) title.setTitle(`${dates.format(key, 'month')} · Lamplight`);
     });
   }
 

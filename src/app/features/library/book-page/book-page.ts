@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -20,6 +19,7 @@ import { LabelChips } from '../../../ui/label-chips/label-chips';
 import { BookReading } from '../../sessions';
 import { TimerStartButton } from '../../timer';
 import { liveQueryFor } from '../../../core/data/live-query-for';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** Everything the reader keeps about one book, on this device, together with what is linked to it. */
 interface BookDossier {
@@ -48,7 +48,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
 @Component({
   selector: 'll-book-page',
   imports: [
-    DatePipe,
+    ReaderDatePipe,
     RouterLink,
     MatButtonModule,
     MatIconModule,

@@ -1,0 +1,33 @@
+import { TestBed } from '@angular/core/testing';
+
+import { BROWSER_LOCALE, READER_SETTINGS_ID } from '../../../core/settings/reader-settings';
+import { openTestJournal, type TestJournal, waitFor } from '../../../core/testing/test-journal';
+import { TIME_ZONE } from '../../../core/time/time-zone';
+import { LookAndDates } from './look-and-dates';
+
+describe('LookAndDates (Settings › Dates and look)', () => {
+  let journal: TestJournal;
+  beforeEach(() => {
+    journal = openTestJournal([
+      { provide: BROWSER_LOCALE, useValue: 'en-US' },
+      { provide: TIME_ZONE, useValue: 'UTC' },
+    ]);
+  });
+  afterEach(() => journal.close());
+
+  it('starts from the browser’s locale and saves the reader’s choice in their synced settings', async () => {
+    const fixture = TestBed.createComponent(LookAndDates);
+    const element = fixture.nativeElement as HTMLElement;
+    const select = element.querySelector<HTMLSelectElement>('select#date-locale')!;
+    await fixture.whenStable();
+
+    expect(element.querySelector('label[for="date-locale"]')?.textContent).toContain('Dates and times');
+    expect(select.getAttribute('aria-describedby')).toBe('date-locale-hint');
+    expect(select.options[0]!.textContent).toContain('As this browser: Mar 8, 2026, 4:45 PM');
+
+    select.value = 'de';
+    select.dispatchEvent(new Event('change'));
+    await waitFor(fixture, async () => (await journal.db.rows('readerSettings').get(READER_SETTINGS_ID))?.['dateLocale'] === 'de', 'the choice saved');
+    await waitFor(fixture, () => element.querySelector('#date-locale-hint')?.textContent?.match(/\d{1,2}\.\d{1,2}\.\d{4}|\d+\. \w+/), 'the hint in German dates');
+  });
+});
