@@ -19,11 +19,10 @@ import { ReaderSettings } from '../../../core/settings/reader-settings';
 })
 export class YearHeatmap {
   readonly year = input.required<number>();
-  private readonly dates = inject(ReaderSettings);
+  protected readonly dates = inject(ReaderSettings);
   /** Minutes and pages per local day (other years are fine). */
   readonly log = input.required<readonly DailyLogEntry[]>();
 
-  protected readonly weekdays = ['Mon', '', 'Wed', '', 'Fri', '', ''];
   protected readonly layout = computed(() => yearHeatmapLayout(this.log(), this.year()));
 
   protected readonly summary = computed(() => {

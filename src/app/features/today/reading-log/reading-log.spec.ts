@@ -83,9 +83,11 @@ describe('ReadingLog', () => {
 
     it('lays out 2026 as 365 days, with a summary and month totals as its text', async () => {
       await showWithTheSession();
-      // The week layout itself is checked in year-heatmap-layout.spec.ts.
+      // The calendars' layout itself is checked in year-heatmap-layout.spec.ts.
       expect(element().querySelectorAll('ll-year-heatmap [data-day]').length).toBe(365);
-      expect(element().querySelector('ll-year-heatmap .grid')?.getAttribute('aria-hidden')).toBe('true');
+      expect(element().querySelectorAll('ll-year-heatmap .month').length).toBe(12);
+      expect(element().querySelector('ll-year-heatmap .months')?.getAttribute('aria-hidden')).toBe('true');
+      expect(element().querySelector('ll-year-heatmap ul.legend')?.textContent).toContain('an hour or more');
       expect(shown('ll-year-heatmap figcaption')).toBe('1 of 365 days with reading in 2026, 30 min in all. The fullest day: 7 March, 30 min.');
       const rows = [...element().querySelectorAll('table tbody tr')].map((row) => [...row.children].map((cell) => cell.textContent?.trim()));
       expect(rows.length).toBe(12);
