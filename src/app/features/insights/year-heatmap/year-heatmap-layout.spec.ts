@@ -11,7 +11,9 @@ describe('yearHeatmapLayout', () => {
         for (const cell of month.cells) {
           const date = new Date(`${cell.day}T12:00:00`);
           expect(cell.column).withContext(cell.day).toBe(getISODay(date));
-          expect(cell.week).withContext(cell.day).toBe(getWeekOfMonth(date, { weekStartsOn: 1 }));
+          expect(cell.week)
+            .withContext(cell.day)
+            .toBe(getWeekOfMonth(date, { weekStartsOn: 1 }));
         }
       }
     }
