@@ -20,6 +20,7 @@ import { SyncStatus } from './core/sync/sync-status/sync-status';
 import { SignOutFlow } from './features/account';
 import { QuoteCapture } from './features/quotes';
 import { TimerBar } from './features/timer';
+import { ApplyTheme } from './core/settings/apply-theme';
 
 /** A place in the app the shell links to. */
 interface Destination {
@@ -61,6 +62,7 @@ export class App {
   constructor() {
     inject(AppUpdates);
     inject(TabCoordination);
+    inject(ApplyTheme); // the reader's colour theme, from their synced settings
     inject(Covers); // uploads covers an earlier visit saved offline
     this.askToKeepStorage();
   }
