@@ -89,7 +89,9 @@ describe('MonthPage', () => {
     type(field(element(), 'Minutes this month'), '600');
     element().querySelector<HTMLButtonElement>('.targets-form button[type="submit"]')!.click();
     await until(fixture, () => element().querySelectorAll('.progress li').length === 2, 'the progress');
-    expect(Array.from(element().querySelectorAll('.progress li')).map(textOf)).toEqual(['Books 1 of 2 books · 1 to go', 'Minutes 95 of 600 minutes · 505 to go']);
+    expect(
+      Array.from(element().querySelectorAll('.progress li')).map((row) => textOf(row.querySelector('.unit')) + ' ' + textOf(row.querySelector('.unit + span'))),
+    ).toEqual(['Books 1 of 2 books · 1 to go', 'Minutes 95 of 600 minutes · 505 to go']);
     expect(await plan()).toEqual(jasmine.objectContaining({ month: '2026-06', booksTarget: 2, minutesTarget: 600, deleted: false }));
     expect((await plan())?.pagesTarget).toBeUndefined();
   });
@@ -102,7 +104,8 @@ describe('MonthPage', () => {
     await open();
     await until(fixture, () => element().querySelectorAll('[aria-labelledby="finished-heading"] li a').length === 2, 'the books');
     const listed = (heading: string) => Array.from(element().querySelectorAll(`[aria-labelledby="${heading}"] li`)).map(textOf);
-    expect(listed('started-heading')).toEqual(['An Owl at Dusk']);
+    // Harrow Light's reading began on 1 June (the seed); An Owl at Dusk moved to reading on 3 June.
+    expect(listed('started-heading')).toEqual(['Harrow Light', 'An Owl at Dusk']);
     expect(listed('finished-heading')).toEqual(['Harrow Light 20 June', 'The Blue Ferry 30 June']);
     expect(listed('abandoned-heading')).toEqual(['Evening Tide']);
     await until(fixture, () => textOf(element().querySelector('.tally'))?.includes('1 quote kept') ?? false, 'the quote counted');

@@ -9,6 +9,7 @@ import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
+import { BROWSER_LOCALE } from '../../../core/settings/reader-settings';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { ReadingLog } from './reading-log';
 import { waitFor } from '../../../core/testing/test-journal';
@@ -37,7 +38,12 @@ describe('ReadingLog', () => {
       userId = `log-${crypto.randomUUID()}`;
       rememberSession({ user: { ...READER, id: userId } });
       TestBed.configureTestingModule({
-        providers: [provideHttpClient(), { provide: TIME_ZONE, useValue: timeZone }, { provide: CLOCK, useValue: fixedClock(NOW) }],
+        providers: [
+          provideHttpClient(),
+          { provide: TIME_ZONE, useValue: timeZone },
+          { provide: CLOCK, useValue: fixedClock(NOW) },
+          { provide: BROWSER_LOCALE, useValue: 'en-GB' },
+        ],
       });
       store = TestBed.inject(JournalStore);
       await db().open();
