@@ -13,7 +13,6 @@ import { LocalJournal } from './core/data/local-journal';
 import { browserStorage } from './core/device/browser-storage';
 import { DeviceStorage } from './core/device/device-storage';
 import { AppUpdates } from './core/pwa/app-updates';
-import { InstallHelpDialog } from './core/pwa/install-help-dialog';
 import { InstallPrompt } from './core/pwa/install-prompt';
 import { TabCoordination } from './core/pwa/tab-coordination';
 import { SyncStatus } from './core/sync/sync-status/sync-status';
@@ -21,6 +20,7 @@ import { SignOutFlow } from './features/account';
 import { QuoteCapture } from './features/quotes';
 import { TimerBar } from './features/timer';
 import { ApplyTheme } from './core/settings/apply-theme';
+import { installLamplight } from './core/pwa/install-button';
 
 /** A place in the app the shell links to. */
 interface Destination {
@@ -75,10 +75,7 @@ export class App {
     void this.quoteCapture.open();
   }
 
-  protected install(): void {
-    if (this.installPrompt.option() === 'ios-how-to') this.dialog.open(InstallHelpDialog, { width: '440px' });
-    else void this.installPrompt.install();
-  }
+  protected readonly install = installLamplight();
 
   /**
    * After sign-in, ask the browser to keep the journal's storage, and say once per device what
@@ -95,13 +92,13 @@ export class App {
       void storage.requestPersistence().then((kept) => {
         if (destroyed || browserStorage.read<boolean>('lamplight.storageAsked')) return;
         browserStorage.write('lamplight.storageAsked', true);
-        snackBar.open(
-          kept
-            ? 'Your browser will keep Lamplight’s storage, so your journal is not cleared to free space.'
-            : 'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.',
-          'OK',
-          { duration: 8000 },
-        );
+        // The first-run message also offers to install, where this browser can.
+        const installable = this.installPrompt.option() === 'prompt' || this.installPrompt.option() === 'ios-how-to';
+        const message = kept
+          ? 'Your browser will keep Lamplight’s storage, so your journal is not cleared to free space.'
+          : 'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.';
+        const ref = snackBar.open(message, installable ? 'Install Lamplight' : 'OK', { duration: installable ? 15000 : 8000 });
+        if (installable) ref.onAction().subscribe(() => this.install());
       });
     });
   }

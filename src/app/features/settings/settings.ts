@@ -3,6 +3,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 
 import { Auth } from '../../core/auth/auth';
+import { InstallButton } from '../../core/pwa/install-button';
 import { SignOutFlow } from '../account';
 import { ChangePassword } from './change-password/change-password';
 import { DeleteAccount } from './delete-account/delete-account';
@@ -13,7 +14,7 @@ import { StoragePanel } from './storage-panel/storage-panel';
 /** The reader's account, devices and this device's storage. */
 @Component({
   selector: 'll-settings',
-  imports: [MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount, LookAndDates, StoragePanel],
+  imports: [MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount, InstallButton, LookAndDates, StoragePanel],
   templateUrl: './settings.html',
   styleUrl: './settings.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
