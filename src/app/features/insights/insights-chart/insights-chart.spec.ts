@@ -28,7 +28,8 @@ describe('InsightsChart', () => {
     window.dispatchEvent(new Event('orientationchange'));
 
     expect(resize).toHaveBeenCalledTimes(2);
-    expect(canvas.getBoundingClientRect().width).toBeLessThanOrEqual(300);
+    await new Promise((resolve) => setTimeout(resolve, 100));
+    expect(directive.chart!.width).toBeLessThanOrEqual(300);
     host.remove();
   });
 });
