@@ -75,7 +75,7 @@ describe('/api/admin', () => {
     const bad = await request(app).get('/api/admin/users').query({ size: 5000 }).set(bearer(admin.accessToken)).expect(400);
     expect(bad.body.error.details).toEqual({ size: 'must be at most 200' });
     await dataSource.query(`DELETE FROM users WHERE email LIKE $1 || '-%'`, [tag]);
-  });
+  }, 90_000); // ten thousand rows inserted: give a busy machine time
 
   it('When an admin empties the caught mail, then the inbox lists nothing', async () => {
     const admin = await registerAdmin(app);
