@@ -11,12 +11,17 @@ describe('Accounts (Admin)', () => {
     const http = TestBed.inject(HttpTestingController);
     const fixture = TestBed.createComponent(Accounts);
     const element = fixture.nativeElement as HTMLElement;
+    const settle = async () => {
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      fixture.detectChanges();
+    };
+    fixture.detectChanges();
 
     const first = http.expectOne((request) => request.url === '/api/admin/users');
     expect(first.request.params.get('page')).toBe('0');
     expect(first.request.params.get('size')).toBe('50');
     first.flush({ accounts: [], total: 10_000, page: 0, size: 50 });
-    await fixture.whenStable();
+    await settle();
     expect(element.querySelector('#accounts-count')?.textContent?.trim()).toBe('10000 accounts');
 
     const search = element.querySelector<HTMLInputElement>('input[type="search"]')!;
@@ -26,7 +31,7 @@ describe('Accounts (Admin)', () => {
     await new Promise((resolve) => setTimeout(resolve, 350));
     const found = http.expectOne((request) => request.url === '/api/admin/users' && request.params.get('q') === 'ada');
     found.flush({ accounts: [], total: 1, page: 0, size: 50 });
-    await fixture.whenStable();
+    await settle();
     expect(element.querySelector('#accounts-count')?.textContent?.trim()).toBe('1 account matching “ada”');
     expect(element.querySelector('mat-paginator')?.getAttribute('aria-label')).toBe('Pages of accounts');
     http.verify();
