@@ -54,6 +54,10 @@ module.exports = function (config) {
       },
     },
     browserNoActivityTimeout: 120000,
+    // A shared, busy machine can starve the browser of CPU for a while: wait for it rather than fail the run.
+    browserDisconnectTimeout: 60000,
+    browserDisconnectTolerance: 2,
+    pingTimeout: 120000,
     captureTimeout: 120000,
     singleRun: true,
     restartOnFileChange: false,

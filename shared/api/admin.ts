@@ -32,3 +32,29 @@ export interface CaughtMail {
   /** The List-Unsubscribe header (RFC 2369), when the mail had one. */
   readonly listUnsubscribe?: string;
 }
+/** A page of the admin's account list: the accounts matching a search, and how many match in all. */
+export interface AdminUserPage {
+  readonly accounts: AdminUserView[];
+  readonly total: number;
+  readonly page: number;
+  readonly size: number;
+}
+
+/** The account list's query: words in the email or name, and which page (0-based) of how many. */
+export const adminUserQuery = z.object({
+  q: z.string().trim().max(200, 'must be at most 200 characters').optional().default(''),
+  page: z.coerce
+    .number({ error: 'must be a whole number' })
+    .int('must be a whole number')
+    .min(0, 'must be 0 or more')
+    .max(100_000, 'is too large')
+    .optional()
+    .default(0),
+  size: z.coerce
+    .number({ error: 'must be a whole number' })
+    .int('must be a whole number')
+    .min(1, 'must be 1 or more')
+    .max(200, 'must be at most 200')
+    .optional()
+    .default(50),
+});

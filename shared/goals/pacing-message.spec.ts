@@ -8,9 +8,9 @@ describe('pacingMessage', () => {
   // The figures are hand-worked in goal-pacing.spec.ts; the wording is ours.
   const july = (target: number, actual: number) => goalPacing({ target, actual, year: 2026, today: '2026-07-01' });
 
-  it('says how far ahead of an even pace the reader is', () => {
+  it('says how far past the even-pace marker the reader is', () => {
     // Hand: 29 − 25.786 = 3.214 → "3.2".
-    expect(pacingMessage(july(52, 29), 'books')).toBe('3.2 books ahead of an even pace');
+    expect(pacingMessage(july(52, 29), 'books')).toBe('3.2 books past the even-pace marker');
   });
 
   it('says what a week would take when there is ground to make up', () => {
@@ -32,7 +32,7 @@ describe('pacingMessage', () => {
     // Hand: 10 000 pages, 2026-07-01, 4 000 read: 6 000 × 7 / 184 = 228.26 a week.
     expect(pacingMessage(july(10_000, 4_000), 'pages')).toBe('About 228 pages a week from now gets you there');
     // Hand: 6 000 minutes, 3 500 read: expected 2 975.3, so 524.7 ahead.
-    expect(pacingMessage(july(6_000, 3_500), 'minutes')).toBe('525 minutes ahead of an even pace');
+    expect(pacingMessage(july(6_000, 3_500), 'minutes')).toBe('525 minutes past the even-pace marker');
   });
 
   it('counts down in the last week instead of giving a weekly rate', () => {

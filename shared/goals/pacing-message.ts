@@ -11,7 +11,7 @@ const SINGULAR: Readonly<Record<GoalUnit, string>> = { books: 'book', pages: 'pa
  *
  * @example
  * pacingMessage(goalPacing({ target: 52, actual: 29, year: 2026, today: '2026-07-01' }), 'books')
- * // '3.2 books ahead of an even pace'
+ * // '3.2 books past the even-pace marker'
  * pacingMessage(goalPacing({ target: 52, actual: 20, year: 2026, today: '2026-07-01' }), 'books')
  * // 'About 1.2 books a week from now gets you there'
  */
@@ -23,7 +23,7 @@ export function pacingMessage(pacing: GoalPacing, unit: GoalUnit): string {
 
   if (actual >= target) return `Goal of ${amount(target)} reached`;
   if (neededPerWeek === null) return `The year closed at ${figure(actual)} of ${amount(target)}`;
-  if (status === 'ahead') return `${amount(difference)} ahead of an even pace`;
+  if (status === 'ahead') return `${amount(difference)} past the even-pace marker`;
   if (status === 'on-track') return `Right on an even pace for ${amount(target)}`;
   // In the last week a rate per week reads oddly ("7 books a week"); say what is left instead.
   if (daysLeft <= 7) return `${amount(target - actual)} to go for the year`;

@@ -21,3 +21,13 @@ describe('starter labels', () => {
     expect(merged.find((l) => l.id === reRead.id)).toEqual({ ...reRead, colour: 'slate' });
   });
 });
+
+describe('the first starter label', () => {
+  it('has words of our own and still the id it was made with, so a reader’s rename of it still applies', () => {
+    const keeper = STARTER_LABELS[0]!;
+
+    expect(keeper.name).toBe('A keeper');
+    expect(keeper.id).toBe(deterministicId('starter-label', 'five-stars'));
+    expect(mergeLabels([{ id: keeper.id, name: 'All-time best' }])[0]!.name).toBe('All-time best');
+  });
+});

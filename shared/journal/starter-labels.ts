@@ -8,8 +8,9 @@ import type { Label } from '../sync/schema/collections';
 /** A label with everything it needs to be drawn. */
 export type CompleteLabel = Required<Pick<Label, 'id' | 'name' | 'colour' | 'icon'>>;
 
+/** 'five-stars' keeps its key (and so its id) from before it was renamed "A keeper": a rename is a field write. */
 const starters: readonly (Omit<CompleteLabel, 'id'> & { key: string })[] = [
-  { key: 'five-stars', name: 'Five stars', colour: 'amber', icon: 'star' },
+  { key: 'five-stars', name: 'A keeper', colour: 'amber', icon: 'star' },
   { key: 're-read', name: 'Re-read', colour: 'teal', icon: 'repeat' },
   { key: 'buddy-read', name: 'Buddy read', colour: 'sky', icon: 'group' },
   { key: 'comfort-read', name: 'Comfort read', colour: 'rose', icon: 'local_cafe' },

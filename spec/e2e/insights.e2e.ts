@@ -132,28 +132,26 @@ describe('Insights, offline', () => {
     expect(await words(page, 'section:has(#monthly-heading) tbody tr:nth-child(2)')).toBe('Feb 0');
     expect(await seriousViolations(page)).toEqual([]);
 
-    // The year in review, offline, saved as an image.
-    await page.getByRole('link', { name: `Your ${year} in review` }).click();
-    await page.getByRole('heading', { name: `Isolde Varga’s ${year} in reading` }).waitFor();
-    const figures = await words(page, '.figures');
-    expect(figures).toContain('Books finished 3');
-    expect(figures).toContain('Pages read 105');
-    expect(figures).toContain('Days with reading 3');
-    expect(figures).toContain('Longest run of days 2');
-    expect(await words(page, '.rated')).toBe('Nine Lanterns 5 ★ The Long Ferry 5 ★ Salt Orchard 4.5 ★');
-    expect(await words(page, '.notes')).toContain('Longest book Salt Orchard (412 pages)');
-    expect(await words(page, '.notes')).toContain('Busiest month January (90 minutes)');
+    // The year's shelf, offline, saved as an image.
+    await page.getByRole('link', { name: `Your ${year} shelf` }).click();
+    await page.getByRole('heading', { name: `Isolde Varga’s ${year} shelf` }).waitFor();
+    expect(await page.locator('ul.shelf button.spine').count()).toBe(3);
+    const sentences = await words(page, '.words');
+    expect(sentences).toContain(`Three books stand on your ${year} shelf`);
+    expect(sentences).toContain('You read on 3 days, 2 of them in a row at best');
+    expect(sentences).toContain('January was your fullest month, with 90 minutes.');
+    expect(sentences).toContain('The tallest spine is Salt Orchard, at 412 pages.');
     expect(await seriousViolations(page)).toEqual([]);
 
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save as image' }).click()]);
-    expect(download.suggestedFilename()).toBe(`lamplight-${year}-in-review.png`);
+    expect(download.suggestedFilename()).toBe(`lamplight-${year}-shelf.png`);
     const png = readFileSync((await download.path()) as string);
     // The eight-byte PNG signature (ISO/IEC 15948 §5.2).
     expect(png.subarray(0, 8).toString('hex')).toBe('89504e470d0a1a0a');
     const card = await page.locator('article.card').boundingBox();
     // Drawn at twice the CSS pixels.
     expect(pngSize(png).width).toBe(Math.round((card?.width ?? 0) * 2));
-    await page.getByText(`Saved as lamplight-${year}-in-review.png`).waitFor();
+    await page.getByText(`Saved as lamplight-${year}-shelf.png`).waitFor();
     await context.close();
   });
 });

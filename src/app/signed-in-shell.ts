@@ -1,5 +1,4 @@
 import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject } from '@angular/core';
-import { MatDialog } from '@angular/material/dialog';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -12,8 +11,9 @@ import { Covers } from './core/covers/covers';
 import { LocalJournal } from './core/data/local-journal';
 import { browserStorage } from './core/device/browser-storage';
 import { DeviceStorage } from './core/device/device-storage';
-import { InstallHelpDialog } from './core/pwa/install-help-dialog';
+import { installLamplight } from './core/pwa/install-button';
 import { InstallPrompt } from './core/pwa/install-prompt';
+import { ApplyTheme } from './core/settings/apply-theme';
 import { TabCoordination } from './core/pwa/tab-coordination';
 import { SyncStatus } from './core/sync/sync-status/sync-status';
 import { SignOutFlow } from './features/account';
@@ -43,7 +43,6 @@ interface Destination {
 export class SignedInShell {
   private readonly auth = inject(Auth);
   private readonly signOutFlow = inject(SignOutFlow);
-  private readonly dialog = inject(MatDialog);
   private readonly quoteCapture = inject(QuoteCapture);
   protected readonly installPrompt = inject(InstallPrompt);
 
@@ -63,6 +62,7 @@ export class SignedInShell {
 
   constructor() {
     inject(TabCoordination);
+    inject(ApplyTheme); // the reader's colour theme, from their synced settings
     inject(Covers); // uploads covers an earlier visit saved offline
     this.askToKeepStorage();
   }
@@ -75,10 +75,7 @@ export class SignedInShell {
     void this.quoteCapture.open();
   }
 
-  protected install(): void {
-    if (this.installPrompt.option() === 'ios-how-to') this.dialog.open(InstallHelpDialog, { width: '440px' });
-    else void this.installPrompt.install();
-  }
+  protected readonly install = installLamplight();
 
   /**
    * After sign-in, ask the browser to keep the journal's storage, and say once per device what
@@ -95,13 +92,13 @@ export class SignedInShell {
       void storage.requestPersistence().then((kept) => {
         if (destroyed || browserStorage.read<boolean>('lamplight.storageAsked')) return;
         browserStorage.write('lamplight.storageAsked', true);
-        snackBar.open(
-          kept
-            ? 'Your browser will keep Lamplight’s storage, so your journal is not cleared to free space.'
-            : 'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.',
-          'OK',
-          { duration: 8000 },
-        );
+        // The first-run message also offers to install, where this browser can.
+        const installable = this.installPrompt.option() === 'prompt' || this.installPrompt.option() === 'ios-how-to';
+        const message = kept
+          ? 'Your browser will keep Lamplight’s storage, so your journal is not cleared to free space.'
+          : 'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.';
+        const ref = snackBar.open(message, installable ? 'Install Lamplight' : 'OK', { duration: installable ? 15000 : 8000 });
+        if (installable) ref.onAction().subscribe(() => this.install());
       });
     });
   }

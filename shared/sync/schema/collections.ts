@@ -369,6 +369,21 @@ export const loanReminders = defineCollection('loanReminders', {
 });
 export type LoanReminders = RowOf<typeof loanReminders>;
 
+/** Lamplight's own colour themes; none (or 'system') follows the device's light or dark. */
+export const THEMES = ['system', 'lamplight', 'moss', 'harbour'] as const;
+export type Theme = (typeof THEMES)[number];
+
+/**
+ * The reader's settings that follow them to every device. One row per reader, id
+ * `deterministicId('reader-settings', 'current')`.
+ */
+export const readerSettings = defineCollection('readerSettings', {
+  /** The locale dates are written in ('en-GB', 'de'); none: the browser's. */
+  dateLocale: field.optionalLanguage(),
+  theme: field.optionalChoice(THEMES),
+});
+export type ReaderSettings = RowOf<typeof readerSettings>;
+
 /** Every synced collection, by name: the one source of truth for Dexie, zod and TypeORM. */
 export const COLLECTIONS = {
   books,
@@ -390,6 +405,7 @@ export const COLLECTIONS = {
   libraries,
   loans,
   loanReminders,
+  readerSettings,
 } as const;
 export type CollectionName = keyof typeof COLLECTIONS;
 

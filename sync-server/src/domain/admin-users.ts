@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 
-import type { AdminUserView } from '../../../shared/api/admin';
+import type { AdminUserPage, AdminUserView } from '../../../shared/api/admin';
 import { AppError } from '../errors';
 import { User, type Role } from '../data-access/entities/user.entity';
 import { storedBytesByUser } from '../data-access/user-data-size';
@@ -9,9 +9,31 @@ import { storedBytesByUser } from '../data-access/user-data-size';
 export class AdminUsers {
   constructor(private readonly dataSource: DataSource) {}
 
-  async list(): Promise<AdminUserView[]> {
-    const users = await this.dataSource.getRepository(User).find({ order: { createdAt: 'ASC' } });
-    const sizes = await storedBytesByUser(this.dataSource);
+  /**
+   * One page of accounts, oldest first, whose email or name contains `q` (any case); counted and
+   * paged in PostgreSQL, so ten thousand accounts cost what one page does.
+   */
+  async page(q: string, page: number, size: number): Promise<AdminUserPage> {
+    const query = this.dataSource.getRepository(User).createQueryBuilder('u');
+    if (q) {
+      // LIKE's own wildcards in the search are meant literally.
+      const pattern = `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+      query.where('(u.email ILIKE :pattern OR u.displayName ILIKE :pattern)', { pattern });
+    }
+    const [users, total] = await query
+      .orderBy('u.createdAt', 'ASC')
+      .addOrderBy('u.id', 'ASC')
+      .skip(page * size)
+      .take(size)
+      .getManyAndCount();
+    return { accounts: await this.views(users), total, page, size };
+  }
+
+  private async views(users: readonly User[]): Promise<AdminUserView[]> {
+    const sizes = await storedBytesByUser(
+      this.dataSource,
+      users.map((user) => user.id),
+    );
     return users.map((user) => ({
       id: user.id,
       email: user.email,
@@ -43,8 +65,8 @@ export class AdminUsers {
         await manager.update(User, { id: userId }, { disabledAt: change.disabled ? (user.disabledAt ?? new Date()) : null });
       }
     });
-    const updated = (await this.list()).find((view) => view.id === userId);
+    const updated = await users.findOneBy({ id: userId });
     if (!updated) throw new AppError(404, 'not_found', 'No such account');
-    return updated;
+    return (await this.views([updated]))[0]!;
   }
 }

@@ -1,8 +1,8 @@
 import { Router } from 'express';
 
-import { adminUserUpdateInput } from '../../../shared/api/admin';
+import { adminUserQuery, adminUserUpdateInput } from '../../../shared/api/admin';
 import type { AdminUsers } from '../domain/admin-users';
-import { readCaughtMail } from '../mail/caught-mail';
+import { emptyCaughtMail, readCaughtMail } from '../mail/caught-mail';
 import { AppError } from '../errors';
 import { parseInput, uuidParam } from './parse-input';
 import { callerOf } from './require-auth';
@@ -12,8 +12,10 @@ export function adminRoutes(adminUsers: AdminUsers, devMailDir: string | null): 
   const router = Router();
   router.param('id', uuidParam('No such account'));
 
-  router.get('/users', async (_req, res) => {
-    res.json(await adminUsers.list());
+  /** `?q=words&page=0&size=50`: a page of accounts and how many match. */
+  router.get('/users', async (req, res) => {
+    const { q, page, size } = parseInput(adminUserQuery, req.query);
+    res.json(await adminUsers.page(q, page, size));
   });
 
   router.patch('/users/:id', async (req, res) => {
@@ -25,6 +27,12 @@ export function adminRoutes(adminUsers: AdminUsers, devMailDir: string | null): 
   router.get('/mail', async (_req, res) => {
     if (!devMailDir) throw new AppError(404, 'not_found', 'The mail inbox exists only in development');
     res.json(await readCaughtMail(devMailDir));
+  });
+
+  /** Development only: empties the local inbox. */
+  router.delete('/mail', async (_req, res) => {
+    if (!devMailDir) throw new AppError(404, 'not_found', 'The mail inbox exists only in development');
+    res.json({ removed: await emptyCaughtMail(devMailDir) });
   });
 
   return router;

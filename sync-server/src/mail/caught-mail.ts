@@ -1,4 +1,4 @@
-import { mkdir, readdir, readFile, writeFile } from 'node:fs/promises';
+import { mkdir, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 
 import type { CaughtMail } from '../../../shared/api/admin';
@@ -22,4 +22,16 @@ export async function readCaughtMail(dir: string): Promise<CaughtMail[]> {
   }
   const newest = names.sort().reverse().slice(0, SHOWN);
   return Promise.all(newest.map(async (name) => JSON.parse(await readFile(path.join(dir, name), 'utf8')) as CaughtMail));
+}
+
+/** Empties the development inbox; answers how many messages went. */
+export async function emptyCaughtMail(dir: string): Promise<number> {
+  let names: string[];
+  try {
+    names = (await readdir(dir)).filter((name) => name.endsWith('.json'));
+  } catch {
+    return 0;
+  }
+  await Promise.all(names.map((name) => rm(path.join(dir, name), { force: true })));
+  return names.length;
 }

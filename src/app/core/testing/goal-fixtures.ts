@@ -10,6 +10,7 @@ import { JournalStore } from '../data/journal-store';
 import { LocalJournal } from '../data/local-journal';
 import { CLOCK, fixedClock } from '../time/clock';
 import { TIME_ZONE } from '../time/time-zone';
+import { BROWSER_LOCALE } from '../settings/reader-settings';
 
 /** Noon on 1 July 2026 in Los Angeles (PDT, UTC−7): the "now" of goal specs unless they say otherwise. */
 export const JULY_FIRST_NOON_LA = '2026-07-01T19:00:00.000Z';
@@ -32,6 +33,8 @@ export async function setUpGoalSpec(
       provideHttpClient(),
       provideRouter([{ path: '**', component: SpecLanding }]),
       { provide: TIME_ZONE, useValue: options.timeZone ?? 'America/Los_Angeles' },
+      // Dates in one fixed locale, whatever the test browser's language.
+      { provide: BROWSER_LOCALE, useValue: 'en-GB' },
       { provide: CLOCK, useValue: fixedClock(new Date(options.now ?? JULY_FIRST_NOON_LA).getTime()) },
     ],
   });

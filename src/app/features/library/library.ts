@@ -9,7 +9,7 @@ import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 
-import { BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
+import { BOOK_STATUSES, type Book, type Session } from '@shared/sync/schema/collections';
 
 import { BookCover } from '../../core/covers/book-cover/book-cover';
 import { liveQuerySignal } from '../../core/data/live-query';
@@ -21,6 +21,7 @@ import { StarRating } from '../../ui/star-rating/star-rating';
 import { LabelChips } from '../../ui/label-chips/label-chips';
 import { LabelDirectory } from '../../core/read-model/label-directory';
 import { TimerStartButton } from '../timer';
+import { bookProgress } from '../sessions';
 
 type View = 'table' | 'covers';
 const VIEW_KEY = 'lamplight.libraryView';
@@ -72,7 +73,21 @@ export class Library {
     return this.found().slice(index * size, (index + 1) * size);
   });
 
-  protected readonly columns = ['cover', 'title', 'authors', 'format', 'status', 'rating', 'timer'];
+  private readonly sessions = liveQuerySignal(async (db) => ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted), [] as Session[]);
+  /** Percent read of each book being read or paused whose length is known (from its latest session). */
+  protected readonly progress = computed(() => {
+    const byBook = new Map<string, Session[]>();
+    for (const session of this.sessions()) byBook.set(session.bookId ?? '', [...(byBook.get(session.bookId ?? '') ?? []), session]);
+    const percents = new Map<string, number>();
+    for (const book of this.books()) {
+      if (book.status !== 'reading' && book.status !== 'paused') continue;
+      const { fraction } = bookProgress(book, byBook.get(book.id) ?? []);
+      if (fraction !== null) percents.set(book.id, Math.round(fraction * 100));
+    }
+    return percents;
+  });
+
+  protected readonly columns = ['cover', 'title', 'authors', 'format', 'status', 'progress', 'rating', 'timer'];
   protected readonly statuses = BOOK_STATUSES;
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly authorLine = authorLine;

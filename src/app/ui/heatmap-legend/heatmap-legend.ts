@@ -1,20 +1,30 @@
 import { ChangeDetectionStrategy, Component } from '@angular/core';
 
-/** The key of a reading heatmap: its five shades from less to more. Decorative: each heatmap says its figures in words. */
+/**
+ * The minutes each shade of a reading heatmap stands for (the steps of HEATMAP_THRESHOLDS in
+ * shared/reading-log/year-heatmap.ts: any reading, 15, 30, 60 minutes).
+ */
+export const HEATMAP_LEGEND: readonly { readonly level: number; readonly words: string }[] = [
+  { level: 0, words: 'none' },
+  { level: 1, words: 'under 15 min' },
+  { level: 2, words: '15–30 min' },
+  { level: 3, words: '30–60 min' },
+  { level: 4, words: 'an hour or more' },
+];
+
+/** The key of a reading heatmap: each shade with the minutes read it stands for. */
 @Component({
   selector: 'll-heatmap-legend',
   template: `
-    <p class="legend" aria-hidden="true">
-      Less
-      @for (level of levels; track level) {
-        <span class="swatch level-{{ level }}"></span>
+    <ul class="legend" aria-label="Minutes read in a day">
+      @for (step of steps; track step.level) {
+        <li><span class="swatch level-{{ step.level }}" aria-hidden="true"></span>{{ step.words }}</li>
       }
-      More
-    </p>
+    </ul>
   `,
   styleUrl: './heatmap-legend.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class HeatmapLegend {
-  protected readonly levels = [0, 1, 2, 3, 4];
+  protected readonly steps = HEATMAP_LEGEND;
 }

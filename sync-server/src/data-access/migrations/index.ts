@@ -14,6 +14,7 @@ import { Hardening1765411215000 } from './1765411215000-hardening';
 import { CatalogueCache1765412022000 } from './1765412022000-catalogue-cache';
 import { Loans1765500003000 } from './1765500003000-loans';
 import { Circles1765500004000 } from './1765500004000-circles';
+import { ReaderSettings1765500007000 } from './1765500007000-reader-settings';
 
 /** Migrations in the order they run; a new one is appended, never edited once landed. */
 export const migrations = [
@@ -33,4 +34,5 @@ export const migrations = [
   CatalogueCache1765412022000,
   Loans1765500003000,
   Circles1765500004000,
+  ReaderSettings1765500007000,
 ];

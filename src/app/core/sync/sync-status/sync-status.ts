@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -8,11 +7,12 @@ import { format, isSameDay } from 'date-fns';
 
 import { CLOCK } from '../../time/clock';
 import { SyncEngine } from '../sync-engine';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** The shell's calm line about where the reader's words are: here, waiting, syncing, synced. */
 @Component({
   selector: 'll-sync-status',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatMenuModule, RouterLink],
+  imports: [ReaderDatePipe, MatButtonModule, MatIconModule, MatMenuModule, RouterLink],
   templateUrl: './sync-status.html',
   styleUrl: './sync-status.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -21,6 +21,7 @@ import { readerToday } from '../../../core/time/reader-today';
 import { defaultChallengeName, KIND_LABELS } from '../../../ui/challenge-labels';
 import { periodLine } from '../challenge-period';
 import { challengeFormValidator, countTarget, newChallengeFields, weekYear, type ChallengeFormValue } from './challenge-form';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 /** What each kind asks of the reader, in a line. */
 const KIND_ABOUT: Readonly<Record<NonNullable<Challenge['kind']>, string>> = {
@@ -39,6 +40,7 @@ const KIND_ABOUT: Readonly<Record<NonNullable<Challenge['kind']>, string>> = {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ChallengeEditor {
+  private readonly dates = inject(ReaderSettings);
   private readonly store = inject(JournalStore);
   private readonly router = inject(Router);
   private readonly today = readerToday();
@@ -77,7 +79,7 @@ export class ChallengeEditor {
     const year = weekYear(this.value().weekYear);
     if (year === null) return '';
     const weeks = isoWeeksOfYear(year);
-    return `${weeks.length} weeks: ${periodLine({ periodStart: weeks[0].monday, periodEnd: weeks[weeks.length - 1].sunday })}`;
+    return `${weeks.length} weeks: ${periodLine({ periodStart: weeks[0].monday, periodEnd: weeks[weeks.length - 1].sunday }, this.dates)}`;
   });
   protected readonly problem = signal('');
   /** Cancel discards on purpose, so it leaves without asking. */

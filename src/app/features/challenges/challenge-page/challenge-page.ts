@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -24,6 +23,8 @@ import { ChallengeCelebration } from '../challenge-celebration/challenge-celebra
 import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challenge-labels';
 import { periodLine } from '../challenge-period';
 import { undoableDelete } from '../../../ui/undoable-delete';
+import { ReaderDatePipe } from '../../../ui/reader-date';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 type Prompt = NonNullable<Challenge['prompts']>[number];
 
@@ -37,7 +38,7 @@ const SUGGESTIONS_PER_LETTER = 3;
 @Component({
   selector: 'll-challenge-page',
   imports: [
-    DatePipe,
+    ReaderDatePipe,
     ReactiveFormsModule,
     RouterLink,
     MatButtonModule,
@@ -52,6 +53,7 @@ const SUGGESTIONS_PER_LETTER = 3;
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ChallengePage {
+  private readonly dates = inject(ReaderSettings);
   /** The challenge's id, from the route. */
   readonly id = input.required<string>();
 
@@ -76,7 +78,7 @@ export class ChallengePage {
     const progress = this.progress();
     return progress ? progressPercent(progress) : 0;
   });
-  protected readonly period = computed(() => periodLine(this.challenge() ?? {}));
+  protected readonly period = computed(() => periodLine(this.challenge() ?? {}, this.dates));
   protected readonly finished = computed(() => this.progress()?.progress.finished ?? false);
 
   private readonly celebration = celebrateOnce(

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
@@ -11,6 +11,7 @@ import { celebrateOnce } from '../celebrate-once';
 import { ChallengeCelebration } from '../challenge-celebration/challenge-celebration';
 import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challenge-labels';
 import { periodLine } from '../challenge-period';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 /** Every challenge, running ones first, with its progress. */
 @Component({
@@ -21,6 +22,7 @@ import { periodLine } from '../challenge-period';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ChallengesList {
+  private readonly dates = inject(ReaderSettings);
   private readonly record = goalRecord();
   protected readonly loaded = computed(() => this.record.rows() !== null);
   protected readonly today = this.record.today;
@@ -37,7 +39,7 @@ export class ChallengesList {
           finished: progress?.progress.finished ?? false,
           line: progress ? progressLine(progress) : '',
           percent: progress ? progressPercent(progress) : 0,
-          period: periodLine(challenge),
+          period: periodLine(challenge, this.dates),
         };
       })
       // Running ones first, then the latest to start; names settle ties.

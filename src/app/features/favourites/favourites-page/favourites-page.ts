@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -14,13 +13,14 @@ import { liveQuerySignal } from '../../../core/data/live-query';
 import { fieldError } from '../../../ui/field-errors';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { readerToday } from '../../../core/time/reader-today';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'Book', author: 'Author', quote: 'Quote' };
 
 /** Favourite books, authors and quotes, each with why; and a pick for each month of the year. */
 @Component({
   selector: 'll-favourites-page',
-  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
   templateUrl: './favourites-page.html',
   styleUrl: './favourites-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

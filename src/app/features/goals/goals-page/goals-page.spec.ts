@@ -38,6 +38,9 @@ describe('GoalsPage', () => {
     it('sets a yearly goal in books, writing the year’s one row, and paces it', async () => {
       await open();
       expect(textOf(element().querySelector('h1'))).toBe('Goals for 2026');
+      // No target until the reader sets one: empty fields, no pace drawn.
+      expect(field(element(), 'Books this year').value).toBe('');
+      expect(element().querySelector('ll-pace-bar')).toBeNull();
       const before = await db().outbox.count();
       type(field(element(), 'Books this year'), '12');
       element().querySelector<HTMLButtonElement>('.targets-form button[type="submit"]')!.click();
@@ -58,6 +61,9 @@ describe('GoalsPage', () => {
       const card = element().querySelector('li.unit[data-unit="books"]')!;
       expect(textOf(card.querySelector('.so-far'))).toBe('3 of 12 books');
       expect(textOf(card.querySelector('.message'))).toBe('About 0.3 books a week from now gets you there');
+      // Our own picture of the pace: one bar, with the even-pace marker at 5.95 of 12.
+      expect(card.querySelector('ll-pace-bar [role="img"]')?.getAttribute('aria-label')).toBe('3 of 12 books read; an even pace would be at 6 today.');
+      expect(card.textContent).not.toContain('ahead of an even pace');
       const figures = Array.from(card.querySelectorAll('dd')).map(textOf);
       expect(figures).toEqual(['6', '3', '\u22123', '0.3', '9.6']);
       expect(element().querySelector('li.unit[data-unit="pages"]')).toBeNull();

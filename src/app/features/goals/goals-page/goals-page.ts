@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -24,6 +23,8 @@ import { goalAmount, goalFigure, signedFigure, UNIT_LABELS } from '../../../ui/g
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { OneAtATime } from '../../../core/tasks/one-at-a-time';
 import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
+import { ReaderDatePipe } from '../../../ui/reader-date';
+import { PaceBar } from '../pace-bar/pace-bar';
 
 type OtherGoal = NonNullable<YearPlan['otherGoals']>[number];
 
@@ -36,7 +37,18 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 10_000, pages: 
  */
 @Component({
   selector: 'll-goals-page',
-  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule],
+  imports: [
+    ReaderDatePipe,
+    ReactiveFormsModule,
+    RouterLink,
+    MatButtonModule,
+    MatCheckboxModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressBarModule,
+    PaceBar,
+  ],
   templateUrl: './goals-page.html',
   styleUrl: './goals-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

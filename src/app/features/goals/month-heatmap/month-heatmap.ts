@@ -1,11 +1,11 @@
-import { formatDate } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
 import { goalAmount } from '../../../ui/goal-figures';
 import { HeatmapLegend } from '../../../ui/heatmap-legend/heatmap-legend';
 import { monthHeatmap } from './month-heatmap-cells';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 /**
  * A month's reading as a small calendar, one cell per day, darker for more minutes. It is one
@@ -34,6 +34,7 @@ import { monthHeatmap } from './month-heatmap-cells';
 export class MonthHeatmap {
   /** The month, 'YYYY-MM'. */
   readonly month = input.required<string>();
+  private readonly dates = inject(ReaderSettings);
   /** Minutes and pages per local day (more days than the month is fine). */
   readonly log = input.required<readonly DailyLogEntry[]>();
 
@@ -44,9 +45,9 @@ export class MonthHeatmap {
   /** The text alternative: the month's totals and its fullest day. */
   protected readonly description = computed(() => {
     const { readingDays, minutes, pages, busiest, days } = this.heatmap();
-    const name = formatDate(`${this.month()}-01`, 'LLLL yyyy', 'en');
+    const name = this.dates.format(this.month(), 'month');
     if (readingDays === 0) return `Reading in ${name}: no reading logged yet.`;
-    const most = busiest ? ` The most on ${formatDate(busiest.day, 'd MMMM', 'en')}: ${goalAmount(busiest.minutes, 'minutes')}.` : '';
+    const most = busiest ? ` The most on ${this.dates.format(busiest.day, 'dayMonth')}: ${goalAmount(busiest.minutes, 'minutes')}.` : '';
     return `Reading in ${name}: ${readingDays} of ${days.length} days with reading, ${goalAmount(minutes, 'minutes')} and ${goalAmount(pages, 'pages')} in all.${most}`;
   });
 }

@@ -51,7 +51,7 @@ describe('MonthPage', () => {
     fixture = TestBed.createComponent(MonthPage);
     fixture.componentRef.setInput('year', year);
     fixture.componentRef.setInput('month', month);
-    await until(fixture, () => element().querySelector('#days-heading'), 'the page');
+    await until(fixture, () => element().querySelector('#account-heading'), 'the page');
   }
 
   it('shows the month, a link up to its year and to the months either side', async () => {
@@ -83,28 +83,50 @@ describe('MonthPage', () => {
 
   it('puts the month’s targets beside what was read, writing the month’s one row', async () => {
     await open();
-    expect(textOf(element())).toContain('Read this month: 1 book · 30 pages · 95 minutes');
+    // From the sessions (LA days): 2 June, 20 June twice → 3 sessions, 95 minutes, 2 days.
+    expect(Array.from(element().querySelectorAll('.tally li')).map(textOf)).toEqual(['3 sessions', '95 minutes read', '2 days with reading', '0 quotes kept']);
     type(field(element(), 'Books this month'), '2');
     type(field(element(), 'Minutes this month'), '600');
     element().querySelector<HTMLButtonElement>('.targets-form button[type="submit"]')!.click();
     await until(fixture, () => element().querySelectorAll('.progress li').length === 2, 'the progress');
-    expect(Array.from(element().querySelectorAll('.progress li')).map(textOf)).toEqual(['Books 1 of 2 books · 1 to go', 'Minutes 95 of 600 minutes · 505 to go']);
+    expect(
+      Array.from(element().querySelectorAll('.progress li')).map((row) => textOf(row.querySelector('.unit')) + ' ' + textOf(row.querySelector('.unit + span'))),
+    ).toEqual(['Books 1 of 2 books · 1 to go', 'Minutes 95 of 600 minutes · 505 to go']);
     expect(await plan()).toEqual(jasmine.objectContaining({ month: '2026-06', booksTarget: 2, minutesTarget: 600, deleted: false }));
     expect((await plan())?.pagesTarget).toBeUndefined();
   });
 
-  it('lists the books finished that month, and keeps a favourite and a least favourite among them', async () => {
+  it('lists the books started, finished and set aside that month, and keeps a favourite; no least favourite', async () => {
     await store.write('books', BOOK.ferry, { status: 'finished', statusChangedAt: '2026-06-30T20:00:00.000Z' });
+    await store.create('bookStatusChanges', { bookId: BOOK.owl, status: 'reading', changedAt: '2026-06-03T16:00:00.000Z' });
+    await store.create('bookStatusChanges', { bookId: BOOK.eve, status: 'dnf', changedAt: '2026-06-12T16:00:00.000Z' });
+    await store.create('quotes', { bookId: BOOK.harrow, text: 'The light held.', capturedAt: '2026-06-20T18:05:00.000Z' });
     await open();
-    await until(fixture, () => element().querySelectorAll('.books li a').length === 2, 'the books');
-    expect(Array.from(element().querySelectorAll('.books li')).map(textOf)).toEqual(['Harrow Light 20 June', 'The Blue Ferry 30 June']);
+    await until(fixture, () => element().querySelectorAll('[aria-labelledby="finished-heading"] li a').length === 2, 'the books');
+    const listed = (heading: string) => Array.from(element().querySelectorAll(`[aria-labelledby="${heading}"] li`)).map(textOf);
+    // Harrow Light's reading began on 1 June (the seed); An Owl at Dusk moved to reading on 3 June.
+    expect(listed('started-heading')).toEqual(['Harrow Light', 'An Owl at Dusk']);
+    expect(listed('finished-heading')).toEqual(['Harrow Light 20 June', 'The Blue Ferry 30 June']);
+    expect(listed('abandoned-heading')).toEqual(['Evening Tide']);
+    await until(fixture, () => textOf(element().querySelector('.tally'))?.includes('1 quote kept') ?? false, 'the quote counted');
 
-    const [favourite, least] = Array.from(element().querySelectorAll<HTMLSelectElement>('.picks select'));
-    expect(Array.from(favourite.options).map((option) => option.text)).toEqual(['Not chosen', 'Harrow Light', 'The Blue Ferry']);
-    choose(favourite, BOOK.harrow);
-    choose(least, BOOK.ferry);
-    await until(fixture, () => least.value === BOOK.ferry, 'the choice');
-    expect(await plan()).toEqual(jasmine.objectContaining({ favouriteBookId: BOOK.harrow, leastFavouriteBookId: BOOK.ferry }));
+    const selects = Array.from(element().querySelectorAll<HTMLSelectElement>('label.native select'));
+    expect(selects.length).toBe(1);
+    expect(textOf(element())).not.toContain('Least favourite');
+    expect(Array.from(selects[0]!.options).map((option) => option.text)).toEqual(['Not chosen', 'Harrow Light', 'The Blue Ferry']);
+    choose(selects[0]!, BOOK.harrow);
+    await until(fixture, () => selects[0]!.value === BOOK.harrow, 'the choice');
+    expect(await plan()).toEqual(jasmine.objectContaining({ favouriteBookId: BOOK.harrow }));
+  });
+
+  it('draws the pace against the month’s plan as a bar with the even-pace marker', async () => {
+    // Today is 1 July in these specs: June is over, so an even pace stands at the whole target.
+    await store.write('monthPlans', planId, { month: '2026-06', minutesTarget: 600, deleted: false });
+    await open();
+    await until(fixture, () => element().querySelector('.progress li[data-unit="minutes"] ll-pace-bar [role="img"]'), 'the pace');
+    expect(element().querySelector('.progress ll-pace-bar [role="img"]')?.getAttribute('aria-label')).toBe(
+      '95 of 600 minutes read; an even pace would be at 600 today.',
+    );
   });
 
   it('keeps the reader’s look back at the month', async () => {

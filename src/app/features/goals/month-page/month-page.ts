@@ -1,38 +1,43 @@
-import { DatePipe, formatDate } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 
 import { booksFinishedIn } from '@shared/challenges/books-finished-in';
 import { amountsInLog, monthPeriod } from '@shared/goals/amounts-in';
 import { GOAL_UNITS, type GoalUnit } from '@shared/goals/goal-unit';
+import { monthAccount } from '@shared/goals/month-account';
 import { monthProgress } from '@shared/goals/month-progress';
 import { deterministicId } from '@shared/sync/deterministic-id';
-import type { MonthPlan } from '@shared/sync/schema/collections';
+import type { BookStatusChange, MonthPlan, Quote } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
+import { liveQuerySignal } from '../../../core/data/live-query';
+import { TIME_ZONE } from '../../../core/time/time-zone';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { amountsLine, goalAmount, goalFigure, UNIT_LABELS } from '../../../ui/goal-figures';
+import { goalAmount, goalFigure, UNIT_LABELS } from '../../../ui/goal-figures';
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { MonthHeatmap } from '../month-heatmap/month-heatmap';
+import { PaceBar } from '../pace-bar/pace-bar';
 import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
+import { ReaderDatePipe } from '../../../ui/reader-date';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 /** Largest monthly targets the schema takes, by unit. */
 const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 1_000, pages: 1_000_000, minutes: 50_000 };
 
 /**
- * One month: its targets against what was read, the days read, the books finished, a favourite
- * and a least favourite among them, and the reader's look back.
+ * One month as Lamplight reckons it from the journal: its sessions, minutes, days and quotes kept,
+ * the pace against the reader's plan, the books started, finished and set aside, and the
+ * reader's own notes (with a favourite of the month, if they like).
  */
 @Component({
   selector: 'll-month-page',
-  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MonthHeatmap],
+  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MonthHeatmap, PaceBar],
   templateUrl: './month-page.html',
   styleUrl: './month-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -79,10 +84,33 @@ export class MonthPage {
       title: this.record.bookById().get(finished.id)?.title ?? finished.title,
     }));
   });
+  private readonly timeZone = inject(TIME_ZONE);
+  /** Status changes and quotes: what the month's account reads besides the goal rows. */
+  private readonly journalExtras = liveQuerySignal(
+    async (db) => ({
+      statusChanges: ((await db.rows('bookStatusChanges').toArray()) as BookStatusChange[]).filter((row) => !row.deleted),
+      quotes: ((await db.rows('quotes').toArray()) as Quote[]).filter((row) => !row.deleted),
+    }),
+    { statusChanges: [] as BookStatusChange[], quotes: [] as Quote[] },
+  );
+  protected readonly account = computed(() =>
+    monthAccount({
+      month: this.key() ?? '0000-01',
+      today: this.record.today,
+      timeZone: this.timeZone,
+      sessions: this.record.rows()?.sessions ?? [],
+      readings: this.record.rows()?.readings ?? [],
+      ...this.journalExtras(),
+    }),
+  );
+  private readonly titled = (ids: readonly string[]) => ids.map((id) => ({ id, title: this.record.bookById().get(id)?.title || 'Untitled' }));
+  protected readonly started = computed(() => this.titled(this.account().started));
+  protected readonly abandoned = computed(() => this.titled(this.account().abandoned));
+
   /** Books to choose a favourite from: this month's, and the chosen ones even if they moved. */
   protected readonly choices = computed(() => {
     const list = this.books().map((book) => ({ id: book.id, title: book.title }));
-    for (const id of [this.plan()?.favouriteBookId, this.plan()?.leastFavouriteBookId]) {
+    for (const id of [this.plan()?.favouriteBookId]) {
       if (id && !list.some((book) => book.id === id)) list.push({ id, title: this.record.bookById().get(id)?.title ?? 'A book not on this device yet' });
     }
     return list;
@@ -93,7 +121,6 @@ export class MonthPage {
   protected readonly maxTargets = MAX_TARGETS;
   protected readonly goalAmount = goalAmount;
   protected readonly goalFigure = goalFigure;
-  protected readonly amountsLine = amountsLine;
   protected readonly log = this.record.log;
 
   protected readonly targetsSaved = signal(false);
@@ -118,9 +145,10 @@ export class MonthPage {
       this.targetsSaved.set(false);
     });
     const title = inject(Title);
+    const dates = inject(ReaderSettings);
     effect(() => {
       const key = this.key();
-      if (key) title.setTitle(`${formatDate(`${key}-01`, 'LLLL yyyy', 'en')} · Lamplight`);
+      if (key) title.setTitle(`${dates.format(key, 'month')} · Lamplight`);
     });
   }
 
@@ -134,7 +162,7 @@ export class MonthPage {
     this.targetsSaved.set(true);
   }
 
-  protected choose(field: 'favouriteBookId' | 'leastFavouriteBookId', bookId: string): Promise<void> {
+  protected choose(field: 'favouriteBookId', bookId: string): Promise<void> {
     return this.writePlan({ [field]: bookId || null });
   }
 

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, input, viewChild } from '@angular/core';
 import {
   ArcElement,
   BarController,
@@ -47,6 +47,8 @@ import { chartConfig } from './chart-config';
   ],
   templateUrl: './insights-chart.html',
   styleUrl: './insights-chart.scss',
+  // A window resize or a tablet turned: measure the box again (chart.js alone can miss a box that only shrank).
+  host: { '(window:resize)': 'fitToBox()', '(window:orientationchange)': 'fitToBox()' },
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class InsightsChart {
@@ -54,6 +56,7 @@ export class InsightsChart {
   /** What the chart is called in its table's caption, e.g. 'Minutes per month'. */
   readonly name = input.required<string>();
 
+  private readonly chart = viewChild(BaseChartDirective);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef).nativeElement;
   private readonly reduceMotion = matchMedia('(prefers-reduced-motion: reduce)').matches;
 
@@ -70,4 +73,9 @@ export class InsightsChart {
       }),
     }));
   });
+
+  /** Redraws the chart at its box's size now. */
+  protected fitToBox(): void {
+    this.chart()?.chart?.resize();
+  }
 }

@@ -2,44 +2,53 @@ import { MONTH_NAMES } from '@shared/calendar/month-names';
 import { yearHeatmap, type HeatmapCell } from '@shared/reading-log/year-heatmap';
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
-/** A year of days laid out in week columns, Monday at the top (ISO 8601 weeks start on Monday). */
+/** One small month calendar: its days in weekday columns, Monday first (ISO 8601 weeks start on Monday). */
+export interface MonthCalendar {
+  /** 1–12. */
+  readonly month: number;
+  readonly name: string;
+  /** Empty places before the 1st, so it sits under its weekday. */
+  readonly leading: number;
+  /** The month's days; `column` 1 is Monday, `week` 1 the row of the 1st. */
+  readonly cells: readonly (HeatmapCell & { readonly column: number; readonly week: number })[];
+  readonly days: number;
+  readonly minutes: number;
+}
+
+/** The year as twelve small month calendars, and its totals. */
 export interface YearHeatmapLayout {
-  readonly cells: readonly (HeatmapCell & { readonly column: number; readonly row: number })[];
-  /** Where each month's label ('Jan') sits: the column of the week holding its first day. */
-  readonly months: readonly { readonly name: string; readonly column: number }[];
-  readonly columns: number;
-  /** Minutes and reading days of each month, for the table. */
-  readonly totals: readonly { readonly name: string; readonly days: number; readonly minutes: number }[];
+  readonly months: readonly MonthCalendar[];
+  /** Every day of the year in order, for counts. */
+  readonly cells: readonly HeatmapCell[];
   readonly readingDays: number;
   readonly minutes: number;
   readonly fullest: HeatmapCell | null;
 }
 
 /**
- * The cells of `year` with their grid positions (1-based): row 1 is Monday, column 1 the week of
- * 1 January, however few of its days are in the year.
+ * The days of `year` as twelve month calendars, each day under its weekday.
  *
  * @example
- * yearHeatmapLayout([], 2026).cells[0] // 1 Jan 2026 is a Thursday: { day: '2026-01-01', row: 4, column: 1, … }
+ * yearHeatmapLayout([], 2026).months[0] // January 2026 starts on a Thursday: { leading: 3, cells[0]: { column: 4, week: 1 } … }
  */
 export function yearHeatmapLayout(log: readonly DailyLogEntry[], year: number): YearHeatmapLayout {
-  const days = yearHeatmap(log, year);
-  const lead = mondayBased(days[0].day);
-  const cells = days.map((cell, index) => ({ ...cell, row: ((lead + index) % 7) + 1, column: Math.floor((lead + index) / 7) + 1 }));
-  const months = MONTH_NAMES.map((name, index) => ({
-    name: name.slice(0, 3),
-    column: cells.find((cell) => Number(cell.day.slice(5, 7)) === index + 1)?.column ?? 1,
-  }));
-  const totals = MONTH_NAMES.map((name, index) => {
+  const cells = yearHeatmap(log, year);
+  const months = MONTH_NAMES.map((name, index): MonthCalendar => {
     const inMonth = cells.filter((cell) => Number(cell.day.slice(5, 7)) === index + 1);
-    return { name, days: inMonth.filter((cell) => cell.minutes > 0).length, minutes: inMonth.reduce((sum, cell) => sum + cell.minutes, 0) };
+    const leading = mondayBased(inMonth[0]!.day);
+    return {
+      month: index + 1,
+      name,
+      leading,
+      cells: inMonth.map((cell, day) => ({ ...cell, column: ((leading + day) % 7) + 1, week: Math.floor((leading + day) / 7) + 1 })),
+      days: inMonth.filter((cell) => cell.minutes > 0).length,
+      minutes: inMonth.reduce((sum, cell) => sum + cell.minutes, 0),
+    };
   });
   const read = cells.filter((cell) => cell.minutes > 0);
   return {
-    cells,
     months,
-    columns: cells[cells.length - 1].column,
-    totals,
+    cells,
     readingDays: read.length,
     minutes: read.reduce((sum, cell) => sum + cell.minutes, 0),
     fullest: read.reduce<HeatmapCell | null>((best, cell) => (best === null || cell.minutes > best.minutes ? cell : best), null),

@@ -1,10 +1,10 @@
-import { formatDate } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
 import { HeatmapLegend } from '../../../ui/heatmap-legend/heatmap-legend';
 import { yearHeatmapLayout } from './year-heatmap-layout';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 /**
  * Every day of a year as a small square, darker for more minutes, in week columns. The grid is
@@ -19,16 +19,16 @@ import { yearHeatmapLayout } from './year-heatmap-layout';
 })
 export class YearHeatmap {
   readonly year = input.required<number>();
+  protected readonly dates = inject(ReaderSettings);
   /** Minutes and pages per local day (other years are fine). */
   readonly log = input.required<readonly DailyLogEntry[]>();
 
-  protected readonly weekdays = ['Mon', '', 'Wed', '', 'Fri', '', ''];
   protected readonly layout = computed(() => yearHeatmapLayout(this.log(), this.year()));
 
   protected readonly summary = computed(() => {
     const { readingDays, minutes, fullest, cells } = this.layout();
     if (readingDays === 0) return `No reading sessions logged in ${this.year()} yet.`;
-    const most = fullest ? ` The fullest day: ${formatDate(fullest.day, 'd MMMM', 'en')}, ${duration(fullest.minutes)}.` : '';
+    const most = fullest ? ` The fullest day: ${this.dates.format(fullest.day, 'dayMonth')}, ${duration(fullest.minutes)}.` : '';
     return `${readingDays} of ${cells.length} days with reading in ${this.year()}, ${duration(minutes)} in all.${most}`;
   });
 

@@ -3,26 +3,27 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 
-import { MONTH_NAMES } from '@shared/calendar/month-names';
-import { formatSplit } from '@shared/insights/format-split';
 import { yearReview } from '@shared/insights/year-review';
+import { type ShelfSpine, yearShelf } from '@shared/insights/year-shelf';
 import { deterministicId } from '@shared/sync/deterministic-id';
 
 import { Auth } from '../../../core/auth/auth';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 import { goalAmount } from '../../../ui/goal-figures';
-import { InsightsChart } from '../insights-chart/insights-chart';
-import { formatsChart } from '../insights-figures';
 import { insightsYear } from '../insights-year';
-import { YearHeatmap } from '../year-heatmap/year-heatmap';
 import { saveAsPng } from './save-as-png';
+import { shelfWords, titleAndAuthors } from './shelf-words';
+
+const FORMAT_WORDS = { print: 'print', ebook: 'ebook', audiobook: 'audiobook' } as const;
 
 /**
- * The reader's year on one card: the totals, the best and highest rated books, the busiest
- * month, formats and every day of reading, savable as a PNG image to keep or share.
+ * The year's shelf: every book finished in the year as a spine (taller for a longer book, coloured
+ * and patterned by format, in the order finished), a few sentences about the year, savable as a
+ * PNG image to keep or share.
  */
 @Component({
   selector: 'll-year-review',
-  imports: [RouterLink, MatButtonModule, MatIconModule, InsightsChart, YearHeatmap],
+  imports: [RouterLink, MatButtonModule, MatIconModule],
   templateUrl: './year-review.html',
   styleUrl: './year-review.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -48,20 +49,28 @@ export class YearReview {
     const bestBookId = record.rows()?.yearPlans.find((plan) => plan.id === planId)?.bestBookId;
     return yearReview({ year, today: record.today, finished: record.finished(), books: record.bookById(), log: this.log(), bestBookId });
   });
-  protected readonly formats = computed(() => formatsChart(formatSplit(this.data.books()), this.shownYear() ?? 0));
-  protected readonly busiestMonth = computed(() => {
-    const month = this.review().busiestMonth;
-    return month ? MONTH_NAMES[Number(month.month.slice(5, 7)) - 1] : null;
-  });
-  protected readonly hours = computed(() => Math.round(this.review().minutes / 60).toLocaleString('en'));
-  protected readonly goalAmount = goalAmount;
+  private readonly dates = inject(ReaderSettings);
+  protected readonly spines = computed(() => yearShelf(this.data.record.finished(), this.data.record.bookById(), this.shownYear() ?? 0));
+  protected readonly words = computed(() => shelfWords(this.shownYear() ?? 0, this.review(), this.spines(), this.dates));
+  protected readonly chosen = signal<ShelfSpine | null>(null);
+  protected readonly formats = (['print', 'ebook', 'audiobook'] as const).map((format) => ({ format, words: FORMAT_WORDS[format] }));
+
+  /** What a spine says when pointed at or tapped: title, authors, length, format and finish day. */
+  protected spineLine(spine: ShelfSpine): string {
+    const length = spine.pages === null || spine.format === 'audiobook' ? '' : `, ${goalAmount(spine.pages, 'pages')}`;
+    return `${titleAndAuthors(spine)}${length} · ${FORMAT_WORDS[spine.format]} · finished ${this.dates.format(spine.finishedOn, 'dayMonth')}`;
+  }
+
+  protected choose(spine: ShelfSpine): void {
+    this.chosen.set(this.chosen()?.id === spine.id ? null : spine);
+  }
 
   protected async save(): Promise<void> {
     const card = this.card()?.nativeElement;
     if (!card || this.saving()) return;
     this.saving.set(true);
     this.saveMessage.set(null);
-    const fileName = `lamplight-${this.shownYear()}-in-review.png`;
+    const fileName = `lamplight-${this.shownYear()}-shelf.png`;
     try {
       await saveAsPng(card, fileName);
       this.saveMessage.set(`Saved as ${fileName} in your downloads. It stays on this device until you share it.`);

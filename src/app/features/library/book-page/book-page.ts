@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -24,6 +23,7 @@ import { Deletions } from '../../../core/trash/deletions';
 import { askToConfirm } from '../../../ui/confirm-dialog/ask-to-confirm';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { companionLine } from '@shared/trash/companion-words';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** Everything the reader keeps about one book, on this device, together with what is linked to it. */
 interface BookDossier {
@@ -52,7 +52,7 @@ async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
 @Component({
   selector: 'll-book-page',
   imports: [
-    DatePipe,
+    ReaderDatePipe,
     RouterLink,
     MatButtonModule,
     MatIconModule,

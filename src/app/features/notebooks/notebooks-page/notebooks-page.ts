@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -16,11 +15,12 @@ import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors
 import { bookOptions, summarizeNotebooks, type BookOption, type NotebookSummary } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** Every notebook the reader keeps, and a form to start one. */
 @Component({
   selector: 'll-notebooks-page',
-  imports: [DatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates],
+  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates],
   templateUrl: './notebooks-page.html',
   styleUrl: './notebooks-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

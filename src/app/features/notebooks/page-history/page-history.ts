@@ -5,6 +5,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { firstValueFrom } from 'rxjs';
 
 import type { TextVersion, TextVersionsResponse } from '@shared/api/text-history';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 /**
  * A page's earlier versions (the last 30 days, one per ten minutes of editing, kept by the
@@ -20,6 +21,7 @@ import type { TextVersion, TextVersionsResponse } from '@shared/api/text-history
 })
 export class PageHistory {
   private readonly http = inject(HttpClient);
+  private readonly dates = inject(ReaderSettings);
 
   /** The page whose history this is. */
   readonly pageId = input.required<string>();
@@ -54,6 +56,6 @@ export class PageHistory {
   }
 
   protected when(version: TextVersion): string {
-    return new Date(version.savedAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+    return this.dates.format(version.savedAt, 'dayTime');
   }
 }

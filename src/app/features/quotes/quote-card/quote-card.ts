@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -13,11 +12,12 @@ import { LabelChips } from '../../../ui/label-chips/label-chips';
 import { authorLine } from '../../../ui/book-labels';
 import { QuoteCapture } from '../quote-capture';
 import { undoableDelete } from '../../../ui/undoable-delete';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** One quote with where it is from, and what can be done with it: favourite, copy, edit, delete. */
 @Component({
   selector: 'll-quote-card',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, LabelChips],
+  imports: [ReaderDatePipe, RouterLink, MatButtonModule, MatIconModule, LabelChips],
   templateUrl: './quote-card.html',
   styleUrl: './quote-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

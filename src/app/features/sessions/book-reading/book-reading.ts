@@ -1,5 +1,4 @@
-import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
@@ -16,6 +15,8 @@ import { bookForecast, bookProgress } from '../book-forecast';
 import { bookEnd, minutesLine, MOOD_LABELS, positionLine, progressLine } from '../book-position';
 import { latestPosition, newestFirst } from '../../../core/read-model/reading-sessions';
 import { undoableDelete } from '../../../ui/undoable-delete';
+import { ReaderDatePipe } from '../../../ui/reader-date';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 
 /** One line of the session list. */
 interface SessionLine {
@@ -33,7 +34,7 @@ interface SessionLine {
  */
 @Component({
   selector: 'll-book-reading',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule],
+  imports: [ReaderDatePipe, RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule],
   templateUrl: './book-reading.html',
   styleUrl: './book-reading.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -46,11 +47,7 @@ export class BookReading {
   private readonly deleteWithUndo = undoableDelete();
   private readonly timeZone = inject(TIME_ZONE);
   private readonly clock = inject(CLOCK);
-  private readonly whenFormat = new Intl.DateTimeFormat(inject(LOCALE_ID), {
-    dateStyle: 'medium',
-    timeStyle: 'short',
-    timeZone: this.timeZone,
-  });
+  private readonly dates = inject(ReaderSettings);
 
   private readonly allSessions = liveQuerySignal((db) => db.current('sessions'), [] as Session[]);
   private readonly books = liveQuerySignal((db) => db.rows('books').toArray(), [] as Book[]);
@@ -80,7 +77,7 @@ export class BookReading {
   protected readonly lines = computed<SessionLine[]>(() =>
     this.sessions().map((session) => ({
       id: session.id,
-      when: session.startedAt ? this.whenFormat.format(new Date(session.startedAt)) : 'Some time',
+      when: session.startedAt ? this.dates.format(session.startedAt, 'dayTime') : 'Some time',
       minutes: session.activeMinutes == null ? '' : minutesLine(session.activeMinutes),
       span: this.span(session),
       mood: session.mood ? MOOD_LABELS[session.mood] : '',

@@ -4,17 +4,17 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { DatePipe } from '@angular/common';
 
 import type { DeviceSessionView } from '@shared/api/devices';
 
 import { readableError } from '../../../core/http/api-error-message';
 import { DevicesApi } from './devices-api';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** The reader's signed-in devices: rename one, or sign out a lost one. Needs a connection. */
 @Component({
   selector: 'll-devices',
-  imports: [FormsModule, DatePipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  imports: [FormsModule, ReaderDatePipe, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
   templateUrl: './devices.html',
   styleUrl: './devices.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -22,6 +21,7 @@ import { ReadingTimer, TIMER_ROW_ID } from '../reading-timer';
 import { ScreenAwake } from '../screen-awake';
 import { StopDialog, type StopDialogData } from '../stop-dialog/stop-dialog';
 import { TimerReminders } from '../timer-reminders';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** Targets on offer, in minutes. */
 const TARGETS = [10, 15, 20, 30, 45, 60, 90, 120];
@@ -40,7 +40,7 @@ interface TimerPageData {
  */
 @Component({
   selector: 'll-timer-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MatSlideToggleModule],
+  imports: [ReaderDatePipe, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, MatSlideToggleModule],
   providers: [ScreenAwake],
   templateUrl: './timer-page.html',
   styleUrl: './timer-page.scss',

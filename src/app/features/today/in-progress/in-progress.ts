@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { RouterLink } from '@angular/router';
 
@@ -10,6 +9,7 @@ import { TIME_ZONE } from '../../../core/time/time-zone';
 import { bookForecast, bookProgress } from '../../sessions';
 import { TimerStartButton } from '../../timer';
 import { currentSessionsAndBooks, NO_SESSIONS } from '../today-data';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** One book being read, as the list shows it. */
 interface InProgressLine {
@@ -24,7 +24,7 @@ interface InProgressLine {
 
 @Component({
   selector: 'll-in-progress',
-  imports: [DatePipe, RouterLink, TimerStartButton],
+  imports: [ReaderDatePipe, RouterLink, TimerStartButton],
   templateUrl: './in-progress.html',
   styleUrl: './in-progress.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

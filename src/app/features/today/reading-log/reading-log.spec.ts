@@ -9,6 +9,7 @@ import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
+import { BROWSER_LOCALE } from '../../../core/settings/reader-settings';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { ReadingLog } from './reading-log';
 import { waitFor } from '../../../core/testing/test-journal';
@@ -37,7 +38,12 @@ describe('ReadingLog', () => {
       userId = `log-${crypto.randomUUID()}`;
       rememberSession({ user: { ...READER, id: userId } });
       TestBed.configureTestingModule({
-        providers: [provideHttpClient(), { provide: TIME_ZONE, useValue: timeZone }, { provide: CLOCK, useValue: fixedClock(NOW) }],
+        providers: [
+          provideHttpClient(),
+          { provide: TIME_ZONE, useValue: timeZone },
+          { provide: CLOCK, useValue: fixedClock(NOW) },
+          { provide: BROWSER_LOCALE, useValue: 'en-GB' },
+        ],
       });
       store = TestBed.inject(JournalStore);
       await db().open();
@@ -83,9 +89,11 @@ describe('ReadingLog', () => {
 
     it('lays out 2026 as 365 days, with a summary and month totals as its text', async () => {
       await showWithTheSession();
-      // The week layout itself is checked in year-heatmap-layout.spec.ts.
+      // The calendars' layout itself is checked in year-heatmap-layout.spec.ts.
       expect(element().querySelectorAll('ll-year-heatmap [data-day]').length).toBe(365);
-      expect(element().querySelector('ll-year-heatmap .grid')?.getAttribute('aria-hidden')).toBe('true');
+      expect(element().querySelectorAll('ll-year-heatmap .month').length).toBe(12);
+      expect(element().querySelector('ll-year-heatmap .months')?.getAttribute('aria-hidden')).toBe('true');
+      expect(element().querySelector('ll-year-heatmap ul.legend')?.textContent).toContain('an hour or more');
       expect(shown('ll-year-heatmap figcaption')).toBe('1 of 365 days with reading in 2026, 30 min in all. The fullest day: 7 March, 30 min.');
       const rows = [...element().querySelectorAll('table tbody tr')].map((row) => [...row.children].map((cell) => cell.textContent?.trim()));
       expect(rows.length).toBe(12);

@@ -1,0 +1,47 @@
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIconModule } from '@angular/material/icon';
+
+import { InstallHelpDialog } from './install-help-dialog';
+import { InstallPrompt } from './install-prompt';
+
+/**
+ * Installs Lamplight: the browser's own prompt where it offers one, else (iOS) the steps to add it
+ * to the home screen. Call in an injection context.
+ */
+export function installLamplight(): () => void {
+  const prompt = inject(InstallPrompt);
+  const dialog = inject(MatDialog);
+  return () => {
+    if (prompt.option() === 'ios-how-to') dialog.open(InstallHelpDialog, { width: '440px' });
+    else void prompt.install();
+  };
+}
+
+/** "Install Lamplight" where the browser can install it (Settings), or a line saying it is installed. */
+@Component({
+  selector: 'll-install-button',
+  imports: [MatButtonModule, MatIconModule],
+  template: `
+    @if (offered()) {
+      <button mat-stroked-button type="button" (click)="install()"><mat-icon aria-hidden="true">install_mobile</mat-icon>Install Lamplight</button>
+      <p class="hint">It opens in its own window, works offline and is less likely to have its storage cleared.</p>
+    } @else if (prompt.option() === 'installed') {
+      <p class="hint">Lamplight is installed on this device.</p>
+    }
+  `,
+  styles: `
+    .hint {
+      margin: 6px 0 0;
+      color: var(--mat-sys-on-surface-variant);
+      font: var(--mat-sys-body-small);
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class InstallButton {
+  protected readonly prompt = inject(InstallPrompt);
+  protected readonly offered = computed(() => this.prompt.option() === 'prompt' || this.prompt.option() === 'ios-how-to');
+  protected readonly install = installLamplight();
+}
