@@ -47,7 +47,16 @@ describe('App shell', () => {
     expect(element.querySelector('.brand-name')?.textContent).toBe('Lamplight');
     expect(element.querySelector('.reader-name')?.textContent).toBe('Ilse Varga');
     const links = Array.from(element.querySelectorAll<HTMLAnchorElement>('nav[aria-label="Main"] a'));
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/today', '/library', '/timer', '/journal', '/goals', '/goals/challenges', '/insights']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual([
+      '/today',
+      '/library',
+      '/timer',
+      '/journal',
+      '/goals',
+      '/goals/challenges',
+      '/insights',
+      '/circles',
+    ]);
   });
 
   it('for a signed-in reader, offers an Add action with "Capture a quote" and "Add a book"', async () => {
