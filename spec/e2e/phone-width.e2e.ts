@@ -44,6 +44,9 @@ function routes(ids: { book: string; series: string; notebook: string | null }):
     '/settings',
     '/settings/trash',
     '/settings/your-data',
+    '/loans',
+    '/loans/wishlist',
+    '/circles',
     '/no-such-page',
   ];
 }
