@@ -270,7 +270,7 @@ describe('/api/sync', () => {
       await reader.client.push([fieldChange(randomUUID(), 'title', 'A book with some weight to it', { wall: NOW })]);
       const admin = await registerAdmin(app);
 
-      const users = (await request(app).get('/api/admin/users').set(bearer(admin.accessToken)).expect(200)).body;
+      const users = (await request(app).get('/api/admin/users').set(bearer(admin.accessToken)).expect(200)).body.accounts;
       expect(users.find((u: { id: string }) => u.id === reader.user.id).storedBytes).toBeGreaterThan(0);
 
       await request(app).delete('/api/auth/account').set(bearer(reader.accessToken)).send({ password: GOOD_PASSWORD }).expect(204);

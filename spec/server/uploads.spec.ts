@@ -243,7 +243,7 @@ describe('/api/uploads', () => {
       const one = await registerReader(app);
       const other = await registerReader(app);
       const storedBytes = async (userId: string) =>
-        (await request(app).get('/api/admin/users').set(bearer(admin.accessToken)).expect(200)).body.find((u: { id: string }) => u.id === userId)
+        (await request(app).get('/api/admin/users').set(bearer(admin.accessToken)).expect(200)).body.accounts.find((u: { id: string }) => u.id === userId)
           .storedBytes as number;
       const before = { one: await storedBytes(one.user.id), other: await storedBytes(other.user.id) };
       const shared = uniquePng();

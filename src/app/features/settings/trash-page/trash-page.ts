@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -12,6 +11,7 @@ import type { JournalDb } from '../../../core/data/journal-db';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { Deletions } from '../../../core/trash/deletions';
+import { ReaderDatePipe } from '../../../ui/reader-date';
 import { TRASH_HEADINGS, trashTitle } from './trash-words';
 
 type Deleted = Partial<Record<CollectionName, TrashRow[]>>;
@@ -41,7 +41,7 @@ interface TrashGroup {
 /** Settings › Trash: what was deleted in the last 30 days, by kind, each restorable with what went with it. */
 @Component({
   selector: 'll-trash-page',
-  imports: [DatePipe, RouterLink, MatButtonModule, MatIconModule],
+  imports: [ReaderDatePipe, RouterLink, MatButtonModule, MatIconModule],
   templateUrl: './trash-page.html',
   styleUrl: './trash-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
