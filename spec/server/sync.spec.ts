@@ -270,7 +270,8 @@ describe('/api/sync', () => {
       await reader.client.push([fieldChange(randomUUID(), 'title', 'A book with some weight to it', { wall: NOW })]);
       const admin = await registerAdmin(app);
 
-      const users = (await request(app).get('/api/admin/users').set(bearer(admin.accessToken)).expect(200)).body.accounts;
+      // The list is paged: search for the reader's address so they are on the first page.
+      const users = (await request(app).get('/api/admin/users').query({ q: reader.user.email }).set(bearer(admin.accessToken)).expect(200)).body.accounts;
       expect(users.find((u: { id: string }) => u.id === reader.user.id).storedBytes).toBeGreaterThan(0);
 
       await request(app).delete('/api/auth/account').set(bearer(reader.accessToken)).send({ password: GOOD_PASSWORD }).expect(204);

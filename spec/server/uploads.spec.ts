@@ -242,10 +242,12 @@ describe('/api/uploads', () => {
       const admin = await registerAdmin(app);
       const one = await registerReader(app);
       const other = await registerReader(app);
-      const storedBytes = async (userId: string) =>
-        (await request(app).get('/api/admin/users').set(bearer(admin.accessToken)).expect(200)).body.accounts.find((u: { id: string }) => u.id === userId)
-          .storedBytes as number;
-      const before = { one: await storedBytes(one.user.id), other: await storedBytes(other.user.id) };
+      // The list is paged: search for the reader's address so they are on the first page.
+      const storedBytes = async (user: { id: string; email: string }) =>
+        (await request(app).get('/api/admin/users').query({ q: user.email }).set(bearer(admin.accessToken)).expect(200)).body.accounts.find(
+          (u: { id: string }) => u.id === user.id,
+        ).storedBytes as number;
+      const before = { one: await storedBytes(one.user), other: await storedBytes(other.user) };
       const shared = uniquePng();
       const own = uniquePng({ padding: 100 });
 
@@ -254,8 +256,8 @@ describe('/api/uploads', () => {
       await upload(app, other.accessToken, shared).expect(201);
       await upload(app, one.accessToken, own).expect(200); // a repeat adds nothing
 
-      expect(await storedBytes(one.user.id)).toBe(before.one + shared.length + own.length);
-      expect(await storedBytes(other.user.id)).toBe(before.other + shared.length);
+      expect(await storedBytes(one.user)).toBe(before.one + shared.length + own.length);
+      expect(await storedBytes(other.user)).toBe(before.other + shared.length);
     });
   });
 

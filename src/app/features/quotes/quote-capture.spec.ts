@@ -165,7 +165,7 @@ describe('QuoteCapture and its dialog', () => {
   it('while it holds a passage, keeps updates from reloading and a stray tap from closing it', async () => {
     const unsaved = TestBed.inject(UnsavedWork);
     const saved = capture.open();
-    await until(() => dialog(), 'the dialog');
+    await until(() => find('The passage'), 'the dialog and its fields'); // the fields render after the dialog's host
     expect(unsaved.present()).toBeFalse();
 
     type('The passage', 'Half a thought');
