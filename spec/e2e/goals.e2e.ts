@@ -88,9 +88,10 @@ describe('Goals and challenges, offline', () => {
 
     // This month's page lists both books.
     await page.locator('.months li.now a').click();
-    await page.getByRole('heading', { name: 'Books finished' }).waitFor();
-    await waitForWords(page, '.books', 'The Quiet Orchard');
-    expect(await words(page, '.books')).toContain('Brine and Bellflower');
+    await page.getByRole('heading', { name: 'Finished', exact: true }).waitFor();
+    const finished = 'ul.books[aria-labelledby="finished-heading"]';
+    await waitForWords(page, finished, 'The Quiet Orchard');
+    expect(await words(page, finished)).toContain('Brine and Bellflower');
     expect(await page.locator('ll-month-heatmap [role="img"]').getAttribute('aria-label')).toMatch(/^Reading in [A-Z][a-z]+ \d{4}: /);
     expect(await seriousViolations(page)).toEqual([]);
     await page.getByRole('link', { name: `Up to ${year}` }).waitFor();
