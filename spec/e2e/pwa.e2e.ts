@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { cpSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { brotliCompressSync, gzipSync } from 'node:zlib';
 
 import { BUILT_APP_DIR, startTestServer, type RunningServer } from '../support/test-server';
 import { launchProfile, offOrigin, recordRequests } from './support/browser';
@@ -83,4 +84,10 @@ function publishNewVersion(dir: string): void {
   ngsw.hashTable['/index.html'] = createHash('sha1').update(html).digest('hex');
   ngsw.timestamp = Date.now();
   writeFileSync(ngswFile, JSON.stringify(ngsw, null, 2));
+  // A build writes its compressed copies too (scripts/precompress.mjs), and the server serves those.
+  for (const file of [indexFile, ngswFile]) {
+    const content = readFileSync(file);
+    writeFileSync(`${file}.gz`, gzipSync(content));
+    writeFileSync(`${file}.br`, brotliCompressSync(content));
+  }
 }

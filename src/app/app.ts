@@ -3,6 +3,7 @@ import { RouterOutlet } from '@angular/router';
 
 import { Auth } from './core/auth/auth';
 import { InstallPrompt } from './core/pwa/install-prompt';
+import { VersionReady } from './core/pwa/version-ready';
 import { SignedInShell } from './signed-in-shell';
 
 /**
@@ -21,6 +22,7 @@ export class App {
 
   constructor() {
     inject(InstallPrompt); // listens from the start: the browser offers installing once, maybe before sign-in
+    inject(VersionReady); // listens from the start: the worker may announce a new version before the prompts load
     const injector = inject(Injector);
     let destroyed = false;
     inject(DestroyRef).onDestroy(() => (destroyed = true));

@@ -5,6 +5,7 @@ import { SwUpdate, type VersionReadyEvent } from '@angular/service-worker';
 import { filter } from 'rxjs';
 
 import { PAGE_RELOAD } from './page-reload';
+import { VersionReady } from './version-ready';
 import { UnsavedWork } from './unsaved-work';
 
 /** Look for a new version this often while the app is open (and whenever it becomes visible). */
@@ -32,6 +33,8 @@ export class AppUpdates {
         takeUntilDestroyed(destroyRef),
       )
       .subscribe(() => this.offerReload());
+    // Announced before this service loaded (after the first render): offer it now.
+    if (inject(VersionReady).seen()) this.offerReload();
     this.updates.unrecoverable.pipe(takeUntilDestroyed(destroyRef)).subscribe(() => {
       // Reload once the message has been read: reloading at once would take it away unseen.
       this.snackBar

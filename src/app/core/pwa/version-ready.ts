@@ -1,0 +1,21 @@
+import { Injectable, inject, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { SwUpdate } from '@angular/service-worker';
+
+/**
+ * Whether the service worker has said a new version is ready. Listens from the start: the update
+ * prompts (`AppUpdates`) load after the first render, and the worker's own check on navigation can
+ * announce the version before they listen (its events are not replayed).
+ */
+@Injectable({ providedIn: 'root' })
+export class VersionReady {
+  readonly seen = signal(false);
+
+  constructor() {
+    const updates = inject(SwUpdate);
+    if (!updates.isEnabled) return;
+    updates.versionUpdates.pipe(takeUntilDestroyed()).subscribe((event) => {
+      if (event.type === 'VERSION_READY') this.seen.set(true);
+    });
+  }
+}
