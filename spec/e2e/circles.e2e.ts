@@ -116,5 +116,5 @@ describe('Reading circles in three browsers', () => {
     for (let i = 0; i < 100 && (await pending()) > 0; i++) await new Promise((resolve) => setTimeout(resolve, 100));
     expect(await pending()).toBe(0);
     expect(await overflows(bram.page)).toBeFalse();
-  }, 180_000);
+  }, 300_000);
 });
