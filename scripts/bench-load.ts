@@ -14,6 +14,7 @@
 import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import http from 'node:http';
+import path from 'node:path';
 
 import { quantile } from 'simple-statistics';
 
@@ -27,7 +28,15 @@ import { signAccessToken } from '../sync-server/src/domain/access-tokens';
 import { startCluster, startInstance } from './ops/cluster';
 import { stopChild } from './ops/processes';
 
-const flag = (name: string, fallback: number) => Number(process.argv.find((arg) => arg.startsWith(`--${name}=`))?.split('=')[1] ?? fallback);
+/** `--name=value` or `--name value`. */
+function flag(name: string, fallback: number): number {
+  const args = process.argv;
+  const joined = args.find((arg) => arg.startsWith(`--${name}=`));
+  if (joined) return Number(joined.slice(name.length + 3));
+  const at = args.indexOf(`--${name}`);
+  return at >= 0 && args[at + 1] !== undefined ? Number(args[at + 1]) : fallback;
+}
+const PROFILE = process.argv.includes('--profile');
 const SECONDS = flag('seconds', 30);
 const CONNECTIONS = flag('connections', 50);
 const READERS = flag('readers', 1000);
@@ -202,6 +211,11 @@ async function main(): Promise<void> {
   const readers = { heavy: all.slice(0, HEAVY), writers: all.slice(HEAVY, HEAVY + WRITERS), quiet: all.slice(HEAVY + WRITERS) };
   await dataSource.destroy();
 
+  if (PROFILE) {
+    // Profiling looks at one instance only.
+    await profileBaseline(env, readers);
+    return;
+  }
   const cluster = await startCluster({ env, ...(process.argv.includes('--pgbouncer') ? { pgBouncerPort: 0 } : {}) });
   let clusterRows: ReturnType<typeof report>;
   try {
@@ -236,7 +250,9 @@ async function main(): Promise<void> {
     await cluster.stop();
   }
 
-  const single = await startInstance('single', 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false);
+  // --profile: the baseline instance writes a V8 CPU profile (open it in Chrome's DevTools) when it stops.
+  const profiling = PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${path.resolve('.data/profiles')}`] : [];
+  const single = await startInstance('single', 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false, profiling);
   const direct = new URL(`http://127.0.0.1:${single.port}`);
   console.log(`\nBaseline: one instance, no proxy, same mix`);
   let singleRows: ReturnType<typeof report>;
@@ -262,3 +278,20 @@ main().catch((error: unknown) => {
   console.error(error);
   process.exit(1);
 });
+
+async function profileBaseline(env: Record<string, string | undefined>, readers: { quiet: Reader[]; writers: Reader[]; heavy: Reader[] }): Promise<void> {
+  const single = await startInstance('single', 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false, ['--cpu-prof', `--cpu-prof-dir=${path.resolve('.data/profiles')}`]);
+  const direct = new URL(`http://127.0.0.1:${single.port}`);
+  try {
+    await Promise.all(
+      readers.quiet.map(async (reader) => {
+        reader.cursor = (JSON.parse((await send(direct, 'GET', '/api/sync/pull', reader.token)).text) as { cursor: string }).cursor;
+      }),
+    );
+    await drive(direct, readers, WARM_UP_SECONDS);
+    report('single instance (profiled)', await drive(direct, readers, SECONDS));
+  } finally {
+    await stopChild(single.child, 30_000);
+  }
+  agent.destroy();
+}
