@@ -10,7 +10,8 @@ const SWEEP_EVERY_MS = 60_000;
  * An `express-rate-limit` store for limits on hot routes (sync): counts in memory and adds this
  * instance's hits to the shared `attempt_counts` row once per `flushMs` in one statement for all
  * keys, learning the other instances' hits from the same answer. A request therefore costs no
- * database write; across instances the count lags by at most `flushMs`, which a limit of
+ * database write; across instances the count lags by at most `flushMs` after a key's first new
+ * hit here (an instance learns others' hits when it sends its own), which a limit of
  * hundreds a minute does not notice. Within one instance it is exact. Keys are SHA-256 digests
  * like `PostgresAttemptStore`'s, in their own prefix.
  */
