@@ -111,7 +111,9 @@ export function startInstance(
   nodeArgs: readonly string[] = [],
 ): Promise<Instance> {
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, [...nodeArgs, MAIN], { env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'inherit'] });
+    // `LAMPLIGHT_BENCH_SERVER_MAIN` runs another build instead (benchmarks' before/after comparisons).
+    const main = env['LAMPLIGHT_BENCH_SERVER_MAIN'] ?? process.env['LAMPLIGHT_BENCH_SERVER_MAIN'] ?? MAIN;
+    const child = spawn(process.execPath, [...nodeArgs, main], { env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'inherit'] });
     const lines: string[] = [];
     let partial = '';
     let listening = false;
