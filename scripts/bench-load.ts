@@ -1,5 +1,7 @@
 /**
- * `npm run bench:load [-- --seconds=30 --connections=50 --readers=1000 --soak=60 --pgbouncer]`:
+ * `npm run bench:load [-- --seconds 30 --connections 50 --readers 1000 --soak 300 --pgbouncer]`
+ * (`--quick`: 10 s, 200 readers, 20 s soak; `--profile`: one instance only, with a V8 CPU profile
+ * in .data/profiles; `--port-base N`: nginx on N, the instances on N+1…N+4, else free ports):
  * the load budget. A bounded Node client (keep-alive, a fixed number of connections, each
  * sending one request after another) drives a realistic mix for `--seconds`:
  *   80 % pulls with nothing new (readers at the end of their data),
@@ -8,14 +10,14 @@
  * spread over `--readers` throwaway readers, first through nginx in front of three instances,
  * then against one instance without the proxy (the baseline, same run, same database).
  * Then the cluster runs the same mix for `--soak` seconds while each instance's RSS is sampled.
- * Instances log at warn so the bench measures serving, not this machine's log pipe.
+ * Instances log at warn so the bench measures serving, not this machine's log pipe. Besides
+ * latencies it prints the servers' CPU time per request, which other work on a shared machine
+ * moves far less than latency.
  * Goals (issue 23): p99 < 100 ms for empty pulls and small pushes, no errors, flat memory.
  */
 import { randomUUID } from 'node:crypto';
-import { readFileSync } from 'node:fs';
 import http from 'node:http';
-
-import { quantile } from 'simple-statistics';
+import path from 'node:path';
 
 import { HlcClock } from '../shared/sync/hlc';
 import type { FieldChange } from '../shared/api/sync';
@@ -26,29 +28,40 @@ import { SyncStore } from '../sync-server/src/data-access/sync-store';
 import { signAccessToken } from '../sync-server/src/domain/access-tokens';
 import { startCluster, startInstance } from './ops/cluster';
 import { stopChild } from './ops/processes';
+import { cpuSeconds, newTally, printClosing, printSummary, rssMb, summarise, type Kind, type Summary, type Tally } from './bench-support/load-report';
 
-const flag = (name: string, fallback: number) => Number(process.argv.find((arg) => arg.startsWith(`--${name}=`))?.split('=')[1] ?? fallback);
-const SECONDS = flag('seconds', 30);
+/** `--name=value` or `--name value`. */
+function flag(name: string, fallback: number): number {
+  const args = process.argv;
+  const joined = args.find((arg) => arg.startsWith(`--${name}=`));
+  if (joined) return Number(joined.slice(name.length + 3));
+  const at = args.indexOf(`--${name}`);
+  return at >= 0 && args[at + 1] !== undefined ? Number(args[at + 1]) : fallback;
+}
+const PROFILE = process.argv.includes('--profile');
+const QUICK = process.argv.includes('--quick');
+const SECONDS = flag('seconds', QUICK ? 10 : 30);
 const CONNECTIONS = flag('connections', 50);
-const READERS = flag('readers', 1000);
-const SOAK_SECONDS = flag('soak', 60);
-const WARM_UP_SECONDS = 5;
+const READERS = flag('readers', QUICK ? 200 : 1000);
+const SOAK_SECONDS = flag('soak', QUICK ? 20 : 300);
+const PORT_BASE = flag('port-base', 0);
+/** `--compare PATH`: another build's sync-server/src/main.js, run against this one on a single instance in alternating rounds. */
+const COMPARE = (() => {
+  const at = process.argv.findIndex((arg) => arg === '--compare' || arg.startsWith('--compare='));
+  if (at < 0) return null;
+  return process.argv[at]!.includes('=') ? process.argv[at]!.split('=')[1]! : process.argv[at + 1]!;
+})();
+const COMPARE_ROUNDS = 4;
+const WARM_UP_SECONDS = QUICK ? 3 : 5;
 const HEAVY = Math.max(1, Math.round(READERS * 0.05));
 const WRITERS = Math.max(1, Math.round(READERS * 0.15));
 const HEAVY_BOOKS = 500; // × 5 fields = 2,500 changes each
 const SECRET = 'bench-load-secret-bench-load-secret-0123';
 
-type Kind = 'empty pull' | 'small push' | 'big pull';
 interface Reader {
   token: string;
   cursor?: string;
   clock: HlcClock;
-}
-interface Tally {
-  latencies: Record<Kind, number[]>;
-  errors: Record<Kind, number>;
-  statuses: Map<number | string, number>;
-  seconds: number;
 }
 
 const agent = new http.Agent({ keepAlive: true, maxSockets: CONNECTIONS });
@@ -90,13 +103,12 @@ function smallPush(writer: Reader): string {
   return JSON.stringify({ deviceId: 'bench-device', changes });
 }
 
-async function drive(base: URL, readers: { quiet: Reader[]; writers: Reader[]; heavy: Reader[] }, seconds: number, onTick?: () => void): Promise<Tally> {
-  const tally: Tally = {
-    latencies: { 'empty pull': [], 'small push': [], 'big pull': [] },
-    errors: { 'empty pull': 0, 'small push': 0, 'big pull': 0 },
-    statuses: new Map(),
-    seconds,
-  };
+type Readers = { quiet: Reader[]; writers: Reader[]; heavy: Reader[] };
+
+/** Runs the mix for `seconds`; `servers` are the pids whose CPU time is counted. */
+async function drive(base: URL, readers: Readers, seconds: number, servers: (number | undefined)[], onTick?: () => void): Promise<Tally> {
+  const tally = newTally(seconds);
+  const cpuBefore = servers.map(cpuSeconds);
   // A device syncs one request at a time: a reader already in flight is not picked again (the server
   // allows two pulls at once per reader and answers a third with 429, which no real client sends).
   const busy = new Set<Reader>();
@@ -139,33 +151,30 @@ async function drive(base: URL, readers: { quiet: Reader[]; writers: Reader[]; h
     }),
   );
   clearInterval(timer);
+  tally.serverCpuSeconds = servers.reduce<number>((sum, pid, i) => sum + cpuSeconds(pid) - cpuBefore[i]!, 0);
   return tally;
 }
 
-const rssMb = (pid: number | undefined) => {
-  const match = /VmRSS:\s+(\d+) kB/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'));
-  return Math.round(Number(match?.[1]) / 1024);
-};
+function report(label: string, tally: Tally): Summary {
+  const summary = summarise(label, tally);
+  printSummary(summary, tally);
+  return summary;
+}
 
-function report(label: string, tally: Tally): Record<Kind, { rps: number; p50: number; p99: number }> {
-  const total = Object.values(tally.latencies).reduce((sum, list) => sum + list.length, 0);
-  const errors = Object.values(tally.errors).reduce((sum, n) => sum + n, 0);
-  console.log(
-    `\n${label}: ${(total / tally.seconds).toFixed(0)} requests/s, ${errors} errors (statuses: ${[...tally.statuses].map(([s, n]) => `${s}×${n}`).join(', ')})`,
+/** Each quiet reader's cursor at the end of their data: their pulls find nothing new. */
+async function settleCursors(base: URL, readers: Readers): Promise<void> {
+  await Promise.all(
+    readers.quiet.map(async (reader) => {
+      reader.cursor = (JSON.parse((await send(base, 'GET', '/api/sync/pull', reader.token)).text) as { cursor: string }).cursor;
+    }),
   );
-  const rows = {} as Record<Kind, { rps: number; p50: number; p99: number }>;
-  for (const kind of Object.keys(tally.latencies) as Kind[]) {
-    const list = tally.latencies[kind];
-    const row = { rps: list.length / tally.seconds, p50: list.length ? quantile(list, 0.5) : NaN, p99: list.length ? quantile(list, 0.99) : NaN };
-    rows[kind] = row;
-    console.log(
-      `  ${kind.padEnd(11)} ${row.rps.toFixed(0).padStart(6)}/s  p50 ${row.p50.toFixed(1).padStart(6)} ms  p99 ${row.p99.toFixed(1).padStart(7)} ms  errors ${tally.errors[kind]}`,
-    );
-  }
-  return rows;
 }
 
 async function main(): Promise<void> {
+  const began = Date.now();
+  console.log(
+    `bench:load ${process.argv.slice(2).join(' ') || '(defaults)'}: ${SECONDS} s per run, ${CONNECTIONS} connections, ${READERS} readers, soak ${SOAK_SECONDS} s`,
+  );
   const env = {
     ...process.env,
     LAMPLIGHT_JWT_SECRET: SECRET,
@@ -202,32 +211,39 @@ async function main(): Promise<void> {
   const readers = { heavy: all.slice(0, HEAVY), writers: all.slice(HEAVY, HEAVY + WRITERS), quiet: all.slice(HEAVY + WRITERS) };
   await dataSource.destroy();
 
-  const cluster = await startCluster({ env, ...(process.argv.includes('--pgbouncer') ? { pgBouncerPort: 0 } : {}) });
-  let clusterRows: ReturnType<typeof report>;
+  if (COMPARE) {
+    await compareBuilds(env, readers);
+    return;
+  }
+  if (PROFILE) {
+    // Profiling looks at one instance only.
+    await profileBaseline(env, readers);
+    return;
+  }
+  const ports = PORT_BASE ? { listen: `127.0.0.1:${PORT_BASE}`, instancePorts: [1, 2, 3].map((n) => PORT_BASE + n) } : {};
+  const cluster = await startCluster({ env, ...ports, ...(process.argv.includes('--pgbouncer') ? { pgBouncerPort: 0 } : {}) });
+  let clusterSummary: Summary;
+  const soak: string[] = [];
   try {
     const proxied = new URL(cluster.baseUrl);
-    // Each quiet reader's cursor at the end of their data: their pulls find nothing new.
-    await Promise.all(
-      readers.quiet.map(async (reader) => {
-        reader.cursor = (JSON.parse((await send(proxied, 'GET', '/api/sync/pull', reader.token)).text) as { cursor: string }).cursor;
-      }),
-    );
+    const pids = cluster.instances.map((instance) => instance.child.pid);
+    await settleCursors(proxied, readers);
     console.log(
       `\nThrough nginx → 3 instances${cluster.pgBouncer ? ' → PgBouncer' : ''}: ${CONNECTIONS} connections, ${SECONDS} s (after ${WARM_UP_SECONDS} s of warm-up)`,
     );
-    await drive(proxied, readers, WARM_UP_SECONDS);
-    clusterRows = report('cluster', await drive(proxied, readers, SECONDS));
+    await drive(proxied, readers, WARM_UP_SECONDS, pids);
+    clusterSummary = report('cluster', await drive(proxied, readers, SECONDS, pids));
 
-    let soak: string[] = [];
     if (SOAK_SECONDS > 0) {
-      const pids = cluster.instances.map((instance) => instance.child.pid);
       const start = pids.map(rssMb);
       const samples: number[][] = [start];
       console.log(`\nSoak: the same mix through the cluster for ${SOAK_SECONDS} s; RSS sampled every 10 s`);
-      const soakTally = await drive(proxied, readers, SOAK_SECONDS, () => samples.push(pids.map(rssMb)));
+      const soakTally = await drive(proxied, readers, SOAK_SECONDS, pids, () => samples.push(pids.map(rssMb)));
       const end = pids.map(rssMb);
-      soak = cluster.instances.map(
-        (instance, i) => `${instance.name}: RSS ${start[i]} MB → ${end[i]} MB (max ${Math.max(...samples.map((s) => s[i]!), end[i]!)} MB)`,
+      soak.push(
+        ...cluster.instances.map(
+          (instance, i) => `${instance.name}: RSS ${start[i]} MB → ${end[i]} MB (max ${Math.max(...samples.map((sample) => sample[i]!), end[i]!)} MB)`,
+        ),
       );
       report('soak', soakTally);
       for (const line of soak) console.log(`  ${line}`);
@@ -236,25 +252,18 @@ async function main(): Promise<void> {
     await cluster.stop();
   }
 
-  const single = await startInstance('single', 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false);
+  const single = await startInstance('single', PORT_BASE ? PORT_BASE + 4 : 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false);
   const direct = new URL(`http://127.0.0.1:${single.port}`);
   console.log(`\nBaseline: one instance, no proxy, same mix`);
-  let singleRows: ReturnType<typeof report>;
+  let singleSummary: Summary;
   try {
-    await drive(direct, readers, WARM_UP_SECONDS);
-    singleRows = report('single instance', await drive(direct, readers, SECONDS));
+    await drive(direct, readers, WARM_UP_SECONDS, [single.child.pid]);
+    singleSummary = report('single instance', await drive(direct, readers, SECONDS, [single.child.pid]));
   } finally {
     await stopChild(single.child);
   }
-
-  console.log('\nCluster ÷ single instance (requests/s ratio > 1: the cluster serves more; p99 ratio < 1: faster):');
-  for (const kind of Object.keys(clusterRows) as Kind[]) {
-    const c = clusterRows[kind];
-    const s = singleRows[kind];
-    console.log(`  ${kind.padEnd(11)} requests/s ×${(c.rps / s.rps).toFixed(2)}  p99 ×${(c.p99 / s.p99).toFixed(2)}`);
-  }
-  const within = (['empty pull', 'small push'] as Kind[]).every((kind) => clusterRows[kind].p99 < 100);
-  console.log(`\nGoal p99 < 100 ms for empty pulls and small pushes through the cluster: ${within ? 'met' : 'NOT met'}`);
+  printClosing(clusterSummary, singleSummary, soak);
+  console.log(`Took ${((Date.now() - began) / 60_000).toFixed(1)} min.`);
   agent.destroy();
 }
 
@@ -262,3 +271,60 @@ main().catch((error: unknown) => {
   console.error(error);
   process.exit(1);
 });
+
+async function profileBaseline(env: Record<string, string | undefined>, readers: Readers): Promise<void> {
+  const single = await startInstance('single', PORT_BASE ? PORT_BASE + 4 : 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false, [
+    '--cpu-prof',
+    `--cpu-prof-dir=${path.resolve('.data/profiles')}`,
+  ]);
+  const direct = new URL(`http://127.0.0.1:${single.port}`);
+  try {
+    await settleCursors(direct, readers);
+    await drive(direct, readers, WARM_UP_SECONDS, [single.child.pid]);
+    report('single instance (profiled)', await drive(direct, readers, SECONDS, [single.child.pid]));
+  } finally {
+    await stopChild(single.child, 30_000);
+  }
+  agent.destroy();
+}
+
+/**
+ * Before/after on a busy machine: one instance of each build in turn, `COMPARE_ROUNDS` rounds of
+ * `--seconds` each, the order alternating, so both meet the same background load; medians.
+ */
+async function compareBuilds(env: Record<string, string | undefined>, readers: Readers): Promise<void> {
+  const builds = [
+    { label: `other build (${COMPARE})`, main: COMPARE!, runs: [] as Summary[] },
+    { label: 'this build', main: undefined, runs: [] as Summary[] },
+  ];
+  for (let round = 0; round < COMPARE_ROUNDS; round++) {
+    for (const build of round % 2 === 0 ? builds : [...builds].reverse()) {
+      const single = await startInstance(
+        'single',
+        PORT_BASE ? PORT_BASE + 4 : 0,
+        { ...env, LAMPLIGHT_TRUST_PROXY: '', LAMPLIGHT_BENCH_SERVER_MAIN: build.main },
+        false,
+      );
+      const direct = new URL(`http://127.0.0.1:${single.port}`);
+      try {
+        await settleCursors(direct, readers);
+        await drive(direct, readers, WARM_UP_SECONDS, [single.child.pid]);
+        build.runs.push(report(`round ${round + 1}, ${build.label}`, await drive(direct, readers, SECONDS, [single.child.pid])));
+      } finally {
+        await stopChild(single.child);
+      }
+    }
+  }
+  const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
+  console.log(`\n== Medians of ${COMPARE_ROUNDS} alternating rounds, one instance each ==`);
+  for (const build of builds) {
+    const kinds = (['empty pull', 'small push', 'big pull'] as Kind[]).map(
+      (kind) =>
+        `${kind} p50/p99 ${median(build.runs.map((run) => run.rows[kind].p50)).toFixed(1)}/${median(build.runs.map((run) => run.rows[kind].p99)).toFixed(1)} ms`,
+    );
+    console.log(
+      `${build.label}: ${median(build.runs.map((run) => run.rps)).toFixed(0)} requests/s, server CPU ${median(build.runs.map((run) => run.cpuMsPerRequest)).toFixed(2)} ms/request, errors ${build.runs.reduce((sum, run) => sum + run.errors, 0)}; ${kinds.join('; ')}`,
+    );
+  }
+  agent.destroy();
+}

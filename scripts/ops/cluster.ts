@@ -103,9 +103,17 @@ async function stopAll(started: { stop(): Promise<void> }[]): Promise<void> {
 }
 
 /** Starts one server process and resolves once it says where it listens. */
-export function startInstance(name: string, port: number, env: Record<string, string | undefined>, echo: boolean): Promise<Instance> {
+export function startInstance(
+  name: string,
+  port: number,
+  env: Record<string, string | undefined>,
+  echo: boolean,
+  nodeArgs: readonly string[] = [],
+): Promise<Instance> {
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, [MAIN], { env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'inherit'] });
+    // `LAMPLIGHT_BENCH_SERVER_MAIN` runs another build instead (benchmarks' before/after comparisons).
+    const main = env['LAMPLIGHT_BENCH_SERVER_MAIN'] ?? process.env['LAMPLIGHT_BENCH_SERVER_MAIN'] ?? MAIN;
+    const child = spawn(process.execPath, [...nodeArgs, main], { env: { ...process.env, ...env, PORT: String(port) }, stdio: ['ignore', 'pipe', 'inherit'] });
     const lines: string[] = [];
     let partial = '';
     let listening = false;

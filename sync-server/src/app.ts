@@ -24,6 +24,7 @@ import { Catalogue } from './domain/catalogue/catalogue';
 import { SruProvider } from './domain/catalogue/sru-provider';
 import { CatalogueCache } from './data-access/catalogue-cache';
 import { PostgresAttemptStore } from './data-access/attempt-store';
+import { BatchedCountStore } from './data-access/batched-count-store';
 import { UploadStore } from './data-access/upload-store';
 import { healthRoutes } from './entry-points/health.routes';
 import { requireAdmin, requireAuth } from './entry-points/require-auth';
@@ -62,7 +63,7 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   const verification = new EmailVerification(dataSource, config, mailer);
   const accounts = new Accounts(dataSource, config, sessions, mailer, verification);
   const resets = new PasswordResets(dataSource, config, sessions, mailer);
-  const authenticated = requireAuth(dataSource, config.jwtSecret);
+  const authenticated = requireAuth(dataSource, config.jwtSecret, config.sessionCheckMs);
 
   const app = express();
   app.disable('x-powered-by');
@@ -108,7 +109,8 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   app.use('/api/sync/events', syncEventsRoutes(dataSource, new SyncListener(config.syncEvents.listenDatabaseUrl), config.syncEvents, config.jwtSecret));
   app.use(
     '/api/sync',
-    readerLimiter('sync', config.syncRateLimit, 60_000, new PostgresAttemptStore(dataSource, 'sync')),
+    // Counted in memory and shared through PostgreSQL once a second: no database write per sync request.
+    readerLimiter('sync', config.syncRateLimit, 60_000, new BatchedCountStore(dataSource, 'sync')),
     syncRoutes(new MeasuredSyncStore(dataSource, { namedStatements: !config.dbTransactionPooling }), config.jwtSecret),
   );
   app.use(

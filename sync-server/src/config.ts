@@ -39,6 +39,8 @@ export interface ServerConfig {
   readonly logLevel: LogLevel;
   /** Bearer token that opens `GET /metrics` from anywhere; without it, loopback only. */
   readonly metricsToken: string | null;
+  /** How long a device session's check is remembered; another instance's sign-out reaches this one within it (0: never remembered). */
+  readonly sessionCheckMs: number;
   /** DATABASE_URL goes through a transaction-mode pooler (PgBouncer): no named prepared statements. */
   readonly dbTransactionPooling: boolean;
   /** Cover storage per reader, in bytes (the sum of the covers they own). */
@@ -129,6 +131,7 @@ const environmentSchema = z
     LAMPLIGHT_HASH_THREADS: z.coerce.number().int().min(1).max(16).default(1),
     LAMPLIGHT_HASH_QUEUE: z.coerce.number().int().min(1).max(10_000).default(32),
     LAMPLIGHT_SYNC_RATE_LIMIT: z.coerce.number().int().min(1).default(600),
+    LAMPLIGHT_SESSION_CHECK_MS: z.coerce.number().int().min(0).max(60_000).default(5000),
     LAMPLIGHT_UPLOAD_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
     LAMPLIGHT_LISTEN_DATABASE_URL: z
       .string()
@@ -183,6 +186,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     hashThreads: values.LAMPLIGHT_HASH_THREADS,
     hashQueue: values.LAMPLIGHT_HASH_QUEUE,
     syncRateLimit: values.LAMPLIGHT_SYNC_RATE_LIMIT,
+    sessionCheckMs: values.LAMPLIGHT_SESSION_CHECK_MS,
     uploadRateLimit: values.LAMPLIGHT_UPLOAD_RATE_LIMIT,
     jobsNow: values.LAMPLIGHT_JOBS_NOW ? Date.parse(values.LAMPLIGHT_JOBS_NOW) : null,
     syncEvents: { listenDatabaseUrl: values.LAMPLIGHT_LISTEN_DATABASE_URL ?? values.DATABASE_URL, heartbeatMs: values.LAMPLIGHT_SYNC_HEARTBEAT_MS },

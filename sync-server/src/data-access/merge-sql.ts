@@ -116,6 +116,17 @@ export function pullSql(specs: readonly CollectionSpec[]): string {
 }
 
 /**
+ * Whether any row changed after a sequence (`$1` user, `$2` sequence): one index-only probe per
+ * table on (user_id, seq), stopping at the first hit. Most pulls find nothing, and this plans in a
+ * fraction of the time `pullSql` does (its per-collection row lookups make planning the cost of
+ * an empty pull when statements cannot be prepared, behind a transaction pooler).
+ */
+export function changedSinceSql(specs: readonly CollectionSpec[]): string {
+  const probes = specs.map((spec) => `EXISTS (SELECT 1 FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2)`);
+  return `SELECT (${probes.join(' OR ')}) AS changed`;
+}
+
+/**
  * How many rows changed after a sequence, across every collection (`$1` user, `$2` sequence):
  * index-only counts on (user_id, seq), run only while a pull has more pages, so a device can say
  * how far a long first sync has come.

@@ -5,20 +5,17 @@ import { COLLECTIONS } from '../../../shared/sync/schema/collections';
 /** The PostgreSQL channel that carries "this reader's data changed" between server instances. */
 export const SYNC_CHANNEL = 'lamplight_sync';
 
-/** The part of a node-postgres client a push transaction hands over. */
-interface TransactionClient {
-  query(config: { text: string; values?: unknown[] }): Promise<unknown>;
-}
-
 /**
- * Queues a poke for every instance, inside the push's own transaction: PostgreSQL delivers a
- * NOTIFY only when its transaction commits (and drops it on rollback), so a poke can never
- * arrive before the change it announces is visible to a pull. The payload is the reader and the
- * sequence's last value, which is at least every sequence this transaction (and so the reader,
- * whose pushes take turns) has taken; it becomes the stream's event id.
+ * A poke for every instance, as SQL to run just before the push's COMMIT in one round trip:
+ * PostgreSQL delivers a NOTIFY only when its transaction commits (and drops it on rollback), so a
+ * poke can never arrive before the change it announces is visible to a pull. The payload is the
+ * reader and the sequence's last value, which is at least every sequence this transaction (and
+ * so the reader, whose pushes take turns) has taken; it becomes the stream's event id. The simple
+ * query protocol takes no parameters, so `userId` must be exactly a UUID (from a verified token).
  */
-export async function notifyPushed(client: TransactionClient, userId: string): Promise<void> {
-  await client.query({ text: `SELECT pg_notify('${SYNC_CHANNEL}', $1::text || ':' || (SELECT last_value FROM sync_seq))`, values: [userId] });
+export function notifyPushedSql(userId: string): string {
+  if (!/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/.test(userId)) throw new Error('user id must be a lower-case UUID');
+  return `SELECT pg_notify('${SYNC_CHANNEL}', '${userId}:' || (SELECT last_value FROM sync_seq));`;
 }
 
 /** A notification's payload read back; `null` for anything that is not ours. */

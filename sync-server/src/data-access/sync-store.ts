@@ -6,8 +6,8 @@ import { setDeltaOf } from '../../../shared/sync/merge-set';
 import { joinOrSet, type OrSetState } from '../../../shared/sync/or-set';
 import { columnName, type FieldSpec } from '../../../shared/sync/schema/field';
 import { COLLECTIONS, collectionSpec, fieldSpecOf } from '../../../shared/sync/schema/collections';
-import { mergeSql, pullSql, remainingSql } from './merge-sql';
-import { notifyPushed } from './sync-notifications';
+import { changedSinceSql, mergeSql, pullSql, remainingSql } from './merge-sql';
+import { notifyPushedSql } from './sync-notifications';
 import { queryableOf, TextStore } from './text-store';
 import { textFieldMax } from '../../../shared/text/text-fields';
 
@@ -32,7 +32,9 @@ function mergeStatement(collection: string, fields: readonly string[]): { name?:
   }
   return statement;
 }
-const PULL_SQL = pullSql(SPECS);
+/** Pull statements, prepared once per connection where the pool allows (see `namedStatements`). */
+const PULL_SQL = { name: 'lamplight_pull', text: pullSql(SPECS) };
+const CHANGED_SINCE_SQL = { name: 'lamplight_changed_since', text: changedSinceSql(SPECS) };
 const REMAINING_SQL = remainingSql(SPECS);
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
@@ -115,8 +117,8 @@ export class SyncStore {
       const outcome = classify(fieldChanges, byCollection, before);
       const textsWon = texts.length > 0 ? await TextStore.merge(client, userId, texts) : 0;
       const result = { ...outcome, applied: outcome.applied + textsWon, duplicates: outcome.duplicates + texts.length - textsWon };
-      if (result.applied > 0) await notifyPushed(client, userId); // live updates: delivered on commit only
-      return result;
+      // Live updates: the poke goes with COMMIT (one round trip) and is delivered on commit only.
+      return { result, beforeCommit: result.applied > 0 ? notifyPushedSql(userId) : '' };
     });
   }
 
@@ -125,7 +127,7 @@ export class SyncStore {
    * of sync, so it talks to the node-postgres client directly: BEGIN and the lock go in one
    * round trip, and the merge statements are prepared once per connection.
    */
-  private async inUserTransaction<T>(userId: string, work: (client: PgClient) => Promise<T>): Promise<T> {
+  private async inUserTransaction<T>(userId: string, work: (client: PgClient) => Promise<{ result: T; beforeCommit: string }>): Promise<T> {
     // Inlined into SQL text, so it must be exactly a UUID (it comes from our own verified token).
     if (!UUID.test(userId)) throw new Error('user id must be a lower-case UUID');
     const runner = this.dataSource.createQueryRunner();
@@ -133,8 +135,8 @@ export class SyncStore {
     const client = (runner as unknown as { databaseConnection: PgClient }).databaseConnection;
     try {
       await client.query(`BEGIN; SELECT pg_advisory_xact_lock(hashtextextended('${userId}', 0))`);
-      const result = await work(client);
-      await client.query('COMMIT');
+      const { result, beforeCommit } = await work(client);
+      await client.query(`${beforeCommit}COMMIT`);
       return result;
     } catch (error) {
       await client.query('ROLLBACK').catch(() => undefined);
@@ -153,13 +155,13 @@ export class SyncStore {
    * fits, so paging always moves on.
    */
   async pull(userId: string, sinceSeq: number, limit: number, maxBytes = MAX_PULL_BYTES): Promise<PulledPage> {
+    // Most pulls come from devices already up to date: one cheap probe answers them.
+    if (sinceSeq > 0) {
+      const [probe] = await this.read<{ changed: boolean }>(CHANGED_SINCE_SQL, [userId, sinceSeq]);
+      if (!probe?.changed) return { changes: [], lastSeq: sinceSeq, hasMore: false };
+    }
     // Every row has at least one field, so `limit` rows always fill a page; one more tells whether more remain.
-    const rows: { c: number; seq: string; keys: string; row: Record<string, unknown> }[] = await this.dataSource.query(PULL_SQL, [
-      userId,
-      sinceSeq,
-      limit + 1,
-      maxBytes,
-    ]);
+    const rows = await this.read<{ c: number; seq: string; keys: string; row: Record<string, unknown> }>(PULL_SQL, [userId, sinceSeq, limit + 1, maxBytes]);
     // Texts' Yjs states count towards the page's bytes too, so they are read before the page is cut.
     const candidates = rows.map(({ c, row }) => rowFields(SPECS[c]!.name, row));
     const withStates = await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat());
@@ -182,6 +184,16 @@ export class SyncStore {
     if (!hasMore) return { changes, lastSeq, hasMore };
     const [{ remaining }] = (await this.dataSource.query(REMAINING_SQL, [userId, lastSeq])) as [{ remaining: number }];
     return { changes, lastSeq, hasMore, remaining };
+  }
+
+  /**
+   * A read outside a transaction, straight on the pool: prepared under its name once per
+   * connection (planning the pull costs more than running it), unnamed behind a transaction pooler.
+   */
+  private async read<Row>(statement: { name: string; text: string }, values: unknown[]): Promise<Row[]> {
+    const pool = (this.dataSource.driver as unknown as { master: PgClient }).master;
+    const config = this.options.namedStatements === false ? { text: statement.text, values } : { ...statement, values };
+    return (await pool.query(config)).rows as Row[];
   }
 }
 

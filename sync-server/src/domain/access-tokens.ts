@@ -31,7 +31,32 @@ export function signAccessToken(claims: AccessClaims, secret: Uint8Array, issued
     .sign(secret);
 }
 
-export type VerifyResult = { ok: true; claims: AccessClaims } | { ok: false; reason: 'expired' | 'invalid' };
+export type VerifyResult = { ok: true; claims: AccessClaims; expiresAt: number } | { ok: false; reason: 'expired' | 'invalid' };
+
+/** Past this many tokens the memory of verified ones starts over rather than growing without bound. */
+const MAX_VERIFIED = 20_000;
+
+/**
+ * Remembers tokens whose signature was checked, so a device syncing every few seconds with the
+ * same access token costs one HMAC per token, not one per request. The exact token string is the
+ * key (a changed byte is a different token, checked afresh); expiry is still checked on every use.
+ */
+export class VerifiedTokens {
+  private readonly tokens = new Map<string, { claims: AccessClaims; expiresAt: number }>();
+
+  constructor(private readonly secret: Uint8Array) {}
+
+  async verify(token: string, now = Date.now()): Promise<VerifyResult> {
+    const known = this.tokens.get(token);
+    if (known) return known.expiresAt > now ? { ok: true, ...known } : { ok: false, reason: 'expired' };
+    const result = await verifyAccessToken(token, this.secret);
+    if (result.ok) {
+      if (this.tokens.size >= MAX_VERIFIED) this.tokens.clear();
+      this.tokens.set(token, { claims: result.claims, expiresAt: result.expiresAt });
+    }
+    return result;
+  }
+}
 
 /** Checks signature, algorithm, issuer, audience and expiry; never throws. */
 export async function verifyAccessToken(token: string, secret: Uint8Array): Promise<VerifyResult> {
@@ -42,11 +67,11 @@ export async function verifyAccessToken(token: string, secret: Uint8Array): Prom
       audience: TOKEN_AUDIENCE,
       requiredClaims: ['sub', 'exp', 'iat'],
     });
-    const { sub, sid, role } = payload as { sub?: unknown; sid?: unknown; role?: unknown };
+    const { sub, sid, role, exp } = payload as { sub?: unknown; sid?: unknown; role?: unknown; exp: number };
     if (typeof sub !== 'string' || typeof sid !== 'string' || (role !== 'reader' && role !== 'admin')) {
       return { ok: false, reason: 'invalid' };
     }
-    return { ok: true, claims: { userId: sub, sessionId: sid, role } };
+    return { ok: true, claims: { userId: sub, sessionId: sid, role }, expiresAt: exp * 1000 };
   } catch (err) {
     return { ok: false, reason: err instanceof errors.JWTExpired ? 'expired' : 'invalid' };
   }

@@ -12,6 +12,7 @@ import type { DeviceSessions } from './device-sessions';
 import type { EmailVerification } from './email-verification';
 import type { Mailer } from '../mail/mailer';
 import { hashPassword, verifyPassword } from './passwords';
+import { forgetUser } from './session-checks';
 
 /** The same answer for an unknown e-mail and a wrong password, so neither can be probed. */
 const SIGN_IN_REFUSED = new AppError(401, 'invalid_credentials', 'E-mail or password is not right');
@@ -122,6 +123,7 @@ export class Accounts {
       await manager.update(User, { id: userId }, { passwordHash });
       await this.sessions.revokeAll(manager, userId, sessionId);
     });
+    forgetUser(userId);
   }
 
   /**
@@ -138,5 +140,6 @@ export class Accounts {
       await manager.delete(User, { id: userId });
       await removeOrphanedUploads(manager, uploadIds);
     });
+    forgetUser(userId);
   }
 }

@@ -4,6 +4,7 @@ import type { AdminUserPage, AdminUserView } from '../../../shared/api/admin';
 import { AppError } from '../errors';
 import { User, type Role } from '../data-access/entities/user.entity';
 import { storedBytesByUser } from '../data-access/user-data-size';
+import { forgetUser } from './session-checks';
 
 /** What admins may see and change about accounts. Journals themselves stay private. */
 export class AdminUsers {
@@ -65,6 +66,7 @@ export class AdminUsers {
         await manager.update(User, { id: userId }, { disabledAt: change.disabled ? (user.disabledAt ?? new Date()) : null });
       }
     });
+    forgetUser(userId);
     const updated = await users.findOneBy({ id: userId });
     if (!updated) throw new AppError(404, 'not_found', 'No such account');
     return (await this.views([updated]))[0]!;

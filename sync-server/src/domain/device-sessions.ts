@@ -7,6 +7,7 @@ import { DeviceSession } from '../data-access/entities/device-session.entity';
 import { RefreshToken } from '../data-access/entities/refresh-token.entity';
 import type { User } from '../data-access/entities/user.entity';
 import { signAccessToken } from './access-tokens';
+import { forgetSession, forgetUser } from './session-checks';
 import { deviceNameFromUserAgent } from '../../../shared/account/device-name';
 import { hashSecretToken, newSecretToken, successorToken } from './secret-tokens';
 
@@ -81,6 +82,7 @@ export class DeviceSessions {
   async rotate(refreshToken: string): Promise<TokenPair> {
     const tokenHash = hashSecretToken(refreshToken);
     type Outcome = { pair: TokenPair } | { error: 'unknown' | 'revoked' | 'reused' | 'expired' | 'disabled' };
+    let revokedSession: string | undefined;
     const outcome = await this.dataSource.transaction(async (manager): Promise<Outcome> => {
       const token = await manager
         .getRepository(RefreshToken)
@@ -102,6 +104,7 @@ export class DeviceSessions {
           return { pair: await this.pairFor(session.id, user, successor, token.usedAt) };
         }
         await manager.update(DeviceSession, { id: session.id }, { revokedAt: new Date() });
+        revokedSession = session.id;
         logSecurityEvent('refresh token presented again; device session revoked', { user: user.id, session: session.id });
         return { error: 'reused' };
       }
@@ -114,6 +117,7 @@ export class DeviceSessions {
       await manager.insert(RefreshToken, { sessionId: session.id, tokenHash: hashSecretToken(successor), expiresAt: refreshExpiry() });
       return { pair: await this.pairFor(session.id, user, successor, usedAt) };
     });
+    if (revokedSession) forgetSession(revokedSession);
     if ('pair' in outcome) return outcome.pair;
     if (outcome.error === 'disabled') throw new AppError(403, 'account_disabled', 'This account is disabled');
     const messages = {
@@ -141,6 +145,7 @@ export class DeviceSessions {
   /** Ends a device session and every refresh token it issued. */
   async revoke(userId: string, sessionId: string): Promise<boolean> {
     const result = await this.dataSource.getRepository(DeviceSession).update({ id: sessionId, userId, revokedAt: IsNull() }, { revokedAt: new Date() });
+    forgetSession(sessionId);
     return (result.affected ?? 0) > 0;
   }
 
@@ -153,6 +158,8 @@ export class DeviceSessions {
       .where('user_id = :userId AND revoked_at IS NULL', { userId });
     if (keepSessionId) query.andWhere('id <> :keepSessionId', { keepSessionId });
     await query.execute();
+    // Callers forget again once their transaction commits, so no request in between keeps the old answer.
+    forgetUser(userId);
   }
 
   list(userId: string): Promise<DeviceSession[]> {

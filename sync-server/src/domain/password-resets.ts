@@ -9,6 +9,7 @@ import type { DeviceSessions } from './device-sessions';
 import type { Mailer } from '../mail/mailer';
 import { hashPassword } from './passwords';
 import { hashSecretToken, newSecretToken } from './secret-tokens';
+import { forgetUser } from './session-checks';
 
 /** Password reset by e-mail: a single-use link, valid for 30 minutes, stored hashed. */
 export class PasswordResets {
@@ -41,6 +42,7 @@ export class PasswordResets {
   /** Sets the new password and signs the reader out everywhere. */
   async confirm(token: string, newPassword: string): Promise<void> {
     const passwordHash = await hashPassword(newPassword, this.config.bcryptCost, this.config);
+    let forgotten: string | undefined;
     const done = await this.dataSource.transaction(async (manager) => {
       // Marking it used in the statement that finds it makes a second use impossible. (A CTE,
       // because TypeORM returns plain rows only for SELECT.)
@@ -57,8 +59,10 @@ export class PasswordResets {
       await manager.update(User, { id: userId }, { passwordHash });
       await this.sessions.revokeAll(manager, userId);
       await manager.update(PasswordReset, { userId, usedAt: IsNull(), expiresAt: MoreThan(new Date()) }, { usedAt: new Date() });
+      forgotten = userId;
       return true;
     });
+    if (forgotten) forgetUser(forgotten);
     if (!done) {
       throw new AppError(400, 'reset_link_invalid', 'This link was already used or has expired; ask for a new one', {
         token: 'This link was already used or has expired',

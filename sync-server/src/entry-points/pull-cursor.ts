@@ -22,6 +22,11 @@ export class PullCursors {
     return Buffer.concat([Buffer.from([2]), iv, cipher.update(body), cipher.final(), cipher.getAuthTag()]).toString('base64url');
   }
 
+  /** Whether a cursor is sealed in this version (a `v1` one is sealed afresh when handed back). */
+  isCurrent(cursor: string): boolean {
+    return /^A[A-Za-z0-9_-]{49}$/.test(cursor);
+  }
+
   /** The position, or `null` when the cursor is not one this server sealed for this reader. */
   open(userId: string, cursor: string): number | null {
     const bytes = Buffer.from(cursor, 'base64url');

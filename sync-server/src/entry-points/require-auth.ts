@@ -3,7 +3,8 @@ import type { DataSource } from 'typeorm';
 
 import type { Role } from '../data-access/entities/user.entity';
 import { AppError } from '../errors';
-import { verifyAccessToken } from '../domain/access-tokens';
+import { VerifiedTokens } from '../domain/access-tokens';
+import { SessionChecks, type SessionState } from '../domain/session-checks';
 
 /** Who is calling, once `requireAuth` has let a request through. */
 export interface Caller {
@@ -24,40 +25,55 @@ export function callerOf(res: Response): Caller {
 /**
  * Bearer-token check for everything under /api except auth and health. Besides the token, the
  * device session must still be live and the account enabled, so sign-out, a lost-tablet revoke
- * or an admin's disable takes effect at once rather than when the token expires.
+ * or an admin's disable takes effect at once on the instance that did it and within
+ * `sessionTtlMs` on the others, rather than when the token expires. Token signatures and session
+ * rows are remembered briefly (`VerifiedTokens`, `SessionChecks`): the sync hot path costs no
+ * database read for the caller.
  */
-export function requireAuth(dataSource: DataSource, jwtSecret: Uint8Array): RequestHandler {
+export function requireAuth(dataSource: DataSource, jwtSecret: Uint8Array, sessionTtlMs: number): RequestHandler {
+  const tokens = new VerifiedTokens(jwtSecret);
+  const sessions = new SessionChecks(sessionTtlMs);
   return async (req: Request, res: Response, next: NextFunction) => {
     const header = req.get('authorization') ?? '';
     const match = /^Bearer ([A-Za-z0-9_\-.]+)$/.exec(header);
     if (!match) throw new AppError(401, 'unauthenticated', 'Sign in to continue');
-    const verified = await verifyAccessToken(match[1]!, jwtSecret);
+    const verified = await tokens.verify(match[1]!);
     if (!verified.ok) {
       throw verified.reason === 'expired'
         ? new AppError(401, 'token_expired', 'The access token has expired; refresh it')
         : new AppError(401, 'invalid_token', 'The access token is not valid');
     }
     const { userId, sessionId } = verified.claims;
-    const rows: { role: Role; disabled: boolean; revoked: boolean; stale: boolean }[] = await dataSource.query(
-      `SELECT u.role, u.disabled_at IS NOT NULL AS disabled, s.revoked_at IS NOT NULL AS revoked,
-              s.last_seen_at < now() - make_interval(secs => $3) AS stale
-         FROM device_sessions s JOIN users u ON u.id = s.user_id
-        WHERE s.id = $1 AND u.id = $2`,
-      [sessionId, userId, LAST_SEEN_RESOLUTION_MS / 1000],
-    );
-    const row = rows[0];
-    if (!row || row.revoked) throw new AppError(401, 'session_revoked', 'This device was signed out; sign in again');
-    if (row.disabled) throw new AppError(403, 'account_disabled', 'This account is disabled');
-    if (row.stale) {
-      await dataSource.query(
-        `WITH s AS (UPDATE device_sessions SET last_seen_at = now() WHERE id = $1 RETURNING user_id)
-         UPDATE users SET last_seen_at = now() WHERE id = (SELECT user_id FROM s)`,
-        [sessionId],
-      );
-    }
-    res.locals['caller'] = { userId, sessionId, role: row.role } satisfies Caller;
+    const state = sessions.get(sessionId) ?? (await readSession(dataSource, sessions, sessionId, userId));
+    if (state.userId !== userId || state.revoked) throw new AppError(401, 'session_revoked', 'This device was signed out; sign in again');
+    if (state.disabled) throw new AppError(403, 'account_disabled', 'This account is disabled');
+    res.locals['caller'] = { userId, sessionId, role: state.role } satisfies Caller;
     next();
   };
+}
+
+/** Reads a session and its account, refreshes last-seen times when stale, and remembers the answer. */
+async function readSession(dataSource: DataSource, sessions: SessionChecks, sessionId: string, userId: string): Promise<SessionState> {
+  const rows: { role: Role; disabled: boolean; revoked: boolean; stale: boolean }[] = await dataSource.query(
+    `SELECT u.role, u.disabled_at IS NOT NULL AS disabled, s.revoked_at IS NOT NULL AS revoked,
+            s.last_seen_at < now() - make_interval(secs => $3) AS stale
+       FROM device_sessions s JOIN users u ON u.id = s.user_id
+      WHERE s.id = $1 AND u.id = $2`,
+    [sessionId, userId, LAST_SEEN_RESOLUTION_MS / 1000],
+  );
+  const row = rows[0];
+  const state: SessionState = row
+    ? { userId, role: row.role, disabled: row.disabled, revoked: row.revoked }
+    : { userId, role: 'reader', disabled: false, revoked: true };
+  if (row?.stale && !row.revoked && !row.disabled) {
+    await dataSource.query(
+      `WITH s AS (UPDATE device_sessions SET last_seen_at = now() WHERE id = $1 RETURNING user_id)
+       UPDATE users SET last_seen_at = now() WHERE id = (SELECT user_id FROM s)`,
+      [sessionId],
+    );
+  }
+  sessions.remember(sessionId, state);
+  return state;
 }
 
 /** Admin routes: the role is read from the database by `requireAuth`, not trusted from the token. */
