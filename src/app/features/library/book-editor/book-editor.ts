@@ -25,6 +25,7 @@ import { BookStatus } from '../../../core/read-model/book-status';
 import { CatalogueFill, CatalogueSearch, FILLABLE_FIELDS, PendingLookups, type FillInResult, type FillValues } from '../../catalogue';
 import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
+import { seriesByName } from '../library-data';
 
 const isbnValidator = (control: AbstractControl<string>) =>
   !control.value?.trim() || normalizeIsbn(control.value) ? null : { server: 'Enter a valid ISBN-10 or ISBN-13 (check the digits)' };
@@ -106,10 +107,7 @@ export class BookEditor {
   /** The DNF and wishlist sections appear only where they apply. */
   protected readonly dnf = computed(() => this.status() === 'dnf');
   protected readonly wished = computed(() => this.copy() === 'wishlist');
-  protected readonly allSeries = liveQuerySignal(
-    async (db) => (await db.current('series')).sort((a, b) => (a.name ?? '').localeCompare(b.name ?? '')),
-    [] as Series[],
-  );
+  protected readonly allSeries = liveQuerySignal(seriesByName, [] as Series[]);
   protected readonly progressUnits = PROGRESS_UNITS;
   protected readonly progressUnitLabels = { page: 'Page', percent: 'Percent', minute: 'Minute' } as const;
   protected readonly priorities = WISH_PRIORITIES;
