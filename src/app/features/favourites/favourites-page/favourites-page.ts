@@ -15,13 +15,14 @@ import { undoableDelete } from '../../../ui/undoable-delete';
 import { readerToday } from '../../../core/time/reader-today';
 import { ReaderDatePipe } from '../../../ui/reader-date';
 import { favouritesAndSubjects, NO_FAVOURITES } from '../favourites-data';
+import { ChoiceField } from '../../../ui/choice-field/choice-field';
 
 const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'Book', author: 'Author', quote: 'Quote' };
 
 /** Favourite books, authors and quotes, each with why; and a pick for each month of the year. */
 @Component({
   selector: 'll-favourites-page',
-  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ChoiceField, ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
   templateUrl: './favourites-page.html',
   styleUrl: './favourites-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -26,6 +26,7 @@ import { CatalogueFill, CatalogueSearch, FILLABLE_FIELDS, PendingLookups, type F
 import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
 import { seriesByName } from '../library-data';
+import { ChoiceField, RATING_CHOICES, RATING_WORDS } from '../../../ui/choice-field/choice-field';
 
 const isbnValidator = (control: AbstractControl<string>) =>
   !control.value?.trim() || normalizeIsbn(control.value) ? null : { server: 'Enter a valid ISBN-10 or ISBN-13 (check the digits)' };
@@ -41,6 +42,7 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 @Component({
   selector: 'll-book-editor',
   imports: [
+    ChoiceField,
     ReactiveFormsModule,
     RouterLink,
     MatButtonModule,
@@ -120,7 +122,8 @@ export class BookEditor {
   protected readonly formatLabels = FORMAT_LABELS;
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly copyLabels = COPY_LABELS;
-  protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
+  protected readonly ratings = RATING_CHOICES;
+  protected readonly ratingWords = RATING_WORDS;
   protected readonly fieldError = fieldError;
   /** Cancel discards on purpose, so it leaves without asking. */
   protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;
