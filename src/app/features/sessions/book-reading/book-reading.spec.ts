@@ -7,6 +7,7 @@ import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { BookReading } from './book-reading';
 import { waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
+import { addSession } from '../../../core/testing/seed';
 
 /** Real IndexedDB; the reader is in Los Angeles on 8 March 2026 at 13:00 PDT. */
 describe('BookReading', () => {
@@ -22,17 +23,7 @@ describe('BookReading', () => {
   const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
   const session = (bookId: string, startedAt: string, minutes: number, from: number, to: number, extra: Partial<Session> = {}) =>
-    store.create('sessions', {
-      bookId,
-      format: 'print',
-      startedAt,
-      endedAt: new Date(Date.parse(startedAt) + minutes * 60_000).toISOString(),
-      activeMinutes: minutes,
-      fromPosition: from,
-      toPosition: to,
-      source: 'manual',
-      ...extra,
-    });
+    addSession(store, bookId, startedAt, minutes, from, to, { source: 'manual', ...extra });
 
   async function show(bookId: string): Promise<void> {
     const book = (await store.get('books', bookId)) as Book;

@@ -8,6 +8,7 @@ import { BROWSER_LOCALE } from '../../../core/settings/reader-settings';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { ReadingLog } from './reading-log';
 import { waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
+import { addSession } from '../../../core/testing/seed';
 
 /**
  * The same session, 2026-03-08 07:30–08:00 UTC, seen from two zones. IANA tz database: Los
@@ -43,16 +44,7 @@ describe('ReadingLog', () => {
   }
 
   const read = (bookId: string, startedAt: string, minutes: number, from: number, to: number, extra: Partial<Session> = {}) =>
-    store.create('sessions', {
-      bookId,
-      format: 'print',
-      startedAt,
-      endedAt: new Date(Date.parse(startedAt) + minutes * 60_000).toISOString(),
-      activeMinutes: minutes,
-      fromPosition: from,
-      toPosition: to,
-      ...extra,
-    });
+    addSession(store, bookId, startedAt, minutes, from, to, extra);
 
   async function showWithTheSession(): Promise<void> {
     const bookId = await store.create('books', { title: 'The Salt Road', format: 'print', pageCount: 300 });
