@@ -59,6 +59,14 @@ describe('StopDialog', () => {
     input.value = value;
     input.dispatchEvent(new Event(input.tagName === 'SELECT' ? 'change' : 'input'));
   };
+  /** Chooses in the select of the field labelled `label` (a choice field has no form control name of its own). */
+  const choose = (label: string, value: string) => {
+    const select = Array.from(document.querySelectorAll('ll-stop-dialog mat-form-field'))
+      .find((f) => f.querySelector('mat-label')?.textContent?.trim() === label)!
+      .querySelector('select')!;
+    select.value = value;
+    select.dispatchEvent(new Event('change'));
+  };
   const outboxFor = async (rowId: string) => (await journal.db.outbox.toArray()).filter((c) => c.rowId === rowId);
 
   it('opens prefilled from the previous session, writes only what changed, and marks a TBR book as reading', async () => {
@@ -70,7 +78,7 @@ describe('StopDialog', () => {
     const before = (await outboxFor(sessionId)).length;
 
     type('toPosition', '150');
-    type('mood', 'calm');
+    choose('How did it feel?', 'calm');
     click('Save');
 
     expect(await closed).toBeTrue();
