@@ -1,5 +1,5 @@
 import { HttpEventType } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 
 import type { JournalDb } from '../data/journal-db';
@@ -8,6 +8,7 @@ import { CoverError } from './cover-error';
 import { Covers } from './covers';
 import { sha256Hex } from './sha256-hex';
 import { drawnImage } from './testing/test-images';
+import { sent as sentTo } from '../sync/testing/sync-backend';
 
 /** Real IndexedDB in Chromium, one fresh database per spec; the network is HttpTestingController. */
 describe('Covers', () => {
@@ -18,15 +19,7 @@ describe('Covers', () => {
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
   const db = (): JournalDb => journal.db;
 
-  /** The request to `url` once it has been sent (Dexie reads and the tab lock take a few turns). */
-  async function sent(url: string): Promise<TestRequest> {
-    for (let i = 0; i < 200; i++) {
-      const [found] = backend.match(url);
-      if (found) return found;
-      await turn();
-    }
-    throw new Error(`no request to ${url} was sent`);
-  }
+  const sent = (url: string) => sentTo(backend, url);
 
   /** A cover stored as an earlier visit would have left it, waiting to upload. */
   async function pendingCover(): Promise<{ id: string; blob: Blob }> {

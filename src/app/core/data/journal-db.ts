@@ -129,4 +129,10 @@ export class JournalDb extends Dexie {
   current<C extends CollectionName>(collection: C): Promise<StoredRow<C>[]> {
     return this.rows(collection).filter(isCurrent).toArray();
   }
+
+  /** The rows not deleted of several collections at once, by name: `currentOf('books', 'quotes')` → `{ books, quotes }`. */
+  async currentOf<const N extends readonly CollectionName[]>(...names: N): Promise<{ [C in N[number]]: StoredRow<C>[] }> {
+    const lists = await Promise.all(names.map((name) => this.current(name)));
+    return Object.fromEntries(names.map((name, i) => [name, lists[i]])) as { [C in N[number]]: StoredRow<C>[] };
+  }
 }

@@ -42,17 +42,7 @@ export interface GoalRecord {
  */
 export function goalRecord(): GoalRecord {
   const timeZone = inject(TIME_ZONE);
-  const rows = liveQuerySignal<GoalRowSet | null>(async (db) => {
-    const all = async <T extends { deleted?: boolean | null }>(name: string) => ((await db.rows(name).toArray()) as unknown as T[]).filter((row) => !row.deleted);
-    return {
-      books: await all<Book>('books'),
-      readings: await all<Reading>('readings'),
-      sessions: await all<Session>('sessions'),
-      yearPlans: await all<YearPlan>('yearPlans'),
-      monthPlans: await all<MonthPlan>('monthPlans'),
-      challenges: await all<Challenge>('challenges'),
-    };
-  }, null);
+  const rows = liveQuerySignal<GoalRowSet | null>((db) => db.currentOf('books', 'readings', 'sessions', 'yearPlans', 'monthPlans', 'challenges'), null);
   const library = computed(() => challengeBooks(rows()?.books ?? [], rows()?.readings ?? [], timeZone));
   const finished = computed(() => finishedBooks(rows()?.books ?? [], rows()?.readings ?? [], timeZone));
   const log = computed(() => sessionLog(rows()?.sessions ?? [], timeZone));

@@ -1,3 +1,5 @@
+import type { Session } from '@shared/sync/schema/collections';
+
 import type { JournalStore } from '../data/journal-store';
 
 /**
@@ -32,3 +34,25 @@ export const BOOK = {
   ferry: '00000000-0000-4000-8000-000000000005',
   owl: '00000000-0000-4000-8000-000000000006',
 } as const;
+
+/** A print session of `minutes` from `startedAt` (an instant), reading from position `from` to `to`; returns its id. */
+export function addSession(
+  store: JournalStore,
+  bookId: string,
+  startedAt: string,
+  minutes: number,
+  from: number,
+  to: number,
+  extra: Partial<Session> = {},
+): Promise<string> {
+  return store.create('sessions', {
+    bookId,
+    format: 'print',
+    startedAt,
+    endedAt: new Date(Date.parse(startedAt) + minutes * 60_000).toISOString(),
+    activeMinutes: minutes,
+    fromPosition: from,
+    toPosition: to,
+    ...extra,
+  });
+}

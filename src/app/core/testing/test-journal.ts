@@ -1,5 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
-import type { EnvironmentProviders, Provider } from '@angular/core';
+import { ApplicationRef, type EnvironmentProviders, type Provider } from '@angular/core';
 import { TestBed, type ComponentFixture } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import Dexie from 'dexie';
@@ -61,6 +61,20 @@ export async function waitFor(fixture: ComponentFixture<unknown>, check: () => u
     await new Promise((resolve) => setTimeout(resolve, 5));
   }
   throw new Error(`gave up waiting for ${what}`);
+}
+
+/**
+ * Waits until `check` gives something (a dialog's element, say), letting the whole app settle in
+ * between: for what lives outside any fixture, such as a dialog. Fails naming `what`.
+ */
+export async function found<T>(check: () => T | null | undefined | false, what: string): Promise<T> {
+  for (let i = 0; i < 200; i++) {
+    const value = check();
+    if (value) return value;
+    await TestBed.inject(ApplicationRef).whenStable();
+    await new Promise((resolve) => setTimeout(resolve, 10));
+  }
+  throw new Error(`Timed out waiting for ${what}`);
 }
 
 /** The element's text with runs of whitespace as single spaces. */

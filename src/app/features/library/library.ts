@@ -22,6 +22,7 @@ import { LabelChips } from '../../ui/label-chips/label-chips';
 import { LabelDirectory } from '../../core/read-model/label-directory';
 import { TimerStartButton } from '../timer';
 import { bookProgress } from '../sessions';
+import { shelfBooks, shelfSessions } from './library-data';
 
 type View = 'table' | 'covers';
 const VIEW_KEY = 'lamplight.libraryView';
@@ -51,7 +52,7 @@ const VIEW_KEY = 'lamplight.libraryView';
 export class Library {
   private readonly bookStatus = inject(BookStatus);
 
-  protected readonly books = liveQuerySignal((db) => db.current('books'), [] as Book[]);
+  protected readonly books = liveQuerySignal(shelfBooks, [] as Book[]);
   /** Rows keyed by id: only books that changed get their search text and sort keys again. */
   private readonly derived = new LibraryRows();
   private readonly rows = computed(() => this.derived.update(this.books()));
@@ -73,7 +74,7 @@ export class Library {
     return this.found().slice(index * size, (index + 1) * size);
   });
 
-  private readonly sessions = liveQuerySignal(async (db) => ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted), [] as Session[]);
+  private readonly sessions = liveQuerySignal(shelfSessions, [] as Session[]);
   /** Percent read of each book being read or paused whose length is known (from its latest session). */
   protected readonly progress = computed(() => {
     const byBook = new Map<string, Session[]>();

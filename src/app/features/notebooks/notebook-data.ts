@@ -1,6 +1,10 @@
 import { parseHlc } from '@shared/sync/hlc';
 import type { LocalRow } from '@shared/sync/local-row';
-import type { Book, Notebook, NotebookPage } from '@shared/sync/schema/collections';
+import { lightPlainText, parseLightFormat } from '@shared/journal/light-format';
+import { byPosition } from '@shared/journal/page-order';
+import { ownTemplates, type TemplateView } from '@shared/journal/starter-templates';
+
+import { isCurrent, type JournalDb, type StoredRow } from '../../core/data/journal-db';
 
 /** One notebook as the list shows it. */
 export interface NotebookSummary {
@@ -37,17 +41,20 @@ export function lastEdited(rows: readonly LocalRow[]): number | null {
 }
 
 /** The reader's notebooks, most recently edited first, with their page counts and books. */
-export function summarizeNotebooks(notebooks: readonly LocalRow[], pages: readonly LocalRow[], books: readonly LocalRow[]): NotebookSummary[] {
-  const pagesOf = new Map<string, LocalRow[]>();
+export function summarizeNotebooks(
+  notebooks: readonly StoredRow<'notebooks'>[],
+  pages: readonly StoredRow<'notebookPages'>[],
+  books: readonly StoredRow<'books'>[],
+): NotebookSummary[] {
+  const pagesOf = new Map<string, StoredRow<'notebookPages'>[]>();
   for (const page of pages) {
-    const notebookId = (page as NotebookPage & LocalRow).notebookId;
+    const notebookId = page.notebookId;
     if (notebookId) pagesOf.set(notebookId, [...(pagesOf.get(notebookId) ?? []), page]);
   }
-  const bookTitles = new Map(books.filter((book) => !book['deleted']).map((book) => [book.id, (book as Book & LocalRow).title ?? '']));
+  const bookTitles = new Map(books.filter(isCurrent).map((book) => [book.id, book.title ?? '']));
   return notebooks
-    .filter((row) => !row['deleted'])
-    .map((row) => {
-      const notebook = row as Notebook & LocalRow;
+    .filter(isCurrent)
+    .map((notebook) => {
       const own = pagesOf.get(notebook.id) ?? [];
       const bookId = notebook.bookId ?? null;
       return {
@@ -55,7 +62,7 @@ export function summarizeNotebooks(notebooks: readonly LocalRow[], pages: readon
         title: notebook.title ?? '',
         bookId,
         bookTitle: bookId ? (bookTitles.get(bookId) ?? null) : null,
-        pageCount: own.filter((page) => !page['deleted']).length,
+        pageCount: own.filter(isCurrent).length,
         // Deleted pages count: deleting one is an edit too.
         lastEdited: lastEdited([notebook, ...own]),
       };
@@ -64,10 +71,10 @@ export function summarizeNotebooks(notebooks: readonly LocalRow[], pages: readon
 }
 
 /** Books for a chooser, by title; deleted ones left out. */
-export function bookOptions(books: readonly LocalRow[]): BookOption[] {
+export function bookOptions(books: readonly StoredRow<'books'>[]): BookOption[] {
   return books
-    .filter((book) => !book['deleted'])
-    .map((book) => ({ id: book.id, title: (book as Book & LocalRow).title || 'Untitled' }))
+    .filter(isCurrent)
+    .map((book) => ({ id: book.id, title: book.title || 'Untitled' }))
     .sort((a, b) => a.title.localeCompare(b.title));
 }
 
@@ -79,4 +86,60 @@ export function clip(text: string, max: number): string {
   if (text.length <= max) return text;
   const code = text.charCodeAt(max - 1);
   return text.slice(0, code >= 0xd800 && code <= 0xdbff ? max - 1 : max);
+}
+
+/** The reader's notebooks as the list shows them (see `summarizeNotebooks`). */
+export async function notebookSummaries(db: JournalDb): Promise<NotebookSummary[]> {
+  const [notebooks, pages, books] = await Promise.all([db.rows('notebooks').toArray(), db.rows('notebookPages').toArray(), db.rows('books').toArray()]);
+  return summarizeNotebooks(notebooks, pages, books);
+}
+
+/** The books to choose from when starting a notebook. */
+export async function bookChoices(db: JournalDb): Promise<BookOption[]> {
+  return bookOptions(await db.rows('books').toArray());
+}
+
+/** The reader's own page templates. */
+export async function ownPageTemplates(db: JournalDb): Promise<TemplateView[]> {
+  return ownTemplates(await db.rows('pageTemplates').toArray());
+}
+
+/** The notebooks attached to one book, with their page counts. */
+export async function notebooksAbout(db: JournalDb, bookId: string): Promise<NotebookSummary[]> {
+  const notebooks = await db.rows('notebooks').where('bookId').equals(bookId).toArray();
+  const pages = await db
+    .rows('notebookPages')
+    .where('notebookId')
+    .anyOf(notebooks.map((notebook) => notebook.id))
+    .toArray();
+  return summarizeNotebooks(notebooks, pages, []);
+}
+
+const EXCERPT_LENGTH = 160;
+
+/** One notebook: the row, its pages in order with an excerpt each, the book choices and the reader's templates. */
+export async function notebookContents(db: JournalDb, id: string) {
+  const [notebook, pages, books, templates] = await Promise.all([
+    db.rows('notebooks').get(id),
+    db.rows('notebookPages').where('notebookId').equals(id).filter(isCurrent).toArray(),
+    db.rows('books').toArray(),
+    db.rows('pageTemplates').toArray(),
+  ]);
+  return {
+    notebook,
+    pages: byPosition(pages).map((page) => ({ id: page.id, title: page.title ?? '', excerpt: excerpt(page.body ?? '') })),
+    books: bookOptions(books),
+    templates: ownTemplates(templates),
+  };
+}
+
+/** The first words of a page, without formatting marks. */
+function excerpt(body: string): string {
+  // Lines and blocks run on, with a dot between them so headings and items stay apart.
+  const text = lightPlainText(parseLightFormat(body.slice(0, EXCERPT_LENGTH * 4)))
+    .split('\n')
+    .map((line) => line.replace(/\s+/g, ' ').trim())
+    .filter(Boolean)
+    .join(' · ');
+  return text.length > EXCERPT_LENGTH ? `${text.slice(0, EXCERPT_LENGTH - 1).trimEnd()}…` : text;
 }

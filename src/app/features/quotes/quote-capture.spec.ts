@@ -1,31 +1,17 @@
-import { provideHttpClient } from '@angular/common/http';
 import { ApplicationRef } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { MatDialog } from '@angular/material/dialog';
-import Dexie from 'dexie';
 
 import { STARTER_LABELS } from '@shared/journal/starter-labels';
 import type { Quote } from '@shared/sync/schema/collections';
 import { loadTextDoc, textDocName, textOf } from '@shared/text/text-doc';
 import { decodeTextBytes } from '@shared/text/text-value';
 
-import { forgetSession, READER, rememberSession } from '../../core/auth/testing/session-fixtures';
-import { journalDbName } from '../../core/data/journal-db';
+import { found as until, openTestJournal, type TestJournal } from '../../core/testing/test-journal';
 import { JournalStore } from '../../core/data/journal-store';
 import { LocalJournal } from '../../core/data/local-journal';
 import { UnsavedWork } from '../../core/pwa/unsaved-work';
 import { QuoteCapture } from './quote-capture';
-
-/** Waits (a little at a time) until `check` holds; the dialog and Dexie answer asynchronously. */
-async function until<T>(check: () => T | null | undefined | false, what: string): Promise<T> {
-  for (let i = 0; i < 200; i++) {
-    const value = check();
-    if (value) return value;
-    await TestBed.inject(ApplicationRef).whenStable();
-    await new Promise((resolve) => setTimeout(resolve, 10));
-  }
-  throw new Error(`Timed out waiting for ${what}`);
-}
 
 const dialog = () => document.querySelector<HTMLElement>('ll-quote-capture-dialog');
 /** The input, text area or select of the dialog's field with this label, if it is there. */
@@ -49,22 +35,18 @@ const errors = () => Array.from(dialog()?.querySelectorAll('mat-error') ?? []).m
 describe('QuoteCapture and its dialog', () => {
   let capture: QuoteCapture;
   let store: JournalStore;
-  let userId: string;
+  let journal: TestJournal;
 
   beforeEach(() => {
-    userId = `spec-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({ providers: [provideHttpClient()] });
+    journal = openTestJournal();
     capture = TestBed.inject(QuoteCapture);
-    store = TestBed.inject(JournalStore);
+    store = journal.store;
   });
 
   afterEach(async () => {
     TestBed.inject(MatDialog).closeAll();
     await new Promise((resolve) => setTimeout(resolve, 0));
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   const quotes = async () => (await store.list('quotes')) as Quote[];

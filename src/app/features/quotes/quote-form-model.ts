@@ -1,6 +1,7 @@
 import { formatAudioPosition, parseAudioPosition } from '@shared/journal/audio-position';
 import type { PatchOf } from '@shared/sync/schema/collection';
 import type { Book, Quote, quotes } from '@shared/sync/schema/collections';
+import { optionalText, splitList } from '@shared/text/form-text';
 
 /** The book's format decides what the position field means; a quote with no book counts pages. */
 export type PositionFormat = NonNullable<Book['format']>;
@@ -92,17 +93,6 @@ export function tagsError(tags: string): string | null {
   if (list.some((tag) => tag.length > MAX_TAG_LENGTH)) return `Keep each tag to ${MAX_TAG_LENGTH} characters`;
   return null;
 }
-
-const optionalText = (value: string) => (value.trim() === '' ? null : value.trim());
-/** "late, sea , late" → ['late', 'sea']. */
-const splitList = (value: string) => [
-  ...new Set(
-    value
-      .split(/[,\n]/)
-      .map((item) => item.trim())
-      .filter(Boolean),
-  ),
-];
 
 /**
  * Form values as field values. The position goes to the one field of the book's format and the

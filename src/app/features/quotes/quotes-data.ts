@@ -19,3 +19,6 @@ export async function bookQuotes(db: JournalDb, bookId: string): Promise<{ book:
   const [book, quotes] = await Promise.all([db.rows('books').get(bookId), db.rows('quotes').where('bookId').equals(bookId).filter(isCurrent).toArray()]);
   return { book, quotes: quotes.sort(newestFirst) };
 }
+
+/** The books still on the shelf, to choose the one a quote comes from. */
+export const booksToQuote = (db: JournalDb): Promise<Book[]> => db.current('books');

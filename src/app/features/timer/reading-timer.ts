@@ -3,17 +3,17 @@ import { computed, effect, inject, Injectable, signal, type Signal } from '@angu
 import { MAX_SESSION_HOURS } from '@shared/reading/session-problems';
 import { pauseTimer, resumeTimer, sessionFromTimer, startTimer, timerElapsedMs } from '@shared/reading/timer-clock';
 import { deterministicId } from '@shared/sync/deterministic-id';
-import type { Book, Session, Timer } from '@shared/sync/schema/collections';
+import type { Session, Timer } from '@shared/sync/schema/collections';
 
 import { JournalStore, type RowWrite } from '../../core/data/journal-store';
 import { liveQuerySignal } from '../../core/data/live-query';
 import { deviceId } from '../../core/device/device-id';
 import { thisDeviceName } from '../../core/device/device-name';
 import { latestSession } from './book-progress';
+import { NO_TIMER, TIMER_ROW_ID, timerAndBook } from './timer-data';
 import { CLOCK } from '../../core/time/clock';
 
-/** The one timer row of a reader: one per reader, the same on every device. */
-export const TIMER_ROW_ID = deterministicId('reading-timer', 'current');
+export { TIMER_ROW_ID } from './timer-data';
 
 /** What `start` did: started, or refused because another timer runs (`current`). */
 export type StartOutcome = { readonly started: true; readonly stoppedSessionId: string | null } | { readonly started: false; readonly current: Timer };
@@ -43,14 +43,7 @@ const MAX_SESSION_MS = MAX_SESSION_HOURS * 3600_000;
 export class ReadingTimer {
   private readonly store = inject(JournalStore);
   private readonly clock = inject(CLOCK);
-  private readonly live = liveQuerySignal(
-    async (db) => {
-      const timer = await db.rows('timers').get(TIMER_ROW_ID);
-      const book = timer?.bookId ? await db.rows('books').get(timer.bookId) : undefined;
-      return { loaded: true, timer, book };
-    },
-    { loaded: false, timer: undefined as Timer | undefined, book: undefined as Book | undefined },
-  );
+  private readonly live = liveQuerySignal(timerAndBook, NO_TIMER);
   private readonly nowMs = signal(this.clock.now());
 
   /** The stored timer row, live (from this tab, other tabs and sync). */
@@ -150,7 +143,7 @@ export class ReadingTimer {
   }
 
   private async sessionsOf(bookId: string): Promise<Session[]> {
-    return (await this.store.list('sessions')).filter((s) => s.bookId === bookId) as Session[];
+    return (await this.store.list('sessions')).filter((s) => s.bookId === bookId);
   }
 
   /**

@@ -1,9 +1,6 @@
-import { provideHttpClient } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
-import Dexie from 'dexie';
 
-import { forgetSession, READER, rememberSession } from '../../core/auth/testing/session-fixtures';
-import { journalDbName } from '../../core/data/journal-db';
+import { openTestJournal, type TestJournal } from '../../core/testing/test-journal';
 import { JournalStore } from '../../core/data/journal-store';
 import { CLOCK } from '../../core/time/clock';
 import { NOTIFIER } from './notifier';
@@ -16,7 +13,7 @@ import { until } from './testing/until';
 const MINUTE = 60_000;
 
 describe('TimerReminders', () => {
-  let userId: string;
+  let journal: TestJournal;
   let clock: FakeClock;
   let notifier: FakeNotifier;
   let timer: ReadingTimer;
@@ -24,24 +21,21 @@ describe('TimerReminders', () => {
   let store: JournalStore;
 
   beforeEach(() => {
-    userId = `spec-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
     localStorage.removeItem('lamplight.timerNotify');
     clock = new FakeClock();
     notifier = new FakeNotifier('default', 'granted');
-    TestBed.configureTestingModule({
-      providers: [provideHttpClient(), { provide: CLOCK, useValue: clock }, { provide: NOTIFIER, useValue: notifier }],
-    });
-    store = TestBed.inject(JournalStore);
+    journal = openTestJournal([
+      { provide: CLOCK, useValue: clock },
+      { provide: NOTIFIER, useValue: notifier },
+    ]);
+    store = journal.store;
     timer = TestBed.inject(ReadingTimer);
     reminders = TestBed.inject(TimerReminders);
   });
 
   afterEach(async () => {
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
+    await journal.close();
     localStorage.removeItem('lamplight.timerNotify');
-    forgetSession();
   });
 
   /** Moves the fake clock on a minute at a time, letting effects run in between. */

@@ -1,13 +1,10 @@
-import { provideHttpClient } from '@angular/common/http';
 import { TestBed, type ComponentFixture } from '@angular/core/testing';
 import { MatDialog } from '@angular/material/dialog';
 import { provideRouter, Router } from '@angular/router';
-import Dexie from 'dexie';
 
 import type { Session, Timer } from '@shared/sync/schema/collections';
 
-import { forgetSession, READER, rememberSession } from '../../core/auth/testing/session-fixtures';
-import { journalDbName } from '../../core/data/journal-db';
+import { openTestJournal, type TestJournal } from '../../core/testing/test-journal';
 import { JournalStore } from '../../core/data/journal-store';
 import { CLOCK } from '../../core/time/clock';
 import { ReadingTimer, TIMER_ROW_ID } from './reading-timer';
@@ -18,26 +15,19 @@ import { TimerStartButton } from './timer-start-button/timer-start-button';
 const MINUTE = 60_000;
 
 describe('Starting the timer from a start button', () => {
-  let userId: string;
+  let journal: TestJournal;
   let clock: FakeClock;
   let store: JournalStore;
 
   beforeEach(() => {
-    userId = `spec-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
     clock = new FakeClock();
-    TestBed.configureTestingModule({
-      imports: [TimerStartButton],
-      providers: [provideRouter([{ path: 'timer', children: [] }]), provideHttpClient(), { provide: CLOCK, useValue: clock }],
-    });
-    store = TestBed.inject(JournalStore);
+    journal = openTestJournal([provideRouter([{ path: 'timer', children: [] }]), { provide: CLOCK, useValue: clock }]);
+    store = journal.store;
   });
 
   afterEach(async () => {
     TestBed.inject(MatDialog).closeAll();
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   function startButton(bookId: string, title: string, compact = false): ComponentFixture<TimerStartButton> {

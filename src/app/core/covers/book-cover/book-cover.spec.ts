@@ -1,12 +1,13 @@
-import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 
 import type { JournalDb } from '../../data/journal-db';
-import { openTestJournal, type TestJournal } from '../../testing/test-journal';
+import { openTestJournal, waitFor, type TestJournal } from '../../testing/test-journal';
 import { placeholderColour } from '../cover-placeholder';
 import { sha256Hex } from '../sha256-hex';
 import { drawnImage } from '../testing/test-images';
 import { BookCover } from './book-cover';
+import { sent as sentTo } from '../../sync/testing/sync-backend';
 
 describe('BookCover', () => {
   let fixture: ComponentFixture<BookCover>;
@@ -19,23 +20,9 @@ describe('BookCover', () => {
   const image = () => element().querySelector('img');
   const placeholder = () => element().querySelector<HTMLElement>('.placeholder');
 
-  async function until(check: () => unknown, what: string): Promise<void> {
-    for (let i = 0; i < 200; i++) {
-      await fixture.whenStable();
-      if (check()) return;
-      await turn();
-    }
-    throw new Error(`gave up waiting for ${what}`);
-  }
+  const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
-  async function sent(url: string): Promise<TestRequest> {
-    for (let i = 0; i < 200; i++) {
-      const [found] = backend.match(url);
-      if (found) return found;
-      await turn();
-    }
-    throw new Error(`no request to ${url} was sent`);
-  }
+  const sent = (url: string) => sentTo(backend, url);
 
   async function loaded(img: HTMLImageElement): Promise<void> {
     if (!img.complete) await new Promise((resolve) => img.addEventListener('load', resolve, { once: true }));

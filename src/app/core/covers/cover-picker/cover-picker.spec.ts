@@ -1,5 +1,5 @@
 import { HttpEventType } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
@@ -9,6 +9,7 @@ import { openTestJournal, type TestJournal } from '../../testing/test-journal';
 import { sha256Hex } from '../sha256-hex';
 import { drawnImage } from '../testing/test-images';
 import { CoverPicker } from './cover-picker';
+import { sent as sentTo } from '../../sync/testing/sync-backend';
 
 @Component({
   imports: [CoverPicker, ReactiveFormsModule],
@@ -40,14 +41,7 @@ describe('CoverPicker', () => {
     throw new Error(`gave up waiting for ${what}`);
   }
 
-  async function sent(url: string): Promise<TestRequest> {
-    for (let i = 0; i < 300; i++) {
-      const [found] = backend.match(url);
-      if (found) return found;
-      await turn();
-    }
-    throw new Error(`no request to ${url} was sent`);
-  }
+  const sent = (url: string) => sentTo(backend, url);
 
   /** Hands a file to one of the picker's inputs, as the browser's file dialog would. */
   function choose(label: string, file: File): void {

@@ -1,33 +1,25 @@
-import { provideHttpClient } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
-import Dexie from 'dexie';
 
 import { formatHlc } from '@shared/sync/hlc';
 
-import { forgetSession, READER, rememberSession } from '../../auth/testing/session-fixtures';
-import { journalDbName } from '../../data/journal-db';
-import { LocalJournal } from '../../data/local-journal';
 import { until } from '../testing/sync-backend';
 import { rememberOverwritten } from '../overwritten-edits';
 import { OverwrittenNote } from './overwritten-note';
+import { openTestJournal, type TestJournal } from '../../testing/test-journal';
 
 describe('OverwrittenNote', () => {
-  let userId: string;
+  let journal: TestJournal;
 
   beforeEach(() => {
-    userId = `note-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({ providers: [provideHttpClient()] });
+    journal = openTestJournal();
   });
 
   afterEach(async () => {
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   it('shows which edit another device overwrote: the field, what was written here, what it reads now, and the device', async () => {
-    const db = TestBed.inject(LocalJournal).db()!;
+    const db = journal.db;
     const rowId = crypto.randomUUID();
     const change = {
       id: crypto.randomUUID(),

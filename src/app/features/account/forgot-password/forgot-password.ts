@@ -1,17 +1,14 @@
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
-import { firstValueFrom } from 'rxjs';
-
-import type { ResetRequested } from '@shared/api/auth';
 
 import { AccountPage } from '../account-page/account-page';
 import { fieldError } from '../../../ui/field-errors';
 import { FormSubmission } from '../../../ui/form-submission';
+import { AccountApi } from '../../../core/auth/account-api';
 
 /** Ask for a link to choose a new password. The answer never says whether the address exists. */
 @Component({
@@ -22,7 +19,7 @@ import { FormSubmission } from '../../../ui/form-submission';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ForgotPassword {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(AccountApi);
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
     email: ['', [Validators.required, Validators.email]],
@@ -33,7 +30,7 @@ export class ForgotPassword {
 
   protected async requestLink(): Promise<void> {
     await this.submission.submit(this.form, async () => {
-      const answer = await firstValueFrom(this.http.post<ResetRequested>('/api/auth/password-reset/request', this.form.getRawValue()));
+      const answer = await this.api.requestPasswordReset(this.form.getRawValue());
       this.sent.set(answer.message);
     });
   }

@@ -1,11 +1,9 @@
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
-import { firstValueFrom } from 'rxjs';
 
 import { PASSWORD_MIN_LENGTH } from '@shared/account/password-policy';
 
@@ -13,6 +11,7 @@ import { AccountPage } from '../account-page/account-page';
 import { fieldError } from '../../../ui/field-errors';
 import { FormSubmission } from '../../../ui/form-submission';
 import { passwordPolicy } from '../../../ui/password-validator';
+import { AccountApi } from '../../../core/auth/account-api';
 
 /**
  * The page a reset link opens. The token travels in the URL fragment (`#token=…`), which
@@ -26,7 +25,7 @@ import { passwordPolicy } from '../../../ui/password-validator';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ResetPassword {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(AccountApi);
 
   protected readonly token = new URLSearchParams(globalThis.location?.hash.slice(1) ?? '').get('token') ?? '';
   protected readonly form = inject(FormBuilder).nonNullable.group({
@@ -38,9 +37,7 @@ export class ResetPassword {
   protected readonly fieldError = fieldError;
 
   protected async choosePassword(): Promise<void> {
-    const sent = await this.submission.submit(this.form, () =>
-      firstValueFrom(this.http.post('/api/auth/password-reset/confirm', { token: this.token, ...this.form.getRawValue() })),
-    );
+    const sent = await this.submission.submit(this.form, () => this.api.confirmPasswordReset({ token: this.token, ...this.form.getRawValue() }));
     this.done.set(sent);
   }
 }

@@ -1,14 +1,11 @@
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal, type OnInit } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { RouterLink } from '@angular/router';
-import { firstValueFrom } from 'rxjs';
-
-import type { EmailVerified } from '@shared/api/auth';
 
 import { Auth } from '../../../core/auth/auth';
 import { readableError } from '../../../core/http/api-error-message';
 import { AccountPage } from '../account-page/account-page';
+import { AccountApi } from '../../../core/auth/account-api';
 
 type Step = 'checking' | 'verified' | 'refused' | 'link-sent';
 
@@ -24,7 +21,7 @@ type Step = 'checking' | 'verified' | 'refused' | 'link-sent';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class VerifyEmail implements OnInit {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(AccountApi);
   protected readonly auth = inject(Auth);
 
   protected readonly token = new URLSearchParams(globalThis.location?.hash.slice(1) ?? '').get('token') ?? '';
@@ -41,7 +38,7 @@ export class VerifyEmail implements OnInit {
 
   protected async sendNewLink(): Promise<void> {
     try {
-      await firstValueFrom(this.http.post<EmailVerified>('/api/auth/verify-email/send', {}));
+      await this.api.sendVerificationLink();
       this.step.set('link-sent');
     } catch (error) {
       this.refuse(readableError(error).message);
@@ -50,7 +47,7 @@ export class VerifyEmail implements OnInit {
 
   private async confirm(): Promise<void> {
     try {
-      await firstValueFrom(this.http.post<EmailVerified>('/api/auth/verify-email', { token: this.token }));
+      await this.api.verifyEmail(this.token);
       this.step.set('verified');
     } catch (error) {
       this.refuse(readableError(error).message);

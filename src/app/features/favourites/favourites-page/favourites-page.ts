@@ -6,7 +6,7 @@ import { MatInputModule } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 
 import { deterministicId } from '@shared/sync/deterministic-id';
-import { FAVOURITE_KINDS, type Book, type Favourite, type MonthPick, type Quote } from '@shared/sync/schema/collections';
+import { FAVOURITE_KINDS, type Favourite, type MonthPick } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
@@ -14,13 +14,15 @@ import { fieldError } from '../../../ui/field-errors';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { readerToday } from '../../../core/time/reader-today';
 import { ReaderDatePipe } from '../../../ui/reader-date';
+import { favouritesAndSubjects, NO_FAVOURITES } from '../favourites-data';
+import { ChoiceField } from '../../../ui/choice-field/choice-field';
 
 const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'Book', author: 'Author', quote: 'Quote' };
 
 /** Favourite books, authors and quotes, each with why; and a pick for each month of the year. */
 @Component({
   selector: 'll-favourites-page',
-  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ChoiceField, ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
   templateUrl: './favourites-page.html',
   styleUrl: './favourites-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,15 +30,7 @@ const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'B
 export class FavouritesPage {
   private readonly store = inject(JournalStore);
   private readonly deleteWithUndo = undoableDelete();
-  private readonly data = liveQuerySignal(
-    async (db) => ({
-      favourites: await db.current('favourites'),
-      picks: await db.current('monthPicks'),
-      books: await db.current('books'),
-      quotes: await db.current('quotes'),
-    }),
-    { favourites: [] as Favourite[], picks: [] as MonthPick[], books: [] as Book[], quotes: [] as Quote[] },
-  );
+  private readonly data = liveQuerySignal(favouritesAndSubjects, NO_FAVOURITES);
   protected readonly books = computed(() => [...this.data().books].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')));
   protected readonly quotes = computed(() => this.data().quotes);
   private readonly bookById = computed(() => new Map(this.data().books.map((b) => [b.id, b])));
@@ -48,7 +42,7 @@ export class FavouritesPage {
   /** The year whose months are shown. */
   protected readonly year = signal(Number(this.today.slice(0, 4)));
   protected readonly months = computed(() => {
-    const picks = new Map(this.data().picks.map((pick) => [pick.month, pick]));
+    const picks = new Map(this.data().monthPicks.map((pick) => [pick.month, pick]));
     return Array.from({ length: 12 }, (_, n) => {
       const month = `${this.year()}-${String(n + 1).padStart(2, '0')}`;
       const pick = picks.get(month);

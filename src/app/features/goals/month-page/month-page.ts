@@ -13,7 +13,7 @@ import { GOAL_UNITS, type GoalUnit } from '@shared/goals/goal-unit';
 import { monthAccount } from '@shared/goals/month-account';
 import { monthProgress } from '@shared/goals/month-progress';
 import { deterministicId } from '@shared/sync/deterministic-id';
-import type { BookStatusChange, MonthPlan, Quote } from '@shared/sync/schema/collections';
+import type { MonthPlan } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
@@ -26,6 +26,7 @@ import { PaceBar } from '../pace-bar/pace-bar';
 import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
 import { ReaderDatePipe } from '../../../ui/reader-date';
 import { ReaderSettings } from '../../../core/settings/reader-settings';
+import { NO_STATUS_CHANGES_OR_QUOTES, statusChangesAndQuotes } from '../goals-data';
 
 /** Largest monthly targets the schema takes, by unit. */
 const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 1_000, pages: 1_000_000, minutes: 50_000 };
@@ -86,13 +87,7 @@ export class MonthPage {
   });
   private readonly timeZone = inject(TIME_ZONE);
   /** Status changes and quotes: what the month's account reads besides the goal rows. */
-  private readonly journalExtras = liveQuerySignal(
-    async (db) => ({
-      statusChanges: ((await db.rows('bookStatusChanges').toArray()) as BookStatusChange[]).filter((row) => !row.deleted),
-      quotes: ((await db.rows('quotes').toArray()) as Quote[]).filter((row) => !row.deleted),
-    }),
-    { statusChanges: [] as BookStatusChange[], quotes: [] as Quote[] },
-  );
+  private readonly journalExtras = liveQuerySignal(statusChangesAndQuotes, NO_STATUS_CHANGES_OR_QUOTES);
   protected readonly account = computed(() =>
     monthAccount({
       month: this.key() ?? '0000-01',
@@ -100,7 +95,8 @@ export class MonthPage {
       timeZone: this.timeZone,
       sessions: this.record.rows()?.sessions ?? [],
       readings: this.record.rows()?.readings ?? [],
-      ...this.journalExtras(),
+      statusChanges: this.journalExtras().bookStatusChanges,
+      quotes: this.journalExtras().quotes,
     }),
   );
   private readonly titled = (ids: readonly string[]) => ids.map((id) => ({ id, title: this.record.bookById().get(id)?.title || 'Untitled' }));

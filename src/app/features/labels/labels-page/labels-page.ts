@@ -11,6 +11,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { fieldError, notBlank } from '../../../ui/field-errors';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { LabelDirectory, type LabelView } from '../../../core/read-model/label-directory';
+import { ChoiceField } from '../../../ui/choice-field/choice-field';
 
 /** Words for our colours and icons, so choices read well to everyone. */
 const COLOUR_NAMES: Record<NonNullable<Label['colour']>, string> = {
@@ -39,7 +40,7 @@ const ICON_NAMES: Record<NonNullable<Label['icon']>, string> = {
 /** The reader's labels: our starter set and their own, to rename, recolour, add or remove. */
 @Component({
   selector: 'll-labels-page',
-  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  imports: [ChoiceField, ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
   templateUrl: './labels-page.html',
   styleUrl: './labels-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

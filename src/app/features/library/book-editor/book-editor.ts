@@ -25,6 +25,8 @@ import { BookStatus } from '../../../core/read-model/book-status';
 import { CatalogueFill, CatalogueSearch, FILLABLE_FIELDS, PendingLookups, type FillInResult, type FillValues } from '../../catalogue';
 import { IsbnScanButton } from '../isbn-scanner/isbn-scan-button';
 import { changedFields, EMPTY_BOOK_FORM, toFields, toFormValue, type BookFormValue } from './book-form-model';
+import { seriesByName } from '../library-data';
+import { ChoiceField, RATING_CHOICES, RATING_WORDS } from '../../../ui/choice-field/choice-field';
 
 const isbnValidator = (control: AbstractControl<string>) =>
   !control.value?.trim() || normalizeIsbn(control.value) ? null : { server: 'Enter a valid ISBN-10 or ISBN-13 (check the digits)' };
@@ -40,6 +42,7 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
 @Component({
   selector: 'll-book-editor',
   imports: [
+    ChoiceField,
     ReactiveFormsModule,
     RouterLink,
     MatButtonModule,
@@ -106,10 +109,7 @@ export class BookEditor {
   /** The DNF and wishlist sections appear only where they apply. */
   protected readonly dnf = computed(() => this.status() === 'dnf');
   protected readonly wished = computed(() => this.copy() === 'wishlist');
-  protected readonly allSeries = liveQuerySignal(
-    async (db) => (await db.current('series')).sort((a, b) => (a.name ?? '').localeCompare(b.name ?? '')),
-    [] as Series[],
-  );
+  protected readonly allSeries = liveQuerySignal(seriesByName, [] as Series[]);
   protected readonly progressUnits = PROGRESS_UNITS;
   protected readonly progressUnitLabels = { page: 'Page', percent: 'Percent', minute: 'Minute' } as const;
   protected readonly priorities = WISH_PRIORITIES;
@@ -122,7 +122,8 @@ export class BookEditor {
   protected readonly formatLabels = FORMAT_LABELS;
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly copyLabels = COPY_LABELS;
-  protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
+  protected readonly ratings = RATING_CHOICES;
+  protected readonly ratingWords = RATING_WORDS;
   protected readonly fieldError = fieldError;
   /** Cancel discards on purpose, so it leaves without asking. */
   protected readonly leaveWithoutAsking = LEAVE_WITHOUT_ASKING;

@@ -1,6 +1,7 @@
 import { normalizeIsbn } from '@shared/isbn/normalize-isbn';
 import type { PatchOf } from '@shared/sync/schema/collection';
 import type { Book, books } from '@shared/sync/schema/collections';
+import { optionalText, splitList } from '@shared/text/form-text';
 
 /** The editor's form values: what the inputs hold, as text where the reader types text. */
 export interface BookFormValue {
@@ -103,18 +104,8 @@ export function toFormValue(book: Book): BookFormValue {
   };
 }
 
-const optionalText = (value: string) => (value.trim() === '' ? null : value.trim());
 /** A decimal comma ("2,5") reads as a point: the editor's decimal fields accept either. */
 const optionalNumber = (value: string) => (value.trim() === '' ? null : Number(value.trim().replace(',', '.')));
-/** "Nell Ashby, Tomas Reyes" → ['Nell Ashby', 'Tomas Reyes']; repeated names once. */
-const splitList = (value: string) => [
-  ...new Set(
-    value
-      .split(/[,\n]/)
-      .map((item) => item.trim())
-      .filter(Boolean),
-  ),
-];
 
 /** Form values as field values: lists split on commas, blanks as null, ISBN-10 as ISBN-13. */
 export function toFields(value: BookFormValue): PatchOf<typeof books> {

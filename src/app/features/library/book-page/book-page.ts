@@ -3,9 +3,8 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { Router, RouterLink } from '@angular/router';
 
-import { BOOK_STATUSES, type Book, type BookStatusChange, type Reading, type Series } from '@shared/sync/schema/collections';
+import { BOOK_STATUSES, type Book, type Reading } from '@shared/sync/schema/collections';
 
-import type { JournalDb } from '../../../core/data/journal-db';
 import { BookCover } from '../../../core/covers/book-cover/book-cover';
 import { OverwrittenNote } from '../../../core/sync/overwritten-note/overwritten-note';
 import { CatalogueOffer } from '../../catalogue';
@@ -24,29 +23,7 @@ import { askToConfirm } from '../../../ui/confirm-dialog/ask-to-confirm';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { companionLine } from '@shared/trash/companion-words';
 import { ReaderDatePipe } from '../../../ui/reader-date';
-
-/** Everything the reader keeps about one book, on this device, together with what is linked to it. */
-interface BookDossier {
-  readonly book: Book | undefined;
-  readonly readings: Reading[];
-  readonly history: BookStatusChange[];
-  readonly series: Series | undefined;
-}
-
-async function dossier(db: JournalDb, id: string): Promise<BookDossier> {
-  const [book, readings, history] = await Promise.all([
-    db.rows('books').get(id),
-    db.rows('readings').where('bookId').equals(id).toArray(),
-    db.rows('bookStatusChanges').where('bookId').equals(id).toArray(),
-  ]);
-  const series = book?.seriesId ? await db.rows('series').get(book.seriesId) : undefined;
-  return {
-    book,
-    series: series?.deleted ? undefined : series,
-    readings: readings.filter((r) => !r.deleted).sort((a, b) => (b.startedOn ?? '').localeCompare(a.startedOn ?? '')),
-    history: history.filter((h) => !h.deleted).sort((a, b) => (b.changedAt ?? '').localeCompare(a.changedAt ?? '')),
-  };
-}
+import { bookDossier } from '../library-data';
 
 /** One book: its details, its readings with reviews, and its status history, live from this device. */
 @Component({
@@ -81,7 +58,7 @@ export class BookPage {
   private readonly deleteWithUndo = undoableDelete();
   private readonly bookStatus = inject(BookStatus);
   private readonly quoteCapture = inject(QuoteCapture);
-  private readonly data = liveQueryFor(this.id, dossier);
+  private readonly data = liveQueryFor(this.id, bookDossier);
   protected readonly book = computed(() => this.data()?.book);
   protected readonly readings = computed(() => this.data()?.readings ?? []);
   protected readonly history = computed(() => this.data()?.history ?? []);

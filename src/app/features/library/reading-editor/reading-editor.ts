@@ -16,11 +16,12 @@ import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../../ui/field-errors';
 import { RECOMMEND_LABELS } from '../../../ui/book-labels';
 import { changedReadingFields, EMPTY_READING_FORM, readingDatesValidator, toReadingFields, toReadingForm, type ReadingFormValue } from './reading-form-model';
+import { ChoiceField, RATING_CHOICES, RATING_WORDS } from '../../../ui/choice-field/choice-field';
 
 /** One reading of a book: its dates and the review. A re-read is simply another reading. */
 @Component({
   selector: 'll-reading-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MergeableTextarea],
+  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MergeableTextarea],
   templateUrl: './reading-editor.html',
   styleUrl: './reading-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -49,7 +50,8 @@ export class ReadingEditor {
   );
   protected readonly bookTitle = signal('');
   protected readonly problem = signal('');
-  protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
+  protected readonly ratings = RATING_CHOICES;
+  protected readonly ratingWords = RATING_WORDS;
   protected readonly answers = RECOMMEND_ANSWERS;
   protected readonly answerLabels = RECOMMEND_LABELS;
   protected readonly fieldError = fieldError;

@@ -2,6 +2,7 @@ import type { AbstractControl, ValidationErrors } from '@angular/forms';
 
 import type { PatchOf } from '@shared/sync/schema/collection';
 import type { Reading, readings } from '@shared/sync/schema/collections';
+import { optionalText } from '@shared/text/form-text';
 
 /** The reading editor's form values. */
 export interface ReadingFormValue {
@@ -39,18 +40,16 @@ export function toReadingForm(reading: Reading): ReadingFormValue {
   };
 }
 
-const blank = (value: string) => (value.trim() === '' ? null : value.trim());
-
 export function toReadingFields(value: ReadingFormValue): PatchOf<typeof readings> {
   return {
-    startedOn: blank(value.startedOn),
-    finishedOn: blank(value.finishedOn),
+    startedOn: optionalText(value.startedOn),
+    finishedOn: optionalText(value.finishedOn),
     rating: value.rating === '' ? null : Number(value.rating),
-    summary: blank(value.summary),
-    review: blank(value.review),
-    takeaways: blank(value.takeaways),
+    summary: optionalText(value.summary),
+    review: optionalText(value.review),
+    takeaways: optionalText(value.takeaways),
     recommend: value.recommend === '' ? null : value.recommend,
-    recommendTo: blank(value.recommendTo),
+    recommendTo: optionalText(value.recommendTo),
   };
 }
 

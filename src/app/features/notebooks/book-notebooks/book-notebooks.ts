@@ -3,20 +3,8 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 
-import type { JournalDb } from '../../../core/data/journal-db';
-import { summarizeNotebooks } from '../notebook-data';
+import { notebooksAbout } from '../notebook-data';
 import { liveQueryFor } from '../../../core/data/live-query-for';
-
-async function notebooksAbout(db: JournalDb, bookId: string) {
-  // Readers keep few notebooks, so a scan is fine (notebooks are not indexed by book).
-  const notebooks = await db.rows('notebooks').where('bookId').equals(bookId).toArray();
-  const pages = await db
-    .rows('notebookPages')
-    .where('notebookId')
-    .anyOf(notebooks.map((notebook) => notebook.id))
-    .toArray();
-  return summarizeNotebooks(notebooks, pages, []);
-}
 
 /** The notebooks attached to one book, for the book's page; live from this device. */
 @Component({

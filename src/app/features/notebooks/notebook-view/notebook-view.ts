@@ -7,54 +7,19 @@ import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 import { format } from 'date-fns';
 
-import { lightPlainText, parseLightFormat } from '@shared/journal/light-format';
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
-import { byPosition } from '@shared/journal/page-order';
-import { ownTemplates, STARTER_TEMPLATES } from '@shared/journal/starter-templates';
+import { STARTER_TEMPLATES } from '@shared/journal/starter-templates';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
-import type { JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
-import { bookOptions } from '../notebook-data';
+import { notebookContents } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
 import { liveQueryFor } from '../../../core/data/live-query-for';
 import { undoableDelete } from '../../../ui/undoable-delete';
-
-const EXCERPT_LENGTH = 160;
-
-async function notebookData(db: JournalDb, id: string) {
-  const [notebook, pages, books, templates] = await Promise.all([
-    db.rows('notebooks').get(id),
-    db.rows('notebookPages').where('notebookId').equals(id).toArray(),
-    db.rows('books').toArray(),
-    db.rows('pageTemplates').toArray(),
-  ]);
-  return {
-    notebook,
-    pages: byPosition(pages.filter((page) => !page.deleted)).map((page) => ({
-      id: page.id,
-      title: page.title ?? '',
-      excerpt: excerpt(page.body ?? ''),
-    })),
-    books: bookOptions(books),
-    templates: ownTemplates(templates),
-  };
-}
-
-/** The first words of a page, without formatting marks. */
-function excerpt(body: string): string {
-  // Lines and blocks run on, with a dot between them so headings and items stay apart.
-  const text = lightPlainText(parseLightFormat(body.slice(0, EXCERPT_LENGTH * 4)))
-    .split('\n')
-    .map((line) => line.replace(/\s+/g, ' ').trim())
-    .filter(Boolean)
-    .join(' · ');
-  return text.length > EXCERPT_LENGTH ? `${text.slice(0, EXCERPT_LENGTH - 1).trimEnd()}…` : text;
-}
 
 /** One notebook: its pages in order, adding and arranging them, and the notebook's title and book. */
 @Component({
@@ -73,7 +38,7 @@ export class NotebookView {
   private readonly router = inject(Router);
   private readonly deleteWithUndo = undoableDelete();
 
-  private readonly data = liveQueryFor(this.id, notebookData);
+  private readonly data = liveQueryFor(this.id, notebookContents);
   protected readonly notebook = computed(() => this.data()?.notebook);
   protected readonly pages = computed(() => this.data()?.pages ?? []);
   protected readonly books = computed(() => this.data()?.books ?? []);

@@ -12,7 +12,7 @@ import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
-import { bookOptions, summarizeNotebooks, type BookOption, type NotebookSummary } from '../notebook-data';
+import { bookChoices, notebookSummaries, type BookOption, type NotebookSummary } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
 import { ReaderDatePipe } from '../../../ui/reader-date';
@@ -33,11 +33,8 @@ export class NotebooksPage {
   readonly book = input<string>();
 
   /** `null` until the first read from this device. */
-  protected readonly notebooks = liveQuerySignal<NotebookSummary[] | null>(async (db) => {
-    const [notebooks, pages, books] = await Promise.all([db.rows('notebooks').toArray(), db.rows('notebookPages').toArray(), db.rows('books').toArray()]);
-    return summarizeNotebooks(notebooks, pages, books);
-  }, null);
-  protected readonly books = liveQuerySignal<BookOption[]>(async (db) => bookOptions(await db.rows('books').toArray()), []);
+  protected readonly notebooks = liveQuerySignal<NotebookSummary[] | null>(notebookSummaries, null);
+  protected readonly books = liveQuerySignal<BookOption[]>(bookChoices, []);
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
     title: ['', [Validators.required, notBlank, Validators.maxLength(NOTEBOOK_LIMITS.notebookTitle)]],

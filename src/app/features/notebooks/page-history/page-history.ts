@@ -1,11 +1,10 @@
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
-import { firstValueFrom } from 'rxjs';
 
-import type { TextVersion, TextVersionsResponse } from '@shared/api/text-history';
+import type { TextVersion } from '@shared/api/text-history';
 import { ReaderSettings } from '../../../core/settings/reader-settings';
+import { TextHistoryApi } from './text-history-api';
 
 /**
  * A page's earlier versions (the last 30 days, one per ten minutes of editing, kept by the
@@ -20,7 +19,7 @@ import { ReaderSettings } from '../../../core/settings/reader-settings';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PageHistory {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(TextHistoryApi);
   private readonly dates = inject(ReaderSettings);
 
   /** The page whose history this is. */
@@ -36,7 +35,7 @@ export class PageHistory {
     this.state.set('loading');
     this.chosen.set(null);
     try {
-      const answer = await firstValueFrom(this.http.get<TextVersionsResponse>(`/api/texts/notebookPages/${this.pageId()}/body/versions`));
+      const answer = await this.api.pageVersions(this.pageId());
       this.versions.set(answer.versions);
       this.state.set('open');
     } catch {

@@ -6,12 +6,13 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
-import { ownTemplates, STARTER_TEMPLATES, type TemplateView } from '@shared/journal/starter-templates';
+import { STARTER_TEMPLATES, type TemplateView } from '@shared/journal/starter-templates';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { fieldError, notBlank } from '../../../ui/field-errors';
 import { Notebooks } from '../notebooks';
+import { ownPageTemplates } from '../notebook-data';
 import { undoableDelete } from '../../../ui/undoable-delete';
 
 /** The reader's own page templates: rename or delete them. The starter ones are listed as they are. */
@@ -26,7 +27,7 @@ export class PageTemplates {
   private readonly notebooks = inject(Notebooks);
   private readonly deleteWithUndo = undoableDelete();
 
-  protected readonly own = liveQuerySignal(async (db) => ownTemplates(await db.rows('pageTemplates').toArray()), [] as TemplateView[]);
+  protected readonly own = liveQuerySignal(ownPageTemplates, [] as TemplateView[]);
   protected readonly starters = STARTER_TEMPLATES;
   /** The template being renamed, if any: one at a time. */
   protected readonly renaming = signal<string | null>(null);

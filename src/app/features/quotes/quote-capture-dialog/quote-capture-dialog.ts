@@ -29,6 +29,7 @@ import {
   type PositionFormat,
   type QuoteFormValue,
 } from '../quote-form-model';
+import { booksToQuote } from '../quotes-data';
 
 /** What the capture dialog opens with: a new quote's book and page, or a quote to edit. */
 export interface QuoteCaptureData {
@@ -68,7 +69,7 @@ export class QuoteCaptureDialog {
   private readonly ref = inject<MatDialogRef<QuoteCaptureDialog, string>>(MatDialogRef);
   protected readonly data = inject<QuoteCaptureData>(MAT_DIALOG_DATA);
 
-  private readonly books = liveQuerySignal((db) => db.current('books'), undefined as Book[] | undefined);
+  private readonly books = liveQuerySignal(booksToQuote, undefined as Book[] | undefined);
   protected readonly choices = computed(() => bookOrder(this.books() ?? []));
 
   protected readonly form = inject(FormBuilder).nonNullable.group({

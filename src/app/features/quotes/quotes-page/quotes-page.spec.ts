@@ -1,31 +1,16 @@
-import { provideHttpClient } from '@angular/common/http';
-import { ApplicationRef } from '@angular/core';
 import { TestBed, type ComponentFixture } from '@angular/core/testing';
-import { provideRouter } from '@angular/router';
-import Dexie from 'dexie';
 
 import { STARTER_LABELS } from '@shared/journal/starter-labels';
 import type { Quote } from '@shared/sync/schema/collections';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import { journalDbName } from '../../../core/data/journal-db';
+import { found as until, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
 import { JournalStore } from '../../../core/data/journal-store';
 import { QuotesPage } from './quotes-page';
-
-async function until<T>(check: () => T | null | undefined | false, what: string): Promise<T> {
-  for (let i = 0; i < 200; i++) {
-    const value = check();
-    if (value) return value;
-    await TestBed.inject(ApplicationRef).whenStable();
-    await new Promise((resolve) => setTimeout(resolve, 10));
-  }
-  throw new Error(`Timed out waiting for ${what}`);
-}
 
 /** The quotes screen against real IndexedDB, one fresh database per spec. */
 describe('QuotesPage', () => {
   let store: JournalStore;
-  let userId: string;
+  let journal: TestJournal;
   let fixture: ComponentFixture<QuotesPage>;
   const page = () => fixture.nativeElement as HTMLElement;
   const passages = () => Array.from(page().querySelectorAll('blockquote')).map((quote) => quote.textContent?.trim());
@@ -40,17 +25,13 @@ describe('QuotesPage', () => {
   const reRead = STARTER_LABELS.find((label) => label.name === 'Re-read')!;
 
   beforeEach(() => {
-    userId = `spec-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({ providers: [provideHttpClient(), provideRouter([])] });
-    store = TestBed.inject(JournalStore);
+    journal = openTestJournal();
+    store = journal.store;
   });
 
   afterEach(async () => {
     fixture?.destroy();
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   it('with no quotes yet, explains how to capture one', async () => {

@@ -17,11 +17,12 @@ import { liveQueryFor } from '../../../core/data/live-query-for';
 import { askToConfirm } from '../../../ui/confirm-dialog/ask-to-confirm';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { oneSeries } from '../series-data';
+import { ChoiceField, RATING_CHOICES, RATING_WORDS } from '../../../ui/choice-field/choice-field';
 
 /** One series: its books in order, progress, the next to read, and the reader's view of it all. */
 @Component({
   selector: 'll-series-page',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, StarRating],
+  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, StarRating],
   templateUrl: './series-page.html',
   styleUrl: './series-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -40,7 +41,8 @@ export class SeriesPage {
   protected readonly progress = computed(() => seriesProgress(this.ordered(), this.series()?.plannedCount));
   protected readonly next = computed(() => nextUnread(this.ordered()));
   protected readonly statusLabels = STATUS_LABELS;
-  protected readonly ratings = [0.5, 1, 1.5, 2, 2.5, 3, 3.5, 4, 4.5, 5];
+  protected readonly ratings = RATING_CHOICES;
+  protected readonly ratingWords = RATING_WORDS;
   protected readonly saved = signal(false);
   protected readonly fieldError = fieldError;
 

@@ -1,27 +1,21 @@
-import { provideHttpClient } from '@angular/common/http';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
-import { provideRouter } from '@angular/router';
-import Dexie from 'dexie';
 
 import type { Book, Session } from '@shared/sync/schema/collections';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { BookReading } from './book-reading';
-import { waitFor } from '../../../core/testing/test-journal';
+import { waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
+import { addSession } from '../../../core/testing/seed';
 
 /** Real IndexedDB; the reader is in Los Angeles on 8 March 2026 at 13:00 PDT. */
 describe('BookReading', () => {
   const NOW = Date.parse('2026-03-08T20:00:00Z');
   let fixture: ComponentFixture<BookReading>;
   let store: JournalStore;
-  let userId: string;
+  let journal: TestJournal;
 
-  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
   const element = (): HTMLElement => fixture.nativeElement;
   const text = () => element().textContent?.replace(/\s+/g, ' ') ?? '';
   const items = () => [...element().querySelectorAll('li.session')];
@@ -29,17 +23,7 @@ describe('BookReading', () => {
   const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
   const session = (bookId: string, startedAt: string, minutes: number, from: number, to: number, extra: Partial<Session> = {}) =>
-    store.create('sessions', {
-      bookId,
-      format: 'print',
-      startedAt,
-      endedAt: new Date(Date.parse(startedAt) + minutes * 60_000).toISOString(),
-      activeMinutes: minutes,
-      fromPosition: from,
-      toPosition: to,
-      source: 'manual',
-      ...extra,
-    });
+    addSession(store, bookId, startedAt, minutes, from, to, { source: 'manual', ...extra });
 
   async function show(bookId: string): Promise<void> {
     const book = (await store.get('books', bookId)) as Book;
@@ -48,20 +32,16 @@ describe('BookReading', () => {
   }
 
   beforeEach(async () => {
-    userId = `book-reading-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({
-      providers: [provideHttpClient(), provideRouter([]), { provide: TIME_ZONE, useValue: 'America/Los_Angeles' }, { provide: CLOCK, useValue: fixedClock(NOW) }],
-    });
-    store = TestBed.inject(JournalStore);
-    await db().open();
+    journal = openTestJournal([
+      { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
+      { provide: CLOCK, useValue: fixedClock(NOW) },
+    ]);
+    store = journal.store;
   });
 
   afterEach(async () => {
     document.querySelectorAll('.cdk-overlay-container').forEach((overlay) => (overlay.innerHTML = ''));
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   it('shows progress in pages, time left and a finish date from typical speeds, and the sessions newest first', async () => {

@@ -17,6 +17,7 @@ import { latestPosition, newestFirst } from '../../../core/read-model/reading-se
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { ReaderDatePipe } from '../../../ui/reader-date';
 import { ReaderSettings } from '../../../core/settings/reader-settings';
+import { NO_SESSIONS_OR_BOOKS, sessionsAndBooks } from '../sessions-data';
 
 /** One line of the session list. */
 interface SessionLine {
@@ -49,8 +50,8 @@ export class BookReading {
   private readonly clock = inject(CLOCK);
   private readonly dates = inject(ReaderSettings);
 
-  private readonly allSessions = liveQuerySignal((db) => db.current('sessions'), [] as Session[]);
-  private readonly books = liveQuerySignal((db) => db.rows('books').toArray(), [] as Book[]);
+  private readonly data = liveQuerySignal(sessionsAndBooks, NO_SESSIONS_OR_BOOKS);
+  private readonly allSessions = computed(() => this.data().sessions);
 
   private readonly sessions = computed(() => newestFirst(this.allSessions().filter((s) => s.bookId === this.book().id)));
   /** No session says where the reader got to yet: a length and a time to read, not a 0 % bar. */
@@ -70,7 +71,7 @@ export class BookReading {
     const book = this.book();
     if (book.status === 'finished' || book.status === 'dnf') return null;
     const today = localDay(new Date(this.clock.now()).toISOString(), this.timeZone);
-    const forecast = bookForecast(book, this.allSessions(), this.books(), today, this.timeZone);
+    const forecast = bookForecast(book, this.allSessions(), this.data().books, today, this.timeZone);
     if (!forecast || forecast.minutesLeft === 0) return null;
     return { ...forecast, timeLeft: minutesLine(forecast.minutesLeft) };
   });

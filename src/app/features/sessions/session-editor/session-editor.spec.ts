@@ -1,19 +1,15 @@
-import { provideHttpClient } from '@angular/common/http';
 import { Component } from '@angular/core';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import { provideRouter, Router } from '@angular/router';
-import Dexie from 'dexie';
 
 import type { Book, Session } from '@shared/sync/schema/collections';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
+import { type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { SessionEditor } from './session-editor';
-import { outboxMark, outboxSince, waitFor } from '../../../core/testing/test-journal';
+import { outboxMark, outboxSince, waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
 
 @Component({ template: '' })
 class BookPageStub {}
@@ -23,9 +19,9 @@ describe('SessionEditor', () => {
   const NOW = Date.parse('2026-03-08T20:00:00Z');
   let fixture: ComponentFixture<SessionEditor>;
   let store: JournalStore;
-  let userId: string;
+  let journal: TestJournal;
 
-  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
+  const db = (): JournalDb => journal.db;
   const element = (): HTMLElement => fixture.nativeElement;
   const input = (label: string): HTMLInputElement => {
     const found = [...element().querySelectorAll('mat-form-field')].find((field) => field.querySelector('mat-label')?.textContent?.trim() === label);
@@ -57,25 +53,17 @@ describe('SessionEditor', () => {
   const addBook = (fields: Partial<Book> = {}) => store.create('books', { title: 'The Salt Road', format: 'print', pageCount: 300, status: 'tbr', ...fields });
 
   beforeEach(async () => {
-    userId = `sessions-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideRouter([{ path: 'library/:id', component: BookPageStub }]),
-        { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
-        { provide: CLOCK, useValue: fixedClock(NOW) },
-      ],
-    });
-    store = TestBed.inject(JournalStore);
-    await db().open();
+    journal = openTestJournal([
+      provideRouter([{ path: 'library/:id', component: BookPageStub }]),
+      { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
+      { provide: CLOCK, useValue: fixedClock(NOW) },
+    ]);
+    store = journal.store;
   });
 
   afterEach(async () => {
     document.querySelectorAll('.cdk-overlay-container').forEach((overlay) => (overlay.innerHTML = ''));
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   it('starts a new session as the half hour just gone, in the reader’s zone, from where they got to', async () => {

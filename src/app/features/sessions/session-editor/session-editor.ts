@@ -20,6 +20,7 @@ import { MOOD_LABELS, positionLabels } from '../book-position';
 import { latestPosition } from '../../../core/read-model/reading-sessions';
 import { SessionFollowUp } from '../session-follow-up';
 import { changedSessionFields, EMPTY_SESSION_FORM, readSessionForm, spanMinutes, toSessionForm, type SessionFormValue } from './session-form-model';
+import { ChoiceField } from '../../../ui/choice-field/choice-field';
 
 /** A new session starts as the half hour just gone. */
 const DEFAULT_MINUTES = 30;
@@ -32,7 +33,7 @@ const DEFAULT_MINUTES = 30;
  */
 @Component({
   selector: 'll-session-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
   templateUrl: './session-editor.html',
   styleUrl: './session-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,15 +1,14 @@
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { firstValueFrom } from 'rxjs';
 
 import { Auth } from '../../../core/auth/auth';
 import { fieldError } from '../../../ui/field-errors';
 import { FormSubmission } from '../../../ui/form-submission';
 import { passwordPolicy } from '../../../ui/password-validator';
+import { AccountApi } from '../../../core/auth/account-api';
 
 /** Change the password; other devices are signed out, this one stays signed in. */
 @Component({
@@ -31,7 +30,7 @@ import { passwordPolicy } from '../../../ui/password-validator';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ChangePassword {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(AccountApi);
   private readonly auth = inject(Auth);
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
@@ -44,7 +43,7 @@ export class ChangePassword {
 
   protected async changePassword(): Promise<void> {
     this.message.set('');
-    if (await this.submission.submit(this.form, () => firstValueFrom(this.http.post('/api/auth/password', this.form.getRawValue())))) {
+    if (await this.submission.submit(this.form, () => this.api.changePassword(this.form.getRawValue()))) {
       this.form.reset();
       this.message.set('Password changed. Your other devices were signed out and will ask for it.');
     }

@@ -1,17 +1,16 @@
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router } from '@angular/router';
-import { firstValueFrom } from 'rxjs';
 
 import { Auth } from '../../../core/auth/auth';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { fieldError } from '../../../ui/field-errors';
 import { FormSubmission } from '../../../ui/form-submission';
 import { ExportPanel } from '../../your-data';
+import { AccountApi } from '../../../core/auth/account-api';
 
 /** Delete the account and all its data, on the server and on this device, after the password. */
 @Component({
@@ -21,7 +20,7 @@ import { ExportPanel } from '../../your-data';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class DeleteAccount {
-  private readonly http = inject(HttpClient);
+  private readonly api = inject(AccountApi);
   private readonly auth = inject(Auth);
   private readonly journal = inject(LocalJournal);
   private readonly router = inject(Router);
@@ -34,9 +33,7 @@ export class DeleteAccount {
   protected async deleteAccount(): Promise<void> {
     const user = this.auth.user();
     if (!user) return;
-    const deleted = await this.submission.submit(this.form, () =>
-      firstValueFrom(this.http.request('DELETE', '/api/auth/account', { body: this.form.getRawValue() })),
-    );
+    const deleted = await this.submission.submit(this.form, () => this.api.deleteAccount(this.form.getRawValue()));
     if (!deleted) return;
     await this.auth.signOut();
     await this.journal.erase(user.id);

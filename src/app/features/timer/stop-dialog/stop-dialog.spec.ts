@@ -1,16 +1,11 @@
-import { provideHttpClient } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
 import { MatDialog } from '@angular/material/dialog';
-import { provideRouter } from '@angular/router';
-import Dexie from 'dexie';
 import { firstValueFrom } from 'rxjs';
 
 import type { Book, Session } from '@shared/sync/schema/collections';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import { journalDbName } from '../../../core/data/journal-db';
+import { openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
 import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK } from '../../../core/time/clock';
 import { ReadingTimer } from '../reading-timer';
 import { FakeClock } from '../testing/fake-clock';
@@ -20,23 +15,19 @@ import { StopDialog, type StopDialogData } from './stop-dialog';
 const MINUTE = 60_000;
 
 describe('StopDialog', () => {
-  let userId: string;
+  let journal: TestJournal;
   let clock: FakeClock;
   let store: JournalStore;
 
   beforeEach(() => {
-    userId = `spec-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
     clock = new FakeClock(Date.parse('2026-03-08T20:14:00Z'));
-    TestBed.configureTestingModule({ providers: [provideRouter([]), provideHttpClient(), { provide: CLOCK, useValue: clock }] });
-    store = TestBed.inject(JournalStore);
+    journal = openTestJournal([{ provide: CLOCK, useValue: clock }]);
+    store = journal.store;
   });
 
   afterEach(async () => {
     TestBed.inject(MatDialog).closeAll();
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   /** Times 25 minutes of a book and stops, as the timer page does, then opens the form. */
@@ -68,7 +59,15 @@ describe('StopDialog', () => {
     input.value = value;
     input.dispatchEvent(new Event(input.tagName === 'SELECT' ? 'change' : 'input'));
   };
-  const outboxFor = async (rowId: string) => (await TestBed.inject(LocalJournal).db()!.outbox.toArray()).filter((c) => c.rowId === rowId);
+  /** Chooses in the select of the field labelled `label` (a choice field has no form control name of its own). */
+  const choose = (label: string, value: string) => {
+    const select = Array.from(document.querySelectorAll('ll-stop-dialog mat-form-field'))
+      .find((f) => f.querySelector('mat-label')?.textContent?.trim() === label)!
+      .querySelector('select')!;
+    select.value = value;
+    select.dispatchEvent(new Event('change'));
+  };
+  const outboxFor = async (rowId: string) => (await journal.db.outbox.toArray()).filter((c) => c.rowId === rowId);
 
   it('opens prefilled from the previous session, writes only what changed, and marks a TBR book as reading', async () => {
     const { bookId, sessionId, closed } = await stopped({ format: 'audiobook', audioMinutes: 665, status: 'tbr' }, { toPosition: 120, playbackSpeed: 1.25 });
@@ -79,7 +78,7 @@ describe('StopDialog', () => {
     const before = (await outboxFor(sessionId)).length;
 
     type('toPosition', '150');
-    type('mood', 'calm');
+    choose('How did it feel?', 'calm');
     click('Save');
 
     expect(await closed).toBeTrue();

@@ -15,6 +15,7 @@ import { BookStatus } from '../../../core/read-model/book-status';
 import { minutesText, minutesWords, positionEnd, positionUnit, reachedEnd } from '../book-progress';
 import { CLOCK } from '../../../core/time/clock';
 import { changedStopFields, MOOD_LABELS, stopFields, stopFormPrefill, stopProblems, type StopFormValue } from './stop-form-model';
+import { ChoiceField } from '../../../ui/choice-field/choice-field';
 
 /** The session the stop form is about; it is already saved when the dialog opens. */
 export interface StopDialogData {
@@ -29,7 +30,7 @@ export interface StopDialogData {
  */
 @Component({
   selector: 'll-stop-dialog',
-  imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ChoiceField, ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule],
   templateUrl: './stop-dialog.html',
   styleUrl: './stop-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

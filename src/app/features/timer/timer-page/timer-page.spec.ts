@@ -1,13 +1,9 @@
-import { provideHttpClient } from '@angular/common/http';
 import { TestBed, type ComponentFixture } from '@angular/core/testing';
 import { MatDialog } from '@angular/material/dialog';
-import { provideRouter } from '@angular/router';
-import Dexie from 'dexie';
 
 import type { Session } from '@shared/sync/schema/collections';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import { journalDbName } from '../../../core/data/journal-db';
+import { openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { QuoteCapture } from '../../quotes';
@@ -26,7 +22,7 @@ const MINUTE = 60_000;
 const hhmm = (iso: string) => new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso));
 
 describe('TimerPage', () => {
-  let userId: string;
+  let journal: TestJournal;
   let clock: FakeClock;
   let wakeLock: FakeWakeLock;
   let store: JournalStore;
@@ -34,31 +30,22 @@ describe('TimerPage', () => {
   let fixture: ComponentFixture<TimerPage>;
 
   beforeEach(() => {
-    userId = `spec-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
     localStorage.removeItem('lamplight.timerKeepAwake');
     clock = new FakeClock(Date.parse('2026-03-08T20:14:00Z'));
     wakeLock = new FakeWakeLock();
-    TestBed.configureTestingModule({
-      imports: [TimerPage],
-      providers: [
-        provideRouter([]),
-        provideHttpClient(),
-        { provide: CLOCK, useValue: clock },
-        { provide: NOTIFIER, useValue: new FakeNotifier('default') },
-        { provide: WAKE_LOCK, useValue: wakeLock },
-      ],
-    });
-    store = TestBed.inject(JournalStore);
+    journal = openTestJournal([
+      { provide: CLOCK, useValue: clock },
+      { provide: NOTIFIER, useValue: new FakeNotifier('default') },
+      { provide: WAKE_LOCK, useValue: wakeLock },
+    ]);
+    store = journal.store;
     timer = TestBed.inject(ReadingTimer);
   });
 
   afterEach(async () => {
     TestBed.inject(MatDialog).closeAll();
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
+    await journal.close();
     localStorage.removeItem('lamplight.timerKeepAwake');
-    forgetSession();
   });
 
   const text = () => (fixture.nativeElement as HTMLElement).textContent!.replace(/\s+/g, ' ');

@@ -10,14 +10,13 @@ import { RouterLink } from '@angular/router';
 import { format } from 'date-fns';
 import { firstValueFrom } from 'rxjs';
 
-import type { Book, Session } from '@shared/sync/schema/collections';
-
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { QuoteCapture } from '../../quotes';
 import { elapsedText, latestSession, minutesWords, positionUnit, progressFraction, progressLine } from '../book-progress';
 import { ConfirmDialog, type ConfirmDialogData } from '../../../ui/confirm-dialog/confirm-dialog';
-import { ReadingTimer, TIMER_ROW_ID } from '../reading-timer';
+import { ReadingTimer } from '../reading-timer';
+import { NO_TIMER_PAGE_DATA, timerPageData } from '../timer-data';
 import { ScreenAwake } from '../screen-awake';
 import { StopDialog, type StopDialogData } from '../stop-dialog/stop-dialog';
 import { TimerReminders } from '../timer-reminders';
@@ -25,13 +24,6 @@ import { ReaderDatePipe } from '../../../ui/reader-date';
 
 /** Targets on offer, in minutes. */
 const TARGETS = [10, 15, 20, 30, 45, 60, 90, 120];
-
-/** The timer's book's sessions, and the latest session of all for the page shown with no timer. */
-interface TimerPageData {
-  readonly bookSessions: Session[];
-  readonly last: Session | undefined;
-  readonly lastBook: Book | undefined;
-}
 
 /**
  * The reading timer, large and calm: elapsed time, the book and how far through it the reader
@@ -55,21 +47,7 @@ export class TimerPage {
   /** The stop form is open: an app update must not reload over it. */
   private readonly stopFormOpen = signal(false);
 
-  private readonly data = liveQuerySignal<TimerPageData>(
-    async (db) => {
-      const timer = await db.rows('timers').get(TIMER_ROW_ID);
-      const bookSessions = timer?.bookId ? await db.rows('sessions').where('bookId').equals(timer.bookId).toArray() : [];
-      const last = (await db
-        .rows('sessions')
-        .orderBy('startedAt')
-        .reverse()
-        .filter((s) => !s['deleted'])
-        .first()) as Session | undefined;
-      const lastBook = last?.bookId ? await db.rows('books').get(last.bookId) : undefined;
-      return { bookSessions, last, lastBook };
-    },
-    { bookSessions: [], last: undefined, lastBook: undefined },
-  );
+  private readonly data = liveQuerySignal(timerPageData, NO_TIMER_PAGE_DATA);
 
   protected readonly active = this.timer.active;
   protected readonly book = this.timer.book;

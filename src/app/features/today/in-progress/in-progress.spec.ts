@@ -1,24 +1,17 @@
-import { provideHttpClient } from '@angular/common/http';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
-import { provideRouter } from '@angular/router';
-import Dexie from 'dexie';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { InProgress } from './in-progress';
-import { waitFor } from '../../../core/testing/test-journal';
+import { waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
 
 describe('InProgress', () => {
   const NOW = Date.parse('2026-03-08T20:00:00Z'); // 13:00 PDT in Los Angeles
   let fixture: ComponentFixture<InProgress>;
   let store: JournalStore;
-  let userId: string;
+  let journal: TestJournal;
 
-  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
   const element = (): HTMLElement => fixture.nativeElement;
   // The words of each line, without its timer button.
   const lines = () =>
@@ -33,19 +26,15 @@ describe('InProgress', () => {
   const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
   beforeEach(async () => {
-    userId = `in-progress-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    TestBed.configureTestingModule({
-      providers: [provideHttpClient(), provideRouter([]), { provide: TIME_ZONE, useValue: 'America/Los_Angeles' }, { provide: CLOCK, useValue: fixedClock(NOW) }],
-    });
-    store = TestBed.inject(JournalStore);
-    await db().open();
+    journal = openTestJournal([
+      { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
+      { provide: CLOCK, useValue: fixedClock(NOW) },
+    ]);
+    store = journal.store;
   });
 
   afterEach(async () => {
-    TestBed.resetTestingModule();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
+    await journal.close();
   });
 
   it('lists the books being read with how far and when they should be finished', async () => {

@@ -1,18 +1,14 @@
-import { provideHttpClient } from '@angular/common/http';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
-import Dexie from 'dexie';
 
 import type { Session } from '@shared/sync/schema/collections';
 
-import { forgetSession, READER, rememberSession } from '../../../core/auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
 import { CLOCK, fixedClock } from '../../../core/time/clock';
 import { BROWSER_LOCALE } from '../../../core/settings/reader-settings';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { ReadingLog } from './reading-log';
-import { waitFor } from '../../../core/testing/test-journal';
+import { waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
+import { addSession } from '../../../core/testing/seed';
 
 /**
  * The same session, 2026-03-08 07:30–08:00 UTC, seen from two zones. IANA tz database: Los
@@ -24,9 +20,8 @@ describe('ReadingLog', () => {
   const NOW = Date.parse('2026-03-08T12:00:00Z');
   let fixture: ComponentFixture<ReadingLog>;
   let store: JournalStore;
-  let userId: string;
+  let journal: TestJournal;
 
-  const db = (): JournalDb => TestBed.inject(LocalJournal).db()!;
   const element = (): HTMLElement => fixture.nativeElement;
   const shown = (css: string) => element().querySelector(css)?.textContent?.trim();
   const level = (day: string) => /level-(\d)/.exec(element().querySelector(`ll-year-heatmap [data-day="${day}"]`)?.className ?? '')?.[1];
@@ -35,38 +30,21 @@ describe('ReadingLog', () => {
 
   function setUp(timeZone: string): void {
     beforeEach(async () => {
-      userId = `log-${crypto.randomUUID()}`;
-      rememberSession({ user: { ...READER, id: userId } });
-      TestBed.configureTestingModule({
-        providers: [
-          provideHttpClient(),
-          { provide: TIME_ZONE, useValue: timeZone },
-          { provide: CLOCK, useValue: fixedClock(NOW) },
-          { provide: BROWSER_LOCALE, useValue: 'en-GB' },
-        ],
-      });
-      store = TestBed.inject(JournalStore);
-      await db().open();
+      journal = openTestJournal([
+        { provide: TIME_ZONE, useValue: timeZone },
+        { provide: CLOCK, useValue: fixedClock(NOW) },
+        { provide: BROWSER_LOCALE, useValue: 'en-GB' },
+      ]);
+      store = journal.store;
     });
 
     afterEach(async () => {
-      TestBed.resetTestingModule();
-      await Dexie.delete(journalDbName(userId));
-      forgetSession();
+      await journal.close();
     });
   }
 
   const read = (bookId: string, startedAt: string, minutes: number, from: number, to: number, extra: Partial<Session> = {}) =>
-    store.create('sessions', {
-      bookId,
-      format: 'print',
-      startedAt,
-      endedAt: new Date(Date.parse(startedAt) + minutes * 60_000).toISOString(),
-      activeMinutes: minutes,
-      fromPosition: from,
-      toPosition: to,
-      ...extra,
-    });
+    addSession(store, bookId, startedAt, minutes, from, to, extra);
 
   async function showWithTheSession(): Promise<void> {
     const bookId = await store.create('books', { title: 'The Salt Road', format: 'print', pageCount: 300 });
