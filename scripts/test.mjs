@@ -11,9 +11,9 @@ import { bin, databaseUrl, ensureDebianPackage, ensureDependencies, run, runCapt
 const TEST_DB = 'lamplight_test';
 const CHROMIUM = '/usr/bin/chromium';
 /** Steps at a time: one per core of the 2-core test machine (LAMPLIGHT_TEST_JOBS overrides). */
-const JOBS = Math.max(1, Number(process.env['LAMPLIGHT_TEST_JOBS'] ?? 2));
+const JOBS = Math.max(1, Math.floor(Number(process.env['LAMPLIGHT_TEST_JOBS']) || 2));
 /** Browser e2e processes, each with its own database (LAMPLIGHT_E2E_SHARDS overrides). */
-const E2E_SHARDS = Math.max(1, Number(process.env['LAMPLIGHT_E2E_SHARDS'] ?? 2));
+const E2E_SHARDS = Math.max(1, Math.floor(Number(process.env['LAMPLIGHT_E2E_SHARDS']) || 2));
 
 const started = Date.now();
 ensureDependencies();
