@@ -25,6 +25,25 @@ export function runStatus(command, args, options = {}) {
   });
 }
 
+/**
+ * Runs a command with its output (stdout and stderr, interleaved as they come) kept in memory,
+ * for steps that run beside others and print when their turn comes. Resolves `{ code, output }`.
+ */
+export function runCaptured(command, args, options = {}) {
+  return new Promise((resolve) => {
+    const chunks = [];
+    const child = spawn(command, args, { cwd: root, stdio: ['ignore', 'pipe', 'pipe'], ...options });
+    child.stdout.on('data', (chunk) => chunks.push(chunk));
+    child.stderr.on('data', (chunk) => chunks.push(chunk));
+    const done = (code) => resolve({ code, output: Buffer.concat(chunks).toString('utf8') });
+    child.on('close', (code, signal) => done(code ?? (signal ? 1 : 0)));
+    child.on('error', (error) => {
+      chunks.push(Buffer.from(`${error.message}\n`));
+      done(127);
+    });
+  });
+}
+
 /** Output of a command, trimmed. */
 export function capture(command, args) {
   const result = spawnSync(command, args, { cwd: root, encoding: 'utf8' });

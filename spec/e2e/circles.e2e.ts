@@ -14,6 +14,28 @@ async function device(harness: ReturnType<typeof useServerAndBrowser>, name: str
   return { context, page, email: reader.user.email };
 }
 
+/** How many circle changes wait in the page's outbox (IndexedDB `circleOutbox`). */
+async function circleOutbox(page: Page): Promise<number> {
+  const name = await page.evaluate(async () => (await indexedDB.databases()).find((db) => db.name?.startsWith('lamplight-journal-'))?.name);
+  return page.evaluate(
+    (journal) =>
+      new Promise<number>((resolve) => {
+        const open = indexedDB.open(journal);
+        open.onsuccess = () => {
+          const count = open.result.transaction('circleOutbox').objectStore('circleOutbox').count();
+          count.onsuccess = () => (open.result.close(), resolve(count.result));
+        };
+      }),
+    name!,
+  );
+}
+
+/** Waits (10 s at most) until the page's circle outbox is empty: its changes reached the server. */
+async function outboxEmptied(page: Page): Promise<number> {
+  for (let i = 0; i < 100 && (await circleOutbox(page)) > 0; i++) await new Promise((resolve) => setTimeout(resolve, 100));
+  return circleOutbox(page);
+}
+
 /** Whether the page is wider than the phone (something overflows sideways). */
 const overflows = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth > document.documentElement.clientWidth + 1);
 
@@ -83,7 +105,9 @@ describe('Reading circles in three browsers', () => {
     await ada.page.getByLabel('Your thoughts on this part').fill('The clockmaker was the tide all along!');
     await ada.page.getByRole('button', { name: 'Post', exact: true }).click();
     await ada.page.getByText('The clockmaker was the tide all along!').waitFor();
-    await new Promise((resolve) => setTimeout(resolve, 1500)); // the post leaves the outbox
+    expect(await outboxEmptied(ada.page))
+      .withContext('the post left the outbox')
+      .toBe(0);
 
     // Bram is past part 1 only: the post waits behind the shield.
     await bram.page.goto(circleUrl);
@@ -101,20 +125,7 @@ describe('Reading circles in three browsers', () => {
     await bram.page.getByText('The clockmaker was the tide all along!').waitFor();
     await bram.context.setOffline(false);
     await bram.page.evaluate(() => window.dispatchEvent(new Event('online')));
-    const pending = async () =>
-      bram.page.evaluate(
-        (name) =>
-          new Promise<number>((resolve) => {
-            const open = indexedDB.open(name);
-            open.onsuccess = () => {
-              const count = open.result.transaction('circleOutbox').objectStore('circleOutbox').count();
-              count.onsuccess = () => resolve(count.result);
-            };
-          }),
-        (await bram.page.evaluate(async () => (await indexedDB.databases()).find((db) => db.name?.startsWith('lamplight-journal-'))?.name))!,
-      );
-    for (let i = 0; i < 100 && (await pending()) > 0; i++) await new Promise((resolve) => setTimeout(resolve, 100));
-    expect(await pending()).toBe(0);
+    expect(await outboxEmptied(bram.page)).toBe(0);
     expect(await overflows(bram.page)).toBeFalse();
   }, 300_000);
 });
