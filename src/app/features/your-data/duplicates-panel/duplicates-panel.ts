@@ -2,12 +2,11 @@ import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@a
 import { MatButtonModule } from '@angular/material/button';
 
 import { findDuplicates } from '@shared/duplicates/book-keys';
-import { BOOK_CHILDREN, differingFields, mergeBooks, type BookChild, type MergeField } from '@shared/duplicates/merge-books';
+import { differingFields, type MergeField } from '@shared/duplicates/merge-books';
 import type { Book } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
-import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
+import { BookMerge } from './book-merge';
 
 const FIELD_LABELS: Record<MergeField, string> = {
   title: 'Title',
@@ -23,6 +22,8 @@ const FIELD_LABELS: Record<MergeField, string> = {
   year: 'Year',
   tags: 'Tags',
   coverId: 'Cover',
+  seriesId: 'Series',
+  seriesPosition: 'Place in the series',
 };
 
 /** Books that look like the same book (same ISBN-13, or same title and first author), merged two at a time. */
@@ -34,10 +35,10 @@ const FIELD_LABELS: Record<MergeField, string> = {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class DuplicatesPanel {
-  private readonly store = inject(JournalStore);
-  private readonly journal = inject(LocalJournal);
+  private readonly merging = inject(BookMerge);
 
   private readonly books = liveQuerySignal(async (db) => ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted), [] as Book[]);
+  private readonly seriesNames = liveQuerySignal(async (db) => new Map((await db.rows('series').toArray()).map((one) => [one.id, String(one['name'] ?? '')])), new Map());
   protected readonly groups = computed(() => findDuplicates(this.books()));
   /** The pair being merged: kept first. */
   protected readonly pair = signal<[Book, Book] | null>(null);
@@ -71,25 +72,17 @@ export class DuplicatesPanel {
     const value = book[field];
     if (value === null || value === undefined || value === '') return '—';
     if (field === 'coverId') return 'a cover';
+    if (field === 'seriesId') return this.seriesNames().get(String(value)) || 'a series';
     return Array.isArray(value) ? value.join(', ') : String(value);
   }
 
-  /** Writes the merge in one transaction: picked values, children moved, the other book a tombstone. */
+  /** Writes the merge in one transaction: picked values, every reference moved, the other book a tombstone. */
   protected async merge(): Promise<void> {
     const pair = this.pair();
-    const db = this.journal.db();
-    if (!pair || !db) return;
+    if (!pair) return;
     const [kept, other] = pair;
-    const children: { collection: BookChild; id: string }[] = [];
-    for (const collection of BOOK_CHILDREN) {
-      const rows = await db
-        .rows(collection)
-        .filter((row) => row['bookId'] === other.id && !row['deleted'])
-        .toArray();
-      for (const row of rows) children.push({ collection, id: row.id });
-    }
-    await this.store.writeAll(mergeBooks(kept, other, this.picks(), children));
+    const moved = await this.merging.merge(kept, other, this.picks());
     this.pair.set(null);
-    this.message.set(`Merged into “${kept.title}”: ${children.length} readings, sessions, quotes and other entries moved to it.`);
+    this.message.set(`Merged into “${kept.title}”: ${moved} readings, sessions, quotes and other entries now point at it.`);
   }
 }
