@@ -31,6 +31,9 @@ describe('DuplicatesPanel', () => {
     const progress = await TestBed.inject(CircleStore).create('circleProgress', circleId, { bookLinks: { '40000000-0000-4000-8000-000000000004': other } });
     const fixture = TestBed.createComponent(DuplicatesPanel);
     const element = fixture.nativeElement as HTMLElement;
+    await waitFor(fixture, () => element.querySelector('button'), 'the Look button');
+    expect(element.querySelector('.groups li')).withContext('nothing read before the reader asks').toBeNull();
+    element.querySelector<HTMLButtonElement>('button')!.click();
     await waitFor(fixture, () => element.querySelector('.groups li'), 'the duplicate group');
     expect(element.querySelector('.groups li')!.textContent).toContain('2 books');
     element.querySelector<HTMLButtonElement>('.groups button')!.click();

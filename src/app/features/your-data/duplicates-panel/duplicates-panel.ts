@@ -1,11 +1,13 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
+import { ActivatedRoute } from '@angular/router';
 
 import { findDuplicates } from '@shared/duplicates/book-keys';
 import { differingFields, type MergeField } from '@shared/duplicates/merge-books';
 import type { Book } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
+import { liveQueryFor } from '../../../core/data/live-query-for';
 import { BookMerge } from './book-merge';
 
 const FIELD_LABELS: Record<MergeField, string> = {
@@ -37,7 +39,16 @@ const FIELD_LABELS: Record<MergeField, string> = {
 export class DuplicatesPanel {
   private readonly merging = inject(BookMerge);
 
-  private readonly books = liveQuerySignal(async (db) => ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted), [] as Book[]);
+  /**
+   * Looking reads the whole library, again after every change: only once the reader asks (or
+   * arrives from the Library's "See possible duplicates"), never during an import they did not.
+   */
+  protected readonly looking = signal(inject(ActivatedRoute, { optional: true })?.snapshot.fragment === 'duplicates');
+  private readonly found = liveQueryFor(this.looking, async (db, looking) =>
+    looking ? ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted) : null,
+  );
+  protected readonly loaded = computed(() => Array.isArray(this.found()));
+  private readonly books = computed(() => this.found() ?? []);
   private readonly seriesNames = liveQuerySignal(async (db) => new Map((await db.rows('series').toArray()).map((one) => [one.id, String(one['name'] ?? '')])), new Map());
   protected readonly groups = computed(() => findDuplicates(this.books()));
   /** The pair being merged: kept first. */
@@ -48,6 +59,15 @@ export class DuplicatesPanel {
     const pair = this.pair();
     return pair ? differingFields(pair[0], pair[1]).map((field) => ({ field, label: FIELD_LABELS[field] })) : [];
   });
+
+  constructor() {
+    const host = inject<ElementRef<HTMLElement>>(ElementRef).nativeElement;
+    if (this.looking()) afterNextRender(() => host.scrollIntoView?.({ block: 'start' }));
+  }
+
+  protected look(): void {
+    this.looking.set(true);
+  }
 
   protected open(group: readonly Book[]): void {
     this.message.set(null);
