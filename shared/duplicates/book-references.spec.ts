@@ -63,7 +63,18 @@ describe('book references', () => {
   it('moves a book id held as the value, in list entries and as record values, and nothing else', () => {
     expect(movedBookIds(FROM, 'value', FROM, TO)).toBe(TO);
     expect(movedBookIds(ELSE, 'value', FROM, TO)).toBeUndefined();
-    expect(movedBookIds([{ id: 'a', text: 'x', bookId: FROM }, { id: 'b', text: 'y', bookId: ELSE }, { id: 'c', text: 'z' }], 'entries', FROM, TO)).toEqual([
+    expect(
+      movedBookIds(
+        [
+          { id: 'a', text: 'x', bookId: FROM },
+          { id: 'b', text: 'y', bookId: ELSE },
+          { id: 'c', text: 'z' },
+        ],
+        'entries',
+        FROM,
+        TO,
+      ),
+    ).toEqual([
       { id: 'a', text: 'x', bookId: TO },
       { id: 'b', text: 'y', bookId: ELSE },
       { id: 'c', text: 'z' },

@@ -45,12 +45,7 @@ export function differingFields(kept: Book, other: Book): MergeField[] {
  * the other book becomes a tombstone. One list of journal writes, for one transaction; circle
  * links are left to the circle's own store.
  */
-export function mergeBooks(
-  kept: Book,
-  other: Book,
-  picks: Readonly<Partial<Record<MergeField, 'kept' | 'other'>>>,
-  moves: readonly ReferenceMove[],
-): MergeWrite[] {
+export function mergeBooks(kept: Book, other: Book, picks: Readonly<Partial<Record<MergeField, 'kept' | 'other'>>>, moves: readonly ReferenceMove[]): MergeWrite[] {
   const patch: Record<string, unknown> = {};
   for (const field of MERGE_FIELDS) {
     if (picks[field] === 'other' && other[field] !== undefined) patch[field] = other[field];

@@ -82,7 +82,9 @@ export class TrashPage {
   protected async restore(entry: TrashEntry, title: string): Promise<void> {
     const parents = await this.deletions.restore(entry.collection, entry.row.id);
     // Said aloud: restoring a session of a deleted book brought the book back too.
-    const along = parents.map(({ collection, row }) => (collection === 'books' ? `the book “${String(row['title'] ?? 'Untitled book')}”` : `the notebook “${String(row['title'] ?? 'Untitled')}”`));
+    const along = parents.map(({ collection, row }) =>
+      collection === 'books' ? `the book “${String(row['title'] ?? 'Untitled book')}”` : `the notebook “${String(row['title'] ?? 'Untitled')}”`,
+    );
     this.restored.set(along.length ? `${title} is back, and so is ${along.join(' and ')} it belongs to (it was in Trash too).` : `${title} is back.`);
   }
 }

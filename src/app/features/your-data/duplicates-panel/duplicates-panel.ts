@@ -49,7 +49,10 @@ export class DuplicatesPanel {
   );
   protected readonly loaded = computed(() => Array.isArray(this.found()));
   private readonly books = computed(() => this.found() ?? []);
-  private readonly seriesNames = liveQuerySignal(async (db) => new Map((await db.rows('series').toArray()).map((one) => [one.id, String(one['name'] ?? '')])), new Map());
+  private readonly seriesNames = liveQuerySignal(
+    async (db) => new Map((await db.rows('series').toArray()).map((one) => [one.id, String(one['name'] ?? '')])),
+    new Map(),
+  );
   protected readonly groups = computed(() => findDuplicates(this.books()));
   /** The pair being merged: kept first. */
   protected readonly pair = signal<[Book, Book] | null>(null);
