@@ -116,13 +116,16 @@ export class CsvImport {
     this.importing.set({ done: 0, total: additions.length });
     const now = new Date().toISOString();
     let done = 0;
-    for (let start = 0; start < additions.length && !this.cancelled; start += CSV_ROWS_PER_BATCH) {
-      const batch = additions.slice(start, start + CSV_ROWS_PER_BATCH);
-      await this.store.writeAll(batch.flatMap((addition) => additionWrites(addition, now)));
-      done += batch.length;
-      this.importing.set({ done, total: additions.length });
-      await nextTask();
-    }
+    // Sync waits for the last batch (then sends them all), rather than racing each one.
+    await this.sync.holdWhile(async () => {
+      for (let start = 0; start < additions.length && !this.cancelled; start += CSV_ROWS_PER_BATCH) {
+        const batch = additions.slice(start, start + CSV_ROWS_PER_BATCH);
+        await this.store.writeAll(batch.flatMap((addition) => additionWrites(addition, now)));
+        done += batch.length;
+        this.importing.set({ done, total: additions.length });
+        await nextTask();
+      }
+    });
     this.importing.set(null);
     this.dryRun.set(null);
     this.outcome.set(
@@ -130,7 +133,6 @@ export class CsvImport {
         ? `Stopped: ${done} of ${additions.length} books were imported (rows ${additions[0]?.row ?? 0} to ${additions[done - 1]?.row ?? 0}); the rest were not.`
         : `Imported ${done} books.`,
     );
-    void this.sync.syncNow().catch(() => undefined);
   }
 
   protected cancel(): void {
