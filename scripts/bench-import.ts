@@ -67,7 +67,9 @@ async function main(): Promise<void> {
     printStep('preview (parse)', preview);
     printStep('dry run', dryRun);
     printStep('import', imported);
-    console.log(`  ${((expected / imported.ms) * 1000).toFixed(0)} books a second, ${expected} books in batches of 200 (one IndexedDB transaction each)`);
+    console.log(
+      `  ${((expected / imported.ms) * 1000).toFixed(0)} books a second, ${expected} books in batches of 50 (CSV_ROWS_PER_BATCH; one IndexedDB transaction each)`,
+    );
     await context.close();
   } finally {
     await browser.close();

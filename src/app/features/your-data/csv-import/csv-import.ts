@@ -5,7 +5,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 
 import { bookKeys } from '@shared/duplicates/book-keys';
 import { CSV_TARGET_LABELS, CSV_TARGETS, guessMapping, type CsvTarget } from '@shared/import/csv/csv-fields';
-import { csvDryRun, type CsvDryRun } from '@shared/import/csv/csv-dry-run';
+import { csvDryRunSteps, type CsvDryRun } from '@shared/import/csv/csv-dry-run';
 import { CSV_DATE_FORMATS, statusValueMapping, type BookStatus, type CsvDateFormat } from '@shared/import/csv/csv-values';
 import { BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
 
@@ -106,7 +106,12 @@ export class CsvImport {
     const library = (await this.store.list('books')) as Book[];
     const keys = new Set(library.flatMap((book) => bookKeys(book)));
     const statuses = new Map(this.statusValues().map(({ value, status }) => [value, status]));
-    this.dryRun.set(csvDryRun(this.rows(), { mapping: this.mapping(), dateFormat: this.dateFormat(), statuses, keepBooksWithBadIsbn: this.keepBadIsbn() }, keys));
+    const options = { mapping: this.mapping(), dateFormat: this.dateFormat(), statuses, keepBooksWithBadIsbn: this.keepBadIsbn() };
+    // A slice at a time, painting between: no long task on a large spreadsheet.
+    const steps = csvDryRunSteps(this.rows(), options, keys, 500);
+    let step = steps.next();
+    for (; !step.done; step = steps.next()) await nextTask();
+    this.dryRun.set(step.value);
   }
 
   /** Writes the dry run's books a batch per transaction, until done or cancelled. */
