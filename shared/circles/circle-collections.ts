@@ -101,7 +101,7 @@ export const circleProgress = defineCollection('circleProgress', {
   pastPartIds: field.json(uuidList(500).nullable()),
   revealedPartIds: field.json(uuidList(500).nullable()),
   /** pick id → the reader's own book added from it (their library stays private). */
-  bookLinks: field.json(z.record(z.uuid(), z.uuid()).nullable()),
+  bookLinks: field.json(z.record(z.uuid(), z.uuid()).nullable(), 'values'),
   /** Parts the reader is past, written only while sharing is on ("Wren is past part 2"). */
   sharedPastPartIds: field.json(uuidList(500).nullable()),
 });

@@ -42,20 +42,25 @@ export function bookKeys(book: BookIdentity): string[] {
 
 /**
  * Groups of books that look like the same book (each group two or more, joined through any
- * shared key), in the order their first book appears.
+ * shared key), in the order their first book appears. `keysOf` may hand back keys worked out
+ * earlier (the Library keeps them per row), so a large library is not normalised again.
  */
-export function findDuplicates<B extends BookIdentity & { readonly id: string }>(books: readonly B[]): B[][] {
+export function findDuplicates<B extends BookIdentity & { readonly id: string }>(books: readonly B[], keysOf: (book: B) => readonly string[] = bookKeys): B[][] {
   const parent = books.map((_, index) => index);
   const root = (i: number): number => (parent[i] === i ? i : (parent[i] = root(parent[i]!)));
   const firstWithKey = new Map<string, number>();
   books.forEach((book, index) => {
-    for (const key of bookKeys(book)) {
+    for (const key of keysOf(book)) {
       const seen = firstWithKey.get(key);
       if (seen === undefined) firstWithKey.set(key, index);
       else parent[root(index)] = root(seen);
     }
   });
   const groups = new Map<number, B[]>();
-  books.forEach((book, index) => groups.set(root(index), [...(groups.get(root(index)) ?? []), book]));
+  books.forEach((book, index) => {
+    const group = groups.get(root(index));
+    if (group) group.push(book);
+    else groups.set(root(index), [book]);
+  });
   return [...groups.values()].filter((group) => group.length > 1);
 }

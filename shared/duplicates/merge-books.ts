@@ -1,8 +1,6 @@
 import type { BookIdentity } from './book-keys';
-
-/** Rows that point at a book and move to the kept one when two books merge. */
-export const BOOK_CHILDREN = ['readings', 'sessions', 'quotes', 'bookStatusChanges', 'notebooks', 'favourites', 'monthPicks'] as const;
-export type BookChild = (typeof BOOK_CHILDREN)[number];
+import type { CollectionName } from '../sync/schema/collections';
+import type { ReferenceMove } from './book-references';
 
 /** Fields a merge lets the reader choose between (the rest stay the kept book's). */
 export const MERGE_FIELDS = [
@@ -19,6 +17,9 @@ export const MERGE_FIELDS = [
   'year',
   'tags',
   'coverId',
+  /** Series membership: which series, and where in it. */
+  'seriesId',
+  'seriesPosition',
 ] as const;
 export type MergeField = (typeof MERGE_FIELDS)[number];
 
@@ -26,7 +27,7 @@ type Book = BookIdentity & { readonly id: string } & Readonly<Record<string, unk
 
 /** One row write, as `JournalStore.writeAll` takes it. */
 export interface MergeWrite {
-  readonly collection: 'books' | BookChild;
+  readonly collection: CollectionName;
   readonly rowId: string;
   readonly patch: Readonly<Record<string, unknown>>;
 }
@@ -38,23 +39,20 @@ export function differingFields(kept: Book, other: Book): MergeField[] {
 
 /**
  * Merges `other` into `kept`: the kept book takes the value the reader picked for each field
- * (`'other'` picks the other book's), every reading, session, quote, status change, notebook,
- * favourite and month pick of the other book moves to the kept one, and the other book becomes a
- * tombstone. One list of writes, to be written in one transaction.
+ * (`'other'` picks the other book's), every reference to the other book (`moves`, from
+ * `referenceMoves` in book-references.ts: readings, sessions, quotes, status changes, loans,
+ * plans, picks, challenge prompts, favourites, notebooks, the timer) points at the kept one, and
+ * the other book becomes a tombstone. One list of journal writes, for one transaction; circle
+ * links are left to the circle's own store.
  */
-export function mergeBooks(
-  kept: Book,
-  other: Book,
-  picks: Readonly<Partial<Record<MergeField, 'kept' | 'other'>>>,
-  children: readonly { readonly collection: BookChild; readonly id: string }[],
-): MergeWrite[] {
+export function mergeBooks(kept: Book, other: Book, picks: Readonly<Partial<Record<MergeField, 'kept' | 'other'>>>, moves: readonly ReferenceMove[]): MergeWrite[] {
   const patch: Record<string, unknown> = {};
   for (const field of MERGE_FIELDS) {
     if (picks[field] === 'other' && other[field] !== undefined) patch[field] = other[field];
   }
   return [
     ...(Object.keys(patch).length > 0 ? [{ collection: 'books' as const, rowId: kept.id, patch }] : []),
-    ...children.map(({ collection, id }) => ({ collection, rowId: id, patch: { bookId: kept.id } })),
-    { collection: 'books', rowId: other.id, patch: { deleted: true } },
+    ...moves.filter((move) => !move.circle).map(({ collection, rowId, patch: moved }) => ({ collection: collection as CollectionName, rowId, patch: moved })),
+    { collection: 'books' as const, rowId: other.id, patch: { deleted: true } },
   ];
 }

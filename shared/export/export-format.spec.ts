@@ -32,6 +32,16 @@ describe('exportJsonPieces', () => {
     }
   });
 
+  it('adds the covers after the collections, still exactly JSON.stringify of the whole', () => {
+    const rows = new Map([['books', []]] as [['books', ExportRow[]]]);
+    const covers = [
+      { id: 'a'.repeat(64), dataUrl: 'data:image/webp;base64,UklGRg==' },
+      { id: 'b'.repeat(64), dataUrl: 'data:image/png;base64,iVBORw==' },
+    ];
+    const whole = { format: 'lamplight-export', version: 1, exportedAt: '2026-12-04T10:00:00.000Z', collections: { books: [] }, covers };
+    expect([...exportJsonPieces('2026-12-04T10:00:00.000Z', rows, 500, covers)].join('')).toBe(JSON.stringify(whole));
+  });
+
   it('writes an empty journal as empty collections', () => {
     expect(JSON.parse([...exportJsonPieces('2026-12-04T10:00:00.000Z', new Map([['books', []]]))].join(''))).toEqual({
       format: 'lamplight-export',

@@ -1,4 +1,5 @@
 import type { LocalRow } from '../sync/local-row';
+import type { ExportCover } from './export-covers';
 import { compareBytes } from '../sync/or-set';
 import { COLLECTIONS, type CollectionName } from '../sync/schema/collections';
 
@@ -23,6 +24,8 @@ export interface LamplightExport {
   readonly version: number;
   readonly exportedAt: string;
   readonly collections: Readonly<Partial<Record<CollectionName, readonly ExportRow[]>>>;
+  /** The books' cover pictures (`export-covers.ts`); left out when there are none. */
+  readonly covers?: readonly ExportCover[];
 }
 
 /** Every collection in the file, in a fixed order (the schema's). */
@@ -58,7 +61,12 @@ export function exportFileName(localDate: string, extension = 'json', collection
  * The file's text in pieces (header, then rows a chunk at a time), so a large library never sits
  * in memory as one string; joined, the pieces are exactly `JSON.stringify` of the export.
  */
-export function* exportJsonPieces(exportedAt: string, collections: ReadonlyMap<CollectionName, readonly ExportRow[]>, rowsPerPiece = 500): Generator<string> {
+export function* exportJsonPieces(
+  exportedAt: string,
+  collections: ReadonlyMap<CollectionName, readonly ExportRow[]>,
+  rowsPerPiece = 500,
+  covers: readonly ExportCover[] = [],
+): Generator<string> {
   yield `{"format":${JSON.stringify(EXPORT_FORMAT)},"version":${EXPORT_VERSION},"exportedAt":${JSON.stringify(exportedAt)},"collections":{`;
   let firstCollection = true;
   for (const [name, rows] of collections) {
@@ -73,5 +81,8 @@ export function* exportJsonPieces(exportedAt: string, collections: ReadonlyMap<C
     }
     yield ']';
   }
-  yield '}}';
+  yield '}';
+  // A picture at a time: each is up to a few hundred kB of base64.
+  for (const [index, cover] of covers.entries()) yield `${index === 0 ? ',"covers":[' : ','}${JSON.stringify(cover)}`;
+  yield covers.length > 0 ? ']}' : '}';
 }

@@ -2,6 +2,7 @@ import * as z from 'zod';
 
 import { COLLECTIONS } from '../sync/schema/collections';
 import type { FieldSpec } from '../sync/schema/field';
+import { coversSchema } from './export-covers';
 import { EXPORT_FORMAT, EXPORT_VERSION } from './export-format';
 
 type JsonSchema = Record<string, unknown>;
@@ -58,6 +59,7 @@ export function lamplightExportSchema(): JsonSchema {
         additionalProperties: false,
         properties: Object.fromEntries(names.map((name) => [name, { type: 'array', items: { $ref: `#/$defs/${name}` } }])),
       },
+      covers: coversSchema(),
     },
     $defs: Object.fromEntries(names.map((name) => [name, rowSchema(COLLECTIONS[name].fields as Readonly<Record<string, FieldSpec>>)])),
   };

@@ -23,3 +23,19 @@ export const DELETED_WITH: Partial<Record<CollectionName, readonly Dependent[]>>
 
 /** The collections deleted with a row of `collection` (none for most). */
 export const dependentsOf = (collection: CollectionName): readonly Dependent[] => DELETED_WITH[collection] ?? [];
+
+/** A parent a row of some collection belongs to: the collection and the field naming it. */
+export interface Parent {
+  readonly collection: CollectionName;
+  readonly ref: string;
+}
+
+/**
+ * The parents whose delete takes rows of `collection` with it (a session's book, a page's
+ * notebook). A row restored on its own while its parent is in Trash brings the parent back too:
+ * a session of a deleted book would show nowhere.
+ */
+export const parentsOf = (collection: CollectionName): readonly Parent[] =>
+  (Object.entries(DELETED_WITH) as [CollectionName, readonly Dependent[]][]).flatMap(([parent, dependents]) =>
+    dependents.filter((dependent) => dependent.collection === collection).map(({ ref }) => ({ collection: parent, ref })),
+  );

@@ -10,6 +10,13 @@ export interface TombstonedRow {
   readonly _hlc: Readonly<Record<string, string>>;
 }
 
+/**
+ * The key path devices index every synced collection by: the clock of the `deleted` field. Rows
+ * deleted within the Trash window are exactly those with `deleted` true and this clock at or
+ * above {@link purgeCutoffClock}, so Trash reads a range of it, never a whole table.
+ */
+export const DELETE_CLOCK_INDEX = '_hlc.deleted';
+
 /** The clock of the delete, or `null` when the row is not deleted. */
 export function deletionClock(row: TombstonedRow): string | null {
   return row.deleted === true ? (row._hlc['deleted'] ?? null) : null;

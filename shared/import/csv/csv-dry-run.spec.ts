@@ -1,5 +1,5 @@
 import { bookKeys } from '../../duplicates/book-keys';
-import { csvDryRun } from './csv-dry-run';
+import { csvDryRun, csvDryRunSteps } from './csv-dry-run';
 import type { CsvImportOptions } from './csv-row';
 
 const options = (overrides: Partial<CsvImportOptions> = {}): CsvImportOptions => ({
@@ -45,5 +45,14 @@ describe('csvDryRun', () => {
   it('leaves out books already in the library', () => {
     const library = new Set(bookKeys({ title: 'A Kettle for Winter', authors: ['Ostrander, Bram'] }));
     expect(csvDryRun(rows.slice(0, 2), options(), library).duplicates).toEqual([{ row: 2, title: 'A Kettle for Winter' }]);
+  });
+
+  it('plans the same a slice at a time, yielding how far it has got', () => {
+    const steps = csvDryRunSteps(rows, options(), new Set(), 2);
+    const yielded: number[] = [];
+    let step = steps.next();
+    for (; !step.done; step = steps.next()) yielded.push(step.value);
+    expect(yielded).toEqual(Array.from({ length: Math.ceil(rows.length / 2) - 1 }, (_, n) => (n + 1) * 2));
+    expect(step.value).toEqual(csvDryRun(rows, options(), new Set()));
   });
 });

@@ -73,7 +73,7 @@ export type Book = RowOf<typeof books>;
 export const bookStatusChanges = defineCollection(
   'bookStatusChanges',
   {
-    bookId: field.optionalRef(),
+    bookId: field.optionalBookRef(),
     status: field.choice(BOOK_STATUSES),
     changedAt: field.optionalTimestamp(),
   },
@@ -85,7 +85,7 @@ export type BookStatusChange = RowOf<typeof bookStatusChanges>;
 export const readings = defineCollection(
   'readings',
   {
-    bookId: field.optionalRef(),
+    bookId: field.optionalBookRef(),
     startedOn: field.optionalDate(),
     finishedOn: field.optionalDate(),
     rating: field.optionalNumber(0.5, 5, 0.5),
@@ -114,7 +114,7 @@ export type Series = RowOf<typeof series>;
 export const quotes = defineCollection(
   'quotes',
   {
-    bookId: field.optionalRef(),
+    bookId: field.optionalBookRef(),
     text: field.text(5_000),
     /** Where it is, in the book's own unit: a page, an ebook location, or an audio position. */
     page: field.optionalInteger(0, 100_000),
@@ -137,7 +137,7 @@ export const notebooks = defineCollection(
   'notebooks',
   {
     title: field.text(300),
-    bookId: field.optionalRef(),
+    bookId: field.optionalBookRef(),
   },
   { indexes: ['bookId'] },
 );
@@ -168,7 +168,7 @@ export type PageTemplate = RowOf<typeof pageTemplates>;
 /** A favourite book, author or quote, with why. */
 export const favourites = defineCollection('favourites', {
   kind: field.choice(FAVOURITE_KINDS),
-  bookId: field.optionalRef(),
+  bookId: field.optionalBookRef(),
   quoteId: field.optionalRef(),
   authorName: field.optionalText(200),
   why: field.optionalText(2_000),
@@ -178,7 +178,7 @@ export type Favourite = RowOf<typeof favourites>;
 /** The pick of a month. Its row id is `deterministicId('month-pick', month)`: one row per month. */
 export const monthPicks = defineCollection('monthPicks', {
   month: field.optionalMonth(),
-  bookId: field.optionalRef(),
+  bookId: field.optionalBookRef(),
   why: field.optionalText(2_000),
 });
 export type MonthPick = RowOf<typeof monthPicks>;
@@ -203,7 +203,7 @@ export const TIMER_STATES = ['running', 'paused', 'idle'] as const;
 export const sessions = defineCollection(
   'sessions',
   {
-    bookId: field.optionalRef(),
+    bookId: field.optionalBookRef(),
     format: field.optionalChoice(BOOK_FORMATS),
     startedAt: field.optionalTimestamp(),
     endedAt: field.optionalTimestamp(),
@@ -230,7 +230,7 @@ export type Session = RowOf<typeof sessions>;
  */
 export const timers = defineCollection('timers', {
   state: field.choice(TIMER_STATES),
-  bookId: field.optionalRef(),
+  bookId: field.optionalBookRef(),
   startedAt: field.optionalTimestamp(),
   /** Set while paused. */
   pausedAt: field.optionalTimestamp(),
@@ -266,9 +266,9 @@ export const yearPlans = defineCollection('yearPlans', {
   booksTarget: field.optionalInteger(1, 10_000),
   pagesTarget: field.optionalInteger(1, 10_000_000),
   minutesTarget: field.optionalInteger(1, 1_000_000),
-  bestBookId: field.optionalRef(),
+  bestBookId: field.optionalBookRef(),
   /** Goals that are not numbers ("read a book in French"), as a checklist. */
-  otherGoals: field.json(checklist.nullable()),
+  otherGoals: field.json(checklist.nullable(), 'entries'),
   notes: field.optionalText(20_000),
 });
 export type YearPlan = RowOf<typeof yearPlans>;
@@ -279,8 +279,8 @@ export const monthPlans = defineCollection('monthPlans', {
   booksTarget: field.optionalInteger(1, 1_000),
   pagesTarget: field.optionalInteger(1, 1_000_000),
   minutesTarget: field.optionalInteger(1, 50_000),
-  favouriteBookId: field.optionalRef(),
-  leastFavouriteBookId: field.optionalRef(),
+  favouriteBookId: field.optionalBookRef(),
+  leastFavouriteBookId: field.optionalBookRef(),
   reflection: field.optionalText(20_000),
 });
 export type MonthPlan = RowOf<typeof monthPlans>;
@@ -296,7 +296,7 @@ export const challenges = defineCollection('challenges', {
   /** Alphabet: a letter per title, or per author surname. */
   alphabetBy: field.optionalChoice(ALPHABET_BY),
   /** Prompts: the reader's own list, each with the book that answers it. */
-  prompts: field.json(checklist.nullable()),
+  prompts: field.json(checklist.nullable(), 'entries'),
   /** When the finish was celebrated, so the celebration shows once. */
   celebratedAt: field.optionalTimestamp(),
 });
@@ -331,7 +331,7 @@ export const loans = defineCollection(
   'loans',
   {
     kind: field.choice(LOAN_KINDS),
-    bookId: field.optionalRef(),
+    bookId: field.optionalBookRef(),
     libraryId: field.optionalRef(),
     /** The friend, as the reader names them (lent out, borrowed). */
     friendName: field.optionalText(120),

@@ -29,7 +29,15 @@ export interface FieldSpec<T = unknown> {
   readonly elements?: { readonly maxItems: number; readonly maxLength: number };
   /** `text` only: the longest text (UTF-16 code units, as `String.length` counts). */
   readonly maxLength?: number;
+  /** Where the field holds book ids, when it does (merging two books moves them; `shared/duplicates/book-references.ts`). */
+  readonly bookIds?: BookIdsIn;
 }
+
+/**
+ * How a field holds book ids: `value` — the value is one; `entries` — a list of objects, each
+ * with a `bookId`; `values` — the values of a record (id → book id).
+ */
+export type BookIdsIn = 'value' | 'entries' | 'values';
 
 const spec = <T>(sqlType: SqlType, schema: z.ZodType<T>): FieldSpec<T> => ({ kind: 'lww', sqlType, schema });
 
@@ -95,6 +103,8 @@ export const field = {
   optionalDate: () => spec('text', z.string().regex(DATE, 'must be a date like 2026-03-08').nullable()),
   optionalTimestamp: () => spec('text', z.string().regex(TIMESTAMP, 'must be a UTC time like 2026-03-08T09:30:00.000Z').nullable()),
   optionalRef: () => spec('uuid', z.uuid('must be a row id (UUID)').nullable()),
+  /** The id of one of the reader's books: a merge of two books moves it to the kept one. */
+  optionalBookRef: (): FieldSpec<string | null> => ({ ...field.optionalRef(), bookIds: 'value' }),
   /** ISBN-13 digits only (ISO 2108): the client converts an ISBN-10 before writing. */
   optionalIsbn13: () =>
     spec(
@@ -123,7 +133,8 @@ export const field = {
         .regex(/^[0-9a-f]{64}$/, 'must be an upload id (64 hex digits)')
         .nullable(),
     ),
-  json: <T>(schema: z.ZodType<T>) => spec('jsonb', schema),
+  /** Any JSON value; `bookIds` says where it holds book ids, if it does. */
+  json: <T>(schema: z.ZodType<T>, bookIds?: BookIdsIn): FieldSpec<T> => ({ ...spec('jsonb', schema), ...(bookIds ? { bookIds } : {}) }),
 };
 
 /** camelCase field name → its snake_case column. */

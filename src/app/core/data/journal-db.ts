@@ -5,6 +5,7 @@ import type { LocalRow } from '@shared/sync/local-row';
 import { CIRCLE_COLLECTION_NAMES } from '@shared/circles/circle-collection-names';
 import { COLLECTIONS, type CollectionName } from '@shared/sync/schema/collections';
 import type { RowOf } from '@shared/sync/schema/collection';
+import { DELETE_CLOCK_INDEX } from '@shared/trash/tombstone';
 
 /** One change waiting to reach the server; `seq` is its place in the local order of writes. */
 export interface OutboxEntry extends FieldChange {
@@ -60,11 +61,15 @@ export const journalDbName = (userId: string) => `lamplight-journal-${userId}`;
  * Bump when the stores below change (a new collection or index). Dexie works out the upgrade
  * from the latest declaration; other open tabs get a `versionchange` and close.
  */
-export const JOURNAL_DB_VERSION = 8;
+export const JOURNAL_DB_VERSION = 9;
 
-/** Dexie store specs for every synced collection, from the shared schema: `id` plus its indexes. */
+/**
+ * Dexie store specs for every synced collection, from the shared schema: `id`, its indexes, and
+ * the clock of its `deleted` field ({@link DELETE_CLOCK_INDEX}), so Trash reads only rows whose
+ * tombstone changed in its window instead of every row (a boolean is no IndexedDB key).
+ */
 export function collectionStores(): Record<string, string> {
-  return Object.fromEntries(Object.values(COLLECTIONS).map((spec) => [spec.name, ['id', ...spec.indexes].join(', ')]));
+  return Object.fromEntries(Object.values(COLLECTIONS).map((spec) => [spec.name, ['id', ...spec.indexes, DELETE_CLOCK_INDEX].join(', ')]));
 }
 
 /** A change to a circle's data waiting to reach `/api/circles/:id/sync` (circles sync on their own, by circle). */
@@ -107,7 +112,8 @@ export class JournalDb extends Dexie {
     super(journalDbName(userId));
     this.version(JOURNAL_DB_VERSION).stores({
       ...collectionStores(),
-      outbox: '++seq',
+      // By row too: a write finds the changes still waiting for its rows without reading them all.
+      outbox: '++seq, rowId',
       rejected: 'id',
       meta: 'key',
       covers: 'id, state',

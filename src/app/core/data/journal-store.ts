@@ -93,7 +93,7 @@ export class JournalStore {
       const offset = Number(offsetEntry?.value ?? 0) || 0;
       let hlc: string | null = null;
       const outbox: OutboxEntry[] = [];
-      const puts = new Map<CollectionName, LocalRow[]>();
+      const puts = new Map<CollectionName, Map<string, LocalRow>>();
       for (const { collection, rowId, patch } of writes) {
         const key = rowKey(collection, rowId);
         const row: LocalRow = rows.get(key) ?? emptyRow(rowId);
@@ -121,13 +121,13 @@ export class JournalStore {
           outbox.push({ id: crypto.randomUUID(), collection, rowId, field, value: text ? text.value : value, hlc });
         }
         rows.set(key, next as LocalRow); // a later write to the same row builds on this one
-        puts.set(collection, [...(puts.get(collection) ?? []).filter((other) => other.id !== rowId), next as LocalRow]);
+        puts.set(collection, (puts.get(collection) ?? new Map()).set(rowId, next as LocalRow));
       }
       if (!hlc) return false;
       const { stale, entries } = coalesce(waiting, outbox);
       // Issued together: IndexedDB runs them in order within the transaction without a round trip each.
       await Promise.all([
-        ...[...puts].map(([collection, list]) => db.rows(collection).bulkPut(list)),
+        ...[...puts].map(([collection, byId]) => db.rows(collection).bulkPut([...byId.values()])),
         db.meta.put({ key: 'clock', value: hlc }),
         db.outbox.bulkDelete(stale),
         db.outbox.bulkAdd(entries),
@@ -190,10 +190,14 @@ async function readRows(db: JournalDb, writes: readonly RowWrite[], guard: Guard
   return new Map(lists.flat());
 }
 
-/** Waiting outbox changes to the rows being written (the outbox is short: one read of it all). */
+/**
+ * Waiting outbox changes to the rows being written, through the outbox's `rowId` index: the
+ * outbox can hold tens of thousands of changes (an import offline), and reading all of it for
+ * every batch made a large import quadratic.
+ */
 async function waitingFor(db: JournalDb, writes: readonly RowWrite[]): Promise<OutboxEntry[]> {
-  const rowIds = new Set(writes.map((write) => write.rowId));
-  return (await db.outbox.toArray()).filter((change) => rowIds.has(change.rowId));
+  const rowIds = [...new Set(writes.map((write) => write.rowId))];
+  return rowIds.length === 1 ? db.outbox.where('rowId').equals(rowIds[0]!).toArray() : db.outbox.where('rowId').anyOf(rowIds).toArray();
 }
 
 /**

@@ -259,6 +259,28 @@ describe('SyncEngine', () => {
       await until(async () => (await db.outbox.count()) === 0, 'the writes are pushed');
     });
 
+    it('holds rounds back while a bulk import writes, then sends all of it in one round', async () => {
+      const engine = await startedAndIdle();
+      let release!: () => void;
+      const held = engine.holdWhile(async () => {
+        await store.create('books', { title: 'The Paper Lighthouse' });
+        await new Promise<void>((resolve) => (release = resolve));
+      });
+      await until(() => release !== undefined, 'the import is writing');
+      clock.tick(1500);
+      clock.tick(0);
+      await engine.syncNow(); // even "Sync now" waits for the import
+      await expectNothingSent(backend);
+      release();
+      await held;
+      clock.tick(0);
+      const push = await sent(backend, '/api/sync/push');
+      expect((push.request.body as { changes: unknown[] }).changes.length).toBe(2);
+      push.flush(pushed(2));
+      (await sent(backend, '/api/sync/pull')).flush(emptyPage('cursor-2'));
+      await until(async () => (await db.outbox.count()) === 0, 'the import is pushed');
+    });
+
     it('looks for other devices’ changes every minute while the page is visible', async () => {
       await startedAndIdle();
 

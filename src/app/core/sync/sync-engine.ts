@@ -43,6 +43,8 @@ export class SyncEngine {
   private readonly progressState = signal<PullProgress | null>(null);
   /** Rounds one at a time; a trigger mid-sync goes round once more afterwards. */
   private readonly job = new SerialJob(() => this.cycle());
+  /** Bulk writes under way ({@link holdWhile}): no round starts until they end. */
+  private holds = 0;
 
   /** Changes saved here that the server has not confirmed. */
   readonly pending = liveQuerySignal((db) => db.outbox.count(), 0);
@@ -93,6 +95,20 @@ export class SyncEngine {
     });
   }
 
+  /**
+   * Runs `work` with sync rounds held back, then syncs: a bulk import's batches otherwise race
+   * pushes (and pulls) of the batches before them for the same IndexedDB stores and the main
+   * thread. What was written stays in the outbox meanwhile, as offline.
+   */
+  async holdWhile<T>(work: () => Promise<T>): Promise<T> {
+    this.holds++;
+    try {
+      return await work();
+    } finally {
+      if (--this.holds === 0) this.job.schedule(0);
+    }
+  }
+
   /** "Sync now": runs at once, forgetting any backoff. */
   syncNow(): Promise<void> {
     return this.job.runNow();
@@ -100,7 +116,7 @@ export class SyncEngine {
 
   private async cycle(): Promise<void> {
     const db = this.journal.db();
-    if (!db || this.auth.needsSignIn()) return;
+    if (!db || this.auth.needsSignIn() || this.holds > 0) return;
     this.job.cancelTimer();
     const wasOffline = this.phaseState() === 'offline';
     this.phaseState.set('syncing');

@@ -52,6 +52,25 @@ describe('Deletions', () => {
       .toBeTrue();
   });
 
+  it('restoring a session alone whose book is in Trash brings the book back with what went with it', async () => {
+    await journal.store.remove('sessions', SESSION(3)); // deleted on its own, earlier
+    await deletions.remove('books', BOOK);
+    const parents = await deletions.restore('sessions', SESSION(3));
+    expect(parents.map(({ collection, row }) => `${collection}/${row.id}`)).toEqual([`books/${BOOK}`]);
+    expect(await deleted('sessions', SESSION(3))).toBeFalse();
+    expect(await deleted('books', BOOK))
+      .withContext('a session of a deleted book would show nowhere')
+      .toBeFalse();
+    expect(await deleted('sessions', SESSION(1))).toBeFalse();
+    expect(await deleted('quotes', QUOTE)).toBeFalse();
+  });
+
+  it('restoring a session whose book is not deleted brings nothing else', async () => {
+    await journal.store.remove('sessions', SESSION(2));
+    expect(await deletions.restore('sessions', SESSION(2))).toEqual([]);
+    expect(await deleted('sessions', SESSION(2))).toBeFalse();
+  });
+
   it('puts the delete in the outbox as one change per row, all with the same clock', async () => {
     await journal.db.outbox.clear();
     await deletions.remove('books', BOOK);

@@ -1,6 +1,6 @@
 import { inject, Injectable } from '@angular/core';
 
-import { dependentsOf } from '@shared/trash/deleted-with';
+import { dependentsOf, parentsOf } from '@shared/trash/deleted-with';
 import { deletionClock, type TombstonedRow } from '@shared/trash/tombstone';
 import type { CollectionName } from '@shared/sync/schema/collections';
 
@@ -14,7 +14,13 @@ export interface Companions {
   readonly ids: readonly string[];
 }
 
-type Row = TombstonedRow & { readonly id: string };
+type Row = TombstonedRow & { readonly id: string } & Readonly<Record<string, unknown>>;
+
+/** A parent brought back from Trash because a row of its was restored (the row as it was in Trash). */
+export interface RestoredParent {
+  readonly collection: CollectionName;
+  readonly row: Row;
+}
 
 /**
  * Deletes and restores by tombstone. A row is deleted in one write together with what depends
@@ -47,18 +53,38 @@ export class Deletions {
     ]);
   }
 
-  /** Restores the row and whatever was deleted in the same write. */
-  async restore(collection: CollectionName, id: string): Promise<void> {
+  /**
+   * Restores the row and whatever was deleted in the same write, in one write. A row whose
+   * parent is in Trash (a session of a deleted book) brings the parent back too, with what went
+   * with it: a child alone would show nowhere. Resolves with the parents restored along.
+   */
+  async restore(collection: CollectionName, id: string): Promise<RestoredParent[]> {
     const db = this.requireDb();
     const row = (await db.rows(collection).get(id)) as Row | undefined;
-    const clock = row && deletionClock(row);
-    if (!clock) return;
-    const writes: RowWrite[] = [{ collection, rowId: id, patch: { deleted: false } }];
-    for (const { collection: kind, ref } of dependentsOf(collection)) {
-      const rows = (await db.rows(kind).where(ref).equals(id).toArray()) as Row[];
-      for (const child of rows) if (deletionClock(child) === clock) writes.push({ collection: kind, rowId: child.id, patch: { deleted: false } });
+    if (!row || !deletionClock(row)) return [];
+    const writes = await this.restoreWrites(db, collection, row);
+    const parents: RestoredParent[] = [];
+    for (const { collection: kind, ref } of parentsOf(collection)) {
+      const parentId = row[ref];
+      const parent = typeof parentId === 'string' ? ((await db.rows(kind).get(parentId)) as Row | undefined) : undefined;
+      if (!parent || !deletionClock(parent)) continue;
+      const more = await this.restoreWrites(db, kind, parent);
+      writes.push(...more.filter((write) => !writes.some((known) => known.collection === write.collection && known.rowId === write.rowId)));
+      parents.push({ collection: kind, row: parent });
     }
     await this.store.writeAll(writes);
+    return parents;
+  }
+
+  /** Lifting the tombstone of a row and of its dependents deleted with it (the same clock). */
+  private async restoreWrites(db: JournalDb, collection: CollectionName, row: Row): Promise<RowWrite[]> {
+    const clock = deletionClock(row);
+    const writes: RowWrite[] = [{ collection, rowId: row.id, patch: { deleted: false } }];
+    for (const { collection: kind, ref } of dependentsOf(collection)) {
+      const rows = (await db.rows(kind).where(ref).equals(row.id).toArray()) as Row[];
+      for (const child of rows) if (deletionClock(child) === clock) writes.push({ collection: kind, rowId: child.id, patch: { deleted: false } });
+    }
+    return writes;
   }
 
   private requireDb(): JournalDb {

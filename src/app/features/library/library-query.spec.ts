@@ -1,6 +1,6 @@
 import type { Book } from '@shared/sync/schema/collections';
 
-import { LibraryRows, LibrarySorter, queryLibrary, searchText, type LibraryQuery } from './library-query';
+import { duplicateBookCount, LibraryRows, LibrarySorter, queryLibrary, searchText, type LibraryQuery } from './library-query';
 
 const COMFORT = '00000000-0000-4000-8000-00000000c001';
 const BUDDY = '00000000-0000-4000-8000-00000000c002';
@@ -77,5 +77,18 @@ describe('LibraryRows and LibrarySorter', () => {
 
     expect(sorter.sort(rows.update(renamed), sort).map((row) => row.book.id)).toEqual(query({}, renamed));
     expect(query({}, renamed)).toEqual(['b', 'e', 'a', 'c', 'd']); // "A Harbour" before "Amber": a space sorts before letters
+  });
+});
+
+describe('duplicateBookCount', () => {
+  it('counts every book that shares an ISBN-13 or a normalised title and first author with another', () => {
+    const rows = new LibraryRows();
+    expect(duplicateBookCount(rows.update(shelf))).toBe(0);
+    const twice = [
+      ...shelf,
+      book('e', { title: 'The Copper Orchard', authors: ['Achebe-Ross, Mina'], status: 'tbr' }), // c again, "Surname, Given"
+      book('f', { title: 'Salt Roads (second copy)', authors: ['Someone Else'], isbn: '9789295055124' }), // a's ISBN
+    ];
+    expect(duplicateBookCount(rows.update(twice))).toBe(4);
   });
 });

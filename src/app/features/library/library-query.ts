@@ -1,4 +1,5 @@
 import type { Book } from '@shared/sync/schema/collections';
+import { bookKeys, findDuplicates } from '@shared/duplicates/book-keys';
 import { foldSearchText as fold } from '@shared/text/fold-search-text';
 
 /** What the library view is asked to show. */
@@ -24,11 +25,21 @@ export interface LibraryRow {
   readonly book: Book;
   readonly search: string;
   readonly keys: Readonly<Record<LibrarySortKey, string | number | null>>;
+  /** Where the book may meet a duplicate (ISBN-13, normalised title and first author). */
+  readonly duplicateKeys: readonly string[];
 }
 
 export function libraryRow(book: Book, search = searchText(book)): LibraryRow {
   const keys = Object.fromEntries(Object.entries(SORT_KEYS).map(([by, key]) => [by, key(book)])) as Record<LibrarySortKey, string | number | null>;
-  return { book, search, keys };
+  return { book, search, keys, duplicateKeys: bookKeys(book) };
+}
+
+/** How many books look entered twice or more (every book of each duplicate group), from the rows' kept keys. */
+export function duplicateBookCount(rows: readonly LibraryRow[]): number {
+  return findDuplicates(
+    rows.map((row) => ({ id: row.book.id, keys: row.duplicateKeys })),
+    (row) => row.keys,
+  ).reduce((sum, group) => sum + group.length, 0);
 }
 
 /**

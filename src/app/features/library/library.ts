@@ -16,7 +16,7 @@ import { liveQuerySignal } from '../../core/data/live-query';
 import { browserStorage } from '../../core/device/browser-storage';
 import { authorLine, FORMAT_LABELS, STATUS_LABELS } from '../../ui/book-labels';
 import { BookStatus } from '../../core/read-model/book-status';
-import { filterRows, LibraryRows, LibrarySorter, type LibraryQuery, type LibrarySortKey } from './library-query';
+import { duplicateBookCount, filterRows, LibraryRows, LibrarySorter, type LibraryQuery, type LibrarySortKey } from './library-query';
 import { StarRating } from '../../ui/star-rating/star-rating';
 import { LabelChips } from '../../ui/label-chips/label-chips';
 import { LabelDirectory } from '../../core/read-model/label-directory';
@@ -59,6 +59,8 @@ export class Library {
   /** Every row in the chosen order; a keystroke only filters it, and a change re-sorts from the last order. */
   private readonly sorter = new LibrarySorter();
   private readonly sorted = computed(() => this.sorter.sort(this.rows(), this.sort()));
+  /** Books that look entered twice (same ISBN-13, or title and first author), from keys kept per row. */
+  protected readonly duplicates = computed(() => duplicateBookCount(this.rows()));
 
   protected readonly text = signal('');
   protected readonly status = signal<LibraryQuery['status']>('all');

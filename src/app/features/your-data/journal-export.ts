@@ -1,5 +1,8 @@
+import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
 
+import { coverIdsOf, type ExportCover } from '@shared/export/export-covers';
 import { collectionCsv, type CsvCollection } from '@shared/export/export-csv';
 import { EXPORT_COLLECTIONS, exportJsonPieces, exportRowOf, type ExportRow } from '@shared/export/export-format';
 import type { LocalRow } from '@shared/sync/local-row';
@@ -25,6 +28,10 @@ const ROWS_PER_STEP = 2_000;
 @Injectable({ providedIn: 'root' })
 export class JournalExport {
   private readonly journal = inject(LocalJournal);
+  private readonly http = inject(HttpClient);
+
+  /** Covers the last export could not carry (not on this device, and the server out of reach). */
+  missingCovers = 0;
 
   /** The whole journal as a Lamplight export file (JSON), reporting progress as it goes. */
   async everything(onProgress: (progress: ExportProgress) => void = () => {}, now = new Date()): Promise<Blob> {
@@ -50,7 +57,27 @@ export class JournalExport {
       }
       collections.set(name, rows);
     }
-    return new Blob([...exportJsonPieces(now.toISOString(), collections)], { type: 'application/json' });
+    const covers = await this.covers(coverIdsOf((collections.get('books') ?? []).map((row) => ({ ...row.fields }))));
+    return new Blob([...exportJsonPieces(now.toISOString(), collections, undefined, covers)], { type: 'application/json' });
+  }
+
+  /**
+   * The pictures the books show, as data URLs: from this device, else from the server when it
+   * answers (a cover another device chose may never have been shown here). Those neither has
+   * are counted in {@link missingCovers}; the books keep their `coverId`.
+   */
+  private async covers(ids: readonly string[]): Promise<ExportCover[]> {
+    const db = this.requireDb();
+    const stored = await db.covers.bulkGet([...ids]);
+    const covers: ExportCover[] = [];
+    this.missingCovers = 0;
+    for (const [index, id] of ids.entries()) {
+      let blob: Blob | null = stored[index]?.blob ?? null;
+      if (!blob) blob = await firstValueFrom(this.http.get(`/api/uploads/${id}`, { responseType: 'blob' })).catch(() => null);
+      if (blob) covers.push({ id, dataUrl: await dataUrlOf(blob, stored[index]?.mediaType) });
+      else this.missingCovers++;
+    }
+    return covers;
   }
 
   /** One collection as CSV (books, readings, sessions or quotes). */
@@ -65,4 +92,14 @@ export class JournalExport {
     if (!db) throw new Error('Nobody is signed in on this device');
     return db;
   }
+}
+
+/** A picture as a base64 data URL (RFC 2397), under its stored media type. */
+function dataUrlOf(blob: Blob, mediaType = blob.type): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const reader = new FileReader();
+    reader.onload = () => resolve(String(reader.result).replace(/^data:[^;,]*/, `data:${mediaType || 'image/webp'}`));
+    reader.onerror = () => reject(reader.error);
+    reader.readAsDataURL(blob);
+  });
 }

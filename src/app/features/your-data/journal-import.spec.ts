@@ -100,4 +100,26 @@ describe('JournalExport and JournalImport (IndexedDB)', () => {
     ]);
     expect((await journal.store.get('books', id))?.title).toBe('A Kettle for Winter');
   });
+
+  it('carries a book’s cover as a data URL with its SHA-256 id, and an import into a fresh journal restores the picture', async () => {
+    // A 1×1 PNG (ISO 15948); its id is its hex SHA-256 (FIPS 180-4, worked out outside the app).
+    const png = 'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==';
+    const coverId = '6b7fa434f92a8b80aab02d9bf1a12e49ffcae424e4013a1c4f68b67e3d2bbcd0';
+    const bytes = Uint8Array.from(atob(png), (char) => char.charCodeAt(0));
+    await journal.db.covers.add({ id: coverId, blob: new Blob([bytes], { type: 'image/png' }), mediaType: 'image/png', state: 'uploaded' });
+    await journal.store.create('books', { title: 'Harbour of Small Lights', authors: ['Odile Ferrant'], format: 'print', status: 'tbr', coverId });
+    const file = await exported();
+    expect(file['covers']).toEqual([{ id: coverId, dataUrl: `data:image/png;base64,${png}` }]);
+
+    await journal.db.covers.clear();
+    await journal.db.rows('books').clear();
+    const tampered = { id: 'f'.repeat(64), dataUrl: `data:image/png;base64,${png}` };
+    const result = await TestBed.inject(JournalImport).importJson(json({ ...file, covers: [...(file['covers'] as unknown[]), tampered] }));
+    expect('summary' in result && result.summary.added).toBe(2); // the book and its cover
+    expect('summary' in result && result.summary.refused.map((r) => r.id)).toEqual(['f'.repeat(64)]);
+    const restored = await journal.db.covers.get(coverId);
+    expect(restored?.state).toBe('pending'); // uploaded to this account like a cover chosen here
+    expect(new Uint8Array(await restored!.blob.arrayBuffer())).toEqual(bytes);
+    expect(await journal.db.covers.get('f'.repeat(64))).toBeUndefined();
+  });
 });

@@ -1,5 +1,6 @@
 import { Injectable, inject } from '@angular/core';
 
+import { readCoverDataUrl } from '@shared/export/export-covers';
 import { EXPORT_COLLECTIONS } from '@shared/export/export-format';
 import { importRow, type ImportedChange } from '@shared/import/import-row';
 import { countOutcome, emptySummary, type ImportSummary } from '@shared/import/import-summary';
@@ -8,6 +9,8 @@ import { HlcClock } from '@shared/sync/hlc';
 import type { LocalRow } from '@shared/sync/local-row';
 import type { CollectionName } from '@shared/sync/schema/collections';
 
+import { sha256Hex } from '../../core/covers/sha256-hex';
+import type { JournalDb } from '../../core/data/journal-db';
 import { LocalJournal } from '../../core/data/local-journal';
 import { deviceId } from '../../core/device/device-id';
 import type { ExportProgress } from './journal-export';
@@ -72,7 +75,31 @@ export class JournalImport {
         await nextTask();
       }
     }
+    await this.importCovers(db, read.file.covers, summary);
     return { summary };
+  }
+
+  /**
+   * Keeps the file's cover pictures on this device, to upload like a cover chosen here (the
+   * server names it by the same digest). A picture whose bytes do not hash to its id is refused.
+   */
+  private async importCovers(db: JournalDb, covers: unknown, summary: ImportSummary): Promise<void> {
+    if (!Array.isArray(covers)) return;
+    for (const cover of covers as { id?: unknown; dataUrl?: unknown }[]) {
+      const id = typeof cover?.id === 'string' ? cover.id : '';
+      const read = readCoverDataUrl(cover?.dataUrl);
+      const bytes = read && Uint8Array.from(atob(read.base64), (char) => char.charCodeAt(0));
+      if (!read || !bytes || (await sha256Hex(bytes)) !== id) {
+        summary.refused.push({ collection: 'covers', id, reason: 'the picture is not a cover image whose bytes match its id (SHA-256)' });
+        continue;
+      }
+      const added = await db.transaction('rw', db.covers, async () => {
+        if (await db.covers.get(id)) return false;
+        await db.covers.add({ id, blob: new Blob([bytes], { type: read.mediaType }), mediaType: read.mediaType, state: 'pending' });
+        return true;
+      });
+      countOutcome(summary, added ? 'added' : 'unchanged');
+    }
   }
 
   /** This device's next clocks order after every imported one (the receive rule of HLC). */

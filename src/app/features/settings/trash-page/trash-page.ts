@@ -5,6 +5,7 @@ import { RouterLink } from '@angular/router';
 
 import type { CollectionName } from '@shared/sync/schema/collections';
 import { companionLine } from '@shared/trash/companion-words';
+import { DELETE_CLOCK_INDEX, purgeCutoffClock } from '@shared/trash/tombstone';
 import { TRASH_KINDS, trashEntries, type TrashEntry, type TrashKind, type TrashRow } from '@shared/trash/trash-entries';
 
 import type { JournalDb } from '../../../core/data/journal-db';
@@ -19,16 +20,23 @@ type Deleted = Partial<Record<CollectionName, TrashRow[]>>;
 /** Listed under their book, never on their own. */
 const COUNTED_ONLY = ['bookStatusChanges'] as const;
 
-/** Every deleted row of the kinds Trash shows, and every book (titles for sessions, quotes…). */
-async function deletedRows(db: JournalDb): Promise<{ deleted: Deleted; titles: Map<string, string> }> {
+/**
+ * The rows of the kinds Trash shows deleted within its window, read through the delete-clock
+ * index (never a whole table), and the titles of the books they name.
+ */
+async function deletedRows(db: JournalDb, nowMs: number): Promise<{ deleted: Deleted; titles: Map<string, string> }> {
   const deleted: Deleted = {};
+  const cutoff = purgeCutoffClock(nowMs);
   for (const kind of [...TRASH_KINDS, ...COUNTED_ONLY])
     deleted[kind] = (await db
       .rows(kind)
+      .where(DELETE_CLOCK_INDEX)
+      .aboveOrEqual(cutoff)
       .filter((row) => row['deleted'] === true)
       .toArray()) as TrashRow[];
-  const books = await db.rows('books').toArray();
-  return { deleted, titles: new Map(books.map((book) => [book.id, String(book['title'] ?? 'a book')])) };
+  const bookIds = [...new Set(Object.values(deleted).flatMap((rows) => rows.map((row) => (row['bookId'] as string | undefined) ?? row.id)))];
+  const books = await db.rows('books').bulkGet(bookIds);
+  return { deleted, titles: new Map(books.flatMap((book) => (book ? [[book.id, String(book['title'] ?? 'a book')] as const] : []))) };
 }
 
 /** One group of Trash: a kind and its entries. */
@@ -49,7 +57,7 @@ interface TrashGroup {
 export class TrashPage {
   private readonly deletions = inject(Deletions);
   private readonly clock = inject(CLOCK);
-  private readonly data = liveQuerySignal(deletedRows, undefined);
+  private readonly data = liveQuerySignal((db) => deletedRows(db, this.clock.now()), undefined);
   protected readonly loaded = computed(() => this.data() !== undefined);
   protected readonly restored = signal<string | null>(null);
 
@@ -72,7 +80,11 @@ export class TrashPage {
   });
 
   protected async restore(entry: TrashEntry, title: string): Promise<void> {
-    await this.deletions.restore(entry.collection, entry.row.id);
-    this.restored.set(`${title} is back.`);
+    const parents = await this.deletions.restore(entry.collection, entry.row.id);
+    // Said aloud: restoring a session of a deleted book brought the book back too.
+    const along = parents.map(({ collection, row }) =>
+      collection === 'books' ? `the book “${String(row['title'] ?? 'Untitled book')}”` : `the notebook “${String(row['title'] ?? 'Untitled')}”`,
+    );
+    this.restored.set(along.length ? `${title} is back, and so is ${along.join(' and ')} it belongs to (it was in Trash too).` : `${title} is back.`);
   }
 }

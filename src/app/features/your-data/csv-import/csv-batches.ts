@@ -2,8 +2,8 @@ import type { CsvAddition } from '@shared/import/csv/csv-dry-run';
 
 import type { RowWrite } from '../../../core/data/journal-store';
 
-/** Rows written per Dexie transaction: a cancelled import keeps whole batches only. */
-export const CSV_ROWS_PER_BATCH = 200;
+/** Rows written per Dexie transaction: a cancelled import keeps whole batches only; small enough that one batch (about 150 row writes) stays a short task. */
+export const CSV_ROWS_PER_BATCH = 50;
 
 /** A row's writes: the book, its first status change and, when it has any, its reading. */
 export function additionWrites({ book, reading }: CsvAddition, now: string): RowWrite[] {

@@ -5,7 +5,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 
 import { bookKeys } from '@shared/duplicates/book-keys';
 import { CSV_TARGET_LABELS, CSV_TARGETS, guessMapping, type CsvTarget } from '@shared/import/csv/csv-fields';
-import { csvDryRun, type CsvDryRun } from '@shared/import/csv/csv-dry-run';
+import { csvDryRunSteps, type CsvDryRun } from '@shared/import/csv/csv-dry-run';
 import { CSV_DATE_FORMATS, statusValueMapping, type BookStatus, type CsvDateFormat } from '@shared/import/csv/csv-values';
 import { BOOK_STATUSES, type Book } from '@shared/sync/schema/collections';
 
@@ -106,7 +106,12 @@ export class CsvImport {
     const library = (await this.store.list('books')) as Book[];
     const keys = new Set(library.flatMap((book) => bookKeys(book)));
     const statuses = new Map(this.statusValues().map(({ value, status }) => [value, status]));
-    this.dryRun.set(csvDryRun(this.rows(), { mapping: this.mapping(), dateFormat: this.dateFormat(), statuses, keepBooksWithBadIsbn: this.keepBadIsbn() }, keys));
+    const options = { mapping: this.mapping(), dateFormat: this.dateFormat(), statuses, keepBooksWithBadIsbn: this.keepBadIsbn() };
+    // A slice at a time, painting between: no long task on a large spreadsheet.
+    const steps = csvDryRunSteps(this.rows(), options, keys, 500);
+    let step = steps.next();
+    for (; !step.done; step = steps.next()) await nextTask();
+    this.dryRun.set(step.value);
   }
 
   /** Writes the dry run's books a batch per transaction, until done or cancelled. */
@@ -116,13 +121,16 @@ export class CsvImport {
     this.importing.set({ done: 0, total: additions.length });
     const now = new Date().toISOString();
     let done = 0;
-    for (let start = 0; start < additions.length && !this.cancelled; start += CSV_ROWS_PER_BATCH) {
-      const batch = additions.slice(start, start + CSV_ROWS_PER_BATCH);
-      await this.store.writeAll(batch.flatMap((addition) => additionWrites(addition, now)));
-      done += batch.length;
-      this.importing.set({ done, total: additions.length });
-      await nextTask();
-    }
+    // Sync waits for the last batch (then sends them all), rather than racing each one.
+    await this.sync.holdWhile(async () => {
+      for (let start = 0; start < additions.length && !this.cancelled; start += CSV_ROWS_PER_BATCH) {
+        const batch = additions.slice(start, start + CSV_ROWS_PER_BATCH);
+        await this.store.writeAll(batch.flatMap((addition) => additionWrites(addition, now)));
+        done += batch.length;
+        this.importing.set({ done, total: additions.length });
+        await nextTask();
+      }
+    });
     this.importing.set(null);
     this.dryRun.set(null);
     this.outcome.set(
@@ -130,7 +138,6 @@ export class CsvImport {
         ? `Stopped: ${done} of ${additions.length} books were imported (rows ${additions[0]?.row ?? 0} to ${additions[done - 1]?.row ?? 0}); the rest were not.`
         : `Imported ${done} books.`,
     );
-    void this.sync.syncNow().catch(() => undefined);
   }
 
   protected cancel(): void {

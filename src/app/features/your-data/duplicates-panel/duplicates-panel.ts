@@ -1,13 +1,14 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
+import { ActivatedRoute } from '@angular/router';
 
 import { findDuplicates } from '@shared/duplicates/book-keys';
-import { BOOK_CHILDREN, differingFields, mergeBooks, type BookChild, type MergeField } from '@shared/duplicates/merge-books';
+import { differingFields, type MergeField } from '@shared/duplicates/merge-books';
 import type { Book } from '@shared/sync/schema/collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
-import { JournalStore } from '../../../core/data/journal-store';
-import { LocalJournal } from '../../../core/data/local-journal';
+import { liveQueryFor } from '../../../core/data/live-query-for';
+import { BookMerge } from './book-merge';
 
 const FIELD_LABELS: Record<MergeField, string> = {
   title: 'Title',
@@ -23,6 +24,8 @@ const FIELD_LABELS: Record<MergeField, string> = {
   year: 'Year',
   tags: 'Tags',
   coverId: 'Cover',
+  seriesId: 'Series',
+  seriesPosition: 'Place in the series',
 };
 
 /** Books that look like the same book (same ISBN-13, or same title and first author), merged two at a time. */
@@ -34,10 +37,22 @@ const FIELD_LABELS: Record<MergeField, string> = {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class DuplicatesPanel {
-  private readonly store = inject(JournalStore);
-  private readonly journal = inject(LocalJournal);
+  private readonly merging = inject(BookMerge);
 
-  private readonly books = liveQuerySignal(async (db) => ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted), [] as Book[]);
+  /**
+   * Looking reads the whole library, again after every change: only once the reader asks (or
+   * arrives from the Library's "See possible duplicates"), never during an import they did not.
+   */
+  protected readonly looking = signal(inject(ActivatedRoute, { optional: true })?.snapshot.fragment === 'duplicates');
+  private readonly found = liveQueryFor(this.looking, async (db, looking) =>
+    looking ? ((await db.rows('books').toArray()) as Book[]).filter((book) => !book.deleted) : null,
+  );
+  protected readonly loaded = computed(() => Array.isArray(this.found()));
+  private readonly books = computed(() => this.found() ?? []);
+  private readonly seriesNames = liveQuerySignal(
+    async (db) => new Map((await db.rows('series').toArray()).map((one) => [one.id, String(one['name'] ?? '')])),
+    new Map(),
+  );
   protected readonly groups = computed(() => findDuplicates(this.books()));
   /** The pair being merged: kept first. */
   protected readonly pair = signal<[Book, Book] | null>(null);
@@ -47,6 +62,15 @@ export class DuplicatesPanel {
     const pair = this.pair();
     return pair ? differingFields(pair[0], pair[1]).map((field) => ({ field, label: FIELD_LABELS[field] })) : [];
   });
+
+  constructor() {
+    const host = inject<ElementRef<HTMLElement>>(ElementRef).nativeElement;
+    if (this.looking()) afterNextRender(() => host.scrollIntoView?.({ block: 'start' }));
+  }
+
+  protected look(): void {
+    this.looking.set(true);
+  }
 
   protected open(group: readonly Book[]): void {
     this.message.set(null);
@@ -71,25 +95,17 @@ export class DuplicatesPanel {
     const value = book[field];
     if (value === null || value === undefined || value === '') return '—';
     if (field === 'coverId') return 'a cover';
+    if (field === 'seriesId') return this.seriesNames().get(String(value)) || 'a series';
     return Array.isArray(value) ? value.join(', ') : String(value);
   }
 
-  /** Writes the merge in one transaction: picked values, children moved, the other book a tombstone. */
+  /** Writes the merge in one transaction: picked values, every reference moved, the other book a tombstone. */
   protected async merge(): Promise<void> {
     const pair = this.pair();
-    const db = this.journal.db();
-    if (!pair || !db) return;
+    if (!pair) return;
     const [kept, other] = pair;
-    const children: { collection: BookChild; id: string }[] = [];
-    for (const collection of BOOK_CHILDREN) {
-      const rows = await db
-        .rows(collection)
-        .filter((row) => row['bookId'] === other.id && !row['deleted'])
-        .toArray();
-      for (const row of rows) children.push({ collection, id: row.id });
-    }
-    await this.store.writeAll(mergeBooks(kept, other, this.picks(), children));
+    const moved = await this.merging.merge(kept, other, this.picks());
     this.pair.set(null);
-    this.message.set(`Merged into “${kept.title}”: ${children.length} readings, sessions, quotes and other entries moved to it.`);
+    this.message.set(`Merged into “${kept.title}”: ${moved} readings, sessions, quotes and other entries now point at it.`);
   }
 }

@@ -35,7 +35,11 @@ export class ExportPanel {
       const file = await this.exporter.everything((progress) => this.progress.set(progress));
       const name = exportFileName(this.date);
       saveFile(file, name);
-      this.message.set(`Saved ${name} (${this.progress()?.total ?? 0} rows).`);
+      const missing = this.exporter.missingCovers;
+      this.message.set(
+        `Saved ${name} (${this.progress()?.total ?? 0} rows, with covers).` +
+          (missing ? ` ${missing} covers were neither on this device nor reachable on the server; export again online to include them.` : ''),
+      );
     } catch {
       this.message.set('The export could not be made. Nothing was lost; try again.');
     } finally {

@@ -44,7 +44,7 @@ export class ImportPanel {
     }
     this.progress.set({ done: 0, total: 0 });
     try {
-      const result = await this.importer.importJson(file, (progress) => this.progress.set(progress));
+      const result = await this.sync.holdWhile(() => this.importer.importJson(file, (progress) => this.progress.set(progress)));
       if ('problem' in result) this.problem.set(result.problem);
       else {
         this.summary.set(result.summary);
