@@ -104,6 +104,8 @@ export const circleProgress = defineCollection('circleProgress', {
   bookLinks: field.json(z.record(z.uuid(), z.uuid()).nullable()),
   /** Parts the reader is past, written only while sharing is on ("Wren is past part 2"). */
   sharedPastPartIds: field.json(uuidList(500).nullable()),
+  /** The reader's IANA time zone, so meeting reminders come the day before in their own day (never shared). */
+  timeZone: field.optionalText(64),
 });
 
 /** The fields of circleProgress other members may pull, while `shareProgress` is on. */

@@ -78,6 +78,12 @@ export class CirclePage {
       const past = pastParts(view);
       if (!sameMembers(past, view.mine.sharedPastPartIds ?? [])) void this.store.write('circleProgress', view.myProgressId, this.id(), { sharedPastPartIds: past });
     });
+    // Meeting reminders come the day before in the reader's own day: the server learns their zone (never shown to others).
+    effect(() => {
+      const view = this.view();
+      const timeZone = Intl.DateTimeFormat().resolvedOptions().timeZone;
+      if (view && timeZone && view.mine?.timeZone !== timeZone) void this.store.write('circleProgress', view.myProgressId, this.id(), { timeZone });
+    });
   }
 
   protected async refresh(): Promise<void> {
