@@ -2,7 +2,7 @@ import { HttpHeaders } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 
-import type { CirclePullResponse } from '@shared/circles/circle-wire';
+import { NOT_A_MEMBER, NOT_A_MEMBER_TEXT, type CirclePullResponse } from '@shared/circles/circle-wire';
 import { formatHlc, parseHlc } from '@shared/sync/hlc';
 
 import { deviceId } from '../../../core/device/device-id';
@@ -17,7 +17,7 @@ const PUSH_URL = `/api/circles/${CIRCLE}/sync/push`;
 
 const pulled = (): CirclePullResponse => ({ rows: [], cursor: 'c1', hasMore: false, members: [], role: 'member', serverTime: new Date().toISOString() });
 
-describe('CircleSync (a device whose date was wrong)', () => {
+describe('CircleSync', () => {
   let journal: TestJournal;
   let backend: HttpTestingController;
 
@@ -61,5 +61,27 @@ describe('CircleSync (a device whose date was wrong)', () => {
     const post = await db.table('circlePosts').get(POST);
     expect(post._hlc).toEqual({ circleId: changes[0]!.hlc, text: changes[1]!.hlc });
     expect((await db.meta.get('clock'))!.value).toBe(changes[1]!.hlc);
+  });
+
+  it('when the reader was removed from the circle, drops it from the device and refuses its queued posts with a reason', async () => {
+    const { db } = journal;
+    const hlc = formatHlc({ wall: Date.now(), counter: 0, node: deviceId() });
+    await db.circleMeta.put({ circleId: CIRCLE, role: 'member', members: [] });
+    await db.table('circlePosts').put({ id: POST, circleId: CIRCLE, text: 'Written on the train', _hlc: { text: hlc } });
+    await db.circleOutbox.add({ id: 'c1', circleId: CIRCLE, collection: 'circlePosts', rowId: POST, field: 'text', value: 'Written on the train', hlc });
+    const sync = TestBed.inject(CircleSync);
+
+    const syncing = sync.syncCircle(CIRCLE);
+    (await sent(backend, PUSH_URL)).flush(
+      { error: { code: NOT_A_MEMBER, message: 'You are not a member of this circle' } },
+      { status: 403, statusText: 'Forbidden' },
+    );
+    await syncing;
+
+    expect(sync.problem()).toBe(`${NOT_A_MEMBER_TEXT}: 1 waiting change was refused (listed in the sync menu).`);
+    expect(await db.rejected.toArray()).toEqual([jasmine.objectContaining({ rowId: POST, code: NOT_A_MEMBER, reason: NOT_A_MEMBER_TEXT })]);
+    expect(await db.circleOutbox.count()).toBe(0);
+    expect(await db.table('circlePosts').get(POST)).toBeUndefined();
+    expect(await db.circleMeta.get(CIRCLE)).toBeUndefined();
   });
 });

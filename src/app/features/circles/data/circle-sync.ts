@@ -89,8 +89,12 @@ export class CircleSync {
       this.problem.set(null);
     } catch (error) {
       if (error instanceof HttpErrorResponse && error.status === 403 && isApiErrorBody(error.error) && error.error.error.code === NOT_A_MEMBER) {
-        await this.forget(db, circleId);
-        this.problem.set(NOT_A_MEMBER_TEXT);
+        const refused = await this.forget(db, circleId);
+        this.problem.set(
+          refused === 0
+            ? NOT_A_MEMBER_TEXT
+            : `${NOT_A_MEMBER_TEXT}: ${refused} waiting ${refused === 1 ? 'change was' : 'changes were'} refused (listed in the sync menu).`,
+        );
         return;
       }
       throw error;
@@ -157,8 +161,8 @@ export class CircleSync {
     }
   }
 
-  /** Removes a circle's rows, meta and waiting changes from this device (kept aside as refused, with the reason). */
-  async forget(db: JournalDb, circleId: string): Promise<void> {
+  /** Removes a circle's rows, meta and waiting changes from this device (kept aside as refused, with the reason); answers how many were waiting. */
+  async forget(db: JournalDb, circleId: string): Promise<number> {
     const waiting = await db.circleOutbox.where('circleId').equals(circleId).toArray();
     await this.setAside(
       db,
@@ -170,6 +174,7 @@ export class CircleSync {
       for (const table of tables) await table.where('circleId').equals(circleId).delete();
       await db.circleMeta.delete(circleId);
     });
+    return waiting.length;
   }
 }
 
