@@ -25,6 +25,8 @@ export const circles = defineCollection('circles', {
   circleId: circleId(),
   name: field.text(120),
   description: field.optionalText(1000),
+  /** An uploaded image (its SHA-256); members read it through `/api/uploads/:id`, non-members get 404. */
+  coverId: field.optionalUploadId(),
 });
 
 /** A book the circle reads, with its length for the schedule. */

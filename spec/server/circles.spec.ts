@@ -10,6 +10,7 @@ import { seedDemoCircle } from '../../sync-server/src/demo/demo-circle';
 import { sendReminders } from '../../sync-server/src/jobs/circle-reminders.job';
 import { createSmtpMailer } from '../../sync-server/src/mail/mailer';
 import { bearer, registerReader, uniqueEmail } from '../support/accounts';
+import { uniquePng } from '../support/images';
 import { testDataSource } from '../support/test-database';
 import { createTestApp, testConfig, testInbox } from '../support/test-server';
 
@@ -290,6 +291,49 @@ describe('Reading circles', () => {
       expect(leaving.body.error.message).toContain('Hand over');
       const details = await request(app).get(`/api/circles/${circleId}`).set(bearer(member.accessToken)).expect(200);
       expect(details.body.role).toBe('host');
+    });
+  });
+
+  describe('cover image', () => {
+    const upload = async (reader: Reader) =>
+      (
+        await request(app)
+          .post('/api/uploads')
+          .set(bearer(reader.accessToken))
+          .attach('file', uniquePng(), { filename: 'cover.png', contentType: 'image/png' })
+          .expect(201)
+      ).body.id as string;
+    const cover = (reader: Reader, id: string) => request(app).get(`/api/uploads/${id}`).set(bearer(reader.accessToken));
+
+    it('When a host gives the circle a cover, then members see it and non-members or removed members get 404', async () => {
+      const host = await registerReader(app);
+      const member = await registerReader(app);
+      const outsider = await registerReader(app);
+      const circleId = await createCircle(app, host);
+      await joined(app, host, circleId, member);
+      const coverId = await upload(host);
+      await cover(member, coverId).expect(404);
+
+      await push(app, host, circleId, [change('circles', circleId, 'coverId', coverId)]).expect(200);
+
+      await cover(member, coverId).expect(200).expect('Content-Type', 'image/png');
+      await cover(outsider, coverId).expect(404);
+      await request(app).delete(`/api/circles/${circleId}/members/${member.user.id}`).set(bearer(host.accessToken)).expect(204);
+      await cover(member, coverId).expect(404);
+    });
+
+    it('When a host names another reader’s image as the cover, then members still cannot read it', async () => {
+      const host = await registerReader(app);
+      const member = await registerReader(app);
+      const stranger = await registerReader(app);
+      const circleId = await createCircle(app, host);
+      await joined(app, host, circleId, member);
+      const strangersImage = await upload(stranger);
+
+      await push(app, host, circleId, [change('circles', circleId, 'coverId', strangersImage)]).expect(200);
+
+      await cover(member, strangersImage).expect(404);
+      await cover(host, strangersImage).expect(404);
     });
   });
 
