@@ -9,6 +9,8 @@ import { CirclePage } from './circle-page';
 const CIRCLE = '00000000-0000-4000-8000-00000000c001';
 const PICK = '00000000-0000-4000-8000-00000000c011';
 const PART = '00000000-0000-4000-8000-00000000c021';
+/** The page renders Material forms and Dexie live queries; a loaded machine needs more than the default 5 s. */
+const SLOW = 20_000;
 
 /** A host edits a pick and a part of the schedule on this device; the shared schema's reasons show under the fields. */
 describe('CirclePage (host editing picks and parts)', () => {
@@ -36,60 +38,86 @@ describe('CirclePage (host editing picks and parts)', () => {
       .put({ id: PART, circleId: CIRCLE, pickId: PICK, position: 1, label: 'Part one', endKind: 'page', endValue: '120', date: '2031-03-14', _hlc: {} });
     fixture = TestBed.createComponent(CirclePage);
     fixture.componentRef.setInput('id', CIRCLE);
-    await until(() => !!button('Edit the pick The Salt Orchard'), fixture);
-  });
+    await until(() => !!button('Edit the pick The Salt Orchard'), fixture, 10_000);
+  }, SLOW);
 
   afterEach(async () => {
     fixture.destroy();
     await journal.close();
   });
 
-  it('edits a pick’s title, authors and ISBN, refusing a wrong ISBN with the shared schema’s reason', async () => {
-    button('Edit the pick The Salt Orchard').click();
-    await until(() => field(page(), 'Title').value === 'The Salt Orchard', fixture);
-    expect(field(page(), 'Authors (commas between)').value).toBe('Ines Calloway');
+  it(
+    'edits a pick’s title, authors and ISBN, refusing a wrong ISBN with the shared schema’s reason',
+    async () => {
+      button('Edit the pick The Salt Orchard').click();
+      await until(() => field(page(), 'Title').value === 'The Salt Orchard', fixture);
+      expect(field(page(), 'Authors (commas between)').value).toBe('Ines Calloway');
 
-    type(field(page(), 'ISBN-13 (optional)'), '978-0-306-40615-8'); // the check digit of 978-0-306-40615-? is 7
-    button('Save the pick').click();
-    await until(() => errorUnder('ISBN-13 (optional)') !== '', fixture);
-    expect(errorUnder('ISBN-13 (optional)')).toBe('The ISBN is not a valid ISBN-13 (check digit)');
-    expect((await row('circlePicks', PICK)).isbn).toBeUndefined();
+      type(field(page(), 'ISBN-13 (optional)'), '978-0-306-40615-8'); // the check digit of 978-0-306-40615-? is 7
+      button('Save the pick').click();
+      await until(() => errorUnder('ISBN-13 (optional)') !== '', fixture);
+      expect(errorUnder('ISBN-13 (optional)')).toBe('The ISBN is not a valid ISBN-13 (check digit)');
+      expect((await row('circlePicks', PICK)).isbn).toBeUndefined();
 
-    type(field(page(), 'Title'), 'The Salt Orchard, Revised');
-    type(field(page(), 'Authors (commas between)'), 'Ines Calloway, Tomas Verhoeven');
-    type(field(page(), 'ISBN-13 (optional)'), '978-0-306-40615-7');
-    button('Save the pick').click();
-    await until(() => textOf(page().querySelector('#pick-form h3')) === 'Add a pick', fixture);
+      type(field(page(), 'Title'), 'The Salt Orchard, Revised');
+      type(field(page(), 'Authors (commas between)'), 'Ines Calloway, Tomas Verhoeven');
+      type(field(page(), 'ISBN-13 (optional)'), '978-0-306-40615-7');
+      button('Save the pick').click();
+      await until(() => textOf(page().querySelector('#pick-form h3')) === 'Add a pick', fixture);
 
-    expect(await row('circlePicks', PICK)).toEqual(
-      jasmine.objectContaining({ title: 'The Salt Orchard, Revised', authors: ['Ines Calloway', 'Tomas Verhoeven'], isbn: '9780306406157', pageCount: 300 }),
-    );
-    const queued = (await journal.db.circleOutbox.toArray()).filter((entry) => entry.rowId === PICK).map((entry) => entry.field);
-    // Only what changed goes to the circle (per-field merge).
-    expect(queued).toEqual(jasmine.arrayWithExactContents(['title', 'authors', 'isbn']));
-  });
+      expect(await row('circlePicks', PICK)).toEqual(
+        jasmine.objectContaining({ title: 'The Salt Orchard, Revised', authors: ['Ines Calloway', 'Tomas Verhoeven'], isbn: '9780306406157', pageCount: 300 }),
+      );
+      const queued = (await journal.db.circleOutbox.toArray()).filter((entry) => entry.rowId === PICK).map((entry) => entry.field);
+      // Only what changed goes to the circle (per-field merge).
+      expect(queued).toEqual(jasmine.arrayWithExactContents(['title', 'authors', 'isbn']));
+    },
+    SLOW,
+  );
 
-  it('edits where a part ends, its place and link, refusing a javascript: link, then removes it', async () => {
-    button('Edit Part one').click();
-    await until(() => field(page(), 'Ends at').value === 'p. 120', fixture);
+  it(
+    'edits where a part ends, its place and link, refusing a javascript: link, then removes it',
+    async () => {
+      button('Edit Part one').click();
+      await until(() => field(page(), 'Ends at').value === 'p. 120', fixture);
 
-    type(field(page(), 'Ends at'), '45%');
-    type(field(page(), 'Place (optional)'), 'The reading room');
-    type(field(page(), 'Video link (optional)'), 'javascript:alert(1)');
-    button('Save the part').click();
-    await until(() => errorUnder('Video link (optional)') !== '', fixture);
-    expect(errorUnder('Video link (optional)')).toBe('The link must be a web address (http or https)');
+      type(field(page(), 'Ends at'), '45%');
+      type(field(page(), 'Place (optional)'), 'The reading room');
+      type(field(page(), 'Video link (optional)'), 'javascript:alert(1)');
+      button('Save the part').click();
+      await until(() => errorUnder('Video link (optional)') !== '', fixture);
+      expect(errorUnder('Video link (optional)')).toBe('The link must be a web address (http or https)');
 
-    type(field(page(), 'Video link (optional)'), 'https://example.org/meet');
-    button('Save the part').click();
-    await until(() => textOf(page().querySelector('#part-form h3')) === 'Add a part to the schedule', fixture);
-    expect(await row('circleParts', PART)).toEqual(
-      jasmine.objectContaining({ endKind: 'percent', endValue: '45', place: 'The reading room', link: 'https://example.org/meet', date: '2031-03-14' }),
-    );
-    await until(() => textOf(page().querySelector('.part')).includes('to 45 %'), fixture);
+      type(field(page(), 'Video link (optional)'), 'https://example.org/meet');
+      button('Save the part').click();
+      await until(() => textOf(page().querySelector('#part-form h3')) === 'Add a part to the schedule', fixture);
+      expect(await row('circleParts', PART)).toEqual(
+        jasmine.objectContaining({ endKind: 'percent', endValue: '45', place: 'The reading room', link: 'https://example.org/meet', date: '2031-03-14' }),
+      );
+      await until(() => textOf(page().querySelector('.part')).includes('to 45 %'), fixture);
 
-    button('Remove Part one').click();
-    await until(() => page().querySelector('.part') === null, fixture);
-    expect((await row('circleParts', PART)).deleted).toBeTrue();
-  });
+      button('Remove Part one').click();
+      await until(() => page().querySelector('.part') === null, fixture);
+      expect((await row('circleParts', PART)).deleted).toBeTrue();
+    },
+    SLOW,
+  );
+
+  it(
+    'shows the circle’s cover and offers hosts the cover picker, whose choice is written to the circle',
+    async () => {
+      expect(page().querySelector('.cover-tool ll-cover-picker')).not.toBeNull();
+      expect(page().querySelector('.head ll-book-cover')).toBeNull();
+      const coverId = 'a'.repeat(64);
+
+      await journal.db.table('circles').update(CIRCLE, { coverId });
+      await until(() => page().querySelector('.head ll-book-cover') !== null, fixture);
+      // The picker follows the circle's cover; a change goes out to the circle like any host edit.
+      (fixture.componentInstance as unknown as { setCover(id: string | null): Promise<void> }).setCover(null);
+      await until(() => page().querySelector('.head ll-book-cover') === null, fixture);
+      const queued = (await journal.db.circleOutbox.toArray()).filter((entry) => entry.collection === 'circles');
+      expect(queued.map((entry) => [entry.field, entry.value])).toEqual([['coverId', null]]);
+    },
+    SLOW,
+  );
 });

@@ -15,6 +15,8 @@ import { deterministicId } from '@shared/sync/deterministic-id';
 import { describePartEnd, parsePartEnd, partEndOf, storedPartEnd, type PartEnd } from '@shared/circles/schedule';
 
 import { Auth } from '../../../core/auth/auth';
+import { BookCover } from '../../../core/covers/book-cover/book-cover';
+import { CoverPicker } from '../../../core/covers/cover-picker/cover-picker';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQueryFor } from '../../../core/data/live-query-for';
@@ -29,7 +31,18 @@ import { loadCircleView, type CircleView } from '../data/circle-view';
 /** One circle: its picks and schedule, meetings and answers, members, and the host's tools. */
 @Component({
   selector: 'll-circle-page',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatSlideToggleModule],
+  imports: [
+    BookCover,
+    CoverPicker,
+    ReactiveFormsModule,
+    RouterLink,
+    MatButtonModule,
+    MatButtonToggleModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    MatSlideToggleModule,
+  ],
   templateUrl: './circle-page.html',
   styleUrl: './circle-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -151,6 +164,11 @@ export class CirclePage {
       statusChangedAt: new Date().toISOString(),
     });
     await this.store.write('circleProgress', view.myProgressId, this.id(), { bookLinks: { ...(view.mine?.bookLinks ?? {}), [pick.id]: bookId } });
+  }
+
+  /** The circle's cover (hosts): uploaded by the device like a book's, seen by members only. */
+  protected setCover(coverId: string | null): Promise<void> {
+    return this.store.write('circles', this.id(), this.id(), { coverId });
   }
 
   protected editPick(pick: CirclePick): void {
