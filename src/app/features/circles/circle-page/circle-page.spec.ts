@@ -120,4 +120,22 @@ describe('CirclePage (host editing picks and parts)', () => {
     },
     SLOW,
   );
+
+  it(
+    'says what the circle sees, keeps progress sharing off until switched on, and adds the pick to the reader’s library',
+    async () => {
+      expect(textOf(page().querySelector('.privacy'))).toContain('Your journal, library, sessions and notes stay private');
+      const toggle = page().querySelector<HTMLButtonElement>('.privacy [role="switch"]')!;
+      expect(toggle.getAttribute('aria-checked')).toBe('false');
+
+      button('Add to my library').click();
+      await until(() => textOf(page()).includes('In your library'), fixture);
+      const books = await journal.db.rows('books').toArray();
+      expect(books).toEqual([jasmine.objectContaining({ title: 'The Salt Orchard', authors: ['Ines Calloway'], pageCount: 300 })]);
+      const progress = await journal.db.table('circleProgress').toArray();
+      expect(progress[0].bookLinks).toEqual({ [PICK]: books[0]!.id });
+      expect(progress[0].shareProgress).toBeUndefined();
+    },
+    SLOW,
+  );
 });
