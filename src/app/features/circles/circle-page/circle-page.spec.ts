@@ -38,7 +38,7 @@ describe('CirclePage (host editing picks and parts)', () => {
       .put({ id: PART, circleId: CIRCLE, pickId: PICK, position: 1, label: 'Part one', endKind: 'page', endValue: '120', date: '2031-03-14', _hlc: {} });
     fixture = TestBed.createComponent(CirclePage);
     fixture.componentRef.setInput('id', CIRCLE);
-    await until(() => !!button('Edit the pick The Salt Orchard'), fixture, 10_000);
+    await until(() => !!button('Edit pick The Salt Orchard'), fixture, 10_000);
   }, SLOW);
 
   afterEach(async () => {
@@ -49,7 +49,7 @@ describe('CirclePage (host editing picks and parts)', () => {
   it(
     'edits a pick’s title, authors and ISBN, refusing a wrong ISBN with the shared schema’s reason',
     async () => {
-      button('Edit the pick The Salt Orchard').click();
+      button('Edit pick The Salt Orchard').click();
       await until(() => field(page(), 'Title').value === 'The Salt Orchard', fixture);
       expect(field(page(), 'Authors (commas between)').value).toBe('Ines Calloway');
 
