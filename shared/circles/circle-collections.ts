@@ -25,6 +25,8 @@ export const circles = defineCollection('circles', {
   circleId: circleId(),
   name: field.text(120),
   description: field.optionalText(1000),
+  /** An uploaded image (its SHA-256); members read it through `/api/uploads/:id`, non-members get 404. */
+  coverId: field.optionalUploadId(),
 });
 
 /** A book the circle reads, with its length for the schedule. */
@@ -104,6 +106,8 @@ export const circleProgress = defineCollection('circleProgress', {
   bookLinks: field.json(z.record(z.uuid(), z.uuid()).nullable(), 'values'),
   /** Parts the reader is past, written only while sharing is on ("Wren is past part 2"). */
   sharedPastPartIds: field.json(uuidList(500).nullable()),
+  /** The reader's IANA time zone, so meeting reminders come the day before in their own day (never shared). */
+  timeZone: field.optionalText(64),
 });
 
 /** The fields of circleProgress other members may pull, while `shareProgress` is on. */

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 
 import type { Express } from 'express';
+import ICAL from 'ical.js';
 import request from 'supertest';
 
 import { formatHlc } from '../../shared/sync/hlc';
@@ -9,6 +10,7 @@ import { seedDemoCircle } from '../../sync-server/src/demo/demo-circle';
 import { sendReminders } from '../../sync-server/src/jobs/circle-reminders.job';
 import { createSmtpMailer } from '../../sync-server/src/mail/mailer';
 import { bearer, registerReader, uniqueEmail } from '../support/accounts';
+import { uniquePng } from '../support/images';
 import { testDataSource } from '../support/test-database';
 import { createTestApp, testConfig, testInbox } from '../support/test-server';
 
@@ -292,6 +294,49 @@ describe('Reading circles', () => {
     });
   });
 
+  describe('cover image', () => {
+    const upload = async (reader: Reader) =>
+      (
+        await request(app)
+          .post('/api/uploads')
+          .set(bearer(reader.accessToken))
+          .attach('file', uniquePng(), { filename: 'cover.png', contentType: 'image/png' })
+          .expect(201)
+      ).body.id as string;
+    const cover = (reader: Reader, id: string) => request(app).get(`/api/uploads/${id}`).set(bearer(reader.accessToken));
+
+    it('When a host gives the circle a cover, then members see it and non-members or removed members get 404', async () => {
+      const host = await registerReader(app);
+      const member = await registerReader(app);
+      const outsider = await registerReader(app);
+      const circleId = await createCircle(app, host);
+      await joined(app, host, circleId, member);
+      const coverId = await upload(host);
+      await cover(member, coverId).expect(404);
+
+      await push(app, host, circleId, [change('circles', circleId, 'coverId', coverId)]).expect(200);
+
+      await cover(member, coverId).expect(200).expect('Content-Type', 'image/png');
+      await cover(outsider, coverId).expect(404);
+      await request(app).delete(`/api/circles/${circleId}/members/${member.user.id}`).set(bearer(host.accessToken)).expect(204);
+      await cover(member, coverId).expect(404);
+    });
+
+    it('When a host names another reader’s image as the cover, then members still cannot read it', async () => {
+      const host = await registerReader(app);
+      const member = await registerReader(app);
+      const stranger = await registerReader(app);
+      const circleId = await createCircle(app, host);
+      await joined(app, host, circleId, member);
+      const strangersImage = await upload(stranger);
+
+      await push(app, host, circleId, [change('circles', circleId, 'coverId', strangersImage)]).expect(200);
+
+      await cover(member, strangersImage).expect(404);
+      await cover(host, strangersImage).expect(404);
+    });
+  });
+
   describe('meetings', () => {
     it('When a meeting is tomorrow, then members who did not say "not going" get one reminder, and it is in their events', async () => {
       const host = await registerReader(app);
@@ -318,8 +363,9 @@ describe('Reading circles', () => {
       const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
       const dataSource = await testDataSource();
 
-      const first = await sendReminders(dataSource, mailer, config.publicUrl, day);
-      const second = await sendReminders(dataSource, mailer, config.publicUrl, day);
+      // Neither member's zone is known: the day before is the UTC day.
+      const first = await sendReminders(dataSource, mailer, config.publicUrl, new Date('2031-03-13T12:00:00Z'));
+      const second = await sendReminders(dataSource, mailer, config.publicUrl, new Date('2031-03-13T13:00:00Z'));
       mailer.close();
 
       expect(first).toBe(2);
@@ -328,6 +374,81 @@ describe('Reading circles', () => {
       const events = await circleMeetingEvents(member.user.id, dataSource.manager);
       expect(events).toContain(jasmine.objectContaining({ uid: `circle-part-${partId}@lamplight`, start: `${day}T19:30` }));
       expect(await circleMeetingEvents(randomUUID(), dataSource.manager)).toEqual([]);
+    });
+
+    it('When members live in Los Angeles and Kiritimati, then each gets the reminder on the day before in their own time zone', async () => {
+      const host = await registerReader(app);
+      const west = await registerReader(app);
+      const east = await registerReader(app);
+      const circleId = await createCircle(app, host, `Zones circle ${randomUUID().slice(0, 8)}`);
+      await joined(app, host, circleId, west);
+      await joined(app, host, circleId, east);
+      const partId = randomUUID();
+      await push(app, host, circleId, [change('circleParts', partId, 'circleId', circleId), change('circleParts', partId, 'date', '2032-05-20')]).expect(200);
+      for (const [reader, zone] of [
+        [west, 'America/Los_Angeles'],
+        [east, 'Pacific/Kiritimati'],
+        [host, 'Not/A_Zone'],
+      ] as const) {
+        const rowId = randomUUID();
+        await push(app, reader, circleId, [change('circleProgress', rowId, 'circleId', circleId), change('circleProgress', rowId, 'timeZone', zone)]).expect(200);
+      }
+      const config = await testConfig();
+      const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
+      const dataSource = await testDataSource();
+      const sent = (now: string) => sendReminders(dataSource, mailer, config.publicUrl, new Date(now));
+
+      // Offsets from the IANA tz database: Kiritimati UTC+14, Los Angeles UTC−7 (PDT) in May 2032.
+      expect(await sent('2032-05-18T20:00:00Z'))
+        .withContext('10:00 on the 19th in Kiritimati, the 18th in Los Angeles and UTC')
+        .toBe(1);
+      await (await testInbox()).inbox.waitFor((m) => m.to.includes(east.user.email) && m.subject.startsWith('Tomorrow'));
+      expect(await sent('2032-05-19T12:00:00Z'))
+        .withContext('the host has an unknown zone: UTC, the 19th')
+        .toBe(1);
+      expect(await sent('2032-05-19T14:00:00Z'))
+        .withContext('07:00 in Los Angeles: not yet')
+        .toBe(0);
+      expect(await sent('2032-05-19T17:00:00Z'))
+        .withContext('10:00 on the 19th in Los Angeles')
+        .toBe(1);
+      mailer.close();
+      await (await testInbox()).inbox.waitFor((m) => m.to.includes(west.user.email) && m.subject.startsWith('Tomorrow'));
+    });
+
+    it('When a meeting moves, then its feed event keeps its UID, DTSTAMP is its last change and SEQUENCE grows (read by ical.js)', async () => {
+      const member = await registerReader(app);
+      const circleId = await createCircle(app, member, `Feed circle ${randomUUID().slice(0, 8)}`);
+      const partId = randomUUID();
+      await push(app, member, circleId, [
+        change('circleParts', partId, 'circleId', circleId),
+        change('circleParts', partId, 'date', '2031-06-02'),
+        change('circleParts', partId, 'place', 'The reading room'),
+      ]).expect(200);
+      const path = (await request(app).post('/api/calendar-feed').set(bearer(member.accessToken)).expect(201)).body.path as string;
+      const feedEvent = async () => {
+        const text = (await request(app).get(path).expect(200)).text;
+        const events = new ICAL.Component(ICAL.parse(text)).getAllSubcomponents('vevent');
+        return events.find((event) => event.getFirstPropertyValue('uid') === `circle-part-${partId}@lamplight`)!;
+      };
+
+      const before = await feedEvent();
+      // RFC 5545 §3.8.7.2: DTSTAMP is when the event last changed, so the same feed fetched again is the same.
+      expect((await feedEvent()).getFirstPropertyValue('dtstamp')!.toString()).toBe(before.getFirstPropertyValue('dtstamp')!.toString());
+      // The circle's name was stamped by the server at creation, now: the move comes after it.
+      wall = Date.now() + 5000;
+      const movedAt = wall;
+      await push(app, member, circleId, [change('circleParts', partId, 'place', 'The harbour café')]).expect(200);
+      const moved = await feedEvent();
+      expect((moved.getFirstPropertyValue('dtstamp') as ICAL.Time).toJSDate().getTime()).toBe(Math.floor(movedAt / 1000) * 1000);
+      // §3.8.7.4: SEQUENCE grows with every change of the event; §3.8.4.7: the UID stays.
+      expect(Number(moved.getFirstPropertyValue('sequence'))).toBeGreaterThan(Number(before.getFirstPropertyValue('sequence')));
+      expect(String(moved.getFirstPropertyValue('description'))).toContain('The harbour café');
+      wall += 5000;
+      await push(app, member, circleId, [change('circleParts', partId, 'date', '2031-06-09')]).expect(200);
+      const later = await feedEvent();
+      expect((later.getFirstPropertyValue('dtstart') as ICAL.Time).toString()).toBe('2031-06-09');
+      expect(Number(later.getFirstPropertyValue('sequence'))).toBeGreaterThan(Number(moved.getFirstPropertyValue('sequence')));
     });
   });
 

@@ -30,7 +30,8 @@ async function main(): Promise<void> {
   }
 
   const mailer = createSmtpMailer(config.smtpUrl, config.mailFrom);
-  const jobs = await startJobRunner(config.databaseUrl, dataSource, [...JOBS, circleReminders(mailer, config.publicUrl)], jobServices(config, mailer));
+  const services = jobServices(config, mailer);
+  const jobs = await startJobRunner(config.databaseUrl, dataSource, [...JOBS, circleReminders(mailer, config.publicUrl, services.now)], services);
   const app = createApp({ config, dataSource, mailer, logger });
   const server: Server = app.listen(config.port, config.host, () => {
     const address = server.address();

@@ -12,6 +12,8 @@ export interface NeutralEvent {
   readonly summary: string;
   readonly description?: string;
   readonly url?: string;
+  /** The clocks of every field the event is made of (its last change is the greatest). */
+  readonly clocks: readonly string[];
 }
 
 /** One dated part of a circle a reader belongs to, with what the mail and the feed say about it. */
@@ -25,22 +27,41 @@ export interface Meeting {
   readonly time: string | null;
   readonly place: string | null;
   readonly link: string | null;
+  /** Clocks of the fields the meeting is shown with: the part's, the circle's name, the pick's title. */
+  readonly clocks: readonly string[];
 }
 
-/** Dated, not deleted parts of the reader's circles (all of them, or those on `day`). */
-export async function meetingsOf(manager: Pick<EntityManager, 'query'>, filter: { userId?: string; day?: string }): Promise<(Meeting & { userId: string })[]> {
-  const rows: { part_id: string; circle_id: string; user_id: string; circle_name: string | null; pick_title: string | null; part: Record<string, unknown> }[] =
-    await manager.query(
-      `SELECT p.id AS part_id, p.circle_id, m.user_id, c.fields->>'name' AS circle_name, k.fields->>'title' AS pick_title, p.fields AS part
+const SHOWN_PART_FIELDS = ['date', 'time', 'place', 'link', 'label', 'pickId'] as const;
+
+interface MeetingRow {
+  part_id: string;
+  circle_id: string;
+  user_id: string;
+  circle_name: string | null;
+  pick_title: string | null;
+  part: Record<string, unknown>;
+  part_clocks: Record<string, string>;
+  name_clock: string | null;
+  title_clock: string | null;
+}
+
+/** Dated, not deleted parts of the reader's circles (all of them, or those on one of `days`). */
+export async function meetingsOf(
+  manager: Pick<EntityManager, 'query'>,
+  filter: { userId?: string; days?: readonly string[] },
+): Promise<(Meeting & { userId: string })[]> {
+  const rows: MeetingRow[] = await manager.query(
+    `SELECT p.id AS part_id, p.circle_id, m.user_id, c.fields->>'name' AS circle_name, k.fields->>'title' AS pick_title, p.fields AS part,
+              p.clocks AS part_clocks, c.clocks->>'name' AS name_clock, k.clocks->>'title' AS title_clock
          FROM circle_rows p
          JOIN circle_members m ON m.circle_id = p.circle_id
          LEFT JOIN circle_rows c ON c.collection = 'circles' AND c.id = p.circle_id
          LEFT JOIN circle_rows k ON k.collection = 'circlePicks' AND k.id = (p.fields->>'pickId')::uuid AND k.circle_id = p.circle_id
         WHERE p.collection = 'circleParts' AND p.fields->>'date' IS NOT NULL AND coalesce((p.fields->>'deleted')::boolean, false) = false
-          AND ($1::uuid IS NULL OR m.user_id = $1) AND ($2::text IS NULL OR p.fields->>'date' = $2)
+          AND ($1::uuid IS NULL OR m.user_id = $1) AND ($2::text[] IS NULL OR p.fields->>'date' = ANY($2::text[]))
         ORDER BY p.fields->>'date', p.id, m.user_id`,
-      [filter.userId ?? null, filter.day ?? null],
-    );
+    [filter.userId ?? null, filter.days ?? null],
+  );
   return rows.map((row) => ({
     partId: row.part_id,
     circleId: row.circle_id,
@@ -52,6 +73,7 @@ export async function meetingsOf(manager: Pick<EntityManager, 'query'>, filter: 
     time: typeof row.part['time'] === 'string' ? row.part['time'] : null,
     place: typeof row.part['place'] === 'string' ? row.part['place'] : null,
     link: typeof row.part['link'] === 'string' ? row.part['link'] : null,
+    clocks: [...SHOWN_PART_FIELDS.map((field) => row.part_clocks?.[field]), row.name_clock, row.title_clock].filter((clock): clock is string => !!clock),
   }));
 }
 
@@ -68,5 +90,6 @@ export async function circleMeetingEvents(userId: string, manager: Pick<EntityMa
     description:
       [meeting.pickTitle ? `Reading ${meeting.pickTitle}.` : null, meeting.place ? `Where: ${meeting.place}` : null].filter(Boolean).join('\n') || undefined,
     url: meeting.link ?? `${publicUrl}/circles/${meeting.circleId}`,
+    clocks: meeting.clocks,
   }));
 }

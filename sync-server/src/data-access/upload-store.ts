@@ -46,14 +46,24 @@ export class UploadStore {
   }
 
   /**
-   * The upload if this reader owns it, else null (whether or not someone else does). Bytes are
-   * read only when asked for, so a revalidation (304) does not load the image.
+   * The upload if this reader owns it, or it is the cover of a circle they are in (uploaded by
+   * one of its hosts), else null (whether or not someone else has it). Bytes are read only when
+   * asked for, so a revalidation (304) does not load the image.
    */
   async read(userId: string, id: string, withBytes: boolean): Promise<StoredUpload | null> {
     const rows: { media_type: UploadMediaType; byte_size: number; bytes: Buffer | null }[] = await this.dataSource.query(
       `SELECT u.media_type, u.byte_size, CASE WHEN $3::boolean THEN u.bytes END AS bytes
-         FROM uploads u JOIN upload_owners o ON o.upload_id = u.id
-        WHERE u.id = $1 AND o.user_id = $2`,
+         FROM uploads u
+        WHERE u.id = $1
+          AND (EXISTS (SELECT 1 FROM upload_owners o WHERE o.upload_id = u.id AND o.user_id = $2)
+               -- A circle's cover: its members read it, when a host of the circle uploaded it (so no
+               -- host can show members an image of another reader's by naming its hash).
+               OR EXISTS (SELECT 1 FROM circle_rows c
+                            JOIN circle_members m ON m.circle_id = c.circle_id AND m.user_id = $2
+                            JOIN circle_members h ON h.circle_id = c.circle_id AND h.role = 'host'
+                            JOIN upload_owners ho ON ho.upload_id = u.id AND ho.user_id = h.user_id
+                           WHERE c.collection = 'circles' AND c.fields->>'coverId' = u.id
+                             AND coalesce((c.fields->>'deleted')::boolean, false) = false))`,
       [id, userId, withBytes],
     );
     const row = rows[0];

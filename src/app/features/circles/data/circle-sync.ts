@@ -7,6 +7,7 @@ import { isApiErrorBody } from '@shared/api/api-error';
 import { CIRCLE_COLLECTIONS } from '@shared/circles/circle-collections';
 import { NOT_A_MEMBER, NOT_A_MEMBER_TEXT, type CirclePullResponse } from '@shared/circles/circle-wire';
 import type { ChangeProblem, PushResponse } from '@shared/api/sync';
+import { clockOffsetMs } from '@shared/sync/device-clock';
 
 import type { CircleOutboxEntry, JournalDb } from '../../../core/data/journal-db';
 import { LocalJournal } from '../../../core/data/local-journal';
@@ -14,6 +15,7 @@ import { isUnreachable } from '../../../core/http/api-error-message';
 import { OneAtATime } from '../../../core/tasks/one-at-a-time';
 import { CirclesApi } from './circles-api';
 import { mergePulledRow, type LocalCircleRow } from './circle-rows';
+import { restampCircleChanges } from './circle-restamp';
 import { CircleStore } from './circle-store';
 
 const PUSH_BATCH = 50;
@@ -87,8 +89,12 @@ export class CircleSync {
       this.problem.set(null);
     } catch (error) {
       if (error instanceof HttpErrorResponse && error.status === 403 && isApiErrorBody(error.error) && error.error.error.code === NOT_A_MEMBER) {
-        await this.forget(db, circleId);
-        this.problem.set(NOT_A_MEMBER_TEXT);
+        const refused = await this.forget(db, circleId);
+        this.problem.set(
+          refused === 0
+            ? NOT_A_MEMBER_TEXT
+            : `${NOT_A_MEMBER_TEXT}: ${refused} waiting ${refused === 1 ? 'change was' : 'changes were'} refused (listed in the sync menu).`,
+        );
         return;
       }
       throw error;
@@ -96,16 +102,29 @@ export class CircleSync {
   }
 
   private async push(db: JournalDb, circleId: string): Promise<void> {
+    let restamps = 0;
     for (;;) {
       const batch = await db.circleOutbox.where('circleId').equals(circleId).limit(PUSH_BATCH).toArray();
       if (batch.length === 0) return;
       const changes = batch.map(({ id, collection, rowId, field, value, hlc }) => ({ id, collection, rowId, field, value, hlc }));
+      const sentAt = Date.now();
       try {
         await firstValueFrom(this.http.post<PushResponse>(`/api/circles/${circleId}/sync/push`, { changes }));
         await db.circleOutbox.bulkDelete(batch.map((entry) => entry.seq!));
       } catch (error) {
         const problems = refusedChanges(error);
         if (!problems) throw error;
+        const ahead = problems.filter((problem) => problem.code === 'clock_ahead' && batch[problem.index]);
+        if (ahead.length > 0) {
+          // Never set aside for a clock problem (as for the reader's own changes): stamp again from the server's time.
+          if (++restamps > 3) throw new Error("This device's clock could not be brought in line with the server; trying again later");
+          await learnServerTime(db, error as HttpErrorResponse, sentAt);
+          await restampCircleChanges(
+            db,
+            ahead.map((problem) => batch[problem.index]!),
+          );
+          continue;
+        }
         // The refused ones are set aside with their reason (shown in the sync menu); the rest go again.
         await this.setAside(db, batch, problems);
       }
@@ -142,8 +161,8 @@ export class CircleSync {
     }
   }
 
-  /** Removes a circle's rows, meta and waiting changes from this device (kept aside as refused, with the reason). */
-  async forget(db: JournalDb, circleId: string): Promise<void> {
+  /** Removes a circle's rows, meta and waiting changes from this device (kept aside as refused, with the reason); answers how many were waiting. */
+  async forget(db: JournalDb, circleId: string): Promise<number> {
     const waiting = await db.circleOutbox.where('circleId').equals(circleId).toArray();
     await this.setAside(
       db,
@@ -155,7 +174,14 @@ export class CircleSync {
       for (const table of tables) await table.where('circleId').equals(circleId).delete();
       await db.circleMeta.delete(circleId);
     });
+    return waiting.length;
   }
+}
+
+/** Keeps the offset from the server's time (its HTTP Date header), as the reader's own sync does. */
+async function learnServerTime(db: JournalDb, error: HttpErrorResponse, sentAt: number): Promise<void> {
+  const server = Date.parse(error.headers?.get('Date') ?? '');
+  if (Number.isFinite(server)) await db.meta.put({ key: 'clockOffset', value: String(clockOffsetMs(server, sentAt, Date.now())) });
 }
 
 /** The per-change problems of a refused push (400 invalid, 403 not allowed), or null for any other failure. */

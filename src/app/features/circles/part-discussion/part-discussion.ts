@@ -16,6 +16,7 @@ import { liveQueryFor } from '../../../core/data/live-query-for';
 import { fieldError, notBlank } from '../../../ui/field-errors';
 import { CircleStore } from '../data/circle-store';
 import { CircleSync } from '../data/circle-sync';
+import { PostTextPipe } from './post-text';
 import { authorName, loadCircleView, type CircleView } from '../data/circle-view';
 
 /** Our own reactions: an icon and the words a screen reader says. */
@@ -32,7 +33,7 @@ type Post = CirclePost & { readonly _author?: string };
 /** One part's discussion (or the general one): posts, replies and reactions, behind the spoiler shield. */
 @Component({
   selector: 'll-part-discussion',
-  imports: [NgTemplateOutlet, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  imports: [NgTemplateOutlet, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PostTextPipe],
   templateUrl: './part-discussion.html',
   styleUrl: './part-discussion.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
