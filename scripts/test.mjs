@@ -40,7 +40,7 @@ const suites = [
   { name: 'type check + compile: sync-server/, spec/, scripts/', id: 'node', command: [bin('tsc'), '-p', 'sync-server/tsconfig.json'] },
   { name: 'unit specs of src/ and shared/ (Karma, Chromium)', counts: true, command: [bin('ng'), 'test', '--watch=false'] },
   { name: 'server specs (Jasmine, PostgreSQL)', counts: true, needs: 'node', command: [bin('jasmine'), '--config=spec/support/jasmine-server.json'] },
-  { name: 'production build of the app', id: 'build', command: ['bash', '-c', `${bin('ng')} build --configuration production && node scripts/precompress.mjs`] },
+  { name: 'production build of the app', id: 'build', command: ['bash', '-c', `node scripts/subset-icons.mjs && ${bin('ng')} build --configuration production && node scripts/precompress.mjs`] },
   { name: 'browser e2e specs (Playwright, Chromium)', counts: true, needs: ['node', 'build'], command: [bin('jasmine'), '--config=spec/support/jasmine-e2e.json'] },
 ];
 
