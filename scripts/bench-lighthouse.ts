@@ -112,7 +112,8 @@ async function main(): Promise<void> {
         await page
           .getByText(/^Synced/)
           .first()
-          .waitFor({ timeout: 120_000 });
+          .waitFor({ timeout: 120_000 })
+          .catch(() => console.log('  (the first sync did not say "Synced" within 120 s; measuring anyway)'));
         await page.close();
       }
       const group = pages.filter((page) => page.signedIn === signedIn || page.name === 'blank app');
