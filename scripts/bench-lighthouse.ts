@@ -7,8 +7,8 @@
  * performance score is printed.
  *
  * Signed-in pages keep the reader's cookies and IndexedDB (Lighthouse's storage reset would sign
- * them out) but lose the HTTP cache, Cache Storage and the service worker before every run: a
- * cold load for a reader who is signed in.
+ * them out) and their registered service worker, but lose the HTTP cache and Cache Storage before
+ * every run: a cold load for a reader who is signed in.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer, type AddressInfo } from 'node:net';
@@ -63,12 +63,25 @@ async function audit(url: string, port: number, keepStorage: boolean): Promise<R
   };
 }
 
+/** One audit, tried again once: Lighthouse sometimes loses a trace on a busy machine. */
+async function attempt(url: string, port: number, keepStorage: boolean): Promise<Run | null> {
+  for (let tries = 1; ; tries++) {
+    try {
+      return await audit(url, port, keepStorage);
+    } catch (error) {
+      console.log(`  (${url}: ${(error as Error).message}${tries < 2 ? '; trying again' : '; skipped'})`);
+      if (tries >= 2) return null;
+    }
+  }
+}
+
 /** Cold caches for the origin, signed-in state kept. */
 async function forgetCaches(profile: BrowserContext, origin: string): Promise<void> {
   const page = await profile.newPage();
   const cdp = await profile.newCDPSession(page);
   await cdp.send('Network.clearBrowserCache');
-  await cdp.send('Storage.clearDataForOrigin', { origin, storageTypes: 'cache_storage,service_workers' });
+  // The worker stays registered (unregistering it under Lighthouse broke its trace: NO_NAVSTART).
+  await cdp.send('Storage.clearDataForOrigin', { origin, storageTypes: 'cache_storage' });
   await page.close();
 }
 
@@ -122,13 +135,19 @@ async function main(): Promise<void> {
         for (const page of order) {
           if (signedIn && page.name === 'blank app' && round > 0) continue; // enough blank rounds
           if (page.signedIn) await forgetCaches(profile, server.baseUrl);
-          runs.get(page.name)!.push(await audit(page.url, port, page.signedIn));
+          const run = await attempt(page.url, port, page.signedIn);
+          if (run) runs.get(page.name)!.push(run);
+          if (run) console.log(`${line(page.name, run)}   (round ${round + 1})`);
         }
       }
     }
     console.log('bench-lighthouse: Lighthouse 12 mobile (simulated slow 4G, 4× CPU), the run with the median performance score of each page');
     for (const page of pages) {
       const all = runs.get(page.name)!;
+      if (all.length === 0) {
+        console.log(`  ${page.name.padEnd(16)} no run finished`);
+        continue;
+      }
       const middle = median(all.map((run) => run.scores['performance']!));
       const run = all.find((candidate) => candidate.scores['performance'] === middle) ?? all[0]!;
       console.log(`${line(page.name, run)}   (performance in ${all.length} runs: ${all.map((r) => r.scores['performance']).join(', ')})`);
