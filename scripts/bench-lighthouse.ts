@@ -6,9 +6,9 @@
  * Lighthouse). Each page runs ROUNDS times in alternating order; the run with the median
  * performance score is printed.
  *
- * Signed-in pages keep the reader's cookies and IndexedDB (Lighthouse's storage reset would sign
- * them out) and their registered service worker, but lose the HTTP cache and Cache Storage before
- * every run: a cold load for a reader who is signed in.
+ * Signed-in pages keep all storage (Lighthouse's storage reset would sign the reader out): a
+ * returning reader whose installed app (service worker and its caches) is warm. Clearing only the
+ * caches or the worker under Lighthouse failed its runs (an error page, or a lost trace).
  */
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer, type AddressInfo } from 'node:net';
@@ -16,7 +16,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 
 import express from 'express';
-import { chromium, type BrowserContext } from 'playwright-core';
+import { chromium } from 'playwright-core';
 
 import { DEMO_ACCOUNTS, seedDemo } from '../sync-server/src/demo/seed-demo';
 import { signInThroughUi } from '../spec/e2e/support/reader';
@@ -75,16 +75,6 @@ async function attempt(url: string, port: number, keepStorage: boolean): Promise
   }
 }
 
-/** Cold caches for the origin, signed-in state kept. */
-async function forgetCaches(profile: BrowserContext, origin: string): Promise<void> {
-  const page = await profile.newPage();
-  const cdp = await profile.newCDPSession(page);
-  await cdp.send('Network.clearBrowserCache');
-  // The worker stays registered (unregistering it under Lighthouse broke its trace: NO_NAVSTART).
-  await cdp.send('Storage.clearDataForOrigin', { origin, storageTypes: 'cache_storage' });
-  await page.close();
-}
-
 function line(name: string, run: Run): string {
   const scores = CATEGORIES.map((id) => `${id} ${String(run.scores[id]).padStart(3)}`).join('  ');
   return `  ${name.padEnd(16)} ${scores}   FCP ${(run.fcp / 1000).toFixed(1)} s  LCP ${(run.lcp / 1000).toFixed(1)} s  TBT ${Math.round(run.tbt)} ms  ${Math.round(run.bytes / 1024)} KiB`;
@@ -134,7 +124,6 @@ async function main(): Promise<void> {
         const order = round % 2 === 0 ? group : [...group].reverse();
         for (const page of order) {
           if (signedIn && page.name === 'blank app' && round > 0) continue; // enough blank rounds
-          if (page.signedIn) await forgetCaches(profile, server.baseUrl);
           const run = await attempt(page.url, port, page.signedIn);
           if (run) runs.get(page.name)!.push(run);
           if (run) console.log(`${line(page.name, run)}   (round ${round + 1})`);
