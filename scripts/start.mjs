@@ -19,6 +19,7 @@ startDatabase();
 
 console.log('Building the server and the app (production)…');
 run(bin('tsc'), ['-p', 'sync-server/tsconfig.json']);
+run('node', ['scripts/subset-icons.mjs']);
 run(bin('ng'), ['build', '--configuration', 'production']);
 run('node', ['scripts/precompress.mjs']);
 

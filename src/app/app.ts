@@ -1,10 +1,13 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, DestroyRef, inject, Injector } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, DestroyRef, effect, inject, Injector, untracked } from '@angular/core';
 import { RouterOutlet } from '@angular/router';
 
 import { Auth } from './core/auth/auth';
 import { InstallPrompt } from './core/pwa/install-prompt';
 import { VersionReady } from './core/pwa/version-ready';
 import { SignedInShell } from './signed-in-shell';
+
+/** When the update prompts load if nothing calls for them earlier. */
+const PROMPTS_AFTER_MS = 10_000;
 
 /**
  * The app's root: the sign-in pages alone, or, for a signed-in reader, {@link SignedInShell}
@@ -22,11 +25,22 @@ export class App {
 
   constructor() {
     inject(InstallPrompt); // listens from the start: the browser offers installing once, maybe before sign-in
-    inject(VersionReady); // listens from the start: the worker may announce a new version before the prompts load
+    const versions = inject(VersionReady); // listens from the start: the worker may announce a new version before the prompts load
     const injector = inject(Injector);
     let destroyed = false;
-    inject(DestroyRef).onDestroy(() => (destroyed = true));
-    // Update prompts need the snackbar: loaded after the first render, signed in or not.
-    afterNextRender(() => void import('./core/pwa/app-updates').then(({ AppUpdates }) => destroyed || injector.get(AppUpdates)));
+    const destroyRef = inject(DestroyRef);
+    destroyRef.onDestroy(() => (destroyed = true));
+    // Update prompts need the snackbar, overlays and a dialog (~30 KB gzip), which the first screen
+    // does without: they load when the worker announces a version (or a broken one), or once the
+    // app has been open a while, for their periodic check. The worker itself registers only 10 s
+    // after a first visit (registerWhenStable:10000).
+    const loadPrompts = () => void import('./core/pwa/app-updates').then(({ AppUpdates }) => destroyed || injector.get(AppUpdates));
+    afterNextRender(() => {
+      const timer = setTimeout(loadPrompts, PROMPTS_AFTER_MS);
+      destroyRef.onDestroy(() => clearTimeout(timer));
+    });
+    effect(() => {
+      if (versions.seen() || versions.unrecoverable()) untracked(loadPrompts);
+    });
   }
 }

@@ -7,6 +7,7 @@ import { Subject } from 'rxjs';
 import { AppUpdates } from './app-updates';
 import { PAGE_RELOAD } from './page-reload';
 import { UnsavedWork } from './unsaved-work';
+import { VersionReady } from './version-ready';
 import { untilTicked } from './testing/leave-question';
 import { snackBarText } from './testing/pwa-fixtures';
 
@@ -144,6 +145,15 @@ describe('AppUpdates', () => {
       TestBed.tick();
       expect(reload).not.toHaveBeenCalled(); // a reload now would take the message away unread
 
+      await messageTimeEnds();
+      expect(reload).toHaveBeenCalledTimes(1);
+    });
+
+    it('says so too when the worker told of it before the prompts loaded (they load after the first screen)', async () => {
+      TestBed.inject(VersionReady); // the root listens from the start
+      worker.unrecoverable.next({ type: 'UNRECOVERABLE_STATE', reason: 'a file of this version is gone from the server' });
+      start();
+      expect(snackBarText()).toBe('Lamplight has to reload to keep working. Your journal is safe on this device.');
       await messageTimeEnds();
       expect(reload).toHaveBeenCalledTimes(1);
     });

@@ -33,15 +33,11 @@ export class AppUpdates {
         takeUntilDestroyed(destroyRef),
       )
       .subscribe(() => this.offerReload());
-    // Announced before this service loaded (after the first render): offer it now.
-    if (inject(VersionReady).seen()) this.offerReload();
-    this.updates.unrecoverable.pipe(takeUntilDestroyed(destroyRef)).subscribe(() => {
-      // Reload once the message has been read: reloading at once would take it away unseen.
-      this.snackBar
-        .open('Lamplight has to reload to keep working. Your journal is safe on this device.', undefined, { duration: 6000 })
-        .afterDismissed()
-        .subscribe(() => this.reloadWanted.set(true));
-    });
+    // Announced before this service loaded (it loads after the first screen): act on it now.
+    const earlier = inject(VersionReady);
+    if (earlier.seen()) this.offerReload();
+    if (earlier.unrecoverable()) this.reloadAfterSaying();
+    this.updates.unrecoverable.pipe(takeUntilDestroyed(destroyRef)).subscribe(() => this.reloadAfterSaying());
     // Reload as soon as it is safe, once a reload is wanted.
     effect(() => {
       if (this.reloadWanted() && !this.unsaved.present()) this.reload();
@@ -62,6 +58,14 @@ export class AppUpdates {
     } catch {
       // Offline, or the server is away: the next check will do.
     }
+  }
+
+  /** Reload once the message has been read: reloading at once would take it away unseen. */
+  private reloadAfterSaying(): void {
+    this.snackBar
+      .open('Lamplight has to reload to keep working. Your journal is safe on this device.', undefined, { duration: 6000 })
+      .afterDismissed()
+      .subscribe(() => this.reloadWanted.set(true));
   }
 
   private offerReload(): void {

@@ -1,0 +1,160 @@
+/**
+ * `npm run bench:lighthouse`: Lighthouse 12.2 (mobile: simulated slow 4G and 4× CPU, its default)
+ * on the sign-in page and, signed in as the demo reader, Today and Library, beside the blank app
+ * of bench:startup served by a plain static server. Goal: performance ≥ 90 on all three,
+ * accessibility 100. Debian's Chromium (through playwright-core, with a DevTools port for
+ * Lighthouse). Each page runs ROUNDS times in alternating order; the run with the median
+ * performance score is printed.
+ *
+ * Signed-in pages keep all storage (Lighthouse's storage reset would sign the reader out): a
+ * returning reader whose installed app (service worker and its caches) is warm. Clearing only the
+ * caches or the worker under Lighthouse failed its runs (an error page, or a lost trace).
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { createServer, type AddressInfo } from 'node:net';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+
+import express from 'express';
+import { chromium } from 'playwright-core';
+
+import { DEMO_ACCOUNTS, seedDemo } from '../sync-server/src/demo/seed-demo';
+import { signInThroughUi } from '../spec/e2e/support/reader';
+import { testDataSource } from '../spec/support/test-database';
+import { startTestServer } from '../spec/support/test-server';
+import { buildBlankApp } from './bench-support/blank-app';
+import { median } from './bench-support/seed-books';
+
+const ROUNDS = Number(process.env['LAMPLIGHT_BENCH_ROUNDS'] ?? 3);
+const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
+const CATEGORIES = ['performance', 'accessibility', 'best-practices', 'seo'] as const;
+
+interface Run {
+  scores: Record<string, number>;
+  lcp: number;
+  tbt: number;
+  fcp: number;
+  bytes: number;
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve) => {
+    const probe = createServer().listen(0, '127.0.0.1', () => {
+      const { port } = probe.address() as AddressInfo;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+async function audit(url: string, port: number, keepStorage: boolean): Promise<Run> {
+  // Lighthouse is ECMAScript-module only; this file compiles to CommonJS.
+  const { default: lighthouse } = await import('lighthouse');
+  const result = await lighthouse(url, { port, logLevel: 'error', onlyCategories: [...CATEGORIES], disableStorageReset: keepStorage });
+  if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
+  const { lhr } = result;
+  if (lhr.runtimeError) throw new Error(`Lighthouse on ${url}: ${lhr.runtimeError.message}`);
+  const numeric = (id: string) => lhr.audits[id]?.numericValue ?? NaN;
+  return {
+    scores: Object.fromEntries(CATEGORIES.map((id) => [id, Math.round((lhr.categories[id]?.score ?? NaN) * 100)])),
+    lcp: numeric('largest-contentful-paint'),
+    tbt: numeric('total-blocking-time'),
+    fcp: numeric('first-contentful-paint'),
+    bytes: numeric('total-byte-weight'),
+  };
+}
+
+/** One audit, tried again once: Lighthouse sometimes loses a trace on a busy machine. */
+async function attempt(url: string, port: number, keepStorage: boolean): Promise<Run | null> {
+  for (let tries = 1; ; tries++) {
+    try {
+      return await audit(url, port, keepStorage);
+    } catch (error) {
+      console.log(`  (${url}: ${(error as Error).message}${tries < 2 ? '; trying again' : '; skipped'})`);
+      if (tries >= 2) return null;
+    }
+  }
+}
+
+function line(name: string, run: Run): string {
+  const scores = CATEGORIES.map((id) => `${id} ${String(run.scores[id]).padStart(3)}`).join('  ');
+  return `  ${name.padEnd(16)} ${scores}   FCP ${(run.fcp / 1000).toFixed(1)} s  LCP ${(run.lcp / 1000).toFixed(1)} s  TBT ${Math.round(run.tbt)} ms  ${Math.round(run.bytes / 1024)} KiB`;
+}
+
+async function main(): Promise<void> {
+  const blankDir = buildBlankApp();
+  const blank = express()
+    .use(express.static(path.join(blankDir, 'dist/browser')))
+    .listen(0, '127.0.0.1');
+  await new Promise((resolve) => blank.once('listening', resolve));
+  const blankUrl = `http://127.0.0.1:${(blank.address() as AddressInfo).port}/`;
+  const dataSource = await testDataSource();
+  await seedDemo(dataSource, 4);
+  const server = await startTestServer({ withApp: true });
+  const port = await freePort();
+  const profileDir = mkdtempSync(path.join(tmpdir(), 'lamplight-lighthouse-'));
+  const profile = await chromium.launchPersistentContext(profileDir, {
+    executablePath: CHROMIUM,
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-component-update', `--remote-debugging-port=${port}`],
+  });
+  try {
+    const pages: { name: string; url: string; signedIn: boolean }[] = [
+      { name: 'blank app', url: blankUrl, signedIn: false },
+      { name: 'sign-in', url: `${server.baseUrl}/sign-in`, signedIn: false },
+      { name: 'Today', url: `${server.baseUrl}/today`, signedIn: true },
+      { name: 'Library', url: `${server.baseUrl}/library`, signedIn: true },
+    ];
+    const runs = new Map<string, Run[]>(pages.map((page) => [page.name, []]));
+    // Signed-out pages first, then the demo reader signs in once for the rest.
+    for (const signedIn of [false, true]) {
+      if (signedIn) {
+        const reader = DEMO_ACCOUNTS.find((account) => account.withLibrary)!;
+        const page = await profile.newPage();
+        await signInThroughUi(page, server.baseUrl, reader.email, reader.password);
+        // The first sync brings the demo library into IndexedDB; then it is a returning reader.
+        await page
+          .getByText(/^Synced/)
+          .first()
+          .waitFor({ timeout: 120_000 })
+          .catch(() => console.log('  (the first sync did not say "Synced" within 120 s; measuring anyway)'));
+        await page.close();
+      }
+      const group = pages.filter((page) => page.signedIn === signedIn || page.name === 'blank app');
+      for (let round = 0; round < ROUNDS; round++) {
+        const order = round % 2 === 0 ? group : [...group].reverse();
+        for (const page of order) {
+          if (signedIn && page.name === 'blank app' && round > 0) continue; // enough blank rounds
+          const run = await attempt(page.url, port, page.signedIn);
+          if (run) runs.get(page.name)!.push(run);
+          if (run) console.log(`${line(page.name, run)}   (round ${round + 1})`);
+        }
+      }
+    }
+    console.log('bench-lighthouse: Lighthouse 12 mobile (simulated slow 4G, 4× CPU), the run with the median performance score of each page');
+    for (const page of pages) {
+      const all = runs.get(page.name)!;
+      if (all.length === 0) {
+        console.log(`  ${page.name.padEnd(16)} no run finished`);
+        continue;
+      }
+      const middle = median(all.map((run) => run.scores['performance']!));
+      const run = all.find((candidate) => candidate.scores['performance'] === middle) ?? all[0]!;
+      console.log(`${line(page.name, run)}   (performance in ${all.length} runs: ${all.map((r) => r.scores['performance']).join(', ')})`);
+    }
+  } finally {
+    await profile.close();
+    await server.close();
+    await dataSource.destroy();
+    blank.close();
+    rmSync(blankDir, { recursive: true, force: true });
+    rmSync(profileDir, { recursive: true, force: true });
+  }
+}
+
+main().then(
+  () => process.exit(0),
+  (err: unknown) => {
+    console.error(err);
+    process.exit(1);
+  },
+);
