@@ -1,6 +1,6 @@
-import { renderPostText } from './post-format';
+import { renderPostText } from '@shared/circles/post-format';
 
-/** Parses the rendered HTML with the browser's own parser (not ours) to check what it would run. */
+/** Parses the rendered HTML with the browser’s own parser (not ours) to check what it would run (the spec lives in src/: shared/ has no DOM). */
 function parsed(text: string): HTMLElement {
   const container = document.createElement('div');
   container.innerHTML = renderPostText(text);
