@@ -36,6 +36,7 @@ export class BookLoans {
   private readonly today = readerToday();
   private readonly data = loansData();
   private readonly sessions = liveQuerySignal(async (db) => ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted), [] as Session[]);
+  protected readonly libraries = computed(() => this.data().libraries);
   protected readonly libraryById = computed(() => new Map(this.data().libraries.map((l) => [l.id, l])));
 
   protected readonly items = computed(() => {
