@@ -133,6 +133,7 @@ describe('Every screen at phone and tablet width', () => {
 
     const tooWide: string[] = [];
     const findings: string[] = [];
+    const covered: string[] = [];
     const signedOut = await harness.browser.newContext({ viewport: VIEWPORTS[0] });
     const visitor = await signedOut.newPage();
     const measured: [Page, string[]][] = [
@@ -151,15 +152,35 @@ describe('Every screen at phone and tablet width', () => {
           const { scrollWidth, windowWidth } = await settledWidth(tab);
           if (scrollWidth > windowWidth) tooWide.push(`${route} at ${viewport.width}: ${scrollWidth} px wide`);
           for (const finding of await seriousViolations(tab)) findings.push(`${route} at ${viewport.width}: ${finding}`);
+          for (const control of await coveredByAddButton(tab)) covered.push(`${route} at ${viewport.width}: ${control}`);
         }
       }
     }
     expect(tooWide).toEqual([]);
     expect(findings).toEqual([]);
+    expect(covered).toEqual([]);
     await signedOut.close();
     await context.close();
   }, 900_000);
 });
+
+/**
+ * With the page scrolled to its end, the page's own controls that the round Add button lies over
+ * (none: the page end is padded for it).
+ */
+function coveredByAddButton(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    window.scrollTo(0, document.documentElement.scrollHeight);
+    const add = document.querySelector('button.add')?.getBoundingClientRect();
+    if (!add) return [];
+    return [...document.querySelectorAll<HTMLElement>('main button, main a[href], main input, main select, main textarea')]
+      .filter((control) => {
+        const box = control.getBoundingClientRect();
+        return box.width > 0 && box.height > 0 && box.left < add.right && box.right > add.left && box.top < add.bottom && box.bottom > add.top;
+      })
+      .map((control) => control.getAttribute('aria-label') ?? control.textContent?.trim().slice(0, 40) ?? control.tagName);
+  });
+}
 
 /** The page's width once it has stayed the same for a quarter of a second (at most about 3 s). */
 async function settledWidth(page: Page): Promise<{ scrollWidth: number; windowWidth: number }> {
