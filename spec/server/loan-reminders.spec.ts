@@ -141,6 +141,15 @@ describe('Loan reminders by e-mail (pg-boss job)', () => {
     expect(mail.text).toContain(`“${TITLE}” is due back on 5 March 2026.`);
   });
 
+  it('writes the dates in the reader’s date locale from their synced settings (CLDR: en-US puts the month first)', async () => {
+    const { email, client, wall } = await reader();
+    const settingsId = deterministicId('reader-settings', 'current');
+    expect((await client.push([fieldChange(settingsId, 'dateLocale', 'en-US', { wall: wall + 1000 }, 'readerSettings')])).status).toBe(200);
+    expect(await mailsAfterRunsAt(email, ['2026-03-03T17:00:00Z'])).toEqual([1]);
+    const [mail] = await mailsTo(email);
+    expect(mail!.text).toContain(`“${TITLE}” is due back on March 5, 2026.`);
+  });
+
   it('keeps to the local morning across London’s change to summer time (08:00 BST is 07:00 UTC)', async () => {
     // Due 31 March, 2 days before (the default): the mail is for 29 March, the day the clocks change.
     const london = await reader({ timeZone: 'Europe/London' }, '2026-03-31');
