@@ -45,4 +45,10 @@ describe('instantiateTemplate', () => {
     }
     expect(mismatches).toEqual([]);
   });
+
+  it("names the weekday and month in the reader's locale when one is given (Unicode CLDR: dimanche, mars)", () => {
+    const values = placeholderValues({ today: '2026-03-08', locale: 'fr-FR' });
+    expect(values.weekday).toBe('dimanche');
+    expect(values.month).toBe('mars');
+  });
 });

@@ -1,4 +1,4 @@
-import { MONTH_NAMES } from '../calendar/month-names';
+import { monthNames, weekdayNames } from '../calendar/month-names';
 
 /** What a new page is about, for filling a template's placeholders. */
 export interface TemplateContext {
@@ -10,6 +10,8 @@ export interface TemplateContext {
   readonly bookAuthors?: readonly string[] | null;
   /** The notebook's own title. */
   readonly notebookTitle?: string | null;
+  /** The reader's date locale for `{{weekday}}` and `{{month}}` (BCP 47; English when absent). */
+  readonly locale?: string;
 }
 
 /** The text a template gives a page: what the page starts with. */
@@ -23,9 +25,6 @@ export interface InstantiatedPage {
   readonly title: string;
   readonly body: string;
 }
-
-/** English weekday names, Sunday first, as `Date.prototype.getUTCDay` counts. */
-const WEEKDAYS = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'] as const;
 
 /** Every placeholder a template may hold, with what it becomes (shown to the reader as help). */
 export const TEMPLATE_PLACEHOLDERS = [
@@ -59,8 +58,9 @@ export function placeholderValues(context: TemplateContext): Record<PlaceholderN
   }
   return {
     date: context.today,
-    weekday: WEEKDAYS[instant.getUTCDay()]!,
-    month: MONTH_NAMES[month - 1]!,
+    // Monday first, so Sunday (getUTCDay 0) is the last.
+    weekday: weekdayNames(context.locale ?? 'en')[(instant.getUTCDay() + 6) % 7]!,
+    month: monthNames(context.locale ?? 'en')[month - 1]!,
     year: match[1]!,
     book: context.bookTitle ?? '',
     author: (context.bookAuthors ?? []).join(', '),

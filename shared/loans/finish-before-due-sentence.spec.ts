@@ -20,6 +20,11 @@ describe('finishBeforeDueSentence', () => {
     expect(sentence({ dueOn: '2026-03-14' })).toBe('At your pace you finish around 14 March — on the day it is due.');
   });
 
+  it("writes the finish day in the reader's locale, as Intl.DateTimeFormat orders day and month (CLDR)", () => {
+    expect(sentence({ locale: 'en-US' })).toBe('At your pace you finish around March 14 — 2 days before it is due.');
+    expect(sentence({ locale: 'de-DE' })).toBe('At your pace you finish around 14. März — 2 days before it is due.');
+  });
+
   it('says how many pages short and what a day would take', () => {
     // 1–10 March is 10 days × 45 minutes × 0.5 pages a minute = 225 pages: 75 short; 300 / 10 = 30 a day.
     expect(sentence({ dueOn: '2026-03-10' })).toBe('About 75 pages short by the due date: 30 pages a day would make it.');

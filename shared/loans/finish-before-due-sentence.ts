@@ -1,4 +1,4 @@
-import { MONTH_NAMES } from '../calendar/month-names';
+import { dayMonthText } from '../calendar/month-names';
 import { dayIndex } from '../reading-log/day-index';
 import type { Pace } from '../reading/pace';
 import { willFinishBeforeDue } from '../reading/will-finish-before-due';
@@ -12,6 +12,8 @@ export interface FinishBeforeDueInput {
   readonly today: string;
   readonly timeZone: string;
   readonly dueOn: string;
+  /** The reader's date locale for the finish day ('14 March', 'March 14'); en-GB when absent. */
+  readonly locale?: string;
 }
 
 const UNIT = { print: ['page', 'pages'], ebook: ['percent', 'percent'], audiobook: ['minute', 'minutes'] } as const;
@@ -20,11 +22,6 @@ function amount(value: number, format: Pace['format']): string {
   const rounded = Math.max(1, Math.ceil(value - 1e-9));
   const [one, many] = UNIT[format];
   return `${rounded} ${rounded === 1 ? one : many}`;
-}
-
-/** '14 March' from '2026-03-14'. */
-function dayText(day: string): string {
-  return `${Number(day.slice(8, 10))} ${MONTH_NAMES[Number(day.slice(5, 7)) - 1]}`;
 }
 
 /**
@@ -39,7 +36,7 @@ export function finishBeforeDueSentence(input: FinishBeforeDueInput): string | n
   if (forecast.likely && forecast.finishDate && forecast.marginDays !== null) {
     const margin = forecast.marginDays;
     const when = margin === 0 ? 'on the day it is due' : `${margin} ${margin === 1 ? 'day' : 'days'} before it is due`;
-    return `At your pace you finish around ${dayText(forecast.finishDate)} — ${when}.`;
+    return `At your pace you finish around ${dayMonthText(forecast.finishDate, input.locale ?? 'en-GB')} — ${when}.`;
   }
   if (forecast.minutesPerDayNeeded === null) return null;
   const daysAvailable = dayIndex(input.dueOn) - dayIndex(input.today) + 1;

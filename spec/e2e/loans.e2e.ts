@@ -1,4 +1,5 @@
 import ICAL from 'ical.js';
+import { readFile } from 'node:fs/promises';
 
 import { seriousViolations } from './support/axe';
 import { useServerAndBrowser } from './support/harness';
@@ -9,10 +10,10 @@ import { waitForOfflineReady } from './support/service-worker';
 describe('Loans, offline first', () => {
   const harness = useServerAndBrowser();
 
-  it('borrows a book offline with a due date, sees it on Today and in Loans, syncs, and the calendar feed has it', async () => {
+  it('borrows a book offline with a due date, sees it on Today and in Loans, downloads its .ics offline, syncs, and the calendar feed has it', async () => {
     const { baseUrl } = harness.server;
     const reader = await registerThroughApi(baseUrl, 'Tamsin Achterberg');
-    const context = await harness.browser.newContext({ timezoneId: 'Europe/London' });
+    const context = await harness.browser.newContext({ timezoneId: 'Europe/London', acceptDownloads: true });
     const page = await context.newPage();
     await signInThroughUi(page, baseUrl, reader.user.email, reader.password);
     await waitForOfflineReady(page, baseUrl);
@@ -36,6 +37,12 @@ describe('Loans, offline first', () => {
     await page.goto(`${baseUrl}/loans`);
     await page.getByRole('heading', { name: 'Loans', exact: true }).waitFor();
     await page.locator('ul.loans li').filter({ hasText: 'The Ferryman’s Ledger' }).getByText('Due tomorrow').waitFor();
+    // The one-off .ics is made on the device, so it downloads while offline.
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Add to calendar: The Ferryman’s Ledger (.ics file)' }).click(),
+    ]);
+    expect(await readFile((await download.path())!, 'utf8')).toContain(`DTSTART;VALUE=DATE:${tomorrow.replace(/-/g, '')}\r\n`);
     expect(await seriousViolations(page)).toEqual([]);
     // Phone width: nothing wider than the screen.
     await page.setViewportSize({ width: 320, height: 720 });

@@ -12,8 +12,8 @@ const VIEWPORTS = [
   { width: 768, height: 1024 },
 ] as const;
 
-/** Every route a reader can open, with ids filled in from the seeded library. */
-function routes(ids: { book: string; series: string; notebook: string | null }): string[] {
+/** Every route a reader (here also an admin) can open, with ids filled in from the seeded library. */
+function routes(ids: { book: string; series: string; notebook: string | null; more: readonly string[] }): string[] {
   const year = new Date().getFullYear();
   const month = String(new Date().getMonth() + 1).padStart(2, '0');
   return [
@@ -47,7 +47,39 @@ function routes(ids: { book: string; series: string; notebook: string | null }):
     '/loans',
     '/loans/wishlist',
     '/circles',
+    '/circles/join',
+    '/admin',
+    '/admin/mail',
+    // A reading, a session, a challenge and a notebook page of the seeded library.
+    ...ids.more,
     '/no-such-page',
+  ];
+}
+
+/** The pages one opens signed out. */
+const SIGNED_OUT = ['/sign-in', '/register', '/forgot-password', '/reset-password', '/verify-email'];
+
+/** Routes to one row of each kind the seed wrote (a reading, a session, a challenge, a notebook page), from the database. */
+async function rowRoutes(userId: string): Promise<string[]> {
+  const dataSource = await testDataSource();
+  const first = async (table: string, columns: string) =>
+    (
+      (await dataSource.query(`SELECT ${columns} FROM ${table} WHERE user_id = $1 AND deleted IS NOT TRUE ORDER BY id LIMIT 1`, [userId])) as Record<
+        string,
+        string
+      >[]
+    )[0];
+  const [reading, session, challenge, notebookPage] = await Promise.all([
+    first('readings', 'id, book_id'),
+    first('sessions', 'id, book_id'),
+    first('challenges', 'id'),
+    first('notebook_pages', 'id, notebook_id'),
+  ]);
+  return [
+    `/library/${reading!['book_id']}/readings/${reading!['id']}`,
+    `/library/${session!['book_id']}/sessions/${session!['id']}`,
+    `/goals/challenges/${challenge!['id']}`,
+    `/journal/notebooks/${notebookPage!['notebook_id']}/pages/${notebookPage!['id']}`,
   ];
 }
 
@@ -80,6 +112,9 @@ describe('Every screen at phone and tablet width', () => {
     const reader = await registerThroughApi(baseUrl, 'Oona Teller');
     const dataSource = await testDataSource();
     await seedDemoLibrary(dataSource, reader.user.id);
+    // An admin too, so Admin › Accounts and Caught mail are measured with the rest.
+    await dataSource.query(`UPDATE users SET role = 'admin' WHERE id = $1`, [reader.user.id]);
+    const more = await rowRoutes(reader.user.id);
     const context = await harness.browser.newContext({ viewport: VIEWPORTS[0] });
     const page = await context.newPage();
     await signInThroughUi(page, baseUrl, reader.user.email, reader.password);
@@ -98,24 +133,54 @@ describe('Every screen at phone and tablet width', () => {
 
     const tooWide: string[] = [];
     const findings: string[] = [];
+    const covered: string[] = [];
+    const signedOut = await harness.browser.newContext({ viewport: VIEWPORTS[0] });
+    const visitor = await signedOut.newPage();
+    const measured: [Page, string[]][] = [
+      [page, [...routes({ book: book!, series: series!, notebook, more }), `/library/${longTitle}`]],
+      [visitor, SIGNED_OUT],
+    ];
     for (const viewport of VIEWPORTS) {
-      await page.setViewportSize(viewport);
-      for (const route of [...routes({ book: book!, series: series!, notebook }), `/library/${longTitle}`]) {
-        await page.goto(`${baseUrl}${route}`);
-        await page.locator('main h1, main h2').first().waitFor({ timeout: 10_000 });
-        // Lazy parts (charts, covers, live queries) settle before measuring. Not 'networkidle': the
-        // live-update stream keeps one request open for as long as the page is.
-        await page.waitForLoadState('load');
-        const { scrollWidth, windowWidth } = await settledWidth(page);
-        if (scrollWidth > windowWidth) tooWide.push(`${route} at ${viewport.width}: ${scrollWidth} px wide`);
-        for (const finding of await seriousViolations(page)) findings.push(`${route} at ${viewport.width}: ${finding}`);
+      for (const [tab, list] of measured) {
+        await tab.setViewportSize(viewport);
+        for (const route of list) {
+          await tab.goto(`${baseUrl}${route}`);
+          await tab.locator('main h1, main h2').first().waitFor({ timeout: 10_000 });
+          // Lazy parts (charts, covers, live queries) settle before measuring. Not 'networkidle': the
+          // live-update stream keeps one request open for as long as the page is.
+          await tab.waitForLoadState('load');
+          const { scrollWidth, windowWidth } = await settledWidth(tab);
+          if (scrollWidth > windowWidth) tooWide.push(`${route} at ${viewport.width}: ${scrollWidth} px wide`);
+          for (const finding of await seriousViolations(tab)) findings.push(`${route} at ${viewport.width}: ${finding}`);
+          for (const control of await coveredByAddButton(tab)) covered.push(`${route} at ${viewport.width}: ${control}`);
+        }
       }
     }
     expect(tooWide).toEqual([]);
     expect(findings).toEqual([]);
+    expect(covered).toEqual([]);
+    await signedOut.close();
     await context.close();
   }, 900_000);
 });
+
+/**
+ * With the page scrolled to its end, the page's own controls that the round Add button lies over
+ * (none: the page end is padded for it).
+ */
+function coveredByAddButton(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    window.scrollTo(0, document.documentElement.scrollHeight);
+    const add = document.querySelector('button.add')?.getBoundingClientRect();
+    if (!add) return [];
+    return [...document.querySelectorAll<HTMLElement>('main button, main a[href], main input, main select, main textarea')]
+      .filter((control) => {
+        const box = control.getBoundingClientRect();
+        return box.width > 0 && box.height > 0 && box.left < add.right && box.right > add.left && box.top < add.bottom && box.bottom > add.top;
+      })
+      .map((control) => control.getAttribute('aria-label') ?? control.textContent?.trim().slice(0, 40) ?? control.tagName);
+  });
+}
 
 /** The page's width once it has stayed the same for a quarter of a second (at most about 3 s). */
 async function settledWidth(page: Page): Promise<{ scrollWidth: number; windowWidth: number }> {

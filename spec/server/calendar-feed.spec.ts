@@ -99,6 +99,28 @@ describe('The private calendar feed', () => {
     expect(Number(after.getFirstPropertyValue('sequence'))).toBeGreaterThan(Number(before.getFirstPropertyValue('sequence')));
   });
 
+  it('has a wishlist book’s release day as an all-day event, its UID kept and SEQUENCE bumped when the day moves', async () => {
+    const { path, client, bookId, wall } = await readerWithLoan();
+    // A date well ahead of today, so the feed (which keeps releases from 30 days back) always has it.
+    const ahead = `${new Date().getUTCFullYear() + 1}-06-12`;
+    const moved = `${new Date().getUTCFullYear() + 1}-06-19`;
+    expect(
+      (await client.push([fieldChange(bookId, 'releaseDate', ahead, { wall: wall + 1000 }), fieldChange(bookId, 'copy', 'wishlist', { wall: wall + 1000 })])).status,
+    ).toBe(200);
+    const release = async () => events((await fetchFeed(path).expect(200)).body).find((e) => String(e.getFirstPropertyValue('uid')).startsWith('release-'));
+    const before = (await release())!;
+    expect(before.getFirstPropertyValue('summary')).toBe(`Out today: ${TITLE}`);
+    // RFC 5545 §3.3.4 / §3.6.1: a DATE value, and DTEND the next day.
+    expect((before.getFirstPropertyValue('dtstart') as ICAL.Time).isDate).toBeTrue();
+    expect((before.getFirstPropertyValue('dtstart') as ICAL.Time).toString()).toBe(ahead);
+    expect((before.getFirstPropertyValue('dtend') as ICAL.Time).toString()).toBe(`${ahead.slice(0, 8)}13`);
+    expect((await client.push([fieldChange(bookId, 'releaseDate', moved, { wall: wall + 5000 })])).status).toBe(200);
+    const after = (await release())!;
+    expect(after.getFirstPropertyValue('uid')).toBe(before.getFirstPropertyValue('uid'));
+    expect((after.getFirstPropertyValue('dtstart') as ICAL.Time).toString()).toBe(moved);
+    expect(Number(after.getFirstPropertyValue('sequence'))).toBeGreaterThan(Number(before.getFirstPropertyValue('sequence')));
+  });
+
   it('leaves returned loans out', async () => {
     const { path, client, loanId, wall } = await readerWithLoan();
     expect((await client.push([fieldChange(loanId, 'returnedOn', '2026-03-02', { wall: wall + 1000 }, 'loans')])).status).toBe(200);
@@ -107,12 +129,14 @@ describe('The private calendar feed', () => {
 
   it('answers 404 for a revoked or replaced URL, and a wrong secret after the same floor of time', async () => {
     const { path, signedIn } = await readerWithLoan();
-    await request(server.app).post('/api/calendar-feed').set(bearer(signedIn.accessToken)).expect(201);
+    const replaced = await request(server.app).post('/api/calendar-feed').set(bearer(signedIn.accessToken)).expect(201);
     await fetchFeed(path).expect(404); // replaced by the new one
+    await fetchFeed(replaced.body.path as string).expect(200);
     const status = await request(server.app).get('/api/calendar-feed').set(bearer(signedIn.accessToken)).expect(200);
     expect(status.body.active).toBeTrue();
     await request(server.app).delete('/api/calendar-feed').set(bearer(signedIn.accessToken)).expect(204);
     expect((await request(server.app).get('/api/calendar-feed').set(bearer(signedIn.accessToken)).expect(200)).body.active).toBeFalse();
+    await fetchFeed(replaced.body.path as string).expect(404); // revoked
 
     const { path: live } = await readerWithLoan();
     const timed = async (p: string, code: number) => {

@@ -8,11 +8,14 @@ import { isValidIsbn13 } from '../../shared/isbn/is-valid-isbn13';
 import type { PulledChange } from '../../shared/api/sync';
 import { parseHlc } from '../../shared/sync/hlc';
 import { sessionProblems } from '../../shared/reading/session-problems';
-import type { Session } from '../../shared/sync/schema/collections';
+import { loanState } from '../../shared/loans/loan-state';
+import { byUrgency } from '../../shared/loans/urgency';
+import type { Loan, Session } from '../../shared/sync/schema/collections';
 import { BOOK_COPIES, BOOK_FORMATS, BOOK_STATUSES, COLLECTIONS, type CollectionName } from '../../shared/sync/schema/collections';
 import { validateChange } from '../../shared/sync/validate-change';
 import { validatePatch } from '../../shared/sync/validate-patch';
 import { DEMO_BOOKS } from '../../sync-server/src/demo/demo-books';
+import { DEMO_FRIEND, DEMO_LIBRARY, DEMO_LOAN_TITLES } from '../../sync-server/src/demo/demo-loans';
 import { DEMO_SEED_NODE, seedDemoLibrary } from '../../sync-server/src/demo/seed-demo-library';
 import { User } from '../../sync-server/src/data-access/entities/user.entity';
 import { DEMO_ACCOUNTS, seedDemo } from '../../sync-server/src/demo/seed-demo';
@@ -232,6 +235,25 @@ describe('demo library (seedDemoLibrary)', () => {
       expect(pulled.rows.yearPlans.map((plan) => plan['booksTarget'])).toEqual([24]);
       expect(pulled.rows.challenges.map((c) => c['kind']).sort()).toEqual(['alphabet', 'count']);
       expect(pulled.rows.books.some((book) => (book['labelIds'] as string[] | undefined)?.length)).toBeTrue();
+    });
+
+    it('When seeded, then the reader has an invented library, a loan due soon, a hold ready and a book lent to a friend', () => {
+      const today = new Date().toISOString().slice(0, 10);
+      const titleOf = (row: Row) => booksById().get(row['bookId'] as string)?.['title'];
+      expect(pulled.rows.libraries.map((library) => [library['name'], library['cardLabel'], library['cardNumber']])).toEqual([
+        [DEMO_LIBRARY.name, DEMO_LIBRARY.cardLabel, null],
+      ]);
+      const loans = pulled.rows.loans as unknown as (Loan & Row)[];
+      const states = byUrgency(loans, today).map((loan) => [loanState(loan, today), titleOf(loan)]);
+      // byUrgency puts a ready hold before a loan due soon, and lent-out books after both.
+      expect(states).toEqual([
+        ['holdReady', DEMO_LOAN_TITLES.holdReady],
+        ['dueSoon', DEMO_LOAN_TITLES.dueSoon],
+        ['lentOut', DEMO_LOAN_TITLES.lentOut],
+      ]);
+      expect(loans.find((loan) => loan.kind === 'lentOut')?.friendName).toBe(DEMO_FRIEND);
+      expect(loans.find((loan) => loan.kind === 'library')?.libraryId).toBe(pulled.rows.libraries[0]!.id);
+      expect(loans.every((loan) => loan.bookId && booksById().has(loan.bookId))).toBeTrue();
     });
 
     it('When seeded again, then nothing is added and the covers are not uploaded again', async () => {

@@ -8,6 +8,7 @@ import { deterministicId } from '../../shared/sync/deterministic-id';
 import { createDataSource } from '../../sync-server/src/data-access/data-source';
 import type { JobServices } from '../../sync-server/src/jobs/job';
 import { startJobRunner } from '../../sync-server/src/jobs/job-runner';
+import { jobServices } from '../../sync-server/src/jobs/job-services';
 import { loanReminders } from '../../sync-server/src/jobs/loan-reminders.job';
 import { createSmtpMailer } from '../../sync-server/src/mail/mailer';
 import { registerReader } from '../support/accounts';
@@ -34,8 +35,8 @@ describe('Loan reminders by e-mail (pg-boss job)', () => {
     return { mailer: createSmtpMailer(config.smtpUrl, config.mailFrom), publicUrl: config.publicUrl, serverSecret: SECRET, now: () => new Date(now) };
   }
 
-  /** A verified reader in Los Angeles with a library loan due 5 March 2026 and reminders on. */
-  async function reader(settings: Record<string, unknown> = {}) {
+  /** A verified reader in Los Angeles with a library loan due 5 March 2026 (or `dueOn`) and reminders on. */
+  async function reader(settings: Record<string, unknown> = {}, dueOn = '2026-03-05') {
     const signedIn = await registerReader(server.app);
     await dataSource.query('UPDATE users SET email_verified_at = now() WHERE id = $1', [signedIn.user.id]);
     const client = new SyncClient(server.baseUrl, signedIn.accessToken);
@@ -50,7 +51,7 @@ describe('Loan reminders by e-mail (pg-boss job)', () => {
       fieldChange(loanId, 'kind', 'library', { wall }, 'loans'),
       fieldChange(loanId, 'bookId', bookId, { wall }, 'loans'),
       fieldChange(loanId, 'libraryId', libraryId, { wall }, 'loans'),
-      fieldChange(loanId, 'dueOn', '2026-03-05', { wall }, 'loans'),
+      fieldChange(loanId, 'dueOn', dueOn, { wall }, 'loans'),
       ...Object.entries(fields).map(([field, value]) => fieldChange(settingsId, field, value, { wall }, 'loanReminders')),
     ]);
     expect(push.status).toBe(200);
@@ -104,6 +105,61 @@ describe('Loan reminders by e-mail (pg-boss job)', () => {
     await loanReminders.run({ dataSource, services: morning });
     await (await testInbox()).inbox.waitFor(isReminder(email));
     for (const s of [evening, early, morning]) s.mailer.close();
+  });
+
+  /**
+   * The server's own job services with its clock moved by LAMPLIGHT_JOBS_NOW (as `npm start` or a
+   * demo would set it), one per instant: runs the job at each and answers how many reminder mails
+   * the local inbox holds for the reader after each run.
+   */
+  async function mailsAfterRunsAt(email: string, instants: readonly string[]): Promise<number[]> {
+    const counts: number[] = [];
+    for (const instant of instants) {
+      const config = await testConfig({ LAMPLIGHT_JOBS_NOW: instant });
+      const moved = jobServices(config, createSmtpMailer(config.smtpUrl, config.mailFrom));
+      await loanReminders.run({ dataSource, services: moved });
+      moved.mailer.close();
+      counts.push((await mailsTo(email)).length);
+    }
+    return counts;
+  }
+
+  // Zone offsets and change instants from the IANA tz database: Kiritimati is UTC+14 all year;
+  // London goes from GMT to BST at 2026-03-29T01:00:00Z (RFC 9557 / ISO 8601 instants below).
+  it('with LAMPLIGHT_JOBS_NOW moved to the morning N days before it is due, the mail arrives in the local inbox; not the day before', async () => {
+    // Kiritimati, 3 days before (the reader's choice): due 5 March, so the mail is for 2 March local.
+    const far = await reader({ timeZone: 'Pacific/Kiritimati', daysBefore: 3 });
+    expect(
+      await mailsAfterRunsAt(far.email, [
+        '2026-02-28T19:00:00Z', // 09:00 on 1 March there: 4 days before
+        '2026-03-01T17:30:00Z', // 07:30 on 2 March: the right day, before 08:00
+        '2026-03-01T18:00:00Z', // 08:00 on 2 March (still 1 March in UTC)
+        '2026-03-01T20:00:00Z', // later that day: no second mail
+      ]),
+    ).toEqual([0, 0, 1, 1]);
+    const mail = (await mailsTo(far.email))[0]!;
+    expect(mail.text).toContain(`“${TITLE}” is due back on 5 March 2026.`);
+  });
+
+  it('writes the dates in the reader’s date locale from their synced settings (CLDR: en-US puts the month first)', async () => {
+    const { email, client, wall } = await reader();
+    const settingsId = deterministicId('reader-settings', 'current');
+    expect((await client.push([fieldChange(settingsId, 'dateLocale', 'en-US', { wall: wall + 1000 }, 'readerSettings')])).status).toBe(200);
+    expect(await mailsAfterRunsAt(email, ['2026-03-03T17:00:00Z'])).toEqual([1]);
+    const [mail] = await mailsTo(email);
+    expect(mail!.text).toContain(`“${TITLE}” is due back on March 5, 2026.`);
+  });
+
+  it('keeps to the local morning across London’s change to summer time (08:00 BST is 07:00 UTC)', async () => {
+    // Due 31 March, 2 days before (the default): the mail is for 29 March, the day the clocks change.
+    const london = await reader({ timeZone: 'Europe/London' }, '2026-03-31');
+    expect(
+      await mailsAfterRunsAt(london.email, [
+        '2026-03-28T09:00:00Z', // 09:00 GMT on 28 March: 3 days before
+        '2026-03-29T06:30:00Z', // 07:30 BST on 29 March: the right day, too early
+        '2026-03-29T07:00:00Z', // 08:00 BST on 29 March (a UTC clock would still say 07:00)
+      ]),
+    ).toEqual([0, 0, 1]);
   });
 
   it('stops after the unsubscribe link (no sign-in), and starts again when turned on again later', async () => {

@@ -167,6 +167,20 @@ describe('App shell and this device’s storage', () => {
     expect(localStorage.getItem(ASKED)).toBe('true');
   });
 
+  it('offers Install Lamplight in the first-run message where the browser can install it', async () => {
+    spyOnProperty(navigator, 'userAgent').and.returnValue(IPHONE_SAFARI);
+    browserAnswers(false);
+    rememberSession();
+    await renderShell(TestBed.createComponent(App));
+
+    await untilTicked(() => snackBarText() !== null, 'the storage message');
+    const action = document.querySelector<HTMLButtonElement>('.mat-mdc-snack-bar-action, [matSnackBarAction]');
+    expect(action?.textContent?.trim()).toBe('Install Lamplight');
+    action!.click();
+    await untilTicked(() => document.querySelector('ll-install-help-dialog') !== null, 'the how-to');
+    expect(document.querySelector('ll-install-help-dialog h2')?.textContent).toBe('Add Lamplight to your Home Screen');
+  });
+
   it('asks nothing before anyone signs in', async () => {
     const persist = browserAnswers(true);
     forgetSession();

@@ -3,7 +3,7 @@ import { deterministicId } from '../../../shared/sync/deterministic-id';
 import type { DemoBook } from './demo-books';
 
 /** Writes one synced row (the seed's `write`): all fields under one clock. */
-type Write = (collection: { readonly name: string }, fields: Record<string, unknown>, rowId?: string) => string;
+export type Write = (collection: { readonly name: string }, fields: Record<string, unknown>, rowId?: string) => string;
 
 const HOUR = 3600_000;
 

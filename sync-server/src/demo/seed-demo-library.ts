@@ -15,6 +15,7 @@ import { UploadStore } from '../data-access/upload-store';
 import { demoCover } from './demo-cover';
 import { DEMO_BOOKS, type DemoBook, type DemoReview } from './demo-books';
 import { seedDemoJournal } from './demo-journal';
+import { seedDemoLoans } from './demo-loans';
 
 /** The clocks' node id: every demo row was written by the seed, not by a device. */
 export const DEMO_SEED_NODE = 'demo-seed';
@@ -27,11 +28,13 @@ export interface DemoLibrarySummary {
   readonly covers: number;
   readonly sessions: number;
   readonly quotes: number;
+  readonly libraries: number;
+  readonly loans: number;
 }
 
 /**
- * Gives a reader the invented demo library: its books, their status history and readings, and
- * generated covers, written as synced rows so every device pulls them on sign-in. Rows go
+ * Gives a reader the invented demo library: its books, their status history and readings,
+ * generated covers, and a few loans (`demo-loans.ts`), written as synced rows so every device pulls them on sign-in. Rows go
  * through `SyncStore.push` (one transaction) with clocks from an `HlcClock` of node
  * `demo-seed`; covers go through the upload domain, so they are content-addressed and owned by
  * the reader. Does nothing, and answers null, when the reader already has any book (deleted
@@ -44,7 +47,7 @@ export async function seedDemoLibrary(dataSource: DataSource, userId: string, no
   const uploads = new Uploads(new UploadStore(dataSource));
   const clock = new HlcClock(DEMO_SEED_NODE, now);
   const changes: FieldChange[] = [];
-  const counts = { books: 0, statusChanges: 0, readings: 0, covers: 0, sessions: 0, quotes: 0 };
+  const counts = { books: 0, statusChanges: 0, readings: 0, covers: 0, sessions: 0, quotes: 0, libraries: 0, loans: 0 };
   const seeded: { id: string; book: DemoBook }[] = [];
   // One clock per row, as a device stamps one write: all of a row's fields share it.
   const write = (collection: { readonly name: string }, fields: Record<string, unknown>, rowId: string = randomUUID()) => {
@@ -76,7 +79,7 @@ export async function seedDemoLibrary(dataSource: DataSource, userId: string, no
     }
   }
 
-  Object.assign(counts, seedDemoJournal(write, seeded, now()));
+  Object.assign(counts, seedDemoJournal(write, seeded, now()), seedDemoLoans(write, seeded, now()));
 
   // The seed is held to the rules a device's push is: a mistake here must fail loudly, not sync.
   const problems = changes.map((change, index) => validateChange(change, index, now())).filter((problem) => problem !== null);

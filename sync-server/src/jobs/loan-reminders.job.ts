@@ -18,6 +18,8 @@ interface Reader {
   lent_overdue: boolean | null;
   digest: boolean | null;
   time_zone: string;
+  /** The reader's chosen date locale (readerSettings), for the dates in the mail. */
+  date_locale: string | null;
 }
 
 /** The reader's local day and hour, or null for a zone this server does not know. */
@@ -75,7 +77,7 @@ async function remindReader(manager: EntityManager, reader: Reader, services: Jo
   const unsubscribe = `${services.publicUrl}/api/reminders/unsubscribe?token=${unsubscribeToken(reader.user_id, services.serverSecret)}`;
   const mails = reader.digest ? [lines] : lines.map((line) => [line]);
   // Sent inside the transaction that claims the keys: a failed send rolls the claims back and the next run tries again.
-  for (const group of mails) await services.mailer.send(reminderMail(reader.email, group, unsubscribe, services.publicUrl));
+  for (const group of mails) await services.mailer.send(reminderMail(reader.email, group, unsubscribe, services.publicUrl, reader.date_locale ?? undefined));
   return mails.length;
 }
 
@@ -91,7 +93,8 @@ export const loanReminders: Job = {
   async run({ dataSource, services }) {
     if (!services) throw new Error('loan-reminders needs the job services (mailer, clock)');
     const readers: Reader[] = await dataSource.query(
-      `SELECT r.user_id, u.email, r.days_before, r.hold_ready, r.lent_overdue, r.digest, r.time_zone
+      `SELECT r.user_id, u.email, r.days_before, r.hold_ready, r.lent_overdue, r.digest, r.time_zone,
+              (SELECT rs.date_locale FROM reader_settings rs WHERE rs.user_id = r.user_id AND rs.deleted IS NOT TRUE LIMIT 1) AS date_locale
          FROM loan_reminders r JOIN users u ON u.id = r.user_id
         WHERE r.email IS TRUE AND r.deleted IS NOT TRUE AND r.time_zone IS NOT NULL AND u.email_verified_at IS NOT NULL
           AND NOT EXISTS (SELECT 1 FROM loan_reminder_stops s

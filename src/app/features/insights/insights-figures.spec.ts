@@ -43,4 +43,17 @@ describe('insights figures', () => {
     expect(chart.summary).toBe('47 pages an hour across 2026, from 40 in January to 60 in March.');
     expect(chart.series[0].values[1]).toBeNull();
   });
+
+  it('names months in the reader’s locale, in sentences and on the axis (Unicode CLDR names: mars, März)', () => {
+    const months = [month(1), month(0), month(2), ...Array.from({ length: 9 }, () => month(0))];
+    const french = monthlyChart(months, 'books', 2026, 'fr-FR');
+    expect(french.summary).toContain('the most in mars');
+    expect(french.labels[2]).toBe('mars');
+    expect(french.labels[0]).toBe('janv.');
+    const paced = Array.from({ length: 12 }, (_, i) => empty(`2026-${String(i + 1).padStart(2, '0')}`));
+    paced[2] = { month: '2026-03', pages: 45, minutes: 45, pagesPerHour: 60 };
+    const german = paceChart(paced, 2026, 'de-DE');
+    expect(german.summary).toBe('60 pages an hour across 2026, all in März.');
+    expect(german.labels[2]).toBe('Mär');
+  });
 });

@@ -1,4 +1,4 @@
-import { MONTH_NAMES, SHORT_MONTH_NAMES } from '@shared/calendar/month-names';
+import { monthNames } from '@shared/calendar/month-names';
 import type { Amounts } from '@shared/goals/amounts-in';
 import type { GoalUnit } from '@shared/goals/goal-unit';
 import type { FormatSplit } from '@shared/insights/format-split';
@@ -15,20 +15,20 @@ const whole = (value: number) => value.toLocaleString('en', { maximumFractionDig
 const oneDecimal = (value: number) => value.toLocaleString('en', { maximumFractionDigits: 1 });
 
 /**
- * Books, pages or minutes in each month of a year.
+ * Books, pages or minutes in each month of a year; month names in the reader's locale (`Intl`).
  *
  * @example
  * monthlyChart(amounts, 'books', 2026).summary // '14 books in 2026; the most in March: 3 books.'
  */
-export function monthlyChart(months: readonly Amounts[], unit: GoalUnit, year: number): ChartModel {
+export function monthlyChart(months: readonly Amounts[], unit: GoalUnit, year: number, locale = 'en-GB'): ChartModel {
   const values = months.map((month) => month[unit]);
   const total = values.reduce((sum, value) => sum + value, 0);
   const most = values.indexOf(Math.max(...values));
   const summary =
     total === 0
       ? `No ${unit} logged in ${year} yet.`
-      : `${goalAmount(total, unit)} in ${year}; the most in ${MONTH_NAMES[most]}: ${goalAmount(values[most], unit)}.`;
-  return { kind: 'bar', labels: SHORT_MONTH_NAMES, series: [{ label: UNIT_LABELS[unit], values }], summary };
+      : `${goalAmount(total, unit)} in ${year}; the most in ${monthNames(locale)[most]}: ${goalAmount(values[most], unit)}.`;
+  return { kind: 'bar', labels: monthNames(locale, 'short'), series: [{ label: UNIT_LABELS[unit], values }], summary };
 }
 
 /** Finished books by format, as a ring. */
@@ -75,8 +75,9 @@ export function termsChart(terms: TopTerms, what: 'genres' | 'tags', year: numbe
   };
 }
 
-/** Print pages per hour, month by month, from timed sessions. */
-export function paceChart(months: readonly MonthPace[], year: number): ChartModel {
+/** Print pages per hour, month by month, from timed sessions; month names in the reader's locale. */
+export function paceChart(months: readonly MonthPace[], year: number, locale = 'en-GB'): ChartModel {
+  const names = monthNames(locale);
   const pages = months.reduce((sum, month) => sum + month.pages, 0);
   const minutes = months.reduce((sum, month) => sum + month.minutes, 0);
   const paced = months.map((month, index) => ({ index, pace: month.pagesPerHour })).filter((month) => month.pace !== null) as { index: number; pace: number }[];
@@ -87,12 +88,12 @@ export function paceChart(months: readonly MonthPace[], year: number): ChartMode
     summary = `${whole((pages / minutes) * 60)} pages an hour across ${year}`;
     summary +=
       paced.length > 1
-        ? `, from ${whole(slowest.pace)} in ${MONTH_NAMES[slowest.index]} to ${whole(fastest.pace)} in ${MONTH_NAMES[fastest.index]}.`
-        : `, all in ${MONTH_NAMES[fastest.index]}.`;
+        ? `, from ${whole(slowest.pace)} in ${names[slowest.index]} to ${whole(fastest.pace)} in ${names[fastest.index]}.`
+        : `, all in ${names[fastest.index]}.`;
   }
   return {
     kind: 'line',
-    labels: SHORT_MONTH_NAMES,
+    labels: monthNames(locale, 'short'),
     series: [{ label: 'Pages per hour', values: months.map((month) => month.pagesPerHour) }],
     summary,
     format: whole,

@@ -9,6 +9,7 @@ import type { NotebookPage } from '@shared/sync/schema/collections';
 import type { JournalDb } from '../../core/data/journal-db';
 import { JournalStore, type RowWrite } from '../../core/data/journal-store';
 import { LocalJournal } from '../../core/data/local-journal';
+import { ReaderSettings } from '../../core/settings/reader-settings';
 import { Deletions } from '../../core/trash/deletions';
 import { clip } from './notebook-data';
 
@@ -27,6 +28,7 @@ export class Notebooks {
   private readonly store = inject(JournalStore);
   private readonly journal = inject(LocalJournal);
   private readonly deletions = inject(Deletions);
+  private readonly settings = inject(ReaderSettings);
 
   /** Starts a notebook, optionally about a book; returns its id. */
   createNotebook(title: string, bookId: string | null): Promise<string> {
@@ -52,6 +54,7 @@ export class Notebooks {
           bookTitle: book && !book.deleted ? book.title : null,
           bookAuthors: book && !book.deleted ? book.authors : null,
           notebookTitle: notebook?.title,
+          locale: this.settings.locale(),
         })
       : { title: '', body: '' };
     const id = crypto.randomUUID();

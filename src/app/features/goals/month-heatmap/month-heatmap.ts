@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 
+import { weekdayNames } from '@shared/calendar/month-names';
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
 import { goalAmount } from '../../../ui/goal-figures';
@@ -16,7 +17,7 @@ import { ReaderSettings } from '../../../core/settings/reader-settings';
   imports: [HeatmapLegend],
   template: `
     <div class="grid" role="img" [attr.aria-label]="description()">
-      @for (weekday of weekdays; track $index) {
+      @for (weekday of weekdays(); track $index) {
         <span class="weekday" aria-hidden="true">{{ weekday }}</span>
       }
       @for (blank of blanks(); track $index) {
@@ -38,7 +39,8 @@ export class MonthHeatmap {
   /** Minutes and pages per local day (more days than the month is fine). */
   readonly log = input.required<readonly DailyLogEntry[]>();
 
-  protected readonly weekdays = ['M', 'T', 'W', 'T', 'F', 'S', 'S'];
+  /** Narrow weekday names in the reader's locale, Monday first. */
+  protected readonly weekdays = computed(() => weekdayNames(this.dates.locale(), 'narrow'));
   protected readonly heatmap = computed(() => monthHeatmap(this.month(), this.log()));
   protected readonly blanks = computed(() => Array.from({ length: this.heatmap().leading }));
 

@@ -11,6 +11,7 @@ import { monthlyPace } from '@shared/insights/monthly-pace';
 import { ratingSpread } from '@shared/insights/rating-spread';
 import { topTerms } from '@shared/insights/top-terms';
 
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { UNIT_LABELS } from '../../../ui/goal-figures';
 import { InsightsChart } from '../insights-chart/insights-chart';
@@ -37,6 +38,7 @@ export class InsightsPage {
   readonly year = input<string>();
 
   private readonly timeZone = inject(TIME_ZONE);
+  private readonly dates = inject(ReaderSettings);
   private readonly data = insightsYear(this.year);
   protected readonly loaded = this.data.loaded;
   protected readonly shownYear = this.data.year;
@@ -47,7 +49,7 @@ export class InsightsPage {
 
   protected readonly monthly = computed(() => {
     const year = this.shownYear() ?? 0;
-    return monthlyChart(monthlyAmounts(year, this.data.record.finished(), this.log()), this.unit(), year);
+    return monthlyChart(monthlyAmounts(year, this.data.record.finished(), this.log()), this.unit(), year, this.dates.locale());
   });
   protected readonly formats = computed(() => formatsChart(formatSplit(this.data.books()), this.shownYear() ?? 0));
   protected readonly ratings = computed(() => ratingsChart(ratingSpread(this.data.books().map((book) => book.rating)), this.shownYear() ?? 0));
@@ -73,6 +75,6 @@ export class InsightsPage {
   );
   protected readonly pace = computed(() => {
     const year = this.shownYear() ?? 0;
-    return paceChart(monthlyPace(this.data.record.rows()?.sessions ?? [], year, this.timeZone), year);
+    return paceChart(monthlyPace(this.data.record.rows()?.sessions ?? [], year, this.timeZone), year, this.dates.locale());
   });
 }

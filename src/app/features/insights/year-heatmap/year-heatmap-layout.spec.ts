@@ -41,4 +41,9 @@ describe('yearHeatmapLayout', () => {
     expect(layout.months[0]).toEqual(jasmine.objectContaining({ name: 'January', days: 2, minutes: 90 }));
     expect(layout.months[2]).toEqual(jasmine.objectContaining({ name: 'March', days: 1, minutes: 45 }));
   });
+
+  it('names the month calendars in the reader’s locale (Unicode CLDR: janvier, März)', () => {
+    expect(yearHeatmapLayout([], 2026, 'fr-FR').months[0]!.name).toBe('janvier');
+    expect(yearHeatmapLayout([], 2026, 'de-DE').months[2]!.name).toBe('März');
+  });
 });

@@ -1,4 +1,4 @@
-import { MONTH_NAMES } from '@shared/calendar/month-names';
+import { monthNames } from '@shared/calendar/month-names';
 import { yearHeatmap, type HeatmapCell } from '@shared/reading-log/year-heatmap';
 import type { DailyLogEntry } from '@shared/reading-log/log-session';
 
@@ -26,14 +26,15 @@ export interface YearHeatmapLayout {
 }
 
 /**
- * The days of `year` as twelve month calendars, each day under its weekday.
+ * The days of `year` as twelve month calendars, each day under its weekday; month names in
+ * `locale` (the reader's, from Settings).
  *
  * @example
  * yearHeatmapLayout([], 2026).months[0] // January 2026 starts on a Thursday: { leading: 3, cells[0]: { column: 4, week: 1 } … }
  */
-export function yearHeatmapLayout(log: readonly DailyLogEntry[], year: number): YearHeatmapLayout {
+export function yearHeatmapLayout(log: readonly DailyLogEntry[], year: number, locale = 'en-GB'): YearHeatmapLayout {
   const cells = yearHeatmap(log, year);
-  const months = MONTH_NAMES.map((name, index): MonthCalendar => {
+  const months = monthNames(locale).map((name, index): MonthCalendar => {
     const inMonth = cells.filter((cell) => Number(cell.day.slice(5, 7)) === index + 1);
     const leading = mondayBased(inMonth[0]!.day);
     return {

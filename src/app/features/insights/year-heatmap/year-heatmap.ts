@@ -23,7 +23,7 @@ export class YearHeatmap {
   /** Minutes and pages per local day (other years are fine). */
   readonly log = input.required<readonly DailyLogEntry[]>();
 
-  protected readonly layout = computed(() => yearHeatmapLayout(this.log(), this.year()));
+  protected readonly layout = computed(() => yearHeatmapLayout(this.log(), this.year(), this.dates.locale()));
 
   protected readonly summary = computed(() => {
     const { readingDays, minutes, fullest, cells } = this.layout();

@@ -10,6 +10,7 @@ import { byUrgency } from '@shared/loans/urgency';
 import type { Book, Session } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
+import { ReaderSettings } from '../../../core/settings/reader-settings';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { readerToday } from '../../../core/time/reader-today';
 import { TIME_ZONE } from '../../../core/time/time-zone';
@@ -31,9 +32,11 @@ export class BookLoans {
 
   private readonly store = inject(JournalStore);
   private readonly timeZone = inject(TIME_ZONE);
+  private readonly dates = inject(ReaderSettings);
   private readonly today = readerToday();
   private readonly data = loansData();
   private readonly sessions = liveQuerySignal(async (db) => ((await db.rows('sessions').toArray()) as Session[]).filter((s) => !s.deleted), [] as Session[]);
+  protected readonly libraries = computed(() => this.data().libraries);
   protected readonly libraryById = computed(() => new Map(this.data().libraries.map((l) => [l.id, l])));
 
   protected readonly items = computed(() => {
@@ -65,6 +68,7 @@ export class BookLoans {
       today: this.today,
       timeZone: this.timeZone,
       dueOn,
+      locale: this.dates.locale(),
     });
   }
 

@@ -97,4 +97,58 @@ describe('LoansPage', () => {
     expect(loans.find((l) => l.kind === 'hold')?.holdOutcome).toBe('collected');
     expect(loans.find((l) => l.kind === 'library')).toEqual(jasmine.objectContaining({ bookId: THIRD, startedOn: '2026-07-01', dueOn: '2026-07-22' }));
   });
+
+  it('edits a hold’s place in the queue and pick-up day, and a loan’s library, dates and renewals', async () => {
+    const library = await store.create('libraries', { name: 'Fernwick Reading Rooms', loanDays: 14 });
+    const hold = await store.create('loans', { kind: 'hold', bookId: THIRD, startedOn: '2026-06-20', queuePosition: 7 });
+    await until(() => rows().length === 1, fixture, 10_000);
+    button('Edit').click();
+    await until(() => !!page().querySelector('form[aria-label="Edit hold"]'), fixture, 10_000);
+    const form = () => page().querySelector<HTMLElement>('form[aria-label="Edit hold"]')!;
+    expect(field(form(), 'Place in the queue').value).toBe('7');
+    type(field(form(), 'Place in the queue'), '3');
+    type(field(form(), 'Ready on'), '2026-07-01');
+    type(field(form(), 'Pick up by'), '2026-07-06');
+    button('Save changes', form()).click();
+    await until(() => !page().querySelector('form[aria-label="Edit hold"]'), fixture, 10_000);
+    expect((await stored()).find((l) => l.id === hold)).toEqual(jasmine.objectContaining({ queuePosition: 3, readyOn: '2026-07-01', pickUpBy: '2026-07-06' }));
+    await until(() => rows()[0]!.includes('Ready to pick up'), fixture, 10_000);
+
+    const loan = await store.create('loans', { kind: 'library', bookId: BOOK, startedOn: '2026-06-20', dueOn: '2026-07-10', renewalsUsed: 0 });
+    await until(() => rows().length === 2, fixture, 10_000);
+    const item = [...page().querySelectorAll('ul.loans:not(.closed) > li')].find((row) => textOf(row).includes('Rain on the Salt Road'))!;
+    button('Edit', item).click();
+    await until(() => !!item.querySelector('form[aria-label="Edit loan"]'), fixture, 10_000);
+    await until(() => [...field<HTMLSelectElement>(item as HTMLElement, 'Library').options].some((o) => o.value === library), fixture, 10_000);
+    choose(field<HTMLSelectElement>(item as HTMLElement, 'Library'), library);
+    type(field(item as HTMLElement, 'Due on'), '2026-07-12');
+    type(field(item as HTMLElement, 'Renewals allowed'), '3');
+    button('Save changes', item).click();
+    await until(() => !item.querySelector('form[aria-label="Edit loan"]'), fixture, 10_000);
+    expect((await stored()).find((l) => l.id === loan)).toEqual(
+      jasmine.objectContaining({ libraryId: library, dueOn: '2026-07-12', renewalsAllowed: 3, renewalsUsed: 0 }),
+    );
+  });
+
+  it('shows the shared schema’s reasons under the fields and saves nothing until they are right', async () => {
+    await store.create('loans', { kind: 'lentOut', bookId: OTHER, friendName: 'Pim', startedOn: '2026-06-20', dueOn: '2026-08-01' });
+    await store.create('loans', { kind: 'hold', bookId: THIRD, queuePosition: 4 });
+    await until(() => rows().length === 2, fixture, 10_000);
+    const item = (text: string) => [...page().querySelectorAll<HTMLElement>('ul.loans:not(.closed) > li')].find((row) => textOf(row).includes(text))!;
+    button('Edit', item('Clockmaker')).click();
+    await until(() => !!item('Clockmaker').querySelector('form'), fixture, 10_000);
+    type(field(item('Clockmaker'), 'Place in the queue'), '0');
+    button('Save changes', item('Clockmaker')).click();
+    await until(() => textOf(item('Clockmaker').querySelector('mat-error')) === 'Place in the queue must be at least 1', fixture, 10_000);
+
+    button('Edit', item('Small Harbours')).click();
+    await until(() => !!item('Small Harbours').querySelector('form'), fixture, 10_000);
+    expect(field(item('Small Harbours'), 'Lent to').value).toBe('Pim');
+    type(field(item('Small Harbours'), 'Expected back'), '2026-06-01');
+    button('Save changes', item('Small Harbours')).click();
+    await until(() => textOf(item('Small Harbours').querySelector('mat-error')) === 'Expected back must not be before the day it started', fixture, 10_000);
+    const saved = await stored();
+    expect(saved.find((l) => l.kind === 'hold')?.queuePosition).toBe(4);
+    expect(saved.find((l) => l.kind === 'lentOut')?.dueOn).toBe('2026-08-01');
+  });
 });
