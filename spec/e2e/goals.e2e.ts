@@ -124,5 +124,6 @@ describe('Goals and challenges, offline', () => {
     await page.reload();
     await waitForWords(page, '.counted', 'Brine and Bellflower');
     await context.close();
-  });
+    // Room for a loaded machine: npm test runs two e2e shards on two cores.
+  }, 180_000);
 });

@@ -13,12 +13,14 @@ describe('Signing in once, then reading offline', () => {
     await signInThroughUi(page, harness.server.baseUrl, reader.user.email, reader.password);
     await page.getByRole('heading', { name: /Marit Solberg/ }).waitFor();
     await waitForOfflineReady(page, harness.server.baseUrl);
+    // The journal opens after the first screen (the signed-in shell is deferred): wait for it before going offline.
+    await waitForDatabase(page, `lamplight-journal-${reader.user.id}`);
 
     await context.setOffline(true);
     await page.reload();
     await page.getByRole('heading', { name: /Marit Solberg/ }).waitFor();
     expect(new URL(page.url()).pathname).toBe('/today');
-    expect(await databaseNames(page)).toContain(`lamplight-journal-${reader.user.id}`);
+    await waitForDatabase(page, `lamplight-journal-${reader.user.id}`);
 
     await page.getByRole('button', { name: /account menu/ }).click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();

@@ -159,6 +159,7 @@ describe('Sync sizes and limits', () => {
       0,
       limit,
       MAX_PULL_BYTES,
+      limit - 1,
     ]);
     const nodes: { 'Node Type': string; 'Index Name'?: string; 'Relation Name'?: string; 'Actual Rows': number; 'Actual Loops': number }[] = [];
     const walk = (node: Record<string, unknown>) => {
@@ -171,6 +172,9 @@ describe('Sync sizes and limits', () => {
     expect(bookScans.map((node) => node['Node Type'])).toContain('Index Scan');
     expect(nodes.some((node) => node['Node Type'] === 'Seq Scan' && node['Relation Name'] === 'books')).toBeFalse();
     expect(Math.max(...bookScans.map((node) => node['Actual Rows']))).toBeLessThanOrEqual(limit);
+    // JSON is built only for the rows whose fields fit the page: five clocks a book, 1000 fields, so
+    // 200 rows (the SQL's field budget), not the 1001 keys read.
+    expect(plan[0].Plan['Actual Rows']).toBe(200);
     for (const sort of nodes.filter((node) => node['Node Type'] === 'Sort')) {
       expect(sort['Actual Rows'])
         .withContext('a sort of more than the page of keys')

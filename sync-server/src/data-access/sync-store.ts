@@ -161,7 +161,8 @@ export class SyncStore {
       if (!probe?.changed) return { changes: [], lastSeq: sinceSeq, hasMore: false };
     }
     // Every row has at least one field, so `limit` rows always fill a page; one more tells whether more remain.
-    const rows = await this.read<{ c: number; seq: string; keys: string; row: Record<string, unknown> }>(PULL_SQL, [userId, sinceSeq, limit + 1, maxBytes]);
+    // JSON is built only for the rows whose fields fit in `limit` (counted in SQL from their clocks).
+    const rows = await this.read<{ c: number; seq: string; keys: string; row: Record<string, unknown> }>(PULL_SQL, [userId, sinceSeq, limit + 1, maxBytes, limit]);
     // Texts' Yjs states count towards the page's bytes too, so they are read before the page is cut.
     const candidates = rows.map(({ c, row }) => rowFields(SPECS[c]!.name, row));
     const withStates = await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat());
