@@ -75,4 +75,32 @@ describe('PartDiscussion', () => {
     },
     SLOW,
   );
+
+  it(
+    'puts a reply under its post, and a reaction of our own turns on and off, one row per reader, post and kind',
+    async () => {
+      await open('member');
+      button('Reply')!.click();
+      await until(() => page().querySelector('form[aria-label="Reply"] textarea') !== null, fixture);
+      const box = page().querySelector<HTMLTextAreaElement>('form[aria-label="Reply"] textarea')!;
+      box.value = 'The *tide* chapter, yes';
+      box.dispatchEvent(new Event('input'));
+      page().querySelector<HTMLButtonElement>('form[aria-label="Reply"] button[type="submit"]')!.click();
+      await until(() => page().querySelector('.replies .post em') !== null, fixture);
+      expect(textOf(page().querySelector('.replies .post .text'))).toBe('The tide chapter, yes');
+      const reply = (await journal.db.table('circlePosts').toArray()).find((post) => post.id !== POST);
+      expect(reply?.replyToId).toBe(POST);
+
+      // The first post's own button (its reply has one of each reaction too).
+      const lamp = () => page().querySelector<HTMLButtonElement>('.post button[aria-label^="This lit something up"]')!;
+      lamp().click();
+      await until(() => lamp().getAttribute('aria-label') === 'This lit something up, 1', fixture);
+      expect(lamp().getAttribute('aria-pressed')).toBe('true');
+      lamp().click();
+      await until(() => lamp().getAttribute('aria-label') === 'This lit something up, 0', fixture);
+      const rows = await journal.db.table('circleReactions').toArray();
+      expect(rows.map((row) => [row.postId, row.kind, row.on])).toEqual([[POST, 'lamp', false]]);
+    },
+    SLOW,
+  );
 });

@@ -7,6 +7,7 @@ import { loadTextDoc, textDocName } from '@shared/text/text-doc';
 import { encodeTextBytes } from '@shared/text/text-value';
 
 import { openTestJournal, until, type TestJournal } from '../../../core/testing/test-journal';
+import { fieldOverlaps } from '../../../ui/testing/field-overlaps';
 import { ReadingEditor } from './reading-editor';
 
 describe('ReadingEditor (review and takeaways as mergeable texts)', () => {
@@ -29,6 +30,16 @@ describe('ReadingEditor (review and takeaways as mergeable texts)', () => {
   afterEach(() => journal.close());
 
   const review = () => element.querySelector<HTMLTextAreaElement>('textarea[formcontrolname=review]')!;
+
+  it('leaves room under every hint, on a phone and on a laptop, so no hint runs into the next field (issue 19)', async () => {
+    for (const width of ['360px', '760px']) {
+      element.style.display = 'block';
+      element.style.width = width;
+      await until(() => element.getBoundingClientRect().width === parseInt(width, 10), fixture);
+      expect(fieldOverlaps(element, 4)).withContext(width).toEqual([]);
+    }
+    expect(element.querySelectorAll('mat-hint').length).toBeGreaterThan(0);
+  });
 
   it('keeps the reader’s typing and another device’s edit of the review, and saves the typing as a Yjs update', async () => {
     const area = review();
