@@ -4,6 +4,8 @@ import path from 'node:path';
 
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
+import { journalPagesOf } from './page-journal';
+
 /** Debian's Chromium, never a downloaded browser. */
 const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
 
@@ -22,8 +24,8 @@ const ARGS = [
   '--disable-sync',
 ];
 
-export function launchBrowser(): Promise<Browser> {
-  return chromium.launch({ executablePath: CHROMIUM, headless: true, args: ARGS });
+export async function launchBrowser(): Promise<Browser> {
+  return journalPagesOf(await chromium.launch({ executablePath: CHROMIUM, headless: true, args: ARGS }));
 }
 
 /**

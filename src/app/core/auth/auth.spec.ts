@@ -91,6 +91,22 @@ describe('Auth token rotation', () => {
     expect(stored()?.refreshToken).toBe(pair.refreshToken);
   });
 
+  it('when a tab takes the lock before localStorage shows it the new pair, it takes the pair from IndexedDB and presents nothing', async () => {
+    const before = rememberSession({ accessToken: tokenExpiringIn(5, 'old'), refreshToken: 'refresh-token-one-0123456789' });
+    const tabA = TestBed.runInInjectionContext(() => new Auth());
+    const pair = { accessToken: tokenExpiringIn(900, 'new'), refreshToken: 'refresh-token-two-0123456789' };
+    const a = tabA.refresh();
+    (await nextRefresh()).flush(pair);
+    expect(await a).toBe(pair.accessToken);
+
+    // Chromium copies localStorage to other tabs' processes later: tab B still sees the spent token.
+    localStorage.setItem(SESSION_STORAGE_KEY, JSON.stringify(before));
+    const tabB = TestBed.runInInjectionContext(() => new Auth());
+    expect(await tabB.freshAccessToken()).toBe(pair.accessToken);
+    await turn();
+    expect(backend.match('/api/auth/refresh').length).withContext('refresh requests from the second tab').toBe(0);
+  });
+
   it('when the server refuses the refresh token, asks for a new sign-in and keeps the journal on the device', async () => {
     rememberSession({ accessToken: tokenExpiringIn(5, 'old') });
     const auth = TestBed.inject(Auth);
@@ -101,5 +117,20 @@ describe('Auth token rotation', () => {
     expect(await refused).toBeNull();
     expect(auth.signedIn()).toBeTrue();
     expect(auth.needsSignIn()).toBe('This sign-in was used twice');
+  });
+
+  it('when another tab had the refresh token refused, a tab with a stale copy asks for a sign-in too and presents nothing', async () => {
+    const before = rememberSession({ accessToken: tokenExpiringIn(5, 'old') });
+    const tabA = TestBed.runInInjectionContext(() => new Auth());
+    const refused = tabA.refresh();
+    (await nextRefresh()).flush({ error: { code: 'session_revoked', message: 'Signed out on another device' } }, { status: 401, statusText: 'Unauthorized' });
+    expect(await refused).toBeNull();
+
+    localStorage.setItem(SESSION_STORAGE_KEY, JSON.stringify(before)); // tab B's copy, not yet updated
+    const tabB = TestBed.runInInjectionContext(() => new Auth());
+    expect(await tabB.refresh()).toBeNull();
+    expect(tabB.needsSignIn()).toBe('Signed out on another device');
+    await turn();
+    expect(backend.match('/api/auth/refresh').length).withContext('refresh requests from the second tab').toBe(0);
   });
 });

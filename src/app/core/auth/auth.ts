@@ -5,6 +5,7 @@ import { firstValueFrom } from 'rxjs';
 import type { AccountUser, SignedIn, TokenPair } from '@shared/api/auth';
 
 import { browserStorage } from '../device/browser-storage';
+import { tokenHandoff } from './token-handoff';
 import { secondsUntilExpiry, SESSION_STORAGE_KEY, tokenReceived, type StoredSession } from './stored-session';
 import { deviceId } from '../device/device-id';
 
@@ -38,13 +39,13 @@ export class Auth {
 
   async signIn(email: string, password: string): Promise<AccountUser> {
     const answer = await firstValueFrom(this.http.post<SignedIn>('/api/auth/login', { email, password, deviceId: deviceId() }));
-    this.store({ user: answer.user, accessToken: answer.accessToken, refreshToken: answer.refreshToken, needsSignIn: null });
+    void this.store({ user: answer.user, accessToken: answer.accessToken, refreshToken: answer.refreshToken, needsSignIn: null });
     return answer.user;
   }
 
   async register(email: string, password: string, displayName: string): Promise<AccountUser> {
     const answer = await firstValueFrom(this.http.post<SignedIn>('/api/auth/register', { email, password, displayName, deviceId: deviceId() }));
-    this.store({ user: answer.user, accessToken: answer.accessToken, refreshToken: answer.refreshToken, needsSignIn: null });
+    void this.store({ user: answer.user, accessToken: answer.accessToken, refreshToken: answer.refreshToken, needsSignIn: null });
     return answer.user;
   }
 
@@ -56,7 +57,7 @@ export class Auth {
     if (this.session() && !this.needsSignIn()) {
       await firstValueFrom(this.http.post('/api/auth/logout', {})).catch(() => undefined);
     }
-    this.store(null);
+    void this.store(null);
   }
 
   /** The current access token, refreshed first when it is about to expire. */
@@ -82,13 +83,19 @@ export class Auth {
   /** Keeps the display name in step after the account changes. */
   updateUser(user: AccountUser): void {
     const current = this.session();
-    if (current) this.store({ ...current, user });
+    if (current) void this.store({ ...current, user });
   }
 
   private async exchange(refused?: string): Promise<string | null> {
-    // Another tab may have refreshed while we waited for the lock: use its tokens.
-    const stored = browserStorage.read<StoredSession>(SESSION_STORAGE_KEY) ?? this.session();
-    if (!stored || stored.needsSignIn) return null;
+    // Another tab may have refreshed while we waited for the lock: use its tokens (IndexedDB has
+    // them already; this tab's copy of localStorage may not yet).
+    const local = browserStorage.read<StoredSession>(SESSION_STORAGE_KEY) ?? this.session();
+    if (!local) return null;
+    const stored = await tokenHandoff.newest(local);
+    if (stored.needsSignIn) {
+      this.session.set(stored);
+      return null;
+    }
     // A 401 for a request sent before a refresh (here or in another tab) needs no second one.
     if (refused !== undefined && stored.accessToken !== refused) {
       this.session.set(stored);
@@ -101,12 +108,12 @@ export class Auth {
     }
     try {
       const pair = await firstValueFrom(this.http.post<TokenPair>('/api/auth/refresh', { refreshToken: stored.refreshToken }));
-      this.store({ ...stored, ...pair, needsSignIn: null });
+      await this.store({ ...stored, ...pair, needsSignIn: null }, stored.refreshToken);
       return pair.accessToken;
     } catch (error) {
       if (error instanceof HttpErrorResponse && (error.status === 401 || error.status === 403 || error.status === 400)) {
         const reason = (error.error as { error?: { message?: string } } | null)?.error?.message ?? 'Sign in again to sync';
-        this.store({ ...stored, needsSignIn: reason });
+        await this.store({ ...stored, needsSignIn: reason });
         return null;
       }
       throw error; // offline or server trouble: keep everything as it is and try later
@@ -118,10 +125,12 @@ export class Auth {
     return locks ? (locks.request('lamplight-token-refresh', work) as Promise<T>) : work();
   }
 
-  private store(session: StoredSession | null): void {
+  /** Resolves once the other tabs can read the session from IndexedDB. */
+  private store(session: StoredSession | null, spentRefreshToken: string | null = null): Promise<void> {
     if (session && session.accessToken !== this.session()?.accessToken) tokenReceived(session.accessToken);
     this.session.set(session);
     if (session) browserStorage.write(SESSION_STORAGE_KEY, session);
     else browserStorage.remove(SESSION_STORAGE_KEY);
+    return tokenHandoff.write(session, spentRefreshToken);
   }
 }

@@ -1,6 +1,7 @@
 import type { AccountUser } from '@shared/api/auth';
 
 import { SESSION_STORAGE_KEY, type StoredSession } from '../stored-session';
+import { tokenHandoff } from '../token-handoff';
 
 /** An unsigned token whose payload expires `secondsFromNow` from now (the client never verifies). */
 export function tokenExpiringIn(secondsFromNow: number, label = 'a'): string {
@@ -22,9 +23,12 @@ export function rememberSession(overrides: Partial<StoredSession> = {}): StoredS
     ...overrides,
   };
   localStorage.setItem(SESSION_STORAGE_KEY, JSON.stringify(session));
+  // As Auth stores it; IndexedDB runs this write before any read started after it.
+  void tokenHandoff.write(session);
   return session;
 }
 
 export function forgetSession(): void {
   localStorage.removeItem(SESSION_STORAGE_KEY);
+  void tokenHandoff.write(null);
 }
