@@ -10,13 +10,14 @@ import type { Circle } from '@shared/circles/circle-collections';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { readableError } from '../../../core/http/api-error-message';
 import { fieldError, notBlank } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { CirclesApi } from '../data/circles-api';
 import { CircleSync } from '../data/circle-sync';
 
 /** The reader's circles (from this device), and starting or joining one (online). */
 @Component({
   selector: 'll-circle-list',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, TextField],
   templateUrl: './circle-list.html',
   styleUrl: './circle-list.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
