@@ -24,15 +24,7 @@ import { fieldError } from '../field-errors';
       <mat-error>{{ error(control(), errorName()) }}</mat-error>
     </mat-form-field>
   `,
-  styles: `
-    :host {
-      display: block;
-    }
-
-    mat-form-field {
-      width: 100%;
-    }
-  `,
+  styleUrl: '../field-host.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class TextField {
