@@ -9,6 +9,7 @@ import { leaveAnswer, leaveQuestion, untilTicked } from '../../../core/pwa/testi
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { unsavedWorkGuard } from '../../../core/pwa/unsaved-work-guard';
 import { choose, field, fieldIfShown, type } from '../../../core/testing/goal-fixtures';
+import { clearOverlays } from '../../../core/testing/reader-moment';
 import { openTestJournal, textOf, type TestJournal } from '../../../core/testing/test-journal';
 import { fieldOverlaps } from '../../../ui/testing/field-overlaps';
 import { BookEditor } from './book-editor';
@@ -76,7 +77,7 @@ describe('BookEditor', () => {
   });
 
   afterEach(async () => {
-    document.querySelectorAll('.cdk-overlay-container').forEach((overlay) => (overlay.innerHTML = ''));
+    clearOverlays();
     await journal.close();
   });
 
