@@ -1,9 +1,9 @@
-import { ChangeDetectionStrategy, ChangeDetectorRef, Component, effect, inject, input } from '@angular/core';
-import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
-import { FormControl, FormGroupDirective, ReactiveFormsModule } from '@angular/forms';
+import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule, type SubscriptSizing } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 
+import { checkOnFormEvents } from '../check-on-form-events';
 import { fieldError } from '../field-errors';
 
 /**
@@ -43,15 +43,6 @@ export class TextField {
   protected readonly error = fieldError;
 
   constructor() {
-    // OnPush, yet an error can come from outside this view: the form submitted, a server's reason,
-    // markAllAsTouched. Look again then, as a field in the page's own template would.
-    const view = inject(ChangeDetectorRef);
-    inject(FormGroupDirective, { optional: true })
-      ?.ngSubmit.pipe(takeUntilDestroyed())
-      .subscribe(() => view.markForCheck());
-    effect((onCleanup) => {
-      const events = this.control().events.subscribe(() => view.markForCheck());
-      onCleanup(() => events.unsubscribe());
-    });
+    checkOnFormEvents(this.control);
   }
 }
