@@ -1,25 +1,22 @@
 import { HttpEventType } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 
 import type { JournalDb } from '../data/journal-db';
-import { openTestJournal, type TestJournal } from '../testing/test-journal';
 import { CoverError } from './cover-error';
 import { Covers } from './covers';
 import { sha256Hex } from './sha256-hex';
+import { useCoverJournal } from './testing/cover-journal';
 import { drawnImage } from './testing/test-images';
-import { sent as sentTo } from '../sync/testing/sync-backend';
 
 /** Real IndexedDB in Chromium, one fresh database per spec; the network is HttpTestingController. */
 describe('Covers', () => {
   let covers: Covers;
-  let backend: HttpTestingController;
-  let journal: TestJournal;
+  const shared = useCoverJournal();
 
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
-  const db = (): JournalDb => journal.db;
+  const db = (): JournalDb => shared().journal.db;
 
-  const sent = (url: string) => sentTo(backend, url);
+  const sent = (url: string) => shared().sent(url);
 
   /** A cover stored as an earlier visit would have left it, waiting to upload. */
   async function pendingCover(): Promise<{ id: string; blob: Blob }> {
@@ -34,16 +31,8 @@ describe('Covers', () => {
   /** An error body as a blob request receives it. */
   const blobError = (code: string, message: string) => new Blob([JSON.stringify(apiError(code, message))], { type: 'application/json' });
 
-  beforeEach(async () => {
-    journal = openTestJournal([provideHttpClientTesting()]);
+  beforeEach(() => {
     covers = TestBed.inject(Covers);
-    backend = TestBed.inject(HttpTestingController);
-    await db().open(); // before any spec ends, so teardown never closes it mid-open
-  });
-
-  afterEach(async () => {
-    backend.verify();
-    await journal.close();
   });
 
   describe('saving', () => {
@@ -178,7 +167,7 @@ describe('Covers', () => {
       offline();
       const { id } = await pendingCover();
       await covers.uploadPending();
-      backend.expectNone('/api/uploads');
+      shared().backend.expectNone('/api/uploads');
       expect((await db().covers.get(id))?.state).toBe('pending');
     });
 
@@ -216,7 +205,7 @@ describe('Covers', () => {
       expect(await first).toBeFalse();
 
       expect(await covers.download(id)).toBeFalse();
-      backend.expectNone(`/api/uploads/${id}`);
+      shared().backend.expectNone(`/api/uploads/${id}`);
     });
 
     it('asks again after a failure that was not a 404', async () => {
@@ -242,7 +231,7 @@ describe('Covers', () => {
       const { id } = await pendingCover();
       expect(await covers.download(id)).toBeTrue();
       expect(await covers.download('../sync/pull')).toBeFalse();
-      backend.expectNone(() => true);
+      shared().backend.expectNone(() => true);
     });
   });
 });

@@ -4,6 +4,7 @@ import { MatDialog } from '@angular/material/dialog';
 import { provideRouter, Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 
+import { clearOverlays } from '../testing/reader-moment';
 import { UnsavedWork } from './unsaved-work';
 import { leaveAnswer, leaveQuestion, untilTicked } from './testing/leave-question';
 import { LEAVE_WITHOUT_ASKING, unsavedWorkGuard } from './unsaved-work-guard';
@@ -39,7 +40,7 @@ describe('unsavedWorkGuard', () => {
     page = harness.routeDebugElement!.componentInstance as DraftPage;
   });
 
-  afterEach(() => document.querySelectorAll('.cdk-overlay-container').forEach((overlay) => (overlay.innerHTML = '')));
+  afterEach(clearOverlays);
 
   it('lets the reader leave at once when nothing is unsaved', async () => {
     const open = spyOn(TestBed.inject(MatDialog), 'open').and.callThrough();

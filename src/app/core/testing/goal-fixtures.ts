@@ -72,12 +72,18 @@ export function textOf(element: Element | null | undefined): string {
   return pieces.join(' ').replace(/\s+/g, ' ').trim();
 }
 
-/** The field whose label reads `label`, as a reader finds it. */
-export function field<T extends HTMLElement = HTMLInputElement>(root: HTMLElement, label: string): T {
+/** The field whose label reads `label`, as a reader finds it; null while there is none. */
+export function fieldIfShown<T extends HTMLElement = HTMLInputElement>(root: HTMLElement, label: string): T | null {
   const found = Array.from(root.querySelectorAll('label')).find((element) => textOf(element).replace(/\s*\*$/, '') === label);
   const control = found?.htmlFor ? document.getElementById(found.htmlFor) : found?.querySelector('input, select, textarea');
+  return control as T | null;
+}
+
+/** The field whose label reads `label`, as a reader finds it. */
+export function field<T extends HTMLElement = HTMLInputElement>(root: HTMLElement, label: string): T {
+  const control = fieldIfShown<T>(root, label);
   if (!control) throw new Error(`no field labelled ${label}`);
-  return control as T;
+  return control;
 }
 
 /** Sets a text field's value as typing would, and tells Angular. */

@@ -1,4 +1,4 @@
-import { FormControl, Validators } from '@angular/forms';
+import { FormControl, FormGroup, Validators } from '@angular/forms';
 
 import type { GoalUnit } from '@shared/goals/goal-unit';
 
@@ -11,6 +11,13 @@ export type StoredTargets = Partial<Record<(typeof TARGET_FIELDS)[GoalUnit], num
 /** A control for one target: blank for none, else a whole number from 1 to `max`. */
 export function targetControl(max: number): FormControl<string> {
   return new FormControl('', { nonNullable: true, validators: [Validators.pattern(/^\s*\d*\s*$/), Validators.min(1), Validators.max(max)] });
+}
+
+/** A year's or month's targets form: one control a unit, each up to its `max`. */
+export type TargetsForm = FormGroup<Record<GoalUnit, FormControl<string>>>;
+
+export function targetsForm(max: Readonly<Record<GoalUnit, number>>): TargetsForm {
+  return new FormGroup({ books: targetControl(max.books), pages: targetControl(max.pages), minutes: targetControl(max.minutes) });
 }
 
 /** The form's text as a stored target. */

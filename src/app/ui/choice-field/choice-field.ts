@@ -31,15 +31,7 @@ export const RATING_WORDS: Readonly<Record<string, string>> = Object.fromEntries
       </select>
     </mat-form-field>
   `,
-  styles: `
-    :host {
-      display: block;
-    }
-
-    mat-form-field {
-      width: 100%;
-    }
-  `,
+  styleUrl: '../field-host.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ChoiceField<T extends string> {

@@ -1,28 +1,26 @@
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 
 import type { JournalDb } from '../../data/journal-db';
-import { openTestJournal, waitFor, type TestJournal } from '../../testing/test-journal';
+import { waitFor } from '../../testing/test-journal';
 import { placeholderColour } from '../cover-placeholder';
 import { sha256Hex } from '../sha256-hex';
+import { useCoverJournal } from '../testing/cover-journal';
 import { drawnImage } from '../testing/test-images';
 import { BookCover } from './book-cover';
-import { sent as sentTo } from '../../sync/testing/sync-backend';
 
 describe('BookCover', () => {
   let fixture: ComponentFixture<BookCover>;
-  let backend: HttpTestingController;
-  let journal: TestJournal;
+  const covers = useCoverJournal();
 
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
-  const db = (): JournalDb => journal.db;
+  const db = (): JournalDb => covers().journal.db;
   const element = (): HTMLElement => fixture.nativeElement;
   const image = () => element().querySelector('img');
   const placeholder = () => element().querySelector<HTMLElement>('.placeholder');
 
   const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
-  const sent = (url: string) => sentTo(backend, url);
+  const sent = (url: string) => covers().sent(url);
 
   async function loaded(img: HTMLImageElement): Promise<void> {
     if (!img.complete) await new Promise((resolve) => img.addEventListener('load', resolve, { once: true }));
@@ -41,17 +39,6 @@ describe('BookCover', () => {
     fixture.componentRef.setInput('title', inputs.title);
     if (inputs.decorative) fixture.componentRef.setInput('decorative', true);
   }
-
-  beforeEach(async () => {
-    journal = openTestJournal([provideHttpClientTesting()]);
-    backend = TestBed.inject(HttpTestingController);
-    await db().open(); // before any spec ends, so teardown never closes it mid-open
-  });
-
-  afterEach(async () => {
-    backend.verify();
-    await journal.close();
-  });
 
   it('shows the cover stored on this device, from a blob: URL, described by the title', async () => {
     const id = await storedCover();

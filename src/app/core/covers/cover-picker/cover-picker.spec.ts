@@ -1,15 +1,13 @@
 import { HttpEventType } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 
 import type { JournalDb } from '../../data/journal-db';
-import { openTestJournal, type TestJournal } from '../../testing/test-journal';
 import { sha256Hex } from '../sha256-hex';
+import { useCoverJournal } from '../testing/cover-journal';
 import { drawnImage } from '../testing/test-images';
 import { CoverPicker } from './cover-picker';
-import { sent as sentTo } from '../../sync/testing/sync-backend';
 
 @Component({
   imports: [CoverPicker, ReactiveFormsModule],
@@ -21,13 +19,12 @@ class FormHost {
 }
 
 describe('CoverPicker', () => {
-  let backend: HttpTestingController;
-  let journal: TestJournal;
+  const covers = useCoverJournal();
   let root: () => HTMLElement;
   let stable: () => Promise<unknown>;
 
   const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
-  const db = (): JournalDb => journal.db;
+  const db = (): JournalDb => covers().journal.db;
   const query = <T extends Element>(selector: string) => root().querySelector<T>(selector);
   const text = (selector: string) => query(selector)?.textContent?.trim() ?? '';
   const offline = () => spyOnProperty(navigator, 'onLine').and.returnValue(false);
@@ -41,7 +38,7 @@ describe('CoverPicker', () => {
     throw new Error(`gave up waiting for ${what}`);
   }
 
-  const sent = (url: string) => sentTo(backend, url);
+  const sent = (url: string) => covers().sent(url);
 
   /** Hands a file to one of the picker's inputs, as the browser's file dialog would. */
   function choose(label: string, file: File): void {
@@ -65,17 +62,6 @@ describe('CoverPicker', () => {
     stable = () => fixture.whenStable();
     return { fixture, emitted };
   }
-
-  beforeEach(async () => {
-    journal = openTestJournal([provideHttpClientTesting()]);
-    backend = TestBed.inject(HttpTestingController);
-    await db().open(); // before any spec ends, so teardown never closes it mid-open
-  });
-
-  afterEach(async () => {
-    backend.verify();
-    await journal.close();
-  });
 
   it('offers a file, the camera and a drop, each input labelled and taking images only', async () => {
     pickerAlone();

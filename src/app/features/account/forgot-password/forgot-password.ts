@@ -1,19 +1,17 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatInputModule } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 
 import { AccountPage } from '../account-page/account-page';
-import { fieldError } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { FormSubmission } from '../../../ui/form-submission';
 import { AccountApi } from '../../../core/auth/account-api';
 
 /** Ask for a link to choose a new password. The answer never says whether the address exists. */
 @Component({
   selector: 'll-forgot-password',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, AccountPage],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, AccountPage, TextField],
   templateUrl: './forgot-password.html',
   styleUrl: '../account-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -26,7 +24,6 @@ export class ForgotPassword {
   });
   protected readonly sent = signal('');
   protected readonly submission = new FormSubmission();
-  protected readonly fieldError = fieldError;
 
   protected async requestLink(): Promise<void> {
     await this.submission.submit(this.form, async () => {

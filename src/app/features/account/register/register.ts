@@ -12,13 +12,14 @@ import { PASSWORD_MIN_LENGTH } from '@shared/account/password-policy';
 import { Auth } from '../../../core/auth/auth';
 import { AccountPage } from '../account-page/account-page';
 import { fieldError } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { FormSubmission } from '../../../ui/form-submission';
 import { passwordPolicy } from '../../../ui/password-validator';
 
 /** Create an account: e-mail, a name to show and a long password (no composition rules). */
 @Component({
   selector: 'll-register',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, AccountPage],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, AccountPage, TextField],
   templateUrl: './register.html',
   styleUrl: '../account-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,20 +1,18 @@
 import { ChangeDetectionStrategy, Component, inject, input } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 
 import { Auth } from '../../../core/auth/auth';
 import { AccountPage } from '../account-page/account-page';
-import { fieldError } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { FormSubmission } from '../../../ui/form-submission';
 
 /** Sign in with e-mail and password; needed once per device, then the journal opens offline. */
 @Component({
   selector: 'll-sign-in',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, AccountPage],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatProgressBarModule, AccountPage, TextField],
   templateUrl: './sign-in.html',
   styleUrl: '../account-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -32,7 +30,6 @@ export class SignIn {
   });
   protected readonly submission = new FormSubmission();
   protected readonly reason = this.auth.needsSignIn;
-  protected readonly fieldError = fieldError;
 
   protected async signIn(): Promise<void> {
     const { email, password } = this.form.getRawValue();

@@ -15,7 +15,8 @@ import type { Challenge } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank } from '../../../ui/field-errors';
+import { notBlank } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { OneAtATime } from '../../../core/tasks/one-at-a-time';
 import { celebrateOnce } from '../celebrate-once';
@@ -47,6 +48,7 @@ const SUGGESTIONS_PER_LETTER = 3;
     MatInputModule,
     MatProgressBarModule,
     ChallengeCelebration,
+    TextField,
   ],
   templateUrl: './challenge-page.html',
   styleUrl: './challenge-page.scss',
@@ -136,7 +138,6 @@ export class ChallengePage {
   protected readonly renameForm = inject(FormBuilder).nonNullable.group({
     name: ['', [Validators.required, notBlank, Validators.maxLength(200)]],
   });
-  protected readonly fieldError = fieldError;
 
   protected readonly kindLabels = KIND_LABELS;
   protected readonly weekStates = WEEK_STATES;

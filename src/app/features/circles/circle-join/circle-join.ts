@@ -1,10 +1,9 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { Router, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 
-import { readableError } from '../../../core/http/api-error-message';
 import { CirclesApi } from '../data/circles-api';
-import { CircleSync } from '../data/circle-sync';
+import { CircleEntry } from '../data/circle-entry';
 
 /** `/circles/join#invite=…`: the invitation link from the e-mail. The token stays in the fragment (never in a request line). */
 @Component({
@@ -12,7 +11,7 @@ import { CircleSync } from '../data/circle-sync';
   imports: [RouterLink, MatButtonModule],
   template: `
     <h1>Join a reading circle</h1>
-    @if (message(); as text) {
+    @if (entry.message(); as text) {
       <p role="alert" class="error">{{ text }}</p>
       <a mat-stroked-button routerLink="/circles">Your circles</a>
     } @else if (token) {
@@ -20,7 +19,7 @@ import { CircleSync } from '../data/circle-sync';
         You were invited to a reading circle. The circle will see your display name, what you post there and your answers to its meetings; your own journal stays
         private.
       </p>
-      <button mat-flat-button type="button" (click)="accept()" [disabled]="busy()">Join the circle</button>
+      <button mat-flat-button type="button" (click)="accept()" [disabled]="entry.busy()">Join the circle</button>
     } @else {
       <p role="alert" class="error">This link is incomplete. Open the whole link from the invitation e-mail.</p>
     }
@@ -30,23 +29,11 @@ import { CircleSync } from '../data/circle-sync';
 })
 export class CircleJoin {
   private readonly api = inject(CirclesApi);
-  private readonly sync = inject(CircleSync);
-  private readonly router = inject(Router);
   protected readonly token = new URLSearchParams(globalThis.location?.hash.slice(1) ?? '').get('invite');
-  protected readonly busy = signal(false);
-  protected readonly message = signal<string | null>(null);
+  protected readonly entry = new CircleEntry();
 
   protected async accept(): Promise<void> {
-    if (!this.token) return;
-    this.busy.set(true);
-    try {
-      const { id } = await this.api.acceptInvitation(this.token);
-      await this.sync.syncAll();
-      await this.router.navigate(['/circles', id]);
-    } catch (error) {
-      this.message.set(readableError(error).message);
-    } finally {
-      this.busy.set(false);
-    }
+    const token = this.token;
+    if (token) await this.entry.enter(() => this.api.acceptInvitation(token));
   }
 }

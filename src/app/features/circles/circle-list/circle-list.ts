@@ -1,29 +1,29 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { Router, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 
 import type { Circle } from '@shared/circles/circle-collections';
 
 import { liveQuerySignal } from '../../../core/data/live-query';
-import { readableError } from '../../../core/http/api-error-message';
 import { fieldError, notBlank } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { CirclesApi } from '../data/circles-api';
+import { CircleEntry } from '../data/circle-entry';
 import { CircleSync } from '../data/circle-sync';
 
 /** The reader's circles (from this device), and starting or joining one (online). */
 @Component({
   selector: 'll-circle-list',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, TextField],
   templateUrl: './circle-list.html',
   styleUrl: './circle-list.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class CircleList {
   private readonly api = inject(CirclesApi);
-  private readonly router = inject(Router);
   protected readonly sync = inject(CircleSync);
   protected readonly fieldError = fieldError;
 
@@ -36,8 +36,7 @@ export class CircleList {
     [] as { id: string; name: string; role?: string; members: number }[],
   );
   protected readonly circles = computed(() => [...this.data()].sort((a, b) => a.name.localeCompare(b.name)));
-  protected readonly message = signal<string | null>(null);
-  protected readonly busy = signal(false);
+  protected readonly entry = new CircleEntry();
 
   protected readonly createForm = inject(FormBuilder).nonNullable.group({
     name: ['', [notBlank, Validators.maxLength(120)]],
@@ -52,26 +51,11 @@ export class CircleList {
   protected create(): Promise<void> {
     if (this.createForm.invalid) return Promise.resolve(this.createForm.markAllAsTouched());
     const { name, description } = this.createForm.getRawValue();
-    return this.online(() => this.api.create(name.trim(), description.trim() || null));
+    return this.entry.enter(() => this.api.create(name.trim(), description.trim() || null));
   }
 
   protected join(): Promise<void> {
     if (this.joinForm.invalid) return Promise.resolve(this.joinForm.markAllAsTouched());
-    return this.online(() => this.api.joinByCode(this.joinForm.getRawValue().code));
-  }
-
-  /** Creating and joining need the server; the circle then syncs to this device and opens. */
-  private async online(action: () => Promise<{ id: string }>): Promise<void> {
-    this.busy.set(true);
-    this.message.set(null);
-    try {
-      const { id } = await action();
-      await this.sync.syncAll();
-      await this.router.navigate(['/circles', id]);
-    } catch (error) {
-      this.message.set(readableError(error).message);
-    } finally {
-      this.busy.set(false);
-    }
+    return this.entry.enter(() => this.api.joinByCode(this.joinForm.getRawValue().code));
   }
 }

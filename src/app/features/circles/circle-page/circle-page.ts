@@ -22,6 +22,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { liveQueryFor } from '../../../core/data/live-query-for';
 import { readableError } from '../../../core/http/api-error-message';
 import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { UNDO_OFFER_MS } from '../../../ui/undoable-delete';
 import { CirclesApi } from '../data/circles-api';
 import { CircleStore } from '../data/circle-store';
@@ -42,6 +43,7 @@ import { loadCircleView, type CircleView } from '../data/circle-view';
     MatInputModule,
     MatSelectModule,
     MatSlideToggleModule,
+    TextField,
   ],
   templateUrl: './circle-page.html',
   styleUrl: './circle-page.scss',

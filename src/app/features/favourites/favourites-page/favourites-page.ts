@@ -11,6 +11,7 @@ import { FAVOURITE_KINDS, type Favourite, type MonthPick } from '@shared/sync/sc
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { fieldError } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { readerToday } from '../../../core/time/reader-today';
 import { ReaderDatePipe } from '../../../ui/reader-date';
@@ -22,7 +23,7 @@ const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'B
 /** Favourite books, authors and quotes, each with why; and a pick for each month of the year. */
 @Component({
   selector: 'll-favourites-page',
-  imports: [ChoiceField, ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ChoiceField, ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, TextField],
   templateUrl: './favourites-page.html',
   styleUrl: './favourites-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

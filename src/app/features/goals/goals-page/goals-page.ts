@@ -11,7 +11,7 @@ import { RouterLink } from '@angular/router';
 import { booksFinishedIn } from '@shared/challenges/books-finished-in';
 import { challengeProgress } from '@shared/challenges/challenge-progress';
 import { monthlyAmounts, yearPeriod } from '@shared/goals/amounts-in';
-import { GOAL_UNITS, type GoalUnit } from '@shared/goals/goal-unit';
+import { type GoalUnit } from '@shared/goals/goal-unit';
 import { yearGoalPacing } from '@shared/goals/year-goal-pacing';
 import { deterministicId } from '@shared/sync/deterministic-id';
 import type { YearPlan } from '@shared/sync/schema/collections';
@@ -22,7 +22,8 @@ import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challeng
 import { goalAmount, goalFigure, signedFigure, UNIT_LABELS } from '../../../ui/goal-figures';
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { OneAtATime } from '../../../core/tasks/one-at-a-time';
-import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
+import { changedTargets, targetsByUnit, targetsForm, targetTexts, type TargetTexts } from '../targets-form';
+import { TargetFields } from '../target-fields/target-fields';
 import { ReaderDatePipe } from '../../../ui/reader-date';
 import { PaceBar } from '../pace-bar/pace-bar';
 
@@ -48,6 +49,7 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 10_000, pages: 
     MatInputModule,
     MatProgressBarModule,
     PaceBar,
+    TargetFields,
   ],
   templateUrl: './goals-page.html',
   styleUrl: './goals-page.scss',
@@ -120,7 +122,6 @@ export class GoalsPage {
       .sort((a, b) => (a.challenge.name ?? '').localeCompare(b.challenge.name ?? ''));
   });
 
-  protected readonly units = GOAL_UNITS;
   protected readonly unitLabels = UNIT_LABELS;
   protected readonly kindLabels = KIND_LABELS;
   protected readonly maxTargets = MAX_TARGETS;
@@ -131,11 +132,7 @@ export class GoalsPage {
   protected readonly editingTargets = signal(false);
   protected readonly targetsSaved = signal(false);
   protected readonly notesSaved = signal(false);
-  protected readonly targetsForm = inject(FormBuilder).nonNullable.group({
-    books: targetControl(MAX_TARGETS.books),
-    pages: targetControl(MAX_TARGETS.pages),
-    minutes: targetControl(MAX_TARGETS.minutes),
-  });
+  protected readonly targetsForm = targetsForm(MAX_TARGETS);
   private original: TargetTexts = this.targetsForm.getRawValue();
   protected readonly newGoalForm = inject(FormBuilder).nonNullable.group({ text: '' });
 

@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -9,7 +9,7 @@ import { RouterLink } from '@angular/router';
 
 import { booksFinishedIn } from '@shared/challenges/books-finished-in';
 import { amountsInLog, monthPeriod } from '@shared/goals/amounts-in';
-import { GOAL_UNITS, type GoalUnit } from '@shared/goals/goal-unit';
+import { type GoalUnit } from '@shared/goals/goal-unit';
 import { monthAccount } from '@shared/goals/month-account';
 import { monthProgress } from '@shared/goals/month-progress';
 import { deterministicId } from '@shared/sync/deterministic-id';
@@ -23,7 +23,8 @@ import { goalAmount, goalFigure, UNIT_LABELS } from '../../../ui/goal-figures';
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { MonthHeatmap } from '../month-heatmap/month-heatmap';
 import { PaceBar } from '../pace-bar/pace-bar';
-import { changedTargets, targetControl, targetsByUnit, targetTexts, type TargetTexts } from '../targets-form';
+import { changedTargets, targetsByUnit, targetsForm, targetTexts, type TargetTexts } from '../targets-form';
+import { TargetFields } from '../target-fields/target-fields';
 import { ReaderDatePipe } from '../../../ui/reader-date';
 import { ReaderSettings } from '../../../core/settings/reader-settings';
 import { NO_STATUS_CHANGES_OR_QUOTES, statusChangesAndQuotes } from '../goals-data';
@@ -38,7 +39,18 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 1_000, pages: 1
  */
 @Component({
   selector: 'll-month-page',
-  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MonthHeatmap, PaceBar],
+  imports: [
+    ReaderDatePipe,
+    ReactiveFormsModule,
+    RouterLink,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MonthHeatmap,
+    PaceBar,
+    TargetFields,
+  ],
   templateUrl: './month-page.html',
   styleUrl: './month-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -112,7 +124,6 @@ export class MonthPage {
     return list;
   });
 
-  protected readonly units = GOAL_UNITS;
   protected readonly unitLabels = UNIT_LABELS;
   protected readonly maxTargets = MAX_TARGETS;
   protected readonly goalAmount = goalAmount;
@@ -121,11 +132,7 @@ export class MonthPage {
 
   protected readonly targetsSaved = signal(false);
   protected readonly reflectionSaved = signal(false);
-  protected readonly targetsForm = inject(FormBuilder).nonNullable.group({
-    books: targetControl(MAX_TARGETS.books),
-    pages: targetControl(MAX_TARGETS.pages),
-    minutes: targetControl(MAX_TARGETS.minutes),
-  });
+  protected readonly targetsForm = targetsForm(MAX_TARGETS);
   private original: TargetTexts = this.targetsForm.getRawValue();
 
   constructor() {

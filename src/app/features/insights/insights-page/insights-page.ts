@@ -51,28 +51,26 @@ export class InsightsPage {
     const year = this.shownYear() ?? 0;
     return monthlyChart(monthlyAmounts(year, this.data.record.finished(), this.log()), this.unit(), year, this.dates.locale());
   });
-  protected readonly formats = computed(() => formatsChart(formatSplit(this.data.books()), this.shownYear() ?? 0));
-  protected readonly ratings = computed(() => ratingsChart(ratingSpread(this.data.books().map((book) => book.rating)), this.shownYear() ?? 0));
-  protected readonly genres = computed(() =>
-    termsChart(
-      topTerms(
-        this.data.books().map((book) => book.genres),
-        TOP_TERMS,
-      ),
-      'genres',
-      this.shownYear() ?? 0,
-    ),
-  );
-  protected readonly tags = computed(() =>
-    termsChart(
-      topTerms(
-        this.data.books().map((book) => book.tags),
-        TOP_TERMS,
-      ),
-      'tags',
-      this.shownYear() ?? 0,
-    ),
-  );
+  /** The year's breakdowns, a card each: formats, ratings, and the most frequent genres and tags. */
+  protected readonly breakdowns = computed(() => {
+    const year = this.shownYear() ?? 0;
+    const books = this.data.books();
+    const terms = (kind: 'genres' | 'tags') =>
+      termsChart(
+        topTerms(
+          books.map((book) => book[kind]),
+          TOP_TERMS,
+        ),
+        kind,
+        year,
+      );
+    return [
+      { id: 'formats', heading: 'Formats', of: 'format', model: formatsChart(formatSplit(books), year) },
+      { id: 'ratings', heading: 'Ratings', of: 'rating', model: ratingsChart(ratingSpread(books.map((book) => book.rating)), year) },
+      { id: 'genres', heading: 'Genres', of: 'genre', model: terms('genres') },
+      { id: 'tags', heading: 'Tags', of: 'tag', model: terms('tags') },
+    ];
+  });
   protected readonly pace = computed(() => {
     const year = this.shownYear() ?? 0;
     return paceChart(monthlyPace(this.data.record.rows()?.sessions ?? [], year, this.timeZone), year, this.dates.locale());

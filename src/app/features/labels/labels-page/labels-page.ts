@@ -1,14 +1,13 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
-import { MatInputModule } from '@angular/material/input';
 
 import { LABEL_COLOURS, LABEL_ICONS, type Label } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { fieldError, notBlank } from '../../../ui/field-errors';
+import { notBlank } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { LabelDirectory, type LabelView } from '../../../core/read-model/label-directory';
 import { ChoiceField } from '../../../ui/choice-field/choice-field';
@@ -40,7 +39,7 @@ const ICON_NAMES: Record<NonNullable<Label['icon']>, string> = {
 /** The reader's labels: our starter set and their own, to rename, recolour, add or remove. */
 @Component({
   selector: 'll-labels-page',
-  imports: [ChoiceField, ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  imports: [ChoiceField, ReactiveFormsModule, MatButtonModule, MatIconModule, TextField],
   templateUrl: './labels-page.html',
   styleUrl: './labels-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -54,7 +53,6 @@ export class LabelsPage {
   protected readonly colourNames = COLOUR_NAMES;
   protected readonly iconNames = ICON_NAMES;
   protected readonly editing = signal<string | null>(null);
-  protected readonly fieldError = fieldError;
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
     name: ['', [Validators.required, notBlank, Validators.maxLength(40)]],

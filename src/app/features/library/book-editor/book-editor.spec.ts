@@ -8,7 +8,8 @@ import type { Book } from '@shared/sync/schema/collections';
 import { leaveAnswer, leaveQuestion, untilTicked } from '../../../core/pwa/testing/leave-question';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { unsavedWorkGuard } from '../../../core/pwa/unsaved-work-guard';
-import { choose, field, type } from '../../../core/testing/goal-fixtures';
+import { choose, field, fieldIfShown, type } from '../../../core/testing/goal-fixtures';
+import { clearOverlays } from '../../../core/testing/reader-moment';
 import { openTestJournal, textOf, type TestJournal } from '../../../core/testing/test-journal';
 import { fieldOverlaps } from '../../../ui/testing/field-overlaps';
 import { BookEditor } from './book-editor';
@@ -26,7 +27,7 @@ describe('BookEditor', () => {
   let router: Router;
 
   const page = (): HTMLElement => harness.routeNativeElement!;
-  const titleInput = () => page().querySelector<HTMLInputElement>('input[formcontrolname="title"]')!;
+  const titleInput = () => fieldIfShown(page(), 'Title')!;
   const typeTitle = (value: string) => {
     titleInput().value = value;
     titleInput().dispatchEvent(new Event('input'));
@@ -76,7 +77,7 @@ describe('BookEditor', () => {
   });
 
   afterEach(async () => {
-    document.querySelectorAll('.cdk-overlay-container').forEach((overlay) => (overlay.innerHTML = ''));
+    clearOverlays();
     await journal.close();
   });
 

@@ -19,6 +19,7 @@ import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { LabelPicker } from '../../../ui/label-picker/label-picker';
 import { COPY_LABELS, FORMAT_LABELS, STATUS_LABELS, WISH_PRIORITY_LABELS } from '../../../ui/book-labels';
 import { BookStatus } from '../../../core/read-model/book-status';
@@ -55,6 +56,7 @@ const whole = (min: number, max: number) => [Validators.pattern(/^\s*\d*\s*$/), 
     CoverPicker,
     CatalogueFill,
     CatalogueSearch,
+    TextField,
   ],
   templateUrl: './book-editor.html',
   styleUrl: './book-editor.scss',

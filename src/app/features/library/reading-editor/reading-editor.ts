@@ -14,6 +14,7 @@ import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { MergeableTextarea, type PendingEdits } from '../../../core/text/mergeable-textarea';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { fieldError, showServerErrors } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { RECOMMEND_LABELS } from '../../../ui/book-labels';
 import { changedReadingFields, EMPTY_READING_FORM, readingDatesValidator, toReadingFields, toReadingForm, type ReadingFormValue } from './reading-form-model';
 import { ChoiceField, RATING_CHOICES, RATING_WORDS } from '../../../ui/choice-field/choice-field';
@@ -21,7 +22,7 @@ import { ChoiceField, RATING_CHOICES, RATING_WORDS } from '../../../ui/choice-fi
 /** One reading of a book: its dates and the review. A re-read is simply another reading. */
 @Component({
   selector: 'll-reading-editor',
-  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MergeableTextarea],
+  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MergeableTextarea, TextField],
   templateUrl: './reading-editor.html',
   styleUrl: './reading-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

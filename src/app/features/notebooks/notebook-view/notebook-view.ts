@@ -14,7 +14,8 @@ import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
+import { notBlank, showServerErrors } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { notebookContents } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
@@ -24,7 +25,7 @@ import { undoableDelete } from '../../../ui/undoable-delete';
 /** One notebook: its pages in order, adding and arranging them, and the notebook's title and book. */
 @Component({
   selector: 'll-notebook-view',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates, TextField],
   templateUrl: './notebook-view.html',
   styleUrl: './notebook-view.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -59,7 +60,6 @@ export class NotebookView {
     title: ['', [Validators.required, notBlank, Validators.maxLength(NOTEBOOK_LIMITS.notebookTitle)]],
     bookId: [''],
   });
-  protected readonly fieldError = fieldError;
 
   constructor() {
     inject(UnsavedWork).trackForm(this.detailsForm);

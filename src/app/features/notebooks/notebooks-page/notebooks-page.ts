@@ -11,7 +11,8 @@ import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
 import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
-import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
+import { notBlank, showServerErrors } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { bookChoices, notebookSummaries, type BookOption, type NotebookSummary } from '../notebook-data';
 import { Notebooks } from '../notebooks';
 import { PageTemplates } from '../page-templates/page-templates';
@@ -20,7 +21,7 @@ import { ReaderDatePipe } from '../../../ui/reader-date';
 /** Every notebook the reader keeps, and a form to start one. */
 @Component({
   selector: 'll-notebooks-page',
-  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates],
+  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates, TextField],
   templateUrl: './notebooks-page.html',
   styleUrl: './notebooks-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -41,7 +42,6 @@ export class NotebooksPage {
     bookId: [''],
   });
   protected readonly problem = signal('');
-  protected readonly fieldError = fieldError;
 
   constructor() {
     inject(UnsavedWork).trackForm(this.form);

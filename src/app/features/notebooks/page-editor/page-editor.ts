@@ -17,6 +17,7 @@ import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { MergeableTextarea } from '../../../core/text/mergeable-textarea';
 import { PageHistory } from '../page-history/page-history';
 import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { LightText } from '../light-text/light-text';
 import { clip } from '../notebook-data';
 import { Notebooks } from '../notebooks';
@@ -25,7 +26,18 @@ import { changedPageFields, toPageForm, type PageFormValue } from './page-form-m
 /** One notebook page: its title and text, with the formatting shown as it will look. */
 @Component({
   selector: 'll-page-editor',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, LightText, MergeableTextarea, PageHistory],
+  imports: [
+    ReactiveFormsModule,
+    RouterLink,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    LightText,
+    MergeableTextarea,
+    PageHistory,
+    TextField,
+  ],
   templateUrl: './page-editor.html',
   styleUrl: './page-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -15,6 +15,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { fieldError, notBlank, showServerErrors } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { LabelPicker } from '../../../ui/label-picker/label-picker';
 import { authorLine } from '../../../ui/book-labels';
 import {
@@ -59,7 +60,7 @@ function bookOrder(books: readonly Book[]): { reading: Book[]; others: Book[] } 
  */
 @Component({
   selector: 'll-quote-capture-dialog',
-  imports: [ReactiveFormsModule, MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSlideToggleModule, LabelPicker],
+  imports: [ReactiveFormsModule, MatButtonModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSlideToggleModule, LabelPicker, TextField],
   templateUrl: './quote-capture-dialog.html',
   styleUrl: './quote-capture-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

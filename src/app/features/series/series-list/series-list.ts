@@ -10,13 +10,14 @@ import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-
 
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
-import { fieldError, notBlank } from '../../../ui/field-errors';
+import { notBlank } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { allSeries } from '../series-data';
 
 /** Every series the reader follows, how far they are in each, and what comes next. */
 @Component({
   selector: 'll-series-list',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, TextField],
   templateUrl: './series-list.html',
   styleUrl: './series-list.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -40,7 +41,6 @@ export class SeriesList {
     name: ['', [Validators.required, notBlank, Validators.maxLength(300)]],
     plannedCount: ['', [Validators.pattern(/^\s*\d*\s*$/), Validators.min(1), Validators.max(500)]],
   });
-  protected readonly fieldError = fieldError;
 
   protected async addSeries(): Promise<void> {
     this.form.markAllAsTouched();

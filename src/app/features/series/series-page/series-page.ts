@@ -11,6 +11,7 @@ import { nextUnread, seriesBooks, seriesProgress } from '@shared/journal/series-
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { fieldError, notBlank } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { STATUS_LABELS } from '../../../ui/book-labels';
 import { StarRating } from '../../../ui/star-rating/star-rating';
 import { liveQueryFor } from '../../../core/data/live-query-for';
@@ -22,7 +23,7 @@ import { ChoiceField, RATING_CHOICES, RATING_WORDS } from '../../../ui/choice-fi
 /** One series: its books in order, progress, the next to read, and the reader's view of it all. */
 @Component({
   selector: 'll-series-page',
-  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, StarRating],
+  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, StarRating, TextField],
   templateUrl: './series-page.html',
   styleUrl: './series-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -3,8 +3,7 @@ import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import type { Book, Session } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { CLOCK, fixedClock } from '../../../core/time/clock';
-import { TIME_ZONE } from '../../../core/time/time-zone';
+import { readerAt, clearOverlays } from '../../../core/testing/reader-moment';
 import { BookReading } from './book-reading';
 import { waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
 import { addSession } from '../../../core/testing/seed';
@@ -32,15 +31,12 @@ describe('BookReading', () => {
   }
 
   beforeEach(async () => {
-    journal = openTestJournal([
-      { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
-      { provide: CLOCK, useValue: fixedClock(NOW) },
-    ]);
+    journal = openTestJournal(readerAt(NOW));
     store = journal.store;
   });
 
   afterEach(async () => {
-    document.querySelectorAll('.cdk-overlay-container').forEach((overlay) => (overlay.innerHTML = ''));
+    clearOverlays();
     await journal.close();
   });
 

@@ -6,8 +6,7 @@ import type { Book, Session } from '@shared/sync/schema/collections';
 
 import { type JournalDb } from '../../../core/data/journal-db';
 import { JournalStore } from '../../../core/data/journal-store';
-import { CLOCK, fixedClock } from '../../../core/time/clock';
-import { TIME_ZONE } from '../../../core/time/time-zone';
+import { readerAt, clearOverlays } from '../../../core/testing/reader-moment';
 import { SessionEditor } from './session-editor';
 import { outboxMark, outboxSince, waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
 
@@ -53,16 +52,12 @@ describe('SessionEditor', () => {
   const addBook = (fields: Partial<Book> = {}) => store.create('books', { title: 'The Salt Road', format: 'print', pageCount: 300, status: 'tbr', ...fields });
 
   beforeEach(async () => {
-    journal = openTestJournal([
-      provideRouter([{ path: 'library/:id', component: BookPageStub }]),
-      { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
-      { provide: CLOCK, useValue: fixedClock(NOW) },
-    ]);
+    journal = openTestJournal([provideRouter([{ path: 'library/:id', component: BookPageStub }]), ...readerAt(NOW)]);
     store = journal.store;
   });
 
   afterEach(async () => {
-    document.querySelectorAll('.cdk-overlay-container').forEach((overlay) => (overlay.innerHTML = ''));
+    clearOverlays();
     await journal.close();
   });
 

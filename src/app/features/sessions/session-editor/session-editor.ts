@@ -16,6 +16,7 @@ import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
 import { fieldError, showServerErrors } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { MOOD_LABELS, positionLabels } from '../book-position';
 import { latestPosition } from '../../../core/read-model/reading-sessions';
 import { SessionFollowUp } from '../session-follow-up';
@@ -33,7 +34,7 @@ const DEFAULT_MINUTES = 30;
  */
 @Component({
   selector: 'll-session-editor',
-  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ChoiceField, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, TextField],
   templateUrl: './session-editor.html',
   styleUrl: './session-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,11 +1,9 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatInputModule } from '@angular/material/input';
 
 import { Auth } from '../../../core/auth/auth';
-import { fieldError } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { FormSubmission } from '../../../ui/form-submission';
 import { passwordPolicy } from '../../../ui/password-validator';
 import { AccountApi } from '../../../core/auth/account-api';
@@ -13,7 +11,7 @@ import { AccountApi } from '../../../core/auth/account-api';
 /** Change the password; other devices are signed out, this one stays signed in. */
 @Component({
   selector: 'll-change-password',
-  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule],
+  imports: [ReactiveFormsModule, MatButtonModule, TextField],
   templateUrl: './change-password.html',
   // One field per row with room between them: a hint or an error never touches the next field.
   styles: `
@@ -39,7 +37,6 @@ export class ChangePassword {
   });
   protected readonly message = signal('');
   protected readonly submission = new FormSubmission();
-  protected readonly fieldError = fieldError;
 
   protected async changePassword(): Promise<void> {
     this.message.set('');

@@ -1,13 +1,11 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatInputModule } from '@angular/material/input';
 import { Router } from '@angular/router';
 
 import { Auth } from '../../../core/auth/auth';
 import { LocalJournal } from '../../../core/data/local-journal';
-import { fieldError } from '../../../ui/field-errors';
+import { TextField } from '../../../ui/text-field/text-field';
 import { FormSubmission } from '../../../ui/form-submission';
 import { ExportPanel } from '../../your-data';
 import { AccountApi } from '../../../core/auth/account-api';
@@ -15,7 +13,7 @@ import { AccountApi } from '../../../core/auth/account-api';
 /** Delete the account and all its data, on the server and on this device, after the password. */
 @Component({
   selector: 'll-delete-account',
-  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatInputModule, ExportPanel],
+  imports: [ReactiveFormsModule, MatButtonModule, ExportPanel, TextField],
   templateUrl: './delete-account.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -28,7 +26,6 @@ export class DeleteAccount {
   protected readonly form = inject(FormBuilder).nonNullable.group({ password: ['', Validators.required] });
   protected readonly confirming = signal(false);
   protected readonly submission = new FormSubmission();
-  protected readonly fieldError = fieldError;
 
   protected async deleteAccount(): Promise<void> {
     const user = this.auth.user();

@@ -1,8 +1,7 @@
 import { type ComponentFixture, TestBed } from '@angular/core/testing';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { CLOCK, fixedClock } from '../../../core/time/clock';
-import { TIME_ZONE } from '../../../core/time/time-zone';
+import { readerAt } from '../../../core/testing/reader-moment';
 import { InProgress } from './in-progress';
 import { waitFor, openTestJournal, type TestJournal } from '../../../core/testing/test-journal';
 
@@ -26,10 +25,7 @@ describe('InProgress', () => {
   const until = (check: () => unknown, what: string) => waitFor(fixture, check, what);
 
   beforeEach(async () => {
-    journal = openTestJournal([
-      { provide: TIME_ZONE, useValue: 'America/Los_Angeles' },
-      { provide: CLOCK, useValue: fixedClock(NOW) },
-    ]);
+    journal = openTestJournal(readerAt(NOW));
     store = journal.store;
   });
 
