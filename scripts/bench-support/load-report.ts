@@ -1,5 +1,6 @@
 /** What `npm run bench:load` measures and prints: per-kind rates and latencies, server CPU, RSS. */
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 
 import { quantile } from 'simple-statistics';
 
@@ -13,6 +14,8 @@ export interface Tally {
   seconds: number;
   /** CPU seconds the server processes spent during the run (user + system). */
   serverCpuSeconds: number;
+  /** CPU seconds per part of the set-up (servers, PostgreSQL, nginx, this client) during the run. */
+  cpuByPart: Record<string, number>;
 }
 
 export interface Row {
@@ -39,6 +42,7 @@ export function newTally(seconds: number): Tally {
     statuses: new Map(),
     seconds,
     serverCpuSeconds: 0,
+    cpuByPart: {},
   };
 }
 
@@ -53,6 +57,43 @@ export function cpuSeconds(pid: number | undefined): number {
   const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
   const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
   return (Number(fields[11]) + Number(fields[12])) / 100; // clock ticks; USER_HZ is 100 on Linux
+}
+
+/** Parent pid of a process (Linux /proc, field 4 of stat). */
+export function parentPid(pid: number): number {
+  const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+  return Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[1]);
+}
+
+/**
+ * CPU seconds of a process and all its descendants, live or finished (a finished child's time is
+ * in its parent's cutime/cstime once reaped): PostgreSQL's backends, nginx's worker. 0 when gone.
+ */
+export function treeCpuSeconds(root: number | undefined): number {
+  if (!root) return 0;
+  const children = new Map<number, number[]>();
+  for (const entry of readdirSync('/proc')) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const parent = parentPid(Number(entry));
+      children.set(parent, [...(children.get(parent) ?? []), Number(entry)]);
+    } catch {
+      // exited while listing
+    }
+  }
+  let total = 0;
+  const visit = (pid: number, withReaped: boolean) => {
+    try {
+      const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+      const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+      total += (Number(fields[11]) + Number(fields[12]) + (withReaped ? Number(fields[13]) + Number(fields[14]) : 0)) / 100;
+    } catch {
+      return;
+    }
+    for (const child of children.get(pid) ?? []) visit(child, withReaped);
+  };
+  visit(root, true);
+  return total;
 }
 
 export function summarise(label: string, tally: Tally): Summary {
@@ -72,17 +113,36 @@ export function summarise(label: string, tally: Tally): Summary {
   return { label, rps: total / tally.seconds, errors, cpuMsPerRequest: total ? (tally.serverCpuSeconds * 1000) / total : NaN, rows };
 }
 
-export function printSummary(summary: Summary, tally: Tally): void {
+export function printSummary(summary: Summary, tally: Tally, connections: number): void {
   const statuses = [...tally.statuses].map(([status, n]) => `${status}×${n}`).join(', ');
   console.log(
     `\n${summary.label}: ${summary.rps.toFixed(0)} requests/s, ${summary.errors} errors, server CPU ${summary.cpuMsPerRequest.toFixed(2)} ms/request (statuses: ${statuses})`,
   );
+  printCpuBudget(summary, tally, connections);
   for (const kind of KINDS) {
     const row = summary.rows[kind];
     console.log(
       `  ${kind.padEnd(11)} ${row.rps.toFixed(0).padStart(6)}/s  p50 ${row.p50.toFixed(1).padStart(7)} ms  p99 ${row.p99.toFixed(1).padStart(7)} ms  errors ${row.errors}`,
     );
   }
+}
+
+/**
+ * Where the machine's CPU goes per request, by part, and what that allows: the whole set-up
+ * shares this machine's cores, so it serves at most cores ÷ (CPU per request) requests a second,
+ * and with a fixed number of connections each waiting for its answer (a closed loop), the mean
+ * latency is at least connections ÷ that rate (Little's law), whatever the server does.
+ */
+function printCpuBudget(summary: Summary, tally: Tally, connections: number): void {
+  const total = KINDS.reduce((sum, kind) => sum + summary.rows[kind].count, 0);
+  const parts = Object.entries(tally.cpuByPart);
+  if (parts.length === 0 || total === 0) return;
+  const perRequest = parts.map(([name, seconds]) => [name, (seconds * 1000) / total] as const);
+  const sum = perRequest.reduce((acc, [, ms]) => acc + ms, 0);
+  const ceiling = (availableParallelism() * 1000) / sum;
+  console.log(
+    `  CPU per request: ${perRequest.map(([name, ms]) => `${name} ${ms.toFixed(2)}`).join(' + ')} = ${sum.toFixed(2)} ms → at most ${ceiling.toFixed(0)} requests/s on ${availableParallelism()} cores, so ${connections} connections wait at least ${((connections / ceiling) * 1000).toFixed(0)} ms per request on average (Little's law)`,
+  );
 }
 
 /** The closing table: each run side by side, the cluster's ratios to the single instance, the goals. */
