@@ -324,7 +324,7 @@ async function main(): Promise<void> {
   } finally {
     await stopChild(single.child);
   }
-  printClosing(clusterSummary, singleSummary, soak);
+  printClosing(clusterSummary, singleSummary, soak, CONNECTIONS);
   console.log(`Took ${((Date.now() - began) / 60_000).toFixed(1)} min.`);
   agent.destroy();
 }

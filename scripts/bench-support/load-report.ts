@@ -32,6 +32,8 @@ export interface Summary {
   readonly errors: number;
   /** Server CPU per request: the figure least moved by other work on a shared machine. */
   readonly cpuMsPerRequest: number;
+  /** CPU per request of every part together (servers, PostgreSQL, nginx, this client). */
+  readonly allCpuMsPerRequest: number;
   readonly rows: Record<Kind, Row>;
 }
 
@@ -110,7 +112,15 @@ export function summarise(label: string, tally: Tally): Summary {
   }
   const total = KINDS.reduce((sum, kind) => sum + rows[kind].count, 0);
   const errors = KINDS.reduce((sum, kind) => sum + rows[kind].errors, 0);
-  return { label, rps: total / tally.seconds, errors, cpuMsPerRequest: total ? (tally.serverCpuSeconds * 1000) / total : NaN, rows };
+  const allCpuSeconds = Object.values(tally.cpuByPart).reduce((sum, seconds) => sum + seconds, 0);
+  return {
+    label,
+    rps: total / tally.seconds,
+    errors,
+    cpuMsPerRequest: total ? (tally.serverCpuSeconds * 1000) / total : NaN,
+    allCpuMsPerRequest: total && allCpuSeconds ? (allCpuSeconds * 1000) / total : NaN,
+    rows,
+  };
 }
 
 export function printSummary(summary: Summary, tally: Tally, connections: number): void {
@@ -146,7 +156,7 @@ function printCpuBudget(summary: Summary, tally: Tally, connections: number): vo
 }
 
 /** The closing table: each run side by side, the cluster's ratios to the single instance, the goals. */
-export function printClosing(cluster: Summary, single: Summary, soak: readonly string[]): void {
+export function printClosing(cluster: Summary, single: Summary, soak: readonly string[], connections: number): void {
   console.log('\n== Summary ==');
   console.log(`${''.padEnd(22)}${'cluster'.padStart(24)}${'single instance'.padStart(26)}${'ratio'.padStart(16)}`);
   const line = (name: string, c: string, s: string, ratio: string) => console.log(`${name.padEnd(22)}${c.padStart(24)}${s.padStart(26)}${ratio.padStart(16)}`);
@@ -158,6 +168,16 @@ export function printClosing(cluster: Summary, single: Summary, soak: readonly s
     single.cpuMsPerRequest.toFixed(2),
     `×${(cluster.cpuMsPerRequest / single.cpuMsPerRequest).toFixed(2)}`,
   );
+  line(
+    'all CPU ms/request',
+    cluster.allCpuMsPerRequest.toFixed(2),
+    single.allCpuMsPerRequest.toFixed(2),
+    `×${(cluster.allCpuMsPerRequest / single.allCpuMsPerRequest).toFixed(2)}`,
+  );
+  // What the machine allows: cores ÷ CPU per request, and Little's law for the connections.
+  const ceiling = (summary: Summary) => (availableParallelism() * 1000) / summary.allCpuMsPerRequest;
+  line('ceiling requests/s', ceiling(cluster).toFixed(0), ceiling(single).toFixed(0), '');
+  line(`mean wait floor ms`, ((connections / ceiling(cluster)) * 1000).toFixed(0), ((connections / ceiling(single)) * 1000).toFixed(0), '');
   for (const kind of KINDS) {
     const c = cluster.rows[kind];
     const s = single.rows[kind];
@@ -166,4 +186,10 @@ export function printClosing(cluster: Summary, single: Summary, soak: readonly s
   for (const entry of soak) console.log(`soak ${entry}`);
   const within = (['empty pull', 'small push'] as Kind[]).every((kind) => cluster.rows[kind].p99 < 100);
   console.log(`Goal p99 < 100 ms for empty pulls and small pushes through the cluster: ${within ? 'met' : 'NOT met'}; errors: ${cluster.errors + single.errors}`);
+  const floor = (connections / ceiling(cluster)) * 1000;
+  if (!within && floor >= 50) {
+    console.log(
+      `  With ${connections} connections and no pause between requests, this machine's cores allow a mean wait of no less than ${floor.toFixed(0)} ms through the cluster: p99 < 100 ms needs less CPU per request, more cores or fewer connections.`,
+    );
+  }
 }
