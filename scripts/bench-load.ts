@@ -1,7 +1,8 @@
 /**
  * `npm run bench:load [-- --seconds 30 --connections 50 --readers 1000 --soak 300 --pgbouncer]`
  * (`--quick`: 10 s, 200 readers, 20 s soak; `--profile`: one instance only, with a V8 CPU profile
- * in .data/profiles; `--port-base N`: nginx on N, the instances on N+1…N+4, else free ports):
+ * in .data/profiles; `--port-base N`: nginx on N, the instances on N+1…, a single one on N+9, else free ports;
+ * `--instances N`: N instances behind nginx, 3 by default, at most 8; `--only empty|push|big`: one kind only):
  * the load budget. A bounded Node client (keep-alive, a fixed number of connections, each
  * sending one request after another) drives a realistic mix for `--seconds`:
  *   80 % pulls with nothing new (readers at the end of their data),
@@ -28,7 +29,19 @@ import { SyncStore } from '../sync-server/src/data-access/sync-store';
 import { signAccessToken } from '../sync-server/src/domain/access-tokens';
 import { startCluster, startInstance } from './ops/cluster';
 import { stopChild } from './ops/processes';
-import { cpuSeconds, newTally, printClosing, printSummary, rssMb, summarise, type Kind, type Summary, type Tally } from './bench-support/load-report';
+import {
+  cpuSeconds,
+  newTally,
+  parentPid,
+  printClosing,
+  printSummary,
+  rssMb,
+  summarise,
+  treeCpuSeconds,
+  type Kind,
+  type Summary,
+  type Tally,
+} from './bench-support/load-report';
 
 /** `--name=value` or `--name value`. */
 function flag(name: string, fallback: number): number {
@@ -45,11 +58,22 @@ const CONNECTIONS = flag('connections', 50);
 const READERS = flag('readers', QUICK ? 200 : 1000);
 const SOAK_SECONDS = flag('soak', QUICK ? 20 : 300);
 const PORT_BASE = flag('port-base', 0);
+/** Instances behind nginx (3 by default, as issue 23 asks; `--instances 1` or 2 shows what fits a small machine). */
+const INSTANCES = flag('instances', 3);
 /** `--compare PATH`: another build's sync-server/src/main.js, run against this one on a single instance in alternating rounds. */
 const COMPARE = (() => {
   const at = process.argv.findIndex((arg) => arg === '--compare' || arg.startsWith('--compare='));
   if (at < 0) return null;
   return process.argv[at]!.includes('=') ? process.argv[at]!.split('=')[1]! : process.argv[at + 1]!;
+})();
+/** `--only empty|push|big`: one kind of request only (profiling what one kind costs). */
+const ONLY = (() => {
+  const at = process.argv.findIndex((arg) => arg === '--only' || arg.startsWith('--only='));
+  if (at < 0) return null;
+  const value = process.argv[at]!.includes('=') ? process.argv[at]!.split('=')[1]! : process.argv[at + 1]!;
+  const kinds: Record<string, Kind> = { empty: 'empty pull', push: 'small push', big: 'big pull' };
+  if (!kinds[value]) throw new Error(`--only takes empty, push or big, not ${value}`);
+  return kinds[value];
 })();
 const COMPARE_ROUNDS = 4;
 const WARM_UP_SECONDS = QUICK ? 3 : 5;
@@ -105,18 +129,43 @@ function smallPush(writer: Reader): string {
 
 type Readers = { quiet: Reader[]; writers: Reader[]; heavy: Reader[] };
 
+/** PostgreSQL's postmaster (its backends are its children), when it runs on this machine; found at start. */
+let postmasterPid: number | undefined;
+/** nginx's master process (and PgBouncer, when asked for) while the cluster runs. */
+let nginxPid: number | undefined;
+let pgBouncerPid: number | undefined;
+
+/** CPU seconds so far of each part of the set-up besides the servers. */
+function otherParts(): Record<string, number> {
+  const own = process.cpuUsage();
+  return {
+    PostgreSQL: treeCpuSeconds(postmasterPid),
+    ...(nginxPid ? { nginx: treeCpuSeconds(nginxPid) } : {}),
+    ...(pgBouncerPid ? { PgBouncer: treeCpuSeconds(pgBouncerPid) } : {}),
+    'this client': (own.user + own.system) / 1e6,
+  };
+}
+
 /** Runs the mix for `seconds`; `servers` are the pids whose CPU time is counted. */
 async function drive(base: URL, readers: Readers, seconds: number, servers: (number | undefined)[], onTick?: () => void): Promise<Tally> {
   const tally = newTally(seconds);
   const cpuBefore = servers.map(cpuSeconds);
+  const othersBefore = otherParts();
   // A device syncs one request at a time: a reader already in flight is not picked again (the server
   // allows two pulls at once per reader and answers a third with 429, which no real client sends).
   const busy = new Set<Reader>();
-  const pick = (list: Reader[]) => {
-    let reader = list[Math.floor(Math.random() * list.length)]!;
-    while (busy.has(reader)) reader = list[Math.floor(Math.random() * list.length)]!;
-    busy.add(reader);
-    return reader;
+  // A few random tries find a free reader at once; when every reader of a kind is in flight
+  // (few heavy readers, many connections), the connection waits a moment.
+  const pick = async (list: Reader[]) => {
+    for (;;) {
+      for (let attempt = 0; attempt < 8; attempt++) {
+        const reader = list[Math.floor(Math.random() * list.length)]!;
+        if (!busy.has(reader)) return busy.add(reader) && reader;
+      }
+      const free = list.filter((reader) => !busy.has(reader));
+      if (free.length > 0) return busy.add(free[0]!) && free[0]!;
+      await new Promise((resolve) => setTimeout(resolve, 1));
+    }
   };
   const until = Date.now() + seconds * 1000;
   const timer = onTick ? setInterval(onTick, 10_000) : undefined;
@@ -124,19 +173,19 @@ async function drive(base: URL, readers: Readers, seconds: number, servers: (num
     Array.from({ length: CONNECTIONS }, async () => {
       while (Date.now() < until) {
         const roll = Math.random();
-        const kind: Kind = roll < 0.8 ? 'empty pull' : roll < 0.95 ? 'small push' : 'big pull';
-        const started = process.hrtime.bigint();
+        const kind: Kind = ONLY ?? (roll < 0.8 ? 'empty pull' : roll < 0.95 ? 'small push' : 'big pull');
         let status: number | string;
         let reader: Reader | undefined;
+        // Timed from the request, not from waiting for a free reader of its kind.
+        let started = process.hrtime.bigint();
         try {
+          reader = await pick(kind === 'empty pull' ? readers.quiet : kind === 'small push' ? readers.writers : readers.heavy);
+          started = process.hrtime.bigint();
           if (kind === 'empty pull') {
-            reader = pick(readers.quiet);
             status = (await send(base, 'GET', `/api/sync/pull?since=${reader.cursor}`, reader.token)).status;
           } else if (kind === 'small push') {
-            reader = pick(readers.writers);
             status = (await send(base, 'POST', '/api/sync/push', reader.token, smallPush(reader))).status;
           } else {
-            reader = pick(readers.heavy);
             status = (await send(base, 'GET', '/api/sync/pull?limit=1000', reader.token)).status;
           }
         } catch (error) {
@@ -152,12 +201,14 @@ async function drive(base: URL, readers: Readers, seconds: number, servers: (num
   );
   clearInterval(timer);
   tally.serverCpuSeconds = servers.reduce<number>((sum, pid, i) => sum + cpuSeconds(pid) - cpuBefore[i]!, 0);
+  tally.cpuByPart = { servers: tally.serverCpuSeconds };
+  for (const [part, seconds] of Object.entries(otherParts())) tally.cpuByPart[part] = seconds - (othersBefore[part] ?? seconds);
   return tally;
 }
 
 function report(label: string, tally: Tally): Summary {
   const summary = summarise(label, tally);
-  printSummary(summary, tally);
+  printSummary(summary, tally, CONNECTIONS);
   return summary;
 }
 
@@ -186,6 +237,12 @@ async function main(): Promise<void> {
   const dataSource = createDataSource(config.databaseUrl);
   await dataSource.initialize();
   await migrate(dataSource);
+  const [{ pid: backendPid }] = (await dataSource.query('SELECT pg_backend_pid() AS pid')) as [{ pid: number }];
+  try {
+    postmasterPid = parentPid(backendPid);
+  } catch {
+    // PostgreSQL runs elsewhere: its CPU is not counted.
+  }
 
   console.log(`Making ${READERS} readers (${HEAVY} with ${HEAVY_BOOKS * 5} changes each, ${WRITERS} writers, the rest with a few books)…`);
   const store = new SyncStore(dataSource);
@@ -220,18 +277,22 @@ async function main(): Promise<void> {
     await profileBaseline(env, readers);
     return;
   }
-  const ports = PORT_BASE ? { listen: `127.0.0.1:${PORT_BASE}`, instancePorts: [1, 2, 3].map((n) => PORT_BASE + n) } : {};
-  const cluster = await startCluster({ env, ...ports, ...(process.argv.includes('--pgbouncer') ? { pgBouncerPort: 0 } : {}) });
+  const ports = PORT_BASE ? { listen: `127.0.0.1:${PORT_BASE}`, instancePorts: Array.from({ length: INSTANCES }, (_, n) => PORT_BASE + 1 + n) } : {};
+  const cluster = await startCluster({ env, instances: INSTANCES, ...ports, ...(process.argv.includes('--pgbouncer') ? { pgBouncerPort: 0 } : {}) });
   let clusterSummary: Summary;
   const soak: string[] = [];
   try {
     const proxied = new URL(cluster.baseUrl);
     const pids = cluster.instances.map((instance) => instance.child.pid);
+    nginxPid = cluster.nginx.child.pid;
+    pgBouncerPid = cluster.pgBouncer?.child.pid;
     await settleCursors(proxied, readers);
+    // Each instance compiles its hot paths on its own share of the requests: warm-up per instance.
+    const warmUp = WARM_UP_SECONDS * INSTANCES;
     console.log(
-      `\nThrough nginx → 3 instances${cluster.pgBouncer ? ' → PgBouncer' : ''}: ${CONNECTIONS} connections, ${SECONDS} s (after ${WARM_UP_SECONDS} s of warm-up)`,
+      `\nThrough nginx → ${INSTANCES} instance(s)${cluster.pgBouncer ? ' → PgBouncer' : ''}: ${CONNECTIONS} connections, ${SECONDS} s (after ${warmUp} s of warm-up)`,
     );
-    await drive(proxied, readers, WARM_UP_SECONDS, pids);
+    await drive(proxied, readers, warmUp, pids);
     clusterSummary = report('cluster', await drive(proxied, readers, SECONDS, pids));
 
     if (SOAK_SECONDS > 0) {
@@ -250,9 +311,10 @@ async function main(): Promise<void> {
     }
   } finally {
     await cluster.stop();
+    nginxPid = pgBouncerPid = undefined;
   }
 
-  const single = await startInstance('single', PORT_BASE ? PORT_BASE + 4 : 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false);
+  const single = await startInstance('single', PORT_BASE ? PORT_BASE + 9 : 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false);
   const direct = new URL(`http://127.0.0.1:${single.port}`);
   console.log(`\nBaseline: one instance, no proxy, same mix`);
   let singleSummary: Summary;
@@ -262,7 +324,7 @@ async function main(): Promise<void> {
   } finally {
     await stopChild(single.child);
   }
-  printClosing(clusterSummary, singleSummary, soak);
+  printClosing(clusterSummary, singleSummary, soak, CONNECTIONS);
   console.log(`Took ${((Date.now() - began) / 60_000).toFixed(1)} min.`);
   agent.destroy();
 }
@@ -273,7 +335,7 @@ main().catch((error: unknown) => {
 });
 
 async function profileBaseline(env: Record<string, string | undefined>, readers: Readers): Promise<void> {
-  const single = await startInstance('single', PORT_BASE ? PORT_BASE + 4 : 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false, [
+  const single = await startInstance('single', PORT_BASE ? PORT_BASE + 9 : 0, { ...env, LAMPLIGHT_TRUST_PROXY: '' }, false, [
     '--cpu-prof',
     `--cpu-prof-dir=${path.resolve('.data/profiles')}`,
   ]);
@@ -301,7 +363,7 @@ async function compareBuilds(env: Record<string, string | undefined>, readers: R
     for (const build of round % 2 === 0 ? builds : [...builds].reverse()) {
       const single = await startInstance(
         'single',
-        PORT_BASE ? PORT_BASE + 4 : 0,
+        PORT_BASE ? PORT_BASE + 9 : 0,
         { ...env, LAMPLIGHT_TRUST_PROXY: '', LAMPLIGHT_BENCH_SERVER_MAIN: build.main },
         false,
       );

@@ -63,7 +63,7 @@ export function createApp({ config, dataSource, mailer, logger = createLogger(co
   const verification = new EmailVerification(dataSource, config, mailer);
   const accounts = new Accounts(dataSource, config, sessions, mailer, verification);
   const resets = new PasswordResets(dataSource, config, sessions, mailer);
-  const authenticated = requireAuth(dataSource, config.jwtSecret, config.sessionCheckMs);
+  const authenticated = requireAuth(dataSource, config.jwtSecret, config.sessionCheckMs, { namedStatements: !config.dbTransactionPooling });
 
   const app = express();
   app.disable('x-powered-by');

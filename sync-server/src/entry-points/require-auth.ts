@@ -27,11 +27,12 @@ export function callerOf(res: Response): Caller {
  * device session must still be live and the account enabled, so sign-out, a lost-tablet revoke
  * or an admin's disable takes effect at once on the instance that did it and within
  * `sessionTtlMs` on the others, rather than when the token expires. Token signatures and session
- * rows are remembered briefly (`VerifiedTokens`, `SessionChecks`): the sync hot path costs no
- * database read for the caller.
+ * rows are remembered briefly (`VerifiedTokens`, `SessionChecks`): while a reader's session is
+ * remembered, a request costs no database read for the caller, and one prepared read otherwise.
  */
-export function requireAuth(dataSource: DataSource, jwtSecret: Uint8Array, sessionTtlMs: number): RequestHandler {
+export function requireAuth(dataSource: DataSource, jwtSecret: Uint8Array, sessionTtlMs: number, options: { namedStatements?: boolean } = {}): RequestHandler {
   const tokens = new VerifiedTokens(jwtSecret);
+  const read = sessionReader(dataSource, options.namedStatements !== false);
   const sessions = new SessionChecks(sessionTtlMs);
   return async (req: Request, res: Response, next: NextFunction) => {
     const header = req.get('authorization') ?? '';
@@ -44,7 +45,7 @@ export function requireAuth(dataSource: DataSource, jwtSecret: Uint8Array, sessi
         : new AppError(401, 'invalid_token', 'The access token is not valid');
     }
     const { userId, sessionId } = verified.claims;
-    const state = sessions.get(sessionId) ?? (await readSession(dataSource, sessions, sessionId, userId));
+    const state = sessions.get(sessionId) ?? (await readSession(dataSource, read, sessions, sessionId, userId));
     if (state.userId !== userId || state.revoked) throw new AppError(401, 'session_revoked', 'This device was signed out; sign in again');
     if (state.disabled) throw new AppError(403, 'account_disabled', 'This account is disabled');
     res.locals['caller'] = { userId, sessionId, role: state.role } satisfies Caller;
@@ -52,15 +53,36 @@ export function requireAuth(dataSource: DataSource, jwtSecret: Uint8Array, sessi
   };
 }
 
+type SessionRow = { role: Role; disabled: boolean; revoked: boolean; stale: boolean };
+
+/**
+ * The session check's read, straight on the pool and prepared once per connection (unnamed behind
+ * a transaction pooler, as the sync store's reads): with many readers, each instance's short
+ * memory of sessions misses on most requests (bench:load), so this runs about as often as the pull.
+ */
+function sessionReader(dataSource: DataSource, named: boolean): (sessionId: string, userId: string) => Promise<SessionRow[]> {
+  const statement = {
+    ...(named ? { name: 'lamplight_session_check' } : {}),
+    text: `SELECT u.role, u.disabled_at IS NOT NULL AS disabled, s.revoked_at IS NOT NULL AS revoked,
+                  s.last_seen_at < now() - make_interval(secs => $3) AS stale
+             FROM device_sessions s JOIN users u ON u.id = s.user_id
+            WHERE s.id = $1 AND u.id = $2`,
+  };
+  return async (sessionId, userId) => {
+    const pool = (dataSource.driver as unknown as { master: { query(config: object): Promise<{ rows: SessionRow[] }> } }).master;
+    return (await pool.query({ ...statement, values: [sessionId, userId, LAST_SEEN_RESOLUTION_MS / 1000] })).rows;
+  };
+}
+
 /** Reads a session and its account, refreshes last-seen times when stale, and remembers the answer. */
-async function readSession(dataSource: DataSource, sessions: SessionChecks, sessionId: string, userId: string): Promise<SessionState> {
-  const rows: { role: Role; disabled: boolean; revoked: boolean; stale: boolean }[] = await dataSource.query(
-    `SELECT u.role, u.disabled_at IS NOT NULL AS disabled, s.revoked_at IS NOT NULL AS revoked,
-            s.last_seen_at < now() - make_interval(secs => $3) AS stale
-       FROM device_sessions s JOIN users u ON u.id = s.user_id
-      WHERE s.id = $1 AND u.id = $2`,
-    [sessionId, userId, LAST_SEEN_RESOLUTION_MS / 1000],
-  );
+async function readSession(
+  dataSource: DataSource,
+  read: (sessionId: string, userId: string) => Promise<SessionRow[]>,
+  sessions: SessionChecks,
+  sessionId: string,
+  userId: string,
+): Promise<SessionState> {
+  const rows = await read(sessionId, userId);
   const row = rows[0];
   const state: SessionState = row
     ? { userId, role: row.role, disabled: row.disabled, revoked: row.revoked }
