@@ -2,14 +2,13 @@ import { ChangeDetectionStrategy, Component, computed, inject, viewChild } from 
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
-import { RouterLink } from '@angular/router';
 
 import { MONTH_NAMES } from '@shared/calendar/month-names';
 
 import { CLOCK } from '../../time/clock';
 import { SyncEngine } from '../sync-engine';
+import { SyncDetails } from './sync-details';
 import { deferredMenu, type MenuTriggerLike } from '../../../ui/deferred-menu';
-import { ReaderDatePipe } from '../../../ui/reader-date';
 
 // Written out rather than with date-fns, whose format and locale (~5 KB gzip) the shell would load first.
 const twoDigits = (n: number) => String(n).padStart(2, '0');
@@ -20,7 +19,7 @@ const sameLocalDay = (a: Date, b: Date) => a.toDateString() === b.toDateString()
 /** The shell's calm line about where the reader's words are: here, waiting, syncing, synced. */
 @Component({
   selector: 'll-sync-status',
-  imports: [ReaderDatePipe, MatButtonModule, MatIconModule, MatMenu, MatMenuItem, MatMenuTrigger, RouterLink],
+  imports: [MatButtonModule, MatIconModule, MatMenu, MatMenuItem, MatMenuTrigger, SyncDetails],
   templateUrl: './sync-status.html',
   styleUrl: './sync-status.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
