@@ -9,6 +9,8 @@
  * Signed-in pages keep all storage (Lighthouse's storage reset would sign the reader out): a
  * returning reader whose installed app (service worker and its caches) is warm. Clearing only the
  * caches or the worker under Lighthouse failed its runs (an error page, or a lost trace).
+ * `LAMPLIGHT_BENCH_WHERE=1` also prints, for each run, the scripts with the most main-thread time
+ * (Lighthouse's bootup-time audit): where to look next for Total Blocking Time.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer, type AddressInfo } from 'node:net';
@@ -28,6 +30,7 @@ import { median } from './bench-support/seed-books';
 const ROUNDS = Number(process.env['LAMPLIGHT_BENCH_ROUNDS'] ?? 3);
 const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
 const CATEGORIES = ['performance', 'accessibility', 'best-practices', 'seo'] as const;
+const WHERE = process.env['LAMPLIGHT_BENCH_WHERE'] === '1';
 
 interface Run {
   scores: Record<string, number>;
@@ -35,6 +38,14 @@ interface Run {
   tbt: number;
   fcp: number;
   bytes: number;
+  /** The scripts with the most main-thread time, most first (when WHERE). */
+  where: string[];
+}
+
+interface BootupItem {
+  url: string;
+  total: number;
+  scripting: number;
 }
 
 function freePort(): Promise<number> {
@@ -60,6 +71,9 @@ async function audit(url: string, port: number, keepStorage: boolean): Promise<R
     tbt: numeric('total-blocking-time'),
     fcp: numeric('first-contentful-paint'),
     bytes: numeric('total-byte-weight'),
+    where: ((lhr.audits['bootup-time']?.details as { items?: BootupItem[] } | undefined)?.items ?? [])
+      .slice(0, 6)
+      .map((item) => `${item.url.replace(/^https?:\/\/[^/]+\//, '/')} ${Math.round(item.total)} ms (script ${Math.round(item.scripting)})`),
   };
 }
 
@@ -127,6 +141,7 @@ async function main(): Promise<void> {
           const run = await attempt(page.url, port, page.signedIn);
           if (run) runs.get(page.name)!.push(run);
           if (run) console.log(`${line(page.name, run)}   (round ${round + 1})`);
+          if (run && WHERE) for (const where of run.where) console.log(`      ${where}`);
         }
       }
     }

@@ -259,6 +259,8 @@ describe('Account, Settings and Accounts screens', () => {
 
         await signInThroughUi(readerPage, base(), reader.user.email, reader.password);
         await readerPage.getByRole('button', { name: /account menu/ }).click();
+        // The menu loads on first use: wait for it rather than look at once.
+        await readerPage.getByRole('menuitem', { name: 'Accounts (admin)' }).waitFor();
         expect(await readerPage.getByRole('menuitem', { name: 'Accounts (admin)' }).isVisible()).toBeTrue();
       } finally {
         await readerContext.close();
@@ -294,6 +296,7 @@ describe('Account, Settings and Accounts screens', () => {
       const reader = await registerThroughApi(base(), 'Piet Vantongeren');
       await signInThroughUi(page, base(), reader.user.email, reader.password);
       await page.getByRole('button', { name: /account menu/ }).click();
+      await page.getByRole('menuitem', { name: 'Sign out' }).waitFor(); // the menu is open (it loads on first use)
       expect(await page.getByRole('menuitem', { name: 'Accounts (admin)' }).count()).toBe(0);
       await page.keyboard.press('Escape');
 

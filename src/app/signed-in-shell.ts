@@ -1,8 +1,7 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject } from '@angular/core';
-import { MatSnackBar } from '@angular/material/snack-bar';
+import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject, Injector, viewChild } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
-import { MatMenuModule } from '@angular/material/menu';
+import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
 import { MatToolbarModule } from '@angular/material/toolbar';
 import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 
@@ -17,8 +16,9 @@ import { ApplyTheme } from './core/settings/apply-theme';
 import { TabCoordination } from './core/pwa/tab-coordination';
 import { SyncStatus } from './core/sync/sync-status/sync-status';
 import { SignOutFlow } from './features/account';
-import { QuoteCapture } from './features/quotes';
 import { TimerBar } from './features/timer';
+import { deferredMenu, type MenuTriggerLike } from './ui/deferred-menu';
+import { LazyOverlays } from './ui/lazy-overlays';
 
 /** A place in the app the shell links to. */
 interface Destination {
@@ -35,7 +35,19 @@ interface Destination {
  */
 @Component({
   selector: 'll-signed-in-shell',
-  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbarModule, MatIconModule, MatButtonModule, MatMenuModule, SyncStatus, TimerBar],
+  imports: [
+    RouterOutlet,
+    RouterLink,
+    RouterLinkActive,
+    MatToolbarModule,
+    MatIconModule,
+    MatButtonModule,
+    MatMenu,
+    MatMenuItem,
+    MatMenuTrigger,
+    SyncStatus,
+    TimerBar,
+  ],
   templateUrl: './signed-in-shell.html',
   styleUrl: './signed-in-shell.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -43,7 +55,7 @@ interface Destination {
 export class SignedInShell {
   private readonly auth = inject(Auth);
   private readonly signOutFlow = inject(SignOutFlow);
-  private readonly quoteCapture = inject(QuoteCapture);
+  private readonly injector = inject(Injector);
   protected readonly installPrompt = inject(InstallPrompt);
 
   protected readonly user = this.auth.user;
@@ -67,12 +79,18 @@ export class SignedInShell {
     this.askToKeepStorage();
   }
 
+  private readonly accountTrigger = viewChild<MenuTriggerLike>('accountTrigger');
+  private readonly addTrigger = viewChild<MenuTriggerLike>('addTrigger');
+  protected readonly openAccountMenu = deferredMenu(this.accountTrigger);
+  protected readonly openAddMenu = deferredMenu(this.addTrigger);
+
   protected signOut(): Promise<void> {
     return this.signOutFlow.start();
   }
 
+  /** The quotes area (its index names the book page's quote cards too) loads on first use. */
   protected captureQuote(): void {
-    void this.quoteCapture.open();
+    void import('./features/quotes').then(({ QuoteCapture }) => this.injector.get(QuoteCapture).open());
   }
 
   protected readonly install = installLamplight();
@@ -84,7 +102,7 @@ export class SignedInShell {
   private askToKeepStorage(): void {
     const journal = inject(LocalJournal);
     const storage = inject(DeviceStorage);
-    const snackBar = inject(MatSnackBar);
+    const overlays = inject(LazyOverlays);
     let destroyed = false;
     inject(DestroyRef).onDestroy(() => (destroyed = true));
     effect(() => {
@@ -97,8 +115,9 @@ export class SignedInShell {
         const message = kept
           ? 'Your browser will keep Lamplight’s storage, so your journal is not cleared to free space.'
           : 'Your browser may clear storage when space runs low. Installing Lamplight and syncing keep your journal safe.';
-        const ref = snackBar.open(message, installable ? 'Install Lamplight' : 'OK', { duration: installable ? 15000 : 8000 });
-        if (installable) ref.onAction().subscribe(() => this.install());
+        void overlays.snackBar(message, installable ? 'Install Lamplight' : 'OK', { duration: installable ? 15000 : 8000 }).then((ref) => {
+          if (installable) ref.onAction().subscribe(() => this.install());
+        });
       });
     });
   }

@@ -1,9 +1,9 @@
 import { inject } from '@angular/core';
-import { MatSnackBar } from '@angular/material/snack-bar';
 
 import type { CollectionName } from '@shared/sync/schema/collections';
 
 import { Deletions } from '../core/trash/deletions';
+import { LazyOverlays } from './lazy-overlays';
 
 /** How long "Undo" stays on offer after a delete. */
 export const UNDO_OFFER_MS = 8000;
@@ -20,12 +20,10 @@ export const UNDO_OFFER_MS = 8000;
  */
 export function undoableDelete(): (collection: CollectionName, id: string, message: string) => Promise<void> {
   const deletions = inject(Deletions);
-  const snackBar = inject(MatSnackBar);
+  const overlays = inject(LazyOverlays);
   return async (collection, id, message) => {
     await deletions.remove(collection, id);
-    snackBar
-      .open(message, 'Undo', { duration: UNDO_OFFER_MS })
-      .onAction()
-      .subscribe(() => void deletions.restore(collection, id));
+    const ref = await overlays.snackBar(message, 'Undo', { duration: UNDO_OFFER_MS });
+    ref.onAction().subscribe(() => void deletions.restore(collection, id));
   };
 }

@@ -1,9 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 
-import { InstallHelpDialog } from './install-help-dialog';
+import { LazyOverlays } from '../../ui/lazy-overlays';
 import { InstallPrompt } from './install-prompt';
 
 /**
@@ -12,9 +11,10 @@ import { InstallPrompt } from './install-prompt';
  */
 export function installLamplight(): () => void {
   const prompt = inject(InstallPrompt);
-  const dialog = inject(MatDialog);
+  const overlays = inject(LazyOverlays);
   return () => {
-    if (prompt.option() === 'ios-how-to') dialog.open(InstallHelpDialog, { width: '440px' });
+    if (prompt.option() === 'ios-how-to')
+      void import('./install-help-dialog').then(({ InstallHelpDialog }) => overlays.dialog(InstallHelpDialog, { width: '440px' }));
     else void prompt.install();
   };
 }

@@ -35,6 +35,15 @@ async function until(check: () => boolean, what: string): Promise<void> {
   throw new Error(`gave up waiting for ${what}`);
 }
 
+/** Waits one real task (a message, which the mocked clock does not hold back). */
+function afterATask(): Promise<void> {
+  return new Promise((resolve) => {
+    const channel = new MessageChannel();
+    channel.port1.onmessage = () => resolve();
+    channel.port2.postMessage(null);
+  });
+}
+
 describe('TabCoordination', () => {
   let userId: string;
   let olderTab: IDBDatabase | undefined;
@@ -71,11 +80,14 @@ describe('TabCoordination', () => {
       TestBed.tick();
       await journal.db()!.open();
       // From here the clock is ours: Angular may run the reaction on its own before the next tick.
+      await import('@angular/material/snack-bar'); // the snack bar loads on first use; have it ready before time stops
       jasmine.clock().install();
       newerTab = new Dexie(journalDbName(userId));
       newerTab.version(JOURNAL_DB_VERSION + 1).stores({ extra: 'id' });
       await newerTab.open();
       expect(journal.replacedElsewhere()).toBeTrue();
+      TestBed.tick();
+      await afterATask(); // the snack bar opens once its (already loaded) module resolves
       TestBed.tick();
     }
 

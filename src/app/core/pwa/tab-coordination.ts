@@ -1,6 +1,6 @@
 import { DestroyRef, effect, inject, Injectable } from '@angular/core';
-import { MatSnackBar } from '@angular/material/snack-bar';
 
+import { LazyOverlays } from '../../ui/lazy-overlays';
 import { LocalJournal } from '../data/local-journal';
 import { PAGE_RELOAD } from './page-reload';
 import { UnsavedWork } from './unsaved-work';
@@ -15,7 +15,7 @@ export class TabCoordination {
   constructor() {
     const journal = inject(LocalJournal);
     const unsaved = inject(UnsavedWork);
-    const snackBar = inject(MatSnackBar);
+    const overlays = inject(LazyOverlays);
     const reload = inject(PAGE_RELOAD);
     let told = false;
     let timer: ReturnType<typeof setTimeout> | undefined;
@@ -24,17 +24,16 @@ export class TabCoordination {
       if (!journal.replacedElsewhere()) return;
       if (!told) {
         told = true;
-        snackBar
-          .open('Lamplight was updated in another tab, so this tab reloads to keep up.', 'Reload now', { duration: 0 })
-          .onAction()
-          .subscribe(() => reload());
+        void overlays
+          .snackBar('Lamplight was updated in another tab, so this tab reloads to keep up.', 'Reload now', { duration: 0 })
+          .then((ref) => ref.onAction().subscribe(() => reload()));
       }
       clearTimeout(timer);
       if (!unsaved.present()) timer = setTimeout(reload, 2500);
     });
     effect(() => {
       if (journal.upgradeBlocked()) {
-        snackBar.open('Close other Lamplight tabs to finish updating this one.', undefined, { duration: 8000 });
+        void overlays.snackBar('Close other Lamplight tabs to finish updating this one.', undefined, { duration: 8000 });
       }
     });
   }

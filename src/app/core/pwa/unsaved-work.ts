@@ -1,10 +1,10 @@
 import { computed, DestroyRef, DOCUMENT, effect, inject, Injectable, InjectionToken, signal, type Signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import type { AbstractControl } from '@angular/forms';
-import { MatDialog } from '@angular/material/dialog';
 import { firstValueFrom, map, merge } from 'rxjs';
 
-import { LeaveDialog } from './leave-dialog';
+import { LazyOverlays } from '../../ui/lazy-overlays';
+import type { LeaveDialog } from './leave-dialog';
 
 /**
  * Where `beforeunload` arrives: the window. A token, so unit tests (which run inside one page, whose
@@ -24,7 +24,7 @@ export const UNLOAD_EVENTS = new InjectionToken<EventTarget | null>('beforeunloa
 @Injectable({ providedIn: 'root' })
 export class UnsavedWork {
   private readonly sources = signal<readonly Signal<boolean>[]>([]);
-  private readonly dialog = inject(MatDialog);
+  private readonly overlays = inject(LazyOverlays);
   private asking: Promise<boolean> | null = null;
 
   /** Something would be lost by a reload now. */
@@ -66,12 +66,16 @@ export class UnsavedWork {
   mayLeave(): Promise<boolean> {
     if (!this.present()) return Promise.resolve(true);
     // One question at a time: a second navigation (Back while asking) waits for the same answer.
-    this.asking ??= firstValueFrom(
-      this.dialog.open<LeaveDialog, void, boolean>(LeaveDialog, { width: '400px', maxWidth: '95vw', closeOnNavigation: false }).afterClosed(),
-    ).then((answer) => {
+    this.asking ??= this.ask().then((answer) => {
       this.asking = null;
       return answer === true;
     });
     return this.asking;
+  }
+
+  private async ask(): Promise<boolean | undefined> {
+    const { LeaveDialog } = await import('./leave-dialog');
+    const ref = await this.overlays.dialog<LeaveDialog, void, boolean>(LeaveDialog, { width: '400px', maxWidth: '95vw', closeOnNavigation: false });
+    return firstValueFrom(ref.afterClosed());
   }
 }

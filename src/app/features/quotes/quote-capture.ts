@@ -1,10 +1,10 @@
 import { inject, Injectable } from '@angular/core';
-import { MatDialog, type MatDialogRef } from '@angular/material/dialog';
-import { MatSnackBar } from '@angular/material/snack-bar';
+import type { MatDialogRef } from '@angular/material/dialog';
 import { firstValueFrom } from 'rxjs';
 
 import type { Quote } from '@shared/sync/schema/collections';
 
+import { LazyOverlays } from '../../ui/lazy-overlays';
 import type { QuoteCaptureData, QuoteCaptureDialog } from './quote-capture-dialog/quote-capture-dialog';
 
 /** Where a new quote is from, when the caller knows. */
@@ -22,8 +22,7 @@ export interface QuoteCaptureOptions {
  */
 @Injectable({ providedIn: 'root' })
 export class QuoteCapture {
-  private readonly dialog = inject(MatDialog);
-  private readonly snackBar = inject(MatSnackBar);
+  private readonly overlays = inject(LazyOverlays);
   private open$: Promise<string | undefined> | null = null;
 
   /** Opens the capture dialog; resolves with the new quote's id, or `undefined` if cancelled. */
@@ -44,7 +43,7 @@ export class QuoteCapture {
 
   private async show(data: QuoteCaptureData, savedMessage: string): Promise<string | undefined> {
     const { QuoteCaptureDialog } = await import('./quote-capture-dialog/quote-capture-dialog');
-    const ref: MatDialogRef<QuoteCaptureDialog, string> = this.dialog.open(QuoteCaptureDialog, {
+    const ref: MatDialogRef<QuoteCaptureDialog, string> = await this.overlays.dialog(QuoteCaptureDialog, {
       data,
       width: '600px',
       maxWidth: '100vw',
@@ -52,7 +51,7 @@ export class QuoteCapture {
     });
     // Cancel closes with '' (mat-dialog-close), Escape with nothing: both mean no quote.
     const id = (await firstValueFrom(ref.afterClosed())) || undefined;
-    if (id) this.snackBar.open(savedMessage, undefined, { duration: 3000 });
+    if (id) void this.overlays.snackBar(savedMessage, undefined, { duration: 3000 });
     return id;
   }
 }

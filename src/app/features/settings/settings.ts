@@ -1,4 +1,4 @@
-import { LoanSettings } from '../loans';
+import { LoanSettingsSection } from '../loans';
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
@@ -16,7 +16,7 @@ import { StoragePanel } from './storage-panel/storage-panel';
 /** The reader's account, devices and this device's storage. */
 @Component({
   selector: 'll-settings',
-  imports: [RouterLink, MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount, InstallButton, LookAndDates, StoragePanel, LoanSettings],
+  imports: [RouterLink, MatButtonModule, MatIconModule, ChangePassword, Devices, DeleteAccount, InstallButton, LookAndDates, StoragePanel, LoanSettingsSection],
   templateUrl: './settings.html',
   styleUrl: './settings.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -84,6 +84,7 @@ export class ReadingTimer {
   async start(bookId: string, options: { targetMinutes?: number | null; replace?: boolean } = {}): Promise<StartOutcome> {
     const current = await this.readActive();
     if (current && !options.replace) return { started: false, current };
+    const deviceName = await thisDeviceName();
     const now = this.clock.now();
     const writes: RowWrite[] = [];
     let stoppedSessionId: string | null = null;
@@ -96,7 +97,7 @@ export class ReadingTimer {
     const startPosition = latestSession(sessions, bookId, { having: 'toPosition' })?.toPosition ?? null;
     // Only the new run's fields: writing "idle" and then "running" under one clock would send
     // two values of one field with the same clock.
-    const patch = startTimer(now, { bookId, deviceId: deviceId(), deviceName: thisDeviceName(), targetMinutes: options.targetMinutes, startPosition });
+    const patch = startTimer(now, { bookId, deviceId: deviceId(), deviceName, targetMinutes: options.targetMinutes, startPosition });
     writes.push({ collection: 'timers', rowId: TIMER_ROW_ID, patch });
     await this.store.writeAll(writes);
     return { started: true, stoppedSessionId };

@@ -1,12 +1,11 @@
 import { inject, Injectable } from '@angular/core';
-import { MatDialog } from '@angular/material/dialog';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 
 import { JournalStore } from '../../core/data/journal-store';
 import { minutesWords } from './book-progress';
-import { ConfirmDialog, type ConfirmDialogData } from '../../ui/confirm-dialog/confirm-dialog';
+import type { ConfirmDialog, ConfirmDialogData } from '../../ui/confirm-dialog/confirm-dialog';
+import { LazyOverlays } from '../../ui/lazy-overlays';
 import { ReadingTimer } from './reading-timer';
 
 /**
@@ -18,8 +17,7 @@ import { ReadingTimer } from './reading-timer';
 export class TimerStart {
   private readonly timer = inject(ReadingTimer);
   private readonly store = inject(JournalStore);
-  private readonly dialog = inject(MatDialog);
-  private readonly snackBar = inject(MatSnackBar);
+  private readonly overlays = inject(LazyOverlays);
   private readonly router = inject(Router);
 
   /** Starts timing `bookId` (or opens its timer when it already runs); `false` when the reader said no. */
@@ -33,12 +31,13 @@ export class TimerStart {
         yes: 'Stop it and start',
         no: 'Keep the current one',
       };
-      const ref = this.dialog.open<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, { data, width: '440px' });
+      const { ConfirmDialog } = await import('../../ui/confirm-dialog/confirm-dialog');
+      const ref = await this.overlays.dialog<ConfirmDialog, ConfirmDialogData, boolean>(ConfirmDialog, { data, width: '440px' });
       if (!(await firstValueFrom(ref.afterClosed()))) return false;
       const replaced = await this.timer.start(bookId, { ...options, replace: true });
       if (replaced.started && replaced.stoppedSessionId) {
         const session = await this.store.get('sessions', replaced.stoppedSessionId);
-        this.snackBar.open(`Saved ${minutesWords(session?.activeMinutes)} of ${current}.`, 'OK', { duration: 6000 });
+        void this.overlays.snackBar(`Saved ${minutesWords(session?.activeMinutes)} of ${current}.`, 'OK', { duration: 6000 });
       }
     }
     await this.router.navigateByUrl('/timer');

@@ -1,18 +1,25 @@
-import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, viewChild } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
-import { MatMenuModule } from '@angular/material/menu';
-import { RouterLink } from '@angular/router';
-import { format, isSameDay } from 'date-fns';
+import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
+
+import { MONTH_NAMES } from '@shared/calendar/month-names';
 
 import { CLOCK } from '../../time/clock';
 import { SyncEngine } from '../sync-engine';
-import { ReaderDatePipe } from '../../../ui/reader-date';
+import { SyncDetails } from './sync-details';
+import { deferredMenu, type MenuTriggerLike } from '../../../ui/deferred-menu';
+
+// Written out rather than with date-fns, whose format and locale (~5 KB gzip) the shell would load first.
+const twoDigits = (n: number) => String(n).padStart(2, '0');
+/** 'HH:mm' in local time. */
+const hoursMinutes = (at: Date) => `${twoDigits(at.getHours())}:${twoDigits(at.getMinutes())}`;
+const sameLocalDay = (a: Date, b: Date) => a.toDateString() === b.toDateString();
 
 /** The shell's calm line about where the reader's words are: here, waiting, syncing, synced. */
 @Component({
   selector: 'll-sync-status',
-  imports: [ReaderDatePipe, MatButtonModule, MatIconModule, MatMenuModule, RouterLink],
+  imports: [MatButtonModule, MatIconModule, MatMenu, MatMenuItem, MatMenuTrigger, SyncDetails],
   templateUrl: './sync-status.html',
   styleUrl: './sync-status.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -44,11 +51,17 @@ export class SyncStatus {
         const last = this.engine.lastSyncedAt();
         if (!last) return { icon: 'save', label: 'Saved on this device' };
         // A time alone for today; with the day otherwise, so yesterday's sync does not read as today's.
-        const when = isSameDay(last, this.clock.now()) ? format(last, 'HH:mm') : format(last, 'd MMM, HH:mm');
+        const at = new Date(last);
+        const when = sameLocalDay(at, new Date(this.clock.now()))
+          ? hoursMinutes(at)
+          : `${at.getDate()} ${MONTH_NAMES[at.getMonth()].slice(0, 3)}, ${hoursMinutes(at)}`;
         return { icon: 'cloud_done', label: `Synced ${when}` };
       }
     }
   });
+
+  private readonly detailsTrigger = viewChild<MenuTriggerLike>('detailsTrigger');
+  protected readonly openDetails = deferredMenu(this.detailsTrigger);
 
   protected syncNow(): void {
     void this.engine.syncNow();

@@ -1,5 +1,4 @@
 import { inject, Injectable } from '@angular/core';
-import { MatDialog } from '@angular/material/dialog';
 import { Router } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 
@@ -7,7 +6,8 @@ import { Auth } from '../../../core/auth/auth';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
-import { SignOutDialog, type SignOutChoice, type SignOutDialogData } from './sign-out-dialog';
+import { LazyOverlays } from '../../../ui/lazy-overlays';
+import type { SignOutChoice, SignOutDialog, SignOutDialogData } from './sign-out-dialog';
 
 /**
  * Signing out: first, if the page holds unsaved changes, whether to leave them; then keep-or-erase
@@ -17,7 +17,7 @@ import { SignOutDialog, type SignOutChoice, type SignOutDialogData } from './sig
 export class SignOutFlow {
   private readonly auth = inject(Auth);
   private readonly journal = inject(LocalJournal);
-  private readonly dialog = inject(MatDialog);
+  private readonly overlays = inject(LazyOverlays);
   private readonly router = inject(Router);
   private readonly unsaved = inject(UnsavedWork);
 
@@ -27,7 +27,8 @@ export class SignOutFlow {
     // Asked before signing out, so that "Keep editing" still has a signed-in page to go on with.
     if (!(await this.unsaved.mayLeave())) return;
     const data: SignOutDialogData = { pendingChanges: await this.journal.pendingChanges() };
-    const ref = this.dialog.open<SignOutDialog, SignOutDialogData, SignOutChoice>(SignOutDialog, { data, width: '480px' });
+    const { SignOutDialog } = await import('./sign-out-dialog');
+    const ref = await this.overlays.dialog<SignOutDialog, SignOutDialogData, SignOutChoice>(SignOutDialog, { data, width: '480px' });
     const choice = await firstValueFrom(ref.afterClosed());
     if (!choice) return;
     await this.auth.signOut();

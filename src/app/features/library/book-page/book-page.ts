@@ -15,7 +15,7 @@ import { BookStatus } from '../../../core/read-model/book-status';
 import { StarRating } from '../../../ui/star-rating/star-rating';
 import { LabelChips } from '../../../ui/label-chips/label-chips';
 import { BookReading } from '../../sessions';
-import { BookLoans } from '../../loans';
+import { BookLoansSection } from '../../loans';
 import { TimerStartButton } from '../../timer';
 import { liveQueryFor } from '../../../core/data/live-query-for';
 import { Deletions } from '../../../core/trash/deletions';
@@ -39,7 +39,7 @@ import { bookDossier } from '../library-data';
     BookQuotes,
     BookNotebooks,
     BookReading,
-    BookLoans,
+    BookLoansSection,
     TimerStartButton,
     CatalogueOffer,
     OverwrittenNote,
