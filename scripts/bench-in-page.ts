@@ -24,10 +24,18 @@ export async function watchLongTasks(page: Page): Promise<void> {
   });
 }
 
-/** Runs a step, sampling the page's heap every 25 ms; returns its time, peak heap and long tasks. */
+/**
+ * Runs a step, sampling the page's heap every 25 ms; returns its time, peak heap and long tasks.
+ * With `LAMPLIGHT_BENCH_PROFILE` set, also prints the step's busiest functions (a CPU profile).
+ */
 export async function measureStep(page: Page, step: () => Promise<unknown>): Promise<StepMeasure> {
   const cdp = await page.context().newCDPSession(page);
   await cdp.send('Performance.enable');
+  const profiling = Boolean(process.env['LAMPLIGHT_BENCH_PROFILE']);
+  if (profiling) {
+    await cdp.send('Profiler.enable');
+    await cdp.send('Profiler.start');
+  }
   await page.evaluate(() => ((window as unknown as { benchLongTasks: number[] }).benchLongTasks.length = 0));
   let peak = 0;
   let sampling = true;
@@ -46,6 +54,7 @@ export async function measureStep(page: Page, step: () => Promise<unknown>): Pro
     await sampler;
   }
   const ms = performance.now() - start;
+  if (profiling) printBusiest((await cdp.send('Profiler.stop')).profile);
   await cdp.detach();
   const tasks = await page.evaluate(() => (window as unknown as { benchLongTasks: number[] }).benchLongTasks.filter((duration) => duration > 200));
   return { ms, peakHeapMb: peak / 1024 / 1024, longTasks: tasks.length, longestTaskMs: Math.max(0, ...tasks) };
@@ -55,6 +64,28 @@ export function printStep(name: string, { ms, peakHeapMb, longTasks, longestTask
   console.log(
     `  ${name.padEnd(20)} ${ms.toFixed(0).padStart(7)} ms   peak heap ${peakHeapMb.toFixed(1).padStart(6)} MB   long tasks > 200 ms: ${longTasks}${longTasks ? ` (longest ${longestTaskMs.toFixed(0)} ms)` : ''}`,
   );
+}
+
+/** The parts of a DevTools CPU profile read here (`Profiler.stop`). */
+interface CpuProfile {
+  readonly nodes: readonly {
+    readonly id: number;
+    readonly callFrame: { readonly functionName: string; readonly url: string; readonly lineNumber: number; readonly columnNumber: number };
+  }[];
+  readonly samples?: readonly number[];
+  readonly timeDeltas?: readonly number[];
+}
+
+/** The 15 functions with the most self time in a CPU profile, for finding what a long task is. */
+function printBusiest(profile: CpuProfile): void {
+  const byNode = new Map(profile.nodes.map((node) => [node.id, node.callFrame]));
+  const self = new Map<string, number>();
+  (profile.samples ?? []).forEach((id, n) => {
+    const frame = byNode.get(id)!;
+    const name = `${frame.functionName || '(anonymous)'} ${frame.url.split('/').pop()}:${frame.lineNumber}:${frame.columnNumber}`;
+    self.set(name, (self.get(name) ?? 0) + (profile.timeDeltas?.[n] ?? 0) / 1000);
+  });
+  for (const [name, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 15)) console.log(`    ${ms.toFixed(0).padStart(7)} ms  ${name}`);
 }
 
 const WORDS = ['Lantern', 'Orchard', 'River', 'Salt', 'Harbour', 'Moth', 'Copper', 'Winter', 'Glass', 'Fen', 'Heron', 'Ledger'];
