@@ -193,11 +193,12 @@ async function readRows(db: JournalDb, writes: readonly RowWrite[], guard: Guard
 /**
  * Waiting outbox changes to the rows being written, through the outbox's `rowId` index: the
  * outbox can hold tens of thousands of changes (an import offline), and reading all of it for
- * every batch made a large import quadratic.
+ * every batch made a large import quadratic. One request per row, all issued at once: `anyOf`
+ * walks a cursor, a round trip to IndexedDB per key, and a 150-row batch waited on each in turn.
  */
 async function waitingFor(db: JournalDb, writes: readonly RowWrite[]): Promise<OutboxEntry[]> {
   const rowIds = [...new Set(writes.map((write) => write.rowId))];
-  return rowIds.length === 1 ? db.outbox.where('rowId').equals(rowIds[0]!).toArray() : db.outbox.where('rowId').anyOf(rowIds).toArray();
+  return (await Promise.all(rowIds.map((rowId) => db.outbox.where('rowId').equals(rowId).toArray()))).flat();
 }
 
 /**
