@@ -76,16 +76,39 @@ interface CpuProfile {
   readonly timeDeltas?: readonly number[];
 }
 
-/** The 15 functions with the most self time in a CPU profile, for finding what a long task is. */
+/**
+ * What a step spent its main thread on: the 10 functions with the most self time over the step,
+ * then, for each of the 5 longest stretches of work without an idle sample (over 150 ms: a long
+ * task, give or take), its busiest 6.
+ */
 function printBusiest(profile: CpuProfile): void {
   const byNode = new Map(profile.nodes.map((node) => [node.id, node.callFrame]));
-  const self = new Map<string, number>();
-  (profile.samples ?? []).forEach((id, n) => {
+  const samples = (profile.samples ?? []).map((id, n) => {
     const frame = byNode.get(id)!;
-    const name = `${frame.functionName || '(anonymous)'} ${frame.url.split('/').pop()}:${frame.lineNumber}:${frame.columnNumber}`;
-    self.set(name, (self.get(name) ?? 0) + (profile.timeDeltas?.[n] ?? 0) / 1000);
+    return {
+      name: `${frame.functionName || '(anonymous)'} ${frame.url.split('/').pop()}:${frame.lineNumber}:${frame.columnNumber}`,
+      ms: (profile.timeDeltas?.[n] ?? 0) / 1000,
+    };
   });
-  for (const [name, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 15)) console.log(`    ${ms.toFixed(0).padStart(7)} ms  ${name}`);
+  const top = (some: typeof samples, count: number) => {
+    const self = new Map<string, number>();
+    for (const { name, ms } of some) self.set(name, (self.get(name) ?? 0) + ms);
+    return [...self].sort((a, b) => b[1] - a[1]).slice(0, count);
+  };
+  for (const [name, ms] of top(samples, 10)) console.log(`    ${ms.toFixed(0).padStart(7)} ms  ${name}`);
+  const stretches: (typeof samples)[] = [[]];
+  for (const sample of samples) {
+    if (sample.name.startsWith('(idle)')) stretches.push([]);
+    else stretches.at(-1)!.push(sample);
+  }
+  const timed = stretches.map((stretch) => ({ stretch, ms: stretch.reduce((sum, { ms }) => sum + ms, 0) })).filter(({ ms }) => ms > 150);
+  for (const { stretch, ms } of timed.sort((a, b) => b.ms - a.ms).slice(0, 5)) {
+    console.log(
+      `    a stretch of ${ms.toFixed(0)} ms: ${top(stretch, 6)
+        .map(([name, self]) => `${name} ${self.toFixed(0)}`)
+        .join(', ')}`,
+    );
+  }
 }
 
 const WORDS = ['Lantern', 'Orchard', 'River', 'Salt', 'Harbour', 'Moth', 'Copper', 'Winter', 'Glass', 'Fen', 'Heron', 'Ledger'];

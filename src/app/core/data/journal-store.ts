@@ -21,6 +21,9 @@ import { LocalJournal } from './local-journal';
 
 type Spec<C extends CollectionName> = (typeof COLLECTIONS)[C];
 
+/** Outbox changes issued in one task of a write's transaction (see {@link JournalStore.writeAll}). */
+const OUTBOX_ADDS_PER_TASK = 200;
+
 /** One row's fields to write, for {@link JournalStore.writeAll}. */
 export interface RowWrite {
   readonly collection: CollectionName;
@@ -130,8 +133,14 @@ export class JournalStore {
         ...[...puts].map(([collection, byId]) => db.rows(collection).bulkPut([...byId.values()])),
         db.meta.put({ key: 'clock', value: hlc }),
         db.outbox.bulkDelete(stale),
-        db.outbox.bulkAdd(entries),
+        db.outbox.bulkAdd(entries.slice(0, OUTBOX_ADDS_PER_TASK)),
       ]);
+      // A large write's further changes a slice at a time, each issued in a new task (the last
+      // slice's answer) of the same transaction: copying a thousand changes into IndexedDB at
+      // once was a long task on a busy device.
+      for (let start = OUTBOX_ADDS_PER_TASK; start < entries.length; start += OUTBOX_ADDS_PER_TASK) {
+        await db.outbox.bulkAdd(entries.slice(start, start + OUTBOX_ADDS_PER_TASK));
+      }
       return true;
     });
     if (changed) this.writes.next();
