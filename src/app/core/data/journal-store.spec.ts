@@ -62,6 +62,15 @@ describe('JournalStore (IndexedDB through Dexie)', () => {
     expect(await db().rows('books').count()).toBe(120);
   });
 
+  it('writes rows made here just now as writeAll does, without reading them first', async () => {
+    const id = crypto.randomUUID();
+
+    await store.writeNew([{ collection: 'books', rowId: id, patch: { title: 'The Heron Ledger', status: 'tbr', deleted: false } }]);
+
+    expect((await db().rows('books').get(id))?.['title']).toBe('The Heron Ledger');
+    expect((await db().outbox.toArray()).map((change) => change.field).sort()).toEqual(['deleted', 'status', 'title']);
+  });
+
   it('skips fields whose value did not change, and writes nothing at all for a no-op edit', async () => {
     const id = await store.create('books', { title: 'Small Rain', status: 'reading' });
     const before = await db().outbox.count();

@@ -134,7 +134,7 @@ export class CsvImport {
     await this.sync.holdWhile(async () => {
       for (let start = 0; start < additions.length && !this.cancelled; start += CSV_ROWS_PER_BATCH) {
         const batch = additions.slice(start, start + CSV_ROWS_PER_BATCH);
-        await this.store.writeAll(batch.flatMap((addition) => additionWrites(addition, now)));
+        await this.store.writeNew(batch.flatMap((addition) => additionWrites(addition, now)));
         done += batch.length;
         this.importing.set({ done, total: additions.length });
         await nextTask();
