@@ -47,6 +47,30 @@ describe('JournalStore (IndexedDB through Dexie)', () => {
     expect(row?._hlc['title']).toBe(outbox[0]!.hlc);
   });
 
+  it('stores every change of a large write, in the order written (its outbox changes go in slices, in one transaction)', async () => {
+    const writes = Array.from({ length: 120 }, (_, n) => ({
+      collection: 'books' as const,
+      rowId: crypto.randomUUID(),
+      patch: { title: `Lantern ${n}`, status: 'tbr' },
+    }));
+
+    await store.writeAll(writes);
+
+    const outbox = await db().outbox.toArray();
+    expect(outbox.length).toBe(240);
+    expect(outbox.filter((change) => change.field === 'title').map((change) => change.value)).toEqual(writes.map((write) => write.patch.title));
+    expect(await db().rows('books').count()).toBe(120);
+  });
+
+  it('writes rows made here just now as writeAll does, without reading them first', async () => {
+    const id = crypto.randomUUID();
+
+    await store.writeNew([{ collection: 'books', rowId: id, patch: { title: 'The Heron Ledger', status: 'tbr', deleted: false } }]);
+
+    expect((await db().rows('books').get(id))?.['title']).toBe('The Heron Ledger');
+    expect((await db().outbox.toArray()).map((change) => change.field).sort()).toEqual(['deleted', 'status', 'title']);
+  });
+
   it('skips fields whose value did not change, and writes nothing at all for a no-op edit', async () => {
     const id = await store.create('books', { title: 'Small Rain', status: 'reading' });
     const before = await db().outbox.count();

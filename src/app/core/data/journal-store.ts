@@ -21,6 +21,9 @@ import { LocalJournal } from './local-journal';
 
 type Spec<C extends CollectionName> = (typeof COLLECTIONS)[C];
 
+/** Outbox changes issued in one task of a write's transaction (see {@link JournalStore.writeAll}). */
+const OUTBOX_ADDS_PER_TASK = 200;
+
 /** One row's fields to write, for {@link JournalStore.writeAll}. */
 export interface RowWrite {
   readonly collection: CollectionName;
@@ -56,6 +59,14 @@ export class JournalStore {
   }
 
   /**
+   * {@link writeAll} for rows whose ids were just made on this device (`crypto.randomUUID()`), as
+   * an import's: none can be stored or waiting in the outbox yet, so nothing is read first.
+   */
+  async writeNew(writes: readonly RowWrite[]): Promise<void> {
+    await this.commit(writes, null, true);
+  }
+
+  /**
    * {@link writeAll}, but first reads one row in the same transaction and writes nothing when
    * `skip(row)` says so: no second transaction to read it, and no other write slipping in
    * between. Resolves with the row as it was read.
@@ -70,7 +81,7 @@ export class JournalStore {
     return before;
   }
 
-  private async commit(writes: readonly RowWrite[], guard: Guard | null): Promise<void> {
+  private async commit(writes: readonly RowWrite[], guard: Guard | null, allNew = false): Promise<void> {
     const db = this.requireDb();
     for (const { collection, patch } of writes) {
       const problems = validatePatch(COLLECTIONS[collection], patch);
@@ -84,9 +95,9 @@ export class JournalStore {
     const changed = await db.transaction('rw', [...names.map((name) => db.rows(name)), db.outbox, db.meta], async () => {
       // Every read is issued at once: the rows, the clock and its offset, the waiting changes.
       const [rows, [offsetEntry, clockEntry], waiting] = await Promise.all([
-        readRows(db, writes, guard),
+        allNew ? new Map<string, LocalRow>() : readRows(db, writes, guard),
         db.meta.bulkGet(['clockOffset', 'clock']),
-        waitingFor(db, writes),
+        allNew ? [] : waitingFor(db, writes),
       ]);
       if (guard?.skip(rows.get(rowKey(guard.collection, guard.rowId)))) return false;
       // From the server-corrected time, so a device with a wrong date still stamps sensible clocks.
@@ -130,8 +141,14 @@ export class JournalStore {
         ...[...puts].map(([collection, byId]) => db.rows(collection).bulkPut([...byId.values()])),
         db.meta.put({ key: 'clock', value: hlc }),
         db.outbox.bulkDelete(stale),
-        db.outbox.bulkAdd(entries),
+        ...(entries.length <= OUTBOX_ADDS_PER_TASK ? [db.outbox.bulkAdd(entries)] : []),
       ]);
+      // A large write's changes a slice at a time, each issued in a new task (the last request's
+      // answer) of the same transaction: copying a thousand changes into IndexedDB at once, or
+      // with the rows, was a long task on a busy device.
+      for (let start = 0; entries.length > OUTBOX_ADDS_PER_TASK && start < entries.length; start += OUTBOX_ADDS_PER_TASK) {
+        await db.outbox.bulkAdd(entries.slice(start, start + OUTBOX_ADDS_PER_TASK));
+      }
       return true;
     });
     if (changed) this.writes.next();
@@ -193,11 +210,12 @@ async function readRows(db: JournalDb, writes: readonly RowWrite[], guard: Guard
 /**
  * Waiting outbox changes to the rows being written, through the outbox's `rowId` index: the
  * outbox can hold tens of thousands of changes (an import offline), and reading all of it for
- * every batch made a large import quadratic.
+ * every batch made a large import quadratic. One request per row, all issued at once: `anyOf`
+ * walks a cursor, a round trip to IndexedDB per key, and a 150-row batch waited on each in turn.
  */
 async function waitingFor(db: JournalDb, writes: readonly RowWrite[]): Promise<OutboxEntry[]> {
   const rowIds = [...new Set(writes.map((write) => write.rowId))];
-  return rowIds.length === 1 ? db.outbox.where('rowId').equals(rowIds[0]!).toArray() : db.outbox.where('rowId').anyOf(rowIds).toArray();
+  return (await Promise.all(rowIds.map((rowId) => db.outbox.where('rowId').equals(rowId).toArray()))).flat();
 }
 
 /**

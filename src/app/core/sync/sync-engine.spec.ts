@@ -271,9 +271,17 @@ describe('SyncEngine', () => {
       clock.tick(0);
       await engine.syncNow(); // even "Sync now" waits for the import
       await expectNothingSent(backend);
+      await until(async () => (await db.outbox.count()) === 2, 'the write is in the outbox');
+      TestBed.tick();
+      expect(engine.pending()).withContext('the outbox is not re-counted per batch of an import').toBe(0);
       release();
       await held;
       clock.tick(0);
+      await until(() => {
+        TestBed.tick();
+        clock.tick(0);
+        return engine.pending() === 2;
+      }, 'the outbox counted again once the import is done');
       const push = await sent(backend, '/api/sync/push');
       expect((push.request.body as { changes: unknown[] }).changes.length).toBe(2);
       push.flush(pushed(2));

@@ -1,5 +1,5 @@
 import { HttpClient, HttpErrorResponse } from '@angular/common/http';
-import { computed, DestroyRef, effect, inject, Injectable, signal } from '@angular/core';
+import { computed, DestroyRef, effect, inject, Injectable, linkedSignal, signal } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { debounceTime, firstValueFrom } from 'rxjs';
 
@@ -12,6 +12,7 @@ import { isUnreachable } from '../http/api-error-message';
 import type { JournalDb } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
 import { liveQuerySignal } from '../data/live-query';
+import { liveQueryFor } from '../data/live-query-for';
 import { LocalJournal } from '../data/local-journal';
 import { SerialJob, withTabLock } from '../tasks/serial-job';
 import { DexieSyncPorts } from './dexie-sync-ports';
@@ -45,9 +46,19 @@ export class SyncEngine {
   private readonly job = new SerialJob(() => this.cycle());
   /** Bulk writes under way ({@link holdWhile}): no round starts until they end. */
   private holds = 0;
+  private readonly holding = signal(false);
+  /**
+   * Not re-counted while a bulk write holds sync: counting reads the whole outbox, and doing it
+   * after each of an import's batches (each waiting for the count before it) slowed the import
+   * as the outbox grew. Counted again when the hold ends.
+   */
+  private readonly counted = liveQueryFor<boolean, number | null>(this.holding, (db, holding) => (holding ? null : db.outbox.count()));
 
-  /** Changes saved here that the server has not confirmed. */
-  readonly pending = liveQuerySignal((db) => db.outbox.count(), 0);
+  /** Changes saved here that the server has not confirmed (as of the last count: see {@link counted}). */
+  readonly pending = linkedSignal<number | null | undefined, number>({
+    source: this.counted,
+    computation: (count, previous) => count ?? previous?.value ?? 0,
+  }).asReadonly();
   /** Changes the server refused for good, newest first. */
   readonly rejected = liveQuerySignal((db) => db.rejected.reverse().sortBy('rejectedAt'), []);
   /** When this device last finished a pull (in any tab). */
@@ -102,10 +113,14 @@ export class SyncEngine {
    */
   async holdWhile<T>(work: () => Promise<T>): Promise<T> {
     this.holds++;
+    this.holding.set(true);
     try {
       return await work();
     } finally {
-      if (--this.holds === 0) this.job.schedule(0);
+      if (--this.holds === 0) {
+        this.holding.set(false);
+        this.job.schedule(0);
+      }
     }
   }
 

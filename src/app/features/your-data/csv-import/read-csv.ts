@@ -19,8 +19,13 @@ export async function readCsv(file: Blob, onProgress: (fraction: number) => void
   if (file.size > MAX_IMPORT_BYTES)
     return { problem: `This file is larger than ${MAX_IMPORT_BYTES / 1024 / 1024} MB. Split it into smaller files. Nothing was changed.` };
   if (file.size === 0 || (await looksBinary(file))) return { problem: 'This file is not a CSV spreadsheet (it holds no text). Nothing was changed.' };
-  const done = await new Promise<Exclude<CsvParseMessage, { kind: 'progress' }>>((resolve) => {
-    const handle = (message: CsvParseMessage) => (message.kind === 'progress' ? onProgress(message.fraction) : resolve(message));
+  const parsed: string[][] = [];
+  const done = await new Promise<Exclude<CsvParseMessage, { kind: 'rows' }>>((resolve) => {
+    const handle = (message: CsvParseMessage) => {
+      if (message.kind !== 'rows') return resolve(message);
+      for (const row of message.rows) parsed.push(row);
+      onProgress(message.fraction);
+    };
     let worker: Worker | null = null;
     try {
       worker = new Worker(new URL('./csv-parse.worker', import.meta.url), { type: 'module' });
@@ -33,16 +38,17 @@ export async function readCsv(file: Blob, onProgress: (fraction: number) => void
     }
     worker.addEventListener('message', ({ data }: MessageEvent<CsvParseMessage>) => {
       handle(data);
-      if (data.kind !== 'progress') worker.terminate();
+      if (data.kind !== 'rows') worker.terminate();
     });
     worker.addEventListener('error', () => {
       worker.terminate();
+      parsed.length = 0; // read again from the start, here
       parseCsvFile(file, handle);
     });
     worker.postMessage({ file });
   });
   if (done.kind === 'failed') return { problem: `This file could not be read as CSV (${done.message}). Nothing was changed.` };
-  const [headers, ...rows] = done.rows;
+  const [headers, ...rows] = parsed;
   if (!headers || rows.length === 0) return { problem: 'This file has no rows under its header. Nothing was changed.' };
   return { headers: headers.map((header) => header.replace(/^\uFEFF/, '').trim()), rows };
 }
