@@ -273,13 +273,17 @@ describe('Account, Settings and Accounts screens', () => {
       await search(reader.user.email);
       const canSignIn = rowOf(reader.user.email).getByRole('switch', { name: 'Account of Casimir Llewellyn-Adeyemi can sign in' });
       expect(await canSignIn.getAttribute('aria-checked')).toBe('true');
+      const clicked = (await canSignIn.elementHandle())!;
       // The account goes away while the list is open.
       await request(base()).delete('/api/auth/account').set('Authorization', `Bearer ${reader.accessToken}`).send({ password: reader.password }).expect(204);
 
       await canSignIn.click();
 
       await page.getByRole('alert').filter({ hasText: 'No such account' }).waitFor();
-      expect(await canSignIn.getAttribute('aria-checked')).toBe('true');
+      // Read from the switch that was clicked, still in the page: on CI the role query twice lost
+      // the row just after the refusal, with no navigation and no request since (page journal);
+      // the cause is not known yet.
+      expect(await clicked.evaluate((toggle) => [toggle.isConnected, toggle.getAttribute('aria-checked')])).toEqual([true, 'true']);
     });
 
     it('lets no admin disable themselves or drop their own role', async () => {
