@@ -11,18 +11,29 @@ function SummaryReporter(baseReporterDecorator) {
   baseReporterDecorator(this);
   let passed = 0;
   let failed = 0;
+  // Named again in the overall summary, so the tail of a CI log says what failed.
+  const failures = [];
   this.onSpecComplete = (_browser, result) => {
     const outcome = result.skipped ? 'SKIPPED (counted as failed)' : result.success ? 'ok' : 'FAIL';
     if (process.env.KARMA_VERBOSE || result.skipped) this.write(`\n  ${outcome}  ${result.fullName}\n`);
     if (result.success && !result.skipped) passed++;
-    else failed++;
+    else {
+      failed++;
+      failures.push(`${result.fullName}${result.skipped ? ' (skipped)' : `: ${firstLine(result.log[0])}`}`);
+    }
   };
   this.onRunComplete = (_browsers, results) => {
     if (results.error || results.disconnected) failed = Math.max(failed, 1);
     this.write(`${passed} passed, ${failed} failed\n`);
     const file = process.env.LAMPLIGHT_RESULTS_FILE;
-    if (file) fs.writeFileSync(file, JSON.stringify({ passed, failed }));
+    if (file) fs.writeFileSync(file, JSON.stringify({ passed, failed, failures }));
   };
+}
+/** The first line of a failure's message (the stack follows it). */
+function firstLine(text) {
+  return String(text ?? '')
+    .split('\n')[0]
+    .slice(0, 300);
 }
 SummaryReporter.$inject = ['baseReporterDecorator'];
 

@@ -186,6 +186,7 @@ for (const state of states) {
   failed += counted.failed;
   const split = suite.shards?.length > 1 ? `, ${suite.shards.length} shards` : '';
   rows.push(`  ${suite.name}: ${counted.passed} passed, ${counted.failed} failed (${state.seconds.toFixed(1)} s${split})`);
+  for (const failure of state.counts.flatMap((part) => part.failures ?? [])) rows.push(`    ✗ ${failure}`);
 }
 
 console.log(`\nSummary (${((Date.now() - started) / 1000).toFixed(0)} s in all):`);
