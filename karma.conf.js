@@ -44,7 +44,8 @@ module.exports = function (config) {
     plugins: [require('karma-jasmine'), require('karma-chrome-launcher'), { 'reporter:summary': ['type', SummaryReporter] }],
     client: {
       clearContext: true,
-      jasmine: { random: true, seed: process.env.KARMA_SEED, failSpecWithNoExpectations: true },
+      // timeoutInterval: a spec may wait up to 10 s for the CPU on a busy machine (core/testing/patience.ts).
+      jasmine: { random: true, seed: process.env.KARMA_SEED, failSpecWithNoExpectations: true, timeoutInterval: 30000 },
     },
     reporters: ['dots', 'summary'],
     browsers: ['ChromiumHeadlessLocal'],

@@ -1,7 +1,9 @@
 import { HttpClient, provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting, type TestRequest } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { firstValueFrom } from 'rxjs';
+
+import { sentRequest } from '../http/testing/sent-request';
 
 import { Auth } from './auth';
 import { authInterceptor } from './auth-interceptor';
@@ -11,17 +13,8 @@ describe('authInterceptor', () => {
   let http: HttpClient;
   let backend: HttpTestingController;
 
-  const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
-
   /** The request to `url` once it has been sent (the token lookup and the Web Lock take a few turns). */
-  async function sent(url: string): Promise<TestRequest> {
-    for (let i = 0; i < 100; i++) {
-      const [found] = backend.match(url);
-      if (found) return found;
-      await turn();
-    }
-    throw new Error(`no request to ${url} was sent`);
-  }
+  const sent = (url: string) => sentRequest(backend, url);
 
   const unauthorized = { status: 401, statusText: 'Unauthorized' };
   const offline = { status: 0, statusText: '' };

@@ -94,21 +94,23 @@ describe('Covers', () => {
       const second = { blob: await drawnImage(20, 31, 'image/webp') };
       const secondId = await sha256Hex(second.blob);
       await db().covers.add({ id: secondId, blob: second.blob, mediaType: 'image/webp', state: 'pending' });
-      const [tooLarge, unsupported] = [first.id, secondId].sort(); // pending covers go in id order
+      // Each cover gets its own refusal, whichever the round sends first (a round may already
+      // have taken the first cover before the second was stored).
+      const refusals = new Map([
+        [first.id, { body: apiError('too_large', 'The image is larger than 2097152 bytes'), status: 413, statusText: 'Payload Too Large' }],
+        [secondId, { body: apiError('unsupported_type', 'Covers must be JPEG, PNG or WebP images'), status: 400, statusText: 'Bad Request' }],
+      ]);
 
       const round = covers.uploadPending();
-      (await sent('/api/uploads')).flush(apiError('too_large', 'The image is larger than 2097152 bytes'), {
-        status: 413,
-        statusText: 'Payload Too Large',
-      });
-      (await sent('/api/uploads')).flush(apiError('unsupported_type', 'Covers must be JPEG, PNG or WebP images'), {
-        status: 400,
-        statusText: 'Bad Request',
-      });
+      for (let answered = 0; answered < 2; answered++) {
+        const request = await sent('/api/uploads');
+        const refusal = refusals.get(await sha256Hex((request.request.body as FormData).get('file') as File))!;
+        request.flush(refusal.body, { status: refusal.status, statusText: refusal.statusText });
+      }
       await round;
 
-      expect(await db().covers.get(tooLarge!)).toEqual(jasmine.objectContaining({ state: 'refused', problem: 'The image is larger than 2097152 bytes' }));
-      expect(await db().covers.get(unsupported!)).toEqual(jasmine.objectContaining({ state: 'refused', problem: 'Covers must be JPEG, PNG or WebP images' }));
+      expect(await db().covers.get(first.id)).toEqual(jasmine.objectContaining({ state: 'refused', problem: 'The image is larger than 2097152 bytes' }));
+      expect(await db().covers.get(secondId)).toEqual(jasmine.objectContaining({ state: 'refused', problem: 'Covers must be JPEG, PNG or WebP images' }));
     });
 
     it('when the reader’s cover storage is full, keeps the cover on this device with the server’s plain reason', async () => {

@@ -7,6 +7,7 @@ import Dexie from 'dexie';
 import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
 import { JOURNAL_DB_VERSION, journalDbName } from '../data/journal-db';
 import { LocalJournal } from '../data/local-journal';
+import { patienceDeadline, stillPatient } from '../testing/patience';
 import { PAGE_RELOAD } from './page-reload';
 import { TabCoordination } from './tab-coordination';
 import { UnsavedWork } from './unsaved-work';
@@ -27,7 +28,7 @@ function olderTabHolding(name: string): Promise<IDBDatabase> {
 }
 
 async function until(check: () => boolean, what: string): Promise<void> {
-  for (let i = 0; i < 200; i++) {
+  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
     TestBed.tick();
     if (check()) return;
     await new Promise((resolve) => setTimeout(resolve, 10));

@@ -8,6 +8,7 @@ import { forgetSession, READER, rememberSession } from '../auth/testing/session-
 import { journalDbName, type JournalDb } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
 import { LocalJournal } from '../data/local-journal';
+import { patienceDeadline, stillPatient } from './patience';
 import { CLOCK, fixedClock } from '../time/clock';
 import { TIME_ZONE } from '../time/time-zone';
 import { BROWSER_LOCALE } from '../settings/reader-settings';
@@ -53,7 +54,7 @@ export async function setUpGoalSpec(
 
 /** Waits, a few milliseconds at a time, until `check` passes (live queries answer asynchronously). */
 export async function until(fixture: ComponentFixture<unknown>, check: () => unknown, what: string): Promise<void> {
-  for (let i = 0; i < 300; i++) {
+  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
     await fixture.whenStable();
     if (check()) return;
     await new Promise((resolve) => setTimeout(resolve, 5));

@@ -9,6 +9,7 @@ import type { JournalDb } from '../data/journal-db';
 import { journalDbName } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
 import { LocalJournal } from '../data/local-journal';
+import { PATIENCE_MS, patienceDeadline, stillPatient } from './patience';
 
 /** A signed-in reader with a fresh, real IndexedDB journal (Dexie in Chromium), for one spec. */
 export interface TestJournal {
@@ -40,22 +41,22 @@ export function openTestJournal(providers: (Provider | EnvironmentProviders)[] =
  * Waits until `check` passes, letting live queries and change detection run in between.
  * Live queries answer asynchronously, so a fixed wait would be either flaky or slow.
  */
-export async function until(check: () => boolean, fixture?: ComponentFixture<unknown>, timeoutMs = 3000): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
+export async function until(check: () => boolean, fixture?: ComponentFixture<unknown>, timeoutMs = PATIENCE_MS): Promise<void> {
+  const deadline = performance.now() + timeoutMs;
   for (;;) {
     if (fixture) await fixture.whenStable();
     if (check()) return;
-    if (Date.now() > deadline) throw new Error('timed out waiting for the condition');
+    if (!stillPatient(deadline)) throw new Error('timed out waiting for the condition');
     await new Promise((resolve) => setTimeout(resolve, 20));
   }
 }
 
 /**
  * Waits until `check` passes (it may be async), letting change detection and live queries run in
- * between; fails naming `what` after about 200 rounds.
+ * between; fails naming `what` when it has waited too long.
  */
 export async function waitFor(fixture: ComponentFixture<unknown>, check: () => unknown, what: string): Promise<void> {
-  for (let i = 0; i < 200; i++) {
+  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
     await fixture.whenStable();
     if (await check()) return;
     await new Promise((resolve) => setTimeout(resolve, 5));
@@ -68,7 +69,7 @@ export async function waitFor(fixture: ComponentFixture<unknown>, check: () => u
  * between: for what lives outside any fixture, such as a dialog. Fails naming `what`.
  */
 export async function found<T>(check: () => T | null | undefined | false, what: string): Promise<T> {
-  for (let i = 0; i < 200; i++) {
+  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
     const value = check();
     if (value) return value;
     await TestBed.inject(ApplicationRef).whenStable();

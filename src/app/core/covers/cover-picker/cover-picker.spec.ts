@@ -4,6 +4,7 @@ import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 
 import type { JournalDb } from '../../data/journal-db';
+import { patienceDeadline, stillPatient } from '../../testing/patience';
 import { sha256Hex } from '../sha256-hex';
 import { useCoverJournal } from '../testing/cover-journal';
 import { drawnImage } from '../testing/test-images';
@@ -30,7 +31,7 @@ describe('CoverPicker', () => {
   const offline = () => spyOnProperty(navigator, 'onLine').and.returnValue(false);
 
   async function until(check: () => unknown, what: string): Promise<void> {
-    for (let i = 0; i < 300; i++) {
+    for (const deadline = patienceDeadline(); stillPatient(deadline);) {
       await stable();
       if (check()) return;
       await turn();

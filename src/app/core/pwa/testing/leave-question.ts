@@ -1,5 +1,7 @@
 import { TestBed } from '@angular/core/testing';
 
+import { patienceDeadline, stillPatient } from '../../testing/patience';
+
 /** The open "Leave without saving?" dialog, if any. */
 export const leaveQuestion = (): Element | null => document.querySelector('ll-leave-dialog');
 
@@ -12,7 +14,7 @@ export const leaveAnswer = (text: 'Leave' | 'Keep editing'): HTMLButtonElement =
  * waiting on the question is a pending task, so the app never settles while it asks.
  */
 export async function untilTicked(check: () => boolean, what: string): Promise<void> {
-  for (let i = 0; i < 300; i++) {
+  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
     TestBed.tick();
     if (check()) return;
     await new Promise((resolve) => setTimeout(resolve, 10));

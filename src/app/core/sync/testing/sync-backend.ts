@@ -2,6 +2,8 @@ import type { HttpTestingController, TestRequest } from '@angular/common/http/te
 
 import type { PullResponse } from '@shared/api/sync';
 
+import { patienceDeadline, stillPatient } from '../../testing/patience';
+
 /** The browser's own timer, kept before any spec installs jasmine.clock, so waits stay real. */
 const realSetTimeout = globalThis.setTimeout.bind(globalThis);
 
@@ -10,7 +12,7 @@ export const turn = (ms = 5) => new Promise<void>((resolve) => realSetTimeout(re
 
 /** Resolves once `check` holds; fails the spec with `what` (said when it gives up) if it never does. */
 export async function until(check: () => boolean | Promise<boolean>, what: string | (() => string)): Promise<void> {
-  for (let i = 0; i < 400; i++) {
+  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
     if (await check()) return;
     await turn();
   }
@@ -19,7 +21,7 @@ export async function until(check: () => boolean | Promise<boolean>, what: strin
 
 /** The request to `url` once it has been sent (Dexie reads, the tab lock and the token take a few turns). */
 export async function sent(backend: HttpTestingController, url: string): Promise<TestRequest> {
-  for (let i = 0; i < 400; i++) {
+  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
     const [found] = backend.match((request) => request.url === url);
     if (found) return found;
     await turn();
