@@ -1,7 +1,7 @@
 import { Component } from '@angular/core';
-import { TestBed } from '@angular/core/testing';
 import { FormControl } from '@angular/forms';
 
+import { renderHost } from '../testing/render-host';
 import { RowChoiceField } from './row-choice-field';
 
 @Component({
@@ -24,24 +24,18 @@ class Host {
 
 describe('RowChoiceField', () => {
   it("offers `none` first, then each row by its title or `text`, and reads and writes the row's id", async () => {
-    const fixture = TestBed.createComponent(Host);
-    await fixture.whenStable();
-    const element: HTMLElement = fixture.nativeElement;
-    const book = element.querySelector<HTMLSelectElement>('.book select')!;
-    const quote = element.querySelector<HTMLSelectElement>('.quote select')!;
-    expect(element.querySelector('.book mat-label')?.textContent?.trim()).toBe('Which book');
-    expect(element.querySelector('.book mat-hint')?.textContent?.trim()).toBe('Optional');
-    expect(element.querySelector('.quote mat-hint')).toBeNull();
-    expect([...book.options].map((option) => [option.value, option.textContent?.trim()])).toEqual([
-      ['', 'Choose a book'],
-      ['b1', 'The Salt Roads'],
-      ['b2', ''],
-    ]);
-    expect(book.value).toBe('b2');
-    expect([...quote.options].map((option) => option.textContent?.trim())).toEqual(['Choose a quote', 'Lanterns']);
+    const host = await renderHost(Host);
+    expect(host.text('.book mat-label')).toBe('Which book');
+    expect(host.text('.book mat-hint')).toBe('Optional');
+    expect(host.text('.quote mat-hint')).toBeUndefined();
+    expect(host.optionTexts('.book select')).toEqual(['Choose a book', 'The Salt Roads', '']);
+    expect([...host.find<HTMLSelectElement>('.book select').options].map((option) => option.value)).toEqual(['', 'b1', 'b2']);
+    expect(host.find<HTMLSelectElement>('.book select').value).toBe('b2');
+    expect(host.optionTexts('.quote select')).toEqual(['Choose a quote', 'Lanterns']);
 
+    const quote = host.find<HTMLSelectElement>('.quote select');
     quote.value = 'q1';
     quote.dispatchEvent(new Event('change'));
-    expect(fixture.componentInstance.quote.value).toBe('q1');
+    expect(host.fixture.componentInstance.quote.value).toBe('q1');
   });
 });
