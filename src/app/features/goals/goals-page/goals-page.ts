@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -24,6 +24,7 @@ import { OneAtATime } from '../../../core/tasks/one-at-a-time';
 import { targetsByUnit } from '../targets-form';
 import { planTargets } from '../plan-targets';
 import { TargetFields } from '../target-fields/target-fields';
+import { AddLine } from '../../../ui/add-line/add-line';
 import { ReaderDatePipe } from '../../../ui/reader-date';
 import { PaceBar } from '../pace-bar/pace-bar';
 
@@ -39,6 +40,7 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 10_000, pages: 
 @Component({
   selector: 'll-goals-page',
   imports: [
+    AddLine,
     ReaderDatePipe,
     ReactiveFormsModule,
     RouterLink,
@@ -138,7 +140,6 @@ export class GoalsPage {
     write: (targets) => this.writePlan(targets),
     refilled: () => this.editingTargets.set(false),
   });
-  protected readonly newGoalForm = inject(FormBuilder).nonNullable.group({ text: '' });
 
   protected async saveTargets(): Promise<void> {
     if (await this.targetsEditor.save()) this.editingTargets.set(false);
@@ -153,10 +154,7 @@ export class GoalsPage {
     return this.writePlan({ bestBookId: bookId || null });
   }
 
-  protected async addGoal(): Promise<void> {
-    const text = this.newGoalForm.controls.text.value.trim().slice(0, 300);
-    if (!text) return;
-    this.newGoalForm.reset();
+  protected async addGoal(text: string): Promise<void> {
     await this.updateGoals((goals) => [...goals, { id: crypto.randomUUID(), text, done: false }]);
   }
 
