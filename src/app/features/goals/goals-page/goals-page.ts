@@ -26,6 +26,7 @@ import { planTargets } from '../plan-targets';
 import { TargetFields } from '../target-fields/target-fields';
 import { AddLine } from '../../../ui/add-line/add-line';
 import { ReaderDatePipe } from '../../../ui/reader-date';
+import { YearNav } from '../../../ui/year-nav/year-nav';
 import { PaceBar } from '../pace-bar/pace-bar';
 
 type OtherGoal = NonNullable<YearPlan['otherGoals']>[number];
@@ -52,6 +53,7 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 10_000, pages: 
     MatProgressBarModule,
     PaceBar,
     TargetFields,
+    YearNav,
   ],
   templateUrl: './goals-page.html',
   styleUrl: './goals-page.scss',
