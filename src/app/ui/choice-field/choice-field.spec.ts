@@ -1,7 +1,7 @@
 import { Component } from '@angular/core';
-import { TestBed } from '@angular/core/testing';
 import { FormControl } from '@angular/forms';
 
+import { renderHost } from '../testing/render-host';
 import { ChoiceField, RATING_CHOICES, RATING_WORDS } from './choice-field';
 
 @Component({
@@ -20,13 +20,9 @@ class Host {
 
 describe('ChoiceField', () => {
   it('offers the empty choice first when asked, words for each choice, and reads and writes its control', async () => {
-    const fixture = TestBed.createComponent(Host);
-    await fixture.whenStable();
-    const element: HTMLElement = fixture.nativeElement;
-    const rating = element.querySelector<HTMLSelectElement>('.rating select')!;
-    const colour = element.querySelector<HTMLSelectElement>('.colour select')!;
-    expect(element.querySelector('.rating mat-label')?.textContent?.trim()).toBe('Rating of the series');
-    expect([...rating.options].map((option) => option.textContent?.trim())).toEqual([
+    const host = await renderHost(Host);
+    expect(host.text('.rating mat-label')).toBe('Rating of the series');
+    expect(host.optionTexts('.rating select')).toEqual([
       'No rating',
       '0.5 stars',
       '1 star',
@@ -39,12 +35,13 @@ describe('ChoiceField', () => {
       '4.5 stars',
       '5 stars',
     ]);
+    const rating = host.find<HTMLSelectElement>('.rating select');
     expect(rating.value).toBe('3.5');
     // No empty option unless asked; a choice without words shows as it is.
-    expect([...colour.options].map((option) => option.textContent?.trim())).toEqual(['Moss', 'slate']);
+    expect(host.optionTexts('.colour select')).toEqual(['Moss', 'slate']);
 
     rating.value = '';
     rating.dispatchEvent(new Event('change'));
-    expect(fixture.componentInstance.rating.value).toBe('');
+    expect(host.fixture.componentInstance.rating.value).toBe('');
   });
 });

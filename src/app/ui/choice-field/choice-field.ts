@@ -13,7 +13,8 @@ export const RATING_WORDS: Readonly<Record<string, string>> = Object.fromEntries
 
 /**
  * One choice from a short fixed list, as a native select in an outlined field (native, so a phone
- * shows its own picker). `none` adds a first option with the empty value for "not chosen".
+ * shows its own picker). `none` adds a first option with the empty value for "not chosen"; `hint`
+ * shows under the field.
  */
 @Component({
   selector: 'll-choice-field',
@@ -29,6 +30,9 @@ export const RATING_WORDS: Readonly<Record<string, string>> = Object.fromEntries
           <option [value]="choice">{{ words()[choice] ?? choice }}</option>
         }
       </select>
+      @if (hint()) {
+        <mat-hint>{{ hint() }}</mat-hint>
+      }
     </mat-form-field>
   `,
   styleUrl: '../field-host.scss',
@@ -42,5 +46,6 @@ export class ChoiceField<T extends string> {
   readonly words = input<Readonly<Partial<Record<T, string>>>>({} as Partial<Record<T, string>>);
   /** The words of the empty first option, if there is one. */
   readonly none = input<string>();
+  readonly hint = input<string>();
   readonly subscriptSizing = input<SubscriptSizing>('fixed');
 }

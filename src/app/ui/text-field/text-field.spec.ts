@@ -1,7 +1,7 @@
 import { Component } from '@angular/core';
-import { TestBed } from '@angular/core/testing';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 
+import { renderHost } from '../testing/render-host';
 import { TextField } from './text-field';
 
 @Component({
@@ -23,32 +23,28 @@ class Host {
 
 describe('TextField', () => {
   it('labels its input, writes what is typed to the control and keeps autocomplete off unless asked', async () => {
-    const fixture = TestBed.createComponent(Host);
-    await fixture.whenStable();
-    const element: HTMLElement = fixture.nativeElement;
-    const name = element.querySelector<HTMLInputElement>('.name input')!;
-    const email = element.querySelector<HTMLInputElement>('.email input')!;
-    expect(element.querySelector('.name mat-label')?.textContent?.trim()).toBe('Series name');
-    expect(element.querySelector('.name mat-hint')?.textContent?.trim()).toBe('As on the cover');
-    expect(element.querySelector('.email mat-hint')).toBeNull();
+    const host = await renderHost(Host);
+    const name = host.find<HTMLInputElement>('.name input');
+    const email = host.find<HTMLInputElement>('.email input');
+    expect(host.text('.name mat-label')).toBe('Series name');
+    expect(host.text('.name mat-hint')).toBe('As on the cover');
+    expect(host.text('.email mat-hint')).toBeUndefined();
     expect(name.getAttribute('autocomplete')).toBe('off');
     expect(name.type).toBe('text');
     expect([email.type, email.getAttribute('autocomplete'), email.getAttribute('inputmode')]).toEqual(['email', 'email', 'email']);
 
     name.value = 'The Lantern Years';
     name.dispatchEvent(new Event('input'));
-    expect(fixture.componentInstance.form.controls.name.value).toBe('The Lantern Years');
+    expect(host.fixture.componentInstance.form.controls.name.value).toBe('The Lantern Years');
   });
 
   it('shows the first error in the reader’s words once its form is submitted', async () => {
-    const fixture = TestBed.createComponent(Host);
-    await fixture.whenStable();
-    const element: HTMLElement = fixture.nativeElement;
-    expect(element.querySelector('mat-error')).toBeNull();
+    const host = await renderHost(Host);
+    expect(host.text('mat-error')).toBeUndefined();
 
-    element.querySelector<HTMLButtonElement>('button')!.click();
-    await fixture.whenStable();
-    expect(element.querySelector('.name mat-error')?.textContent?.trim()).toBe('Name is required');
-    expect(element.querySelector('.email mat-error')).toBeNull();
+    host.find<HTMLButtonElement>('button').click();
+    await host.fixture.whenStable();
+    expect(host.text('.name mat-error')).toBe('Name is required');
+    expect(host.text('.email mat-error')).toBeUndefined();
   });
 });

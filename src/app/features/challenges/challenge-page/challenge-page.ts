@@ -1,9 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
-import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 
@@ -16,6 +14,7 @@ import type { Challenge } from '@shared/sync/schema/collections';
 import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { notBlank } from '../../../ui/field-errors';
+import { AddLine } from '../../../ui/add-line/add-line';
 import { TextField } from '../../../ui/text-field/text-field';
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { OneAtATime } from '../../../core/tasks/one-at-a-time';
@@ -38,18 +37,7 @@ const SUGGESTIONS_PER_LETTER = 3;
 /** One challenge: its progress, the books that counted, and the view its kind calls for. */
 @Component({
   selector: 'll-challenge-page',
-  imports: [
-    ReaderDatePipe,
-    ReactiveFormsModule,
-    RouterLink,
-    MatButtonModule,
-    MatFormFieldModule,
-    MatIconModule,
-    MatInputModule,
-    MatProgressBarModule,
-    ChallengeCelebration,
-    TextField,
-  ],
+  imports: [AddLine, ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, ChallengeCelebration, TextField],
   templateUrl: './challenge-page.html',
   styleUrl: './challenge-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -133,7 +121,6 @@ export class ChallengePage {
   });
   /** Every book of the library, by title, to answer a prompt with. */
   protected readonly libraryBooks = computed(() => [...(this.record.rows()?.books ?? [])].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')));
-  protected readonly newPromptForm = inject(FormBuilder).nonNullable.group({ text: '' });
   protected readonly renaming = signal(false);
   protected readonly renameForm = inject(FormBuilder).nonNullable.group({
     name: ['', [Validators.required, notBlank, Validators.maxLength(200)]],
@@ -176,10 +163,7 @@ export class ChallengePage {
     return this.updatePrompts((prompts) => prompts.map((prompt) => (prompt.id === promptId ? { ...prompt, bookId: bookId || null } : prompt)));
   }
 
-  protected async addPrompt(): Promise<void> {
-    const text = this.newPromptForm.controls.text.value.trim().slice(0, 300);
-    if (!text) return;
-    this.newPromptForm.reset();
+  protected async addPrompt(text: string): Promise<void> {
     await this.updatePrompts((prompts) => [...prompts, { id: crypto.randomUUID(), text, bookId: null }]);
   }
 

@@ -16,6 +16,7 @@ import { liveQueryFor } from '../../../core/data/live-query-for';
 import { fieldError, notBlank } from '../../../ui/field-errors';
 import { CircleStore } from '../data/circle-store';
 import { CircleSync } from '../data/circle-sync';
+import { PostForm } from './post-form';
 import { PostTextPipe } from './post-text';
 import { authorName, loadCircleView, type CircleView } from '../data/circle-view';
 
@@ -33,7 +34,7 @@ type Post = CirclePost & { readonly _author?: string };
 /** One part's discussion (or the general one): posts, replies and reactions, behind the spoiler shield. */
 @Component({
   selector: 'll-part-discussion',
-  imports: [NgTemplateOutlet, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PostTextPipe],
+  imports: [NgTemplateOutlet, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PostForm, PostTextPipe],
   templateUrl: './part-discussion.html',
   styleUrl: './part-discussion.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

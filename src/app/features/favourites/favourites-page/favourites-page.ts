@@ -11,6 +11,7 @@ import { FAVOURITE_KINDS, type Favourite, type MonthPick } from '@shared/sync/sc
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { fieldError } from '../../../ui/field-errors';
+import { RowChoiceField } from '../../../ui/row-choice-field/row-choice-field';
 import { TextField } from '../../../ui/text-field/text-field';
 import { undoableDelete } from '../../../ui/undoable-delete';
 import { readerToday } from '../../../core/time/reader-today';
@@ -23,7 +24,7 @@ const KIND_LABELS: Record<(typeof FAVOURITE_KINDS)[number], string> = { book: 'B
 /** Favourite books, authors and quotes, each with why; and a pick for each month of the year. */
 @Component({
   selector: 'll-favourites-page',
-  imports: [ChoiceField, ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, TextField],
+  imports: [ChoiceField, ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, RowChoiceField, TextField],
   templateUrl: './favourites-page.html',
   styleUrl: './favourites-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -34,6 +35,8 @@ export class FavouritesPage {
   private readonly data = liveQuerySignal(favouritesAndSubjects, NO_FAVOURITES);
   protected readonly books = computed(() => [...this.data().books].sort((a, b) => (a.title ?? '').localeCompare(b.title ?? '')));
   protected readonly quotes = computed(() => this.data().quotes);
+  /** A quote as the quote choice reads: its first 60 characters. */
+  protected readonly quoteStart = (quote: { readonly text?: string | null }) => (quote.text ?? '').slice(0, 60);
   private readonly bookById = computed(() => new Map(this.data().books.map((b) => [b.id, b])));
   private readonly quoteById = computed(() => new Map(this.data().quotes.map((q) => [q.id, q])));
   protected readonly favourites = computed(() => this.data().favourites.map((favourite) => ({ favourite, subject: this.subject(favourite) })));

@@ -1,5 +1,5 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -17,14 +17,16 @@ import { deterministicId } from '@shared/sync/deterministic-id';
 import type { YearPlan } from '@shared/sync/schema/collections';
 
 import { JournalStore } from '../../../core/data/journal-store';
-import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { KIND_LABELS, progressLine, progressPercent } from '../../../ui/challenge-labels';
 import { goalAmount, goalFigure, signedFigure, UNIT_LABELS } from '../../../ui/goal-figures';
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { OneAtATime } from '../../../core/tasks/one-at-a-time';
-import { changedTargets, targetsByUnit, targetsForm, targetTexts, type TargetTexts } from '../targets-form';
+import { targetsByUnit } from '../targets-form';
+import { planTargets } from '../plan-targets';
 import { TargetFields } from '../target-fields/target-fields';
+import { AddLine } from '../../../ui/add-line/add-line';
 import { ReaderDatePipe } from '../../../ui/reader-date';
+import { YearNav } from '../../../ui/year-nav/year-nav';
 import { PaceBar } from '../pace-bar/pace-bar';
 
 type OtherGoal = NonNullable<YearPlan['otherGoals']>[number];
@@ -39,6 +41,7 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 10_000, pages: 
 @Component({
   selector: 'll-goals-page',
   imports: [
+    AddLine,
     ReaderDatePipe,
     ReactiveFormsModule,
     RouterLink,
@@ -50,6 +53,7 @@ const MAX_TARGETS: Readonly<Record<GoalUnit, number>> = { books: 10_000, pages: 
     MatProgressBarModule,
     PaceBar,
     TargetFields,
+    YearNav,
   ],
   templateUrl: './goals-page.html',
   styleUrl: './goals-page.scss',
@@ -130,43 +134,21 @@ export class GoalsPage {
   protected readonly signedFigure = signedFigure;
 
   protected readonly editingTargets = signal(false);
-  protected readonly targetsSaved = signal(false);
   protected readonly notesSaved = signal(false);
-  protected readonly targetsForm = targetsForm(MAX_TARGETS);
-  private original: TargetTexts = this.targetsForm.getRawValue();
-  protected readonly newGoalForm = inject(FormBuilder).nonNullable.group({ text: '' });
-
-  constructor() {
-    inject(UnsavedWork).trackForm(this.targetsForm);
-    // Follow the stored targets (another device's edit) unless the reader is typing; a new year
-    // starts afresh.
-    let filledYear: number | null = null;
-    effect(() => {
-      const texts = targetTexts(this.plan());
-      const year = this.shownYear();
-      if (this.targetsForm.dirty && year === filledYear) return;
-      filledYear = year;
-      this.original = texts;
-      this.targetsForm.reset(texts);
-      this.editingTargets.set(false);
-      this.targetsSaved.set(false);
-    });
-  }
+  protected readonly targetsEditor = planTargets({
+    max: MAX_TARGETS,
+    plan: this.plan,
+    key: this.shownYear,
+    write: (targets) => this.writePlan(targets),
+    refilled: () => this.editingTargets.set(false),
+  });
 
   protected async saveTargets(): Promise<void> {
-    this.targetsForm.markAllAsTouched();
-    const year = this.shownYear();
-    if (this.targetsForm.invalid || year === null) return;
-    const after = this.targetsForm.getRawValue();
-    await this.writePlan(changedTargets(this.original, after));
-    this.original = after;
-    this.targetsForm.markAsPristine();
-    this.targetsSaved.set(true);
-    this.editingTargets.set(false);
+    if (await this.targetsEditor.save()) this.editingTargets.set(false);
   }
 
   protected cancelTargets(): void {
-    this.targetsForm.reset(this.original);
+    this.targetsEditor.cancel();
     this.editingTargets.set(false);
   }
 
@@ -174,10 +156,7 @@ export class GoalsPage {
     return this.writePlan({ bestBookId: bookId || null });
   }
 
-  protected async addGoal(): Promise<void> {
-    const text = this.newGoalForm.controls.text.value.trim().slice(0, 300);
-    if (!text) return;
-    this.newGoalForm.reset();
+  protected async addGoal(text: string): Promise<void> {
     await this.updateGoals((goals) => [...goals, { id: crypto.randomUUID(), text, done: false }]);
   }
 

@@ -18,12 +18,12 @@ import type { MonthPlan } from '@shared/sync/schema/collections';
 import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { TIME_ZONE } from '../../../core/time/time-zone';
-import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { goalAmount, goalFigure, UNIT_LABELS } from '../../../ui/goal-figures';
 import { goalRecord } from '../../../core/read-model/goal-rows';
 import { MonthHeatmap } from '../month-heatmap/month-heatmap';
 import { PaceBar } from '../pace-bar/pace-bar';
-import { changedTargets, targetsByUnit, targetsForm, targetTexts, type TargetTexts } from '../targets-form';
+import { targetsByUnit } from '../targets-form';
+import { planTargets } from '../plan-targets';
 import { TargetFields } from '../target-fields/target-fields';
 import { ReaderDatePipe } from '../../../ui/reader-date';
 import { ReaderSettings } from '../../../core/settings/reader-settings';
@@ -130,39 +130,16 @@ export class MonthPage {
   protected readonly goalFigure = goalFigure;
   protected readonly log = this.record.log;
 
-  protected readonly targetsSaved = signal(false);
   protected readonly reflectionSaved = signal(false);
-  protected readonly targetsForm = targetsForm(MAX_TARGETS);
-  private original: TargetTexts = this.targetsForm.getRawValue();
+  protected readonly targetsEditor = planTargets({ max: MAX_TARGETS, plan: this.plan, key: this.key, write: (targets) => this.writePlan(targets) });
 
   constructor() {
-    inject(UnsavedWork).trackForm(this.targetsForm);
-    let filledFor: string | null = null;
-    effect(() => {
-      const texts = targetTexts(this.plan());
-      const key = this.key();
-      if (this.targetsForm.dirty && key === filledFor) return;
-      filledFor = key;
-      this.original = texts;
-      this.targetsForm.reset(texts);
-      this.targetsSaved.set(false);
-    });
     const title = inject(Title);
     const dates = inject(ReaderSettings);
     effect(() => {
       const key = this.key();
       if (key) title.setTitle(`${dates.format(key, 'month')} · Lamplight`);
     });
-  }
-
-  protected async saveTargets(): Promise<void> {
-    this.targetsForm.markAllAsTouched();
-    if (this.targetsForm.invalid || !this.key()) return;
-    const after = this.targetsForm.getRawValue();
-    await this.writePlan(changedTargets(this.original, after));
-    this.original = after;
-    this.targetsForm.markAsPristine();
-    this.targetsSaved.set(true);
   }
 
   protected choose(field: 'favouriteBookId', bookId: string): Promise<void> {

@@ -18,6 +18,7 @@ import { InsightsChart } from '../insights-chart/insights-chart';
 import { formatsChart, monthlyChart, paceChart, ratingsChart, termsChart } from '../insights-figures';
 import { insightsYear } from '../insights-year';
 import { YearHeatmap } from '../year-heatmap/year-heatmap';
+import { YearNav } from '../../../ui/year-nav/year-nav';
 
 /** How many genres and tags the charts name; the rest are counted in the summary. */
 const TOP_TERMS = 8;
@@ -28,7 +29,7 @@ const TOP_TERMS = 8;
  */
 @Component({
   selector: 'll-insights-page',
-  imports: [RouterLink, MatButtonModule, MatButtonToggleModule, MatIconModule, InsightsChart, YearHeatmap],
+  imports: [RouterLink, MatButtonModule, MatButtonToggleModule, MatIconModule, InsightsChart, YearHeatmap, YearNav],
   templateUrl: './insights-page.html',
   styleUrl: './insights-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

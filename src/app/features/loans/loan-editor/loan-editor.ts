@@ -12,29 +12,22 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { fieldError } from '../../../ui/field-errors';
 
 /** Each field's label, by the kind of loan where it reads differently. */
+const LABELS: Readonly<Record<LoanEditField, string | ((kind: Loan['kind']) => string)>> = {
+  libraryId: 'Library',
+  friendName: (kind) => (kind === 'lentOut' ? 'Lent to' : 'Borrowed from'),
+  startedOn: (kind) => (kind === 'hold' ? 'Placed on' : kind === 'lentOut' ? 'Lent on' : 'Borrowed on'),
+  dueOn: (kind) => (kind === 'library' ? 'Due on' : 'Expected back'),
+  renewalsUsed: 'Renewals used',
+  renewalsAllowed: 'Renewals allowed',
+  returnedOn: (kind) => (kind === 'lentOut' ? 'Back home on' : 'Returned on'),
+  queuePosition: 'Place in the queue',
+  readyOn: 'Ready on',
+  pickUpBy: 'Pick up by',
+};
+
 function labelOf(field: LoanEditField, kind: Loan['kind']): string {
-  switch (field) {
-    case 'libraryId':
-      return 'Library';
-    case 'friendName':
-      return kind === 'lentOut' ? 'Lent to' : 'Borrowed from';
-    case 'startedOn':
-      return kind === 'hold' ? 'Placed on' : kind === 'lentOut' ? 'Lent on' : 'Borrowed on';
-    case 'dueOn':
-      return kind === 'library' ? 'Due on' : 'Expected back';
-    case 'renewalsUsed':
-      return 'Renewals used';
-    case 'renewalsAllowed':
-      return 'Renewals allowed';
-    case 'returnedOn':
-      return kind === 'lentOut' ? 'Back home on' : 'Returned on';
-    case 'queuePosition':
-      return 'Place in the queue';
-    case 'readyOn':
-      return 'Ready on';
-    case 'pickUpBy':
-      return 'Pick up by';
-  }
+  const label = LABELS[field];
+  return typeof label === 'string' ? label : label(kind);
 }
 
 const DATES: readonly LoanEditField[] = ['startedOn', 'dueOn', 'returnedOn', 'readyOn', 'pickUpBy'];

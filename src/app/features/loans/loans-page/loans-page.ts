@@ -11,6 +11,7 @@ import { LOAN_KINDS } from '@shared/sync/schema/collections';
 import { JournalStore } from '../../../core/data/journal-store';
 import { readerToday } from '../../../core/time/reader-today';
 import { fieldError } from '../../../ui/field-errors';
+import { RowChoiceField } from '../../../ui/row-choice-field/row-choice-field';
 import { TextField } from '../../../ui/text-field/text-field';
 import { LoanItem } from '../loan-item/loan-item';
 import { loansData } from '../loans-data';
@@ -27,7 +28,7 @@ const DATE = /^\d{4}-\d{2}-\d{2}$/;
 /** Every loan, hold and lending, what needs doing soonest first; a form to add one; the reader's libraries. */
 @Component({
   selector: 'll-loans-page',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, LoanItem, TextField],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, LoanItem, RowChoiceField, TextField],
   templateUrl: './loans-page.html',
   styleUrl: './loans-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

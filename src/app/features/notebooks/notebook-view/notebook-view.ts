@@ -15,6 +15,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { LEAVE_WITHOUT_ASKING } from '../../../core/pwa/unsaved-work-guard';
 import { notBlank, showServerErrors } from '../../../ui/field-errors';
+import { RowChoiceField } from '../../../ui/row-choice-field/row-choice-field';
 import { TextField } from '../../../ui/text-field/text-field';
 import { notebookContents } from '../notebook-data';
 import { Notebooks } from '../notebooks';
@@ -25,7 +26,7 @@ import { undoableDelete } from '../../../ui/undoable-delete';
 /** One notebook: its pages in order, adding and arranging them, and the notebook's title and book. */
 @Component({
   selector: 'll-notebook-view',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates, TextField],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates, RowChoiceField, TextField],
   templateUrl: './notebook-view.html',
   styleUrl: './notebook-view.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,9 +1,7 @@
 import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
-import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 
 import { NOTEBOOK_LIMITS } from '@shared/journal/notebook-limits';
@@ -12,6 +10,7 @@ import { InvalidFieldsError } from '../../../core/data/field-errors';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
 import { notBlank, showServerErrors } from '../../../ui/field-errors';
+import { RowChoiceField } from '../../../ui/row-choice-field/row-choice-field';
 import { TextField } from '../../../ui/text-field/text-field';
 import { bookChoices, notebookSummaries, type BookOption, type NotebookSummary } from '../notebook-data';
 import { Notebooks } from '../notebooks';
@@ -21,7 +20,7 @@ import { ReaderDatePipe } from '../../../ui/reader-date';
 /** Every notebook the reader keeps, and a form to start one. */
 @Component({
   selector: 'll-notebooks-page',
-  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, PageTemplates, TextField],
+  imports: [ReaderDatePipe, ReactiveFormsModule, RouterLink, MatButtonModule, MatIconModule, PageTemplates, RowChoiceField, TextField],
   templateUrl: './notebooks-page.html',
   styleUrl: './notebooks-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
