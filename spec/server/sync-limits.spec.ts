@@ -154,7 +154,12 @@ describe('Sync sizes and limits', () => {
     await db.query('ANALYZE books');
     const rows = 251;
 
-    const [{ 'QUERY PLAN': plan }] = await db.query(`EXPLAIN (ANALYZE, BUFFERS, FORMAT JSON) ${pullPageSql(COLLECTIONS.books)}`, [user.id, 0, rows]);
+    const [{ 'QUERY PLAN': plan }] = await db.query(`EXPLAIN (ANALYZE, BUFFERS, FORMAT JSON) ${pullPageSql(COLLECTIONS.books)}`, [
+      user.id,
+      0,
+      rows,
+      Number.MAX_SAFE_INTEGER,
+    ]);
     const nodes: { 'Node Type': string; 'Index Name'?: string; 'Relation Name'?: string; 'Actual Rows': number; 'Actual Loops': number }[] = [];
     const walk = (node: Record<string, unknown>) => {
       nodes.push(node as never);

@@ -90,24 +90,27 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
 
 /**
  * One collection's rows changed after a sequence, in sequence order (`$1` user, `$2` sequence,
- * `$3` rows at most): plain paging on the table's (user_id, seq) index, with only the columns a
- * pull sends (values, clocks, set states). The caller merges the collections' pages by sequence
- * and builds the answer's JSON for the rows that fit (see `SyncStore.pull`): a pull reads what a
- * plain paging client would, and builds nothing in SQL.
+ * `$3` rows at most, `$4` the greatest sequence to read): plain paging on the table's
+ * (user_id, seq) index, with only the columns a pull sends (values, clocks, set states). The
+ * caller merges the collections' pages by sequence and builds the answer's JSON for the rows that
+ * fit (see `SyncStore.pull`): a pull reads what a plain paging client would, and builds nothing in SQL.
  */
 export function pullPageSql(spec: CollectionSpec): string {
   const columns = ['id', 'seq', 'clocks', 'sets', ...Object.keys(spec.fields).map(columnName)];
-  return `SELECT ${columns.map((column) => `t.${column}`).join(', ')} FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2 ORDER BY t.seq LIMIT $3`;
+  return `SELECT ${columns.map((column) => `t.${column}`).join(', ')} FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2 AND t.seq <= $4 ORDER BY t.seq LIMIT $3`;
 }
 
 /**
- * Which collections (by their place in `specs`) have rows changed after a sequence (`$1` user,
- * `$2` sequence): one index-only probe per table on (user_id, seq), stopping at its first hit.
- * Most pulls find none, and this plans and runs in a fraction of a millisecond.
+ * Per collection (in the order of `specs`), the greatest sequence of a row changed after a
+ * sequence, or null (`$1` user, `$2` sequence): one index-only probe per table on (user_id, seq).
+ * Most pulls find none. The greatest of them bounds the pull's reads: a reader's pushes take the
+ * reader's lock and commit in sequence order, so every row up to it has committed, and a push
+ * committing while the tables are read (one query each) cannot show a later row of one table
+ * while an earlier row of another stays unseen, which would let the cursor step over it.
  */
 export function changedTablesSql(specs: readonly CollectionSpec[]): string {
-  const probes = specs.map((spec, n) => `CASE WHEN EXISTS (SELECT 1 FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2) THEN ${n} END`);
-  return `SELECT array_remove(ARRAY[${probes.join(', ')}], NULL) AS tables`;
+  const probes = specs.map((spec) => `(SELECT max(t.seq) FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2)`);
+  return `SELECT ARRAY[${probes.join(', ')}]::bigint[] AS latest`;
 }
 
 /**

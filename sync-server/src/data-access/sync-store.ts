@@ -169,27 +169,13 @@ export class SyncStore {
    * fits, so paging always moves on.
    */
   async pull(userId: string, sinceSeq: number, limit: number, maxBytes = MAX_PULL_BYTES): Promise<PulledPage> {
-    // One cheap probe says which tables have anything new; most pulls (devices up to date) end here.
-    const [probe] = await this.read<{ tables: number[] }>(CHANGED_TABLES_SQL, [userId, sinceSeq]);
-    if (!probe?.tables.length) return { changes: [], changesJson: '[]', lastSeq: sinceSeq, hasMore: false };
-    const { rows, ...page } = await this.inSnapshot((read) => this.readPage(read, userId, sinceSeq, limit, maxBytes));
-    if (!page.hasMore) return page;
-    return { ...page, remaining: await this.remaining(userId, sinceSeq, page.lastSeq, rows) };
-  }
-
-  /**
-   * A page from one snapshot: the tables are read one query each, and a push committing between
-   * two of them could otherwise show a later row of one table while an earlier row of another
-   * stays unseen, and the cursor would step over it.
-   */
-  private async readPage(
-    read: <Row>(statement: { name: string; text: string }, values: unknown[]) => Promise<Row[]>,
-    userId: string,
-    sinceSeq: number,
-    limit: number,
-    maxBytes: number,
-  ): Promise<PulledPage & { rows: number }> {
-    let tables = (await read<{ tables: number[] }>(CHANGED_TABLES_SQL, [userId, sinceSeq]))[0]?.tables ?? [];
+    // One cheap probe says which tables have anything new, and up to where; most pulls (devices up to date) end here.
+    const [probe] = await this.read<{ latest: (string | null)[] }>(CHANGED_TABLES_SQL, [userId, sinceSeq]);
+    const latest = probe?.latest ?? [];
+    let tables = latest.flatMap((seq, c) => (seq === null ? [] : [c]));
+    if (tables.length === 0) return { changes: [], changesJson: '[]', lastSeq: sinceSeq, hasMore: false };
+    // Every row up to here has committed (see changedTablesSql): reading no further, the tables' reads agree.
+    const upTo = Math.max(...tables.map((c) => Number(latest[c])));
     const changes: PulledChange[] = [];
     // Each row's changes as JSON, measured once and sent as they are (no second serialisation).
     const parts: string[] = [];
@@ -203,7 +189,7 @@ export class SyncStore {
       // more than asked says that the table goes on, and bounds what can be taken from the others.
       const rowLimit = Math.max(MIN_ROWS_PER_TABLE, Math.ceil((limit - changes.length) / fieldsPerRow / tables.length));
       const pages: PulledRow[][] = [];
-      for (const c of tables) pages.push(await read<PulledRow>(PULL_PAGE_SQL[c]!, [userId, lastSeq, rowLimit + 1]));
+      for (const c of tables) pages.push(await this.read<PulledRow>(PULL_PAGE_SQL[c]!, [userId, lastSeq, rowLimit + 1, upTo]));
       let bound = Infinity;
       const rows: { c: number; row: PulledRow }[] = [];
       for (const [n, page] of pages.entries()) {
@@ -245,27 +231,9 @@ export class SyncStore {
       tables = [...new Set(rows.filter(({ row }) => Number(row.seq) > lastSeq).map(({ c }) => c))];
       fieldsPerRow = Math.max(1, changes.length / taken);
     }
-    return { changes, changesJson: `[${parts.join(',')}]`, lastSeq, hasMore, rows: taken };
-  }
-
-  /** Runs reads on one connection in a read-only REPEATABLE READ transaction: one snapshot for all. */
-  private async inSnapshot<T>(work: (read: <Row>(statement: { name: string; text: string }, values: unknown[]) => Promise<Row[]>) => Promise<T>): Promise<T> {
-    const runner = this.dataSource.createQueryRunner();
-    await runner.connect();
-    const client = (runner as unknown as { databaseConnection: PgClient }).databaseConnection;
-    const read = async <Row>(statement: { name: string; text: string }, values: unknown[]): Promise<Row[]> =>
-      (await client.query(this.options.namedStatements === false ? { text: statement.text, values } : { ...statement, values })).rows as Row[];
-    try {
-      await client.query('BEGIN ISOLATION LEVEL REPEATABLE READ READ ONLY');
-      const result = await work(read);
-      await client.query('COMMIT');
-      return result;
-    } catch (error) {
-      await client.query('ROLLBACK').catch(() => undefined);
-      throw error;
-    } finally {
-      await runner.release();
-    }
+    const changesJson = `[${parts.join(',')}]`;
+    if (!hasMore) return { changes, changesJson, lastSeq, hasMore };
+    return { changes, changesJson, lastSeq, hasMore, remaining: await this.remaining(userId, sinceSeq, lastSeq, taken) };
   }
 
   /**
