@@ -109,9 +109,7 @@ export class JournalDb extends Dexie {
   circleMeta!: Table<CircleMeta, string>;
 
   constructor(readonly userId: string) {
-    // No optimistic live-query updates: with them, a write re-derived and re-rendered the UI inside its own
-    // transaction, before the commit (bench:write; worse with a small library, whose whole table Dexie caches).
-    super(journalDbName(userId), { cache: 'disabled' });
+    super(journalDbName(userId));
     this.version(JOURNAL_DB_VERSION).stores({
       ...collectionStores(),
       // By row too: a write finds the changes still waiting for its rows without reading them all.
