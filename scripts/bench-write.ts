@@ -41,9 +41,8 @@ async function makeBaseline(page: Page, count: number): Promise<void> {
  * status (a read-only transaction over `books` waits for a write to it that began earlier), and
  * answers when (`timeOrigin + now()`, comparable across threads). A worker, not the page: the
  * page's main thread is busy right after the app's commit (its live queries and re-render), and a
- * detector on it timed that work as well, more of it with 28 books (where the re-read of the table
- * lands before the detector's read) than with 10,000 (where it lands after): the cause of the
- * 28-book case looking worse.
+ * detector there could time that work as well. (It did not explain why 28 books measure slower
+ * than 10,000: see DEVELOPERS.md, bench:write.)
  */
 const DETECTOR = `
   const dbs = new Map();
