@@ -89,45 +89,28 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
 }
 
 /**
- * Rows changed after a sequence, across every collection, in sequence order: `$1` user, `$2`
- * sequence, `$3` rows at most, `$4` byte budget, `$5` field budget. Keys come first — each
- * table's branch takes its own `ORDER BY seq LIMIT` from the (user_id, seq) index, so no branch
- * reads or sorts more than a page of a reader's rows — and JSON is built only for rows inside the
- * page's byte budget, estimated from stored column sizes (compressed, so the caller trims by actual
- * size too), and inside its field budget, counted from each row's clocks (a row sends one field per
- * clock), so a page of 5,000 fields builds about 5,000 / fields-per-row rows, not 5,000. The first
- * row always fits. `keys` tells the caller how many rows were candidates, for `hasMore`.
+ * One collection's rows changed after a sequence, in sequence order (`$1` user, `$2` sequence,
+ * `$3` rows at most, `$4` the greatest sequence to read): plain paging on the table's
+ * (user_id, seq) index, with only the columns a pull sends (values, clocks, set states). The
+ * caller merges the collections' pages by sequence and builds the answer's JSON for the rows that
+ * fit (see `SyncStore.pull`): a pull reads what a plain paging client would, and builds nothing in SQL.
  */
-export function pullSql(specs: readonly CollectionSpec[]): string {
-  const size = (spec: CollectionSpec) =>
-    ['clocks', 'sets', ...Object.keys(spec.fields).map(columnName)].map((column) => `coalesce(pg_column_size(t.${column}), 0)`).join(' + ');
-  const branches = specs.map(
-    (spec, n) =>
-      `(SELECT ${n} AS c, t.id, t.seq, ${size(spec)} AS size, (SELECT count(*) FROM jsonb_object_keys(t.clocks)) AS fields FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2 ORDER BY t.seq LIMIT $3)`,
-  );
-  const rowOf = specs.map((spec, n) => `WHEN ${n} THEN (SELECT to_jsonb(t) FROM ${spec.table} t WHERE t.user_id = $1 AND t.id = b.id)`);
-  return `
-    WITH keys AS (
-      SELECT * FROM (${branches.join('\n      UNION ALL ')}) changed ORDER BY seq LIMIT $3
-    ), budgeted AS (
-      SELECT k.*, sum(k.size) OVER (ORDER BY k.seq) - k.size AS before, sum(k.fields) OVER (ORDER BY k.seq) - k.fields AS fields_before,
-             count(*) OVER () AS keys FROM keys k
-    )
-    SELECT b.c, b.seq, b.keys, CASE b.c ${rowOf.join(' ')} END AS row
-      FROM budgeted b
-     WHERE b.before < $4 AND b.fields_before < $5
-     ORDER BY b.seq`;
+export function pullPageSql(spec: CollectionSpec): string {
+  const columns = ['id', 'seq', 'clocks', 'sets', ...Object.keys(spec.fields).map(columnName)];
+  return `SELECT ${columns.map((column) => `t.${column}`).join(', ')} FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2 AND t.seq <= $4 ORDER BY t.seq LIMIT $3`;
 }
 
 /**
- * Whether any row changed after a sequence (`$1` user, `$2` sequence): one index-only probe per
- * table on (user_id, seq), stopping at the first hit. Most pulls find nothing, and this plans in a
- * fraction of the time `pullSql` does (its per-collection row lookups make planning the cost of
- * an empty pull when statements cannot be prepared, behind a transaction pooler).
+ * Per collection (in the order of `specs`), the greatest sequence of a row changed after a
+ * sequence, or null (`$1` user, `$2` sequence): one index-only probe per table on (user_id, seq).
+ * Most pulls find none. The greatest of them bounds the pull's reads: a reader's pushes take the
+ * reader's lock and commit in sequence order, so every row up to it has committed, and a push
+ * committing while the tables are read (one query each) cannot show a later row of one table
+ * while an earlier row of another stays unseen, which would let the cursor step over it.
  */
-export function changedSinceSql(specs: readonly CollectionSpec[]): string {
-  const probes = specs.map((spec) => `EXISTS (SELECT 1 FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2)`);
-  return `SELECT (${probes.join(' OR ')}) AS changed`;
+export function changedTablesSql(specs: readonly CollectionSpec[]): string {
+  const probes = specs.map((spec) => `(SELECT max(t.seq) FROM ${spec.table} t WHERE t.user_id = $1 AND t.seq > $2)`);
+  return `SELECT ARRAY[${probes.join(', ')}]::bigint[] AS latest`;
 }
 
 /**

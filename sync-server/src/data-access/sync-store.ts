@@ -6,7 +6,7 @@ import { setDeltaOf } from '../../../shared/sync/merge-set';
 import { joinOrSet, type OrSetState } from '../../../shared/sync/or-set';
 import { columnName, type FieldSpec } from '../../../shared/sync/schema/field';
 import { COLLECTIONS, collectionSpec, fieldSpecOf } from '../../../shared/sync/schema/collections';
-import { changedSinceSql, mergeSql, pullSql, remainingSql } from './merge-sql';
+import { changedTablesSql, mergeSql, pullPageSql, remainingSql } from './merge-sql';
 import { notifyPushedSql } from './sync-notifications';
 import { queryableOf, TextStore } from './text-store';
 import { textFieldMax } from '../../../shared/text/text-fields';
@@ -33,10 +33,19 @@ function mergeStatement(collection: string, fields: readonly string[]): { name?:
   return statement;
 }
 /** Pull statements, prepared once per connection where the pool allows (see `namedStatements`). */
-const PULL_SQL = { name: 'lamplight_pull', text: pullSql(SPECS) };
-const CHANGED_SINCE_SQL = { name: 'lamplight_changed_since', text: changedSinceSql(SPECS) };
+const PULL_PAGE_SQL = SPECS.map((spec, n) => ({ name: `lamplight_pull_${n}`, text: pullPageSql(spec) }));
+const CHANGED_TABLES_SQL = { name: 'lamplight_changed_tables', text: changedTablesSql(SPECS) };
 const REMAINING_SQL = remainingSql(SPECS);
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
+/** A pull's first guess at fields per row, to size each table's page from the field limit. */
+const ASSUMED_FIELDS_PER_ROW = 4;
+/** Fewer rows than this a table is never asked for (a round trip costs more than a few rows). */
+const MIN_ROWS_PER_TABLE = 16;
+/** Positions whose remaining count an instance remembers (a few per first sync under way). */
+const MAX_REMEMBERED_POSITIONS = 1000;
+
+/** A row as a pull reads it: its id, sequence, clocks, set states and columns. */
+type PulledRow = Record<string, unknown> & { seq: string };
 
 /** The part of a node-postgres client the hot path uses. */
 interface PgClient {
@@ -68,12 +77,17 @@ export interface PulledPage {
   /** The sequence to continue after. */
   readonly lastSeq: number;
   readonly hasMore: boolean;
+  /** `changes` as JSON text, exactly as measured against the byte budget (the route sends it as is). */
+  readonly changesJson: string;
   /** Rows still to pull after this page (only while there are more pages). */
   readonly remaining?: number;
 }
 
 /** The server's side of sync: merging pushed changes and reading them back, per user. */
 export class SyncStore {
+  /** Rows remaining after a position a pull just answered, by `user/seq` (see {@link remaining}). */
+  private readonly remainingAfter = new Map<string, number>();
+
   /**
    * `namedStatements: false` sends merge statements unnamed (a parse on every push), for a
    * transaction-mode pooler such as PgBouncer, where the next transaction may run on a server
@@ -155,36 +169,87 @@ export class SyncStore {
    * fits, so paging always moves on.
    */
   async pull(userId: string, sinceSeq: number, limit: number, maxBytes = MAX_PULL_BYTES): Promise<PulledPage> {
-    // Most pulls come from devices already up to date: one cheap probe answers them.
-    if (sinceSeq > 0) {
-      const [probe] = await this.read<{ changed: boolean }>(CHANGED_SINCE_SQL, [userId, sinceSeq]);
-      if (!probe?.changed) return { changes: [], lastSeq: sinceSeq, hasMore: false };
-    }
-    // Every row has at least one field, so `limit` rows always fill a page; one more tells whether more remain.
-    // JSON is built only for the rows whose fields fit in `limit` (counted in SQL from their clocks).
-    const rows = await this.read<{ c: number; seq: string; keys: string; row: Record<string, unknown> }>(PULL_SQL, [userId, sinceSeq, limit + 1, maxBytes, limit]);
-    // Texts' Yjs states count towards the page's bytes too, so they are read before the page is cut.
-    const candidates = rows.map(({ c, row }) => rowFields(SPECS[c]!.name, row));
-    const withStates = await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat());
+    // One cheap probe says which tables have anything new, and up to where; most pulls (devices up to date) end here.
+    const [probe] = await this.read<{ latest: (string | null)[] }>(CHANGED_TABLES_SQL, [userId, sinceSeq]);
+    const latest = probe?.latest ?? [];
+    let tables = latest.flatMap((seq, c) => (seq === null ? [] : [c]));
+    if (tables.length === 0) return { changes: [], changesJson: '[]', lastSeq: sinceSeq, hasMore: false };
+    // Every row up to here has committed (see changedTablesSql): reading no further, the tables' reads agree.
+    const upTo = Math.max(...tables.map((c) => Number(latest[c])));
     const changes: PulledChange[] = [];
+    // Each row's changes as JSON, measured once and sent as they are (no second serialisation).
+    const parts: string[] = [];
     let lastSeq = sinceSeq;
     let taken = 0;
     let bytes = 0;
-    let offset = 0;
-    for (const [index, { seq }] of rows.entries()) {
-      const pieces = withStates.slice(offset, offset + candidates[index]!.length);
-      offset += pieces.length;
-      const size = Buffer.byteLength(JSON.stringify(pieces));
-      if (taken > 0 && (changes.length + pieces.length > limit || bytes + size > maxBytes)) break;
-      changes.push(...pieces);
-      bytes += size;
-      lastSeq = Number(seq);
-      taken++;
+    let hasMore = false;
+    let fieldsPerRow = ASSUMED_FIELDS_PER_ROW;
+    while (tables.length > 0) {
+      // Each table pages its own (user_id, seq) index, sized from the fields still to fill; one row
+      // more than asked says that the table goes on, and bounds what can be taken from the others.
+      const rowLimit = Math.max(MIN_ROWS_PER_TABLE, Math.ceil((limit - changes.length) / fieldsPerRow / tables.length));
+      const pages: PulledRow[][] = [];
+      for (const c of tables) pages.push(await this.read<PulledRow>(PULL_PAGE_SQL[c]!, [userId, lastSeq, rowLimit + 1, upTo]));
+      let bound = Infinity;
+      const rows: { c: number; row: PulledRow }[] = [];
+      for (const [n, page] of pages.entries()) {
+        if (page.length > rowLimit) bound = Math.min(bound, Number(page[rowLimit - 1]!.seq));
+        for (const row of page) rows.push({ c: tables[n]!, row });
+      }
+      rows.sort((a, b) => Number(a.row.seq) - Number(b.row.seq));
+      // The rows that can be taken (in order, up to the bound) and may fit the fields still free.
+      const candidates: PulledChange[][] = [];
+      let fields = changes.length;
+      for (const { c, row } of rows) {
+        if (Number(row.seq) > bound || (candidates.length > 0 && fields >= limit)) break;
+        candidates.push(rowFields(SPECS[c]!.name, row));
+        fields += candidates.at(-1)!.length;
+      }
+      // Texts' Yjs states count towards the page's bytes too, so they are read before the page is cut.
+      const withStates = await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat());
+      let offset = 0;
+      let full = false;
+      for (const [index, candidate] of candidates.entries()) {
+        const pieces = withStates.slice(offset, offset + candidate.length);
+        offset += pieces.length;
+        const json = JSON.stringify(pieces);
+        const size = Buffer.byteLength(json);
+        // The first row always fits, so paging always moves on.
+        if (taken > 0 && (changes.length + pieces.length > limit || bytes + size > maxBytes)) {
+          full = true;
+          break;
+        }
+        changes.push(...pieces);
+        if (pieces.length > 0) parts.push(json.slice(1, -1));
+        bytes += size;
+        lastSeq = Number(rows[index]!.row.seq);
+        taken++;
+      }
+      // A row read but not taken is still to come; none means every table ran out.
+      hasMore = rows.some(({ row }) => Number(row.seq) > lastSeq);
+      if (!hasMore || full || changes.length >= limit || bytes >= maxBytes) break;
+      tables = [...new Set(rows.filter(({ row }) => Number(row.seq) > lastSeq).map(({ c }) => c))];
+      fieldsPerRow = Math.max(1, changes.length / taken);
     }
-    const hasMore = taken < Number(rows[0]?.keys ?? 0);
-    if (!hasMore) return { changes, lastSeq, hasMore };
-    const [{ remaining }] = (await this.dataSource.query(REMAINING_SQL, [userId, lastSeq])) as [{ remaining: number }];
-    return { changes, lastSeq, hasMore, remaining };
+    const changesJson = `[${parts.join(',')}]`;
+    if (!hasMore) return { changes, changesJson, lastSeq, hasMore };
+    return { changes, changesJson, lastSeq, hasMore, remaining: await this.remaining(userId, sinceSeq, lastSeq, taken) };
+  }
+
+  /**
+   * Rows still to pull after `lastSeq`. Counted once per first sync: the next page's count is
+   * this one less the rows it took (remembered by position, per instance), so a long pull does not
+   * count the rest of the account on every page (which made it quadratic). Rows written meanwhile
+   * make it an estimate, which is all the progress bar needs; it is counted again when it runs out.
+   */
+  private async remaining(userId: string, sinceSeq: number, lastSeq: number, taken: number): Promise<number> {
+    const known = this.remainingAfter.get(`${userId}/${sinceSeq}`);
+    this.remainingAfter.delete(`${userId}/${sinceSeq}`);
+    let remaining = known === undefined ? 0 : known - taken;
+    if (remaining <= 0) [{ remaining }] = (await this.dataSource.query(REMAINING_SQL, [userId, lastSeq])) as [{ remaining: number }];
+    if (this.remainingAfter.size >= MAX_REMEMBERED_POSITIONS) this.remainingAfter.delete(this.remainingAfter.keys().next().value!);
+    this.remainingAfter.set(`${userId}/${lastSeq}`, remaining);
+    return remaining;
   }
 
   /**
