@@ -18,10 +18,10 @@ const NOW = Date.now();
 /** Every text field with a maximum length, and that maximum. */
 const TEXT_FIELDS = Object.values(COLLECTIONS).flatMap((spec) =>
   Object.entries(spec.fields as Record<string, FieldSpec>).flatMap(([field, fieldSpec]) => {
-    const schema = fieldSpec.schema instanceof z.ZodNullable ? fieldSpec.schema.unwrap() : fieldSpec.schema;
-    return schema instanceof z.ZodString && schema.maxLength !== null && !(schema as z.ZodString).format
-      ? [{ collection: spec.name, field, max: schema.maxLength }]
-      : [];
+    // Core classes: the schema is built with zod's mini build.
+    const schema = fieldSpec.schema instanceof z.core.$ZodNullable ? fieldSpec.schema._zod.def.innerType : fieldSpec.schema;
+    const max = schema instanceof z.core.$ZodString ? schema._zod.bag.maximum : undefined;
+    return max != null && !(schema as z.core.$ZodString)._zod.bag.format ? [{ collection: spec.name, field, max }] : [];
   }),
 );
 
