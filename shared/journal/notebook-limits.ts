@@ -1,15 +1,10 @@
-// Named core classes, not the `z.core` namespace: that would keep all of zod in the first screen's chunk.
-import { $ZodNullable, $ZodString } from 'zod/v4/core';
-
-import type { FieldSpec } from '../sync/schema/field';
+import { textMaxLength, type FieldSpec } from '../sync/schema/field';
 import { notebookPages, notebooks, pageTemplates } from '../sync/schema/collections';
 
 /** The longest text a text field of the schema takes (unwrapping `nullable`). */
 export function maxTextLength(spec: FieldSpec): number {
-  // Core classes: the schema is built with zod's mini build (shared/sync/schema/field.ts).
-  const schema = spec.schema instanceof $ZodNullable ? spec.schema._zod.def.innerType : spec.schema;
-  const max = schema instanceof $ZodString ? schema._zod.bag.maximum : null;
-  if (max == null) throw new Error('not a text field with a maximum length');
+  const max = textMaxLength(spec);
+  if (max === null) throw new Error('not a text field with a maximum length');
   return max;
 }
 

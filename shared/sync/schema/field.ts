@@ -1,5 +1,7 @@
 import * as z from 'zod/mini';
 import { en } from 'zod/locales';
+// Named core classes, not the `z.core` namespace: that would keep all of zod in the first screen's chunk.
+import { $ZodNullable, $ZodString } from 'zod/v4/core';
 
 import { isValidIsbn13 } from '../../isbn/is-valid-isbn13';
 
@@ -129,3 +131,14 @@ export function columnName(fieldName: string): string {
 
 /** Whether a field merges per element (see {@link FieldKind}). */
 export const isSetField = (spec: FieldSpec | undefined): boolean => spec?.kind === 'set';
+
+/**
+ * The longest text a plain text field takes (unwrapping `nullable`), or `null` for other fields
+ * and string formats such as UUIDs. Read from the validator's checks, so it never drifts.
+ */
+export function textMaxLength(spec: FieldSpec): number | null {
+  const schema = spec.schema instanceof $ZodNullable ? spec.schema._zod.def.innerType : spec.schema;
+  if (!(schema instanceof $ZodString) || (schema._zod.def as { format?: string }).format) return null;
+  const max = schema._zod.def.checks?.find((check) => check._zod.def.check === 'max_length');
+  return (max?._zod.def as { maximum?: number } | undefined)?.maximum ?? null;
+}
