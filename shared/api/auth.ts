@@ -1,5 +1,6 @@
 import * as z from 'zod';
 
+import { DISPLAY_NAME_MAX_LENGTH } from '../account/display-name';
 import { checkPassword } from '../account/password-policy';
 import { isPlainText, PLAIN_TEXT_MESSAGE } from '../account/plain-text';
 
@@ -8,8 +9,7 @@ import { isPlainText, PLAIN_TEXT_MESSAGE } from '../account/plain-text';
  * e-mail confirmation): the inputs both sides validate and the answers the server sends.
  */
 
-/** Display names are shown to people a reader shares with; keep them short and printable. */
-export const DISPLAY_NAME_MAX_LENGTH = 80;
+export { DISPLAY_NAME_MAX_LENGTH };
 
 const email = z
   .string({ error: 'E-mail is required' })

@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 
 import { defineCollection, type RowOf } from '../sync/schema/collection';
 import { field, type FieldSpec } from '../sync/schema/field';
@@ -19,7 +19,7 @@ export type Reaction = (typeof REACTIONS)[number];
 export const RSVP_ANSWERS = ['going', 'maybe', 'notGoing'] as const;
 export type RsvpAnswer = (typeof RSVP_ANSWERS)[number];
 
-const uuidList = (max: number) => z.array(z.uuid('must list row ids (UUIDs)')).max(max, `must have at most ${max} entries`);
+const uuidList = (max: number) => z.array(z.uuid('must list row ids (UUIDs)')).check(z.maxLength(max, `must have at most ${max} entries`));
 
 export const circles = defineCollection('circles', {
   circleId: circleId(),
@@ -51,19 +51,9 @@ export const circleParts = defineCollection('circleParts', {
   endValue: field.optionalText(120),
   date: field.optionalDate(),
   /** Local time of the meeting, 'HH:MM' (24-hour), or none for a checkpoint. */
-  time: field.json(
-    z
-      .string()
-      .regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'must be a time like 19:30')
-      .nullable(),
-  ),
+  time: field.json(z.nullable(z.string().check(z.regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'must be a time like 19:30')))),
   place: field.optionalText(300),
-  link: field.json(
-    z
-      .url({ protocol: /^https?$/, error: 'must be a web address (http or https)' })
-      .max(500)
-      .nullable(),
-  ),
+  link: field.json(z.nullable(z.url({ protocol: /^https?$/, error: 'must be a web address (http or https)' }).check(z.maxLength(500)))),
 });
 
 /** A post in a part's discussion (or the circle's general one), or a reply to a post. */
@@ -100,12 +90,12 @@ export const circleRsvps = defineCollection('circleRsvps', {
 export const circleProgress = defineCollection('circleProgress', {
   circleId: circleId(),
   shareProgress: field.optionalBoolean(),
-  pastPartIds: field.json(uuidList(500).nullable()),
-  revealedPartIds: field.json(uuidList(500).nullable()),
+  pastPartIds: field.json(z.nullable(uuidList(500))),
+  revealedPartIds: field.json(z.nullable(uuidList(500))),
   /** pick id → the reader's own book added from it (their library stays private). */
-  bookLinks: field.json(z.record(z.uuid(), z.uuid()).nullable(), 'values'),
+  bookLinks: field.json(z.nullable(z.record(z.uuid(), z.uuid())), 'values'),
   /** Parts the reader is past, written only while sharing is on ("Wren is past part 2"). */
-  sharedPastPartIds: field.json(uuidList(500).nullable()),
+  sharedPastPartIds: field.json(z.nullable(uuidList(500))),
   /** The reader's IANA time zone, so meeting reminders come the day before in their own day (never shared). */
   timeZone: field.optionalText(64),
 });

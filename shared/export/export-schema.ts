@@ -1,4 +1,5 @@
-import * as z from 'zod';
+// The mini build, as the schema's own validators (shared/sync/schema/field.ts): one zod in the app.
+import * as z from 'zod/mini';
 
 import { COLLECTIONS } from '../sync/schema/collections';
 import type { FieldSpec } from '../sync/schema/field';

@@ -1,13 +1,10 @@
-import * as z from 'zod';
-
-import type { FieldSpec } from '../sync/schema/field';
+import { textMaxLength, type FieldSpec } from '../sync/schema/field';
 import { notebookPages, notebooks, pageTemplates } from '../sync/schema/collections';
 
 /** The longest text a text field of the schema takes (unwrapping `nullable`). */
 export function maxTextLength(spec: FieldSpec): number {
-  const schema = spec.schema instanceof z.ZodNullable ? spec.schema.unwrap() : spec.schema;
-  const max = schema instanceof z.ZodString ? schema.maxLength : null;
-  if (max == null) throw new Error('not a text field with a maximum length');
+  const max = textMaxLength(spec);
+  if (max === null) throw new Error('not a text field with a maximum length');
   return max;
 }
 

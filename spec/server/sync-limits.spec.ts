@@ -1,10 +1,8 @@
 import { randomUUID } from 'node:crypto';
 
-import * as z from 'zod';
-
 import { MAX_PULL_BYTES } from '../../shared/api/sync';
 import { COLLECTIONS } from '../../shared/sync/schema/collections';
-import type { FieldSpec } from '../../shared/sync/schema/field';
+import { textMaxLength, type FieldSpec } from '../../shared/sync/schema/field';
 import { pullPageSql } from '../../sync-server/src/data-access/merge-sql';
 import { compressApi } from '../../sync-server/src/entry-points/compress-api';
 import { registerReader } from '../support/accounts';
@@ -18,10 +16,8 @@ const NOW = Date.now();
 /** Every text field with a maximum length, and that maximum. */
 const TEXT_FIELDS = Object.values(COLLECTIONS).flatMap((spec) =>
   Object.entries(spec.fields as Record<string, FieldSpec>).flatMap(([field, fieldSpec]) => {
-    const schema = fieldSpec.schema instanceof z.ZodNullable ? fieldSpec.schema.unwrap() : fieldSpec.schema;
-    return schema instanceof z.ZodString && schema.maxLength !== null && !(schema as z.ZodString).format
-      ? [{ collection: spec.name, field, max: schema.maxLength }]
-      : [];
+    const max = textMaxLength(fieldSpec);
+    return max === null ? [] : [{ collection: spec.name, field, max }];
   }),
 );
 

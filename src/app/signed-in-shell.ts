@@ -10,7 +10,7 @@ import { Covers } from './core/covers/covers';
 import { LocalJournal } from './core/data/local-journal';
 import { browserStorage } from './core/device/browser-storage';
 import { DeviceStorage } from './core/device/device-storage';
-import { installLamplight } from './core/pwa/install-button';
+import { installLamplight } from './core/pwa/install-lamplight';
 import { InstallPrompt } from './core/pwa/install-prompt';
 import { ApplyTheme } from './core/settings/apply-theme';
 import { TabCoordination } from './core/pwa/tab-coordination';

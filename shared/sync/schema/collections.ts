@@ -1,4 +1,4 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
 
 import { defineCollection, type RowOf } from './collection';
 import { field, type FieldSpec } from './field';
@@ -252,13 +252,13 @@ export const ALPHABET_BY = ['title', 'author-surname'] as const;
 const checklist = z
   .array(
     z.object({
-      id: z.string().min(1).max(36),
-      text: z.string().max(300, 'each entry must be at most 300 characters'),
-      done: z.boolean().optional(),
-      bookId: z.uuid().nullable().optional(),
+      id: z.string().check(z.minLength(1), z.maxLength(36)),
+      text: z.string().check(z.maxLength(300, 'each entry must be at most 300 characters')),
+      done: z.optional(z.boolean()),
+      bookId: z.optional(z.nullable(z.uuid())),
     }),
   )
-  .max(100, 'must have at most 100 entries');
+  .check(z.maxLength(100, 'must have at most 100 entries'));
 
 /** The reader's plan for a year. Row id `deterministicId('year-plan', 'YYYY')`: one per year. */
 export const yearPlans = defineCollection('yearPlans', {
@@ -268,7 +268,7 @@ export const yearPlans = defineCollection('yearPlans', {
   minutesTarget: field.optionalInteger(1, 1_000_000),
   bestBookId: field.optionalBookRef(),
   /** Goals that are not numbers ("read a book in French"), as a checklist. */
-  otherGoals: field.json(checklist.nullable(), 'entries'),
+  otherGoals: field.json(z.nullable(checklist), 'entries'),
   notes: field.optionalText(20_000),
 });
 export type YearPlan = RowOf<typeof yearPlans>;
@@ -296,7 +296,7 @@ export const challenges = defineCollection('challenges', {
   /** Alphabet: a letter per title, or per author surname. */
   alphabetBy: field.optionalChoice(ALPHABET_BY),
   /** Prompts: the reader's own list, each with the book that answers it. */
-  prompts: field.json(checklist.nullable(), 'entries'),
+  prompts: field.json(z.nullable(checklist), 'entries'),
   /** When the finish was celebrated, so the celebration shows once. */
   celebratedAt: field.optionalTimestamp(),
 });

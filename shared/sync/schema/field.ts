@@ -1,6 +1,13 @@
-import * as z from 'zod';
+import * as z from 'zod/mini';
+import { en } from 'zod/locales';
+// Named core classes, not the `z.core` namespace: that would keep all of zod in the first screen's chunk.
+import { $ZodNullable, $ZodString } from 'zod/v4/core';
 
 import { isValidIsbn13 } from '../../isbn/is-valid-isbn13';
+
+// zod's mini build (a third of the full one's size): the schema reaches the first screen through
+// the local database. Full zod sets English messages itself; the mini build has to be told.
+if (!z.config().localeError) z.config(en());
 
 /** How a field is stored in PostgreSQL: the server's TypeORM entities are generated from it and a spec checks the migrated tables against it. */
 export type SqlType = 'text' | 'text[]' | 'double precision' | 'integer' | 'boolean' | 'uuid' | 'jsonb';
@@ -24,7 +31,7 @@ export interface FieldSpec<T = unknown> {
   readonly kind: FieldKind;
   readonly sqlType: SqlType;
   /** The value as the app reads and writes it (and as an older client pushes it). */
-  readonly schema: z.ZodType<T>;
+  readonly schema: z.ZodMiniType<T>;
   /** `set` only: the most elements and the longest element, for the per-element wire form. */
   readonly elements?: { readonly maxItems: number; readonly maxLength: number };
   /** `text` only: the longest text (UTF-16 code units, as `String.length` counts). */
@@ -39,10 +46,12 @@ export interface FieldSpec<T = unknown> {
  */
 export type BookIdsIn = 'value' | 'entries' | 'values';
 
-const spec = <T>(sqlType: SqlType, schema: z.ZodType<T>): FieldSpec<T> => ({ kind: 'lww', sqlType, schema });
+const spec = <T>(sqlType: SqlType, schema: z.ZodMiniType<T>): FieldSpec<T> => ({ kind: 'lww', sqlType, schema });
 
 const stringList = (maxItems: number, maxLength: number) =>
-  z.array(z.string().max(maxLength, `each entry must be at most ${maxLength} characters`)).max(maxItems, `must have at most ${maxItems} entries`);
+  z
+    .array(z.string().check(z.maxLength(maxLength, `each entry must be at most ${maxLength} characters`)))
+    .check(z.maxLength(maxItems, `must have at most ${maxItems} entries`));
 
 /** Calendar dates as readers think of them, 'YYYY-MM-DD' (RFC 3339 full-date). */
 const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
@@ -54,8 +63,8 @@ const TIMESTAMP = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z$/;
  * several devices, so no field is ever "required" on the server.
  */
 export const field = {
-  text: (max: number) => spec('text', z.string().max(max, `must be at most ${max} characters`)),
-  optionalText: (max: number) => spec('text', z.string().max(max, `must be at most ${max} characters`).nullable()),
+  text: (max: number) => spec('text', z.string().check(z.maxLength(max, `must be at most ${max} characters`))),
+  optionalText: (max: number) => spec('text', z.nullable(z.string().check(z.maxLength(max, `must be at most ${max} characters`)))),
   /** An ordered list (authors: the first is the main one). Last writer wins for the whole list. */
   orderedList: (maxItems: number, maxLength: number) => spec('text[]', stringList(maxItems, maxLength)),
   /**
@@ -76,65 +85,43 @@ export const field = {
   mergeableText: (max: number): FieldSpec<string | null> => ({
     kind: 'text',
     sqlType: 'text',
-    schema: z.string().max(max, `must be at most ${max} characters`).nullable(),
+    schema: z.nullable(z.string().check(z.maxLength(max, `must be at most ${max} characters`))),
     maxLength: max,
   }),
   choice: <const Values extends readonly [string, ...string[]]>(values: Values) => spec('text', z.enum(values, { error: `must be one of ${values.join(', ')}` })),
   optionalChoice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
-    spec('text', z.enum(values, { error: `must be one of ${values.join(', ')} or null` }).nullable()),
+    spec('text', z.nullable(z.enum(values, { error: `must be one of ${values.join(', ')} or null` }))),
   optionalInteger: (min: number, max: number) =>
-    spec('integer', z.number().int('must be a whole number').min(min, `must be at least ${min}`).max(max, `must be at most ${max}`).nullable()),
+    spec('integer', z.nullable(z.number().check(z.int('must be a whole number'), z.gte(min, `must be at least ${min}`), z.lte(max, `must be at most ${max}`)))),
   optionalNumber: (min: number, max: number, step?: number) => {
-    let number = z.number().min(min, `must be at least ${min}`).max(max, `must be at most ${max}`);
-    if (step) number = number.multipleOf(step, `must be in steps of ${step}`);
-    return spec('double precision', number.nullable());
+    const number = z.number().check(z.gte(min, `must be at least ${min}`), z.lte(max, `must be at most ${max}`));
+    return spec('double precision', z.nullable(step ? number.check(z.multipleOf(step, `must be in steps of ${step}`)) : number));
   },
   boolean: () => spec('boolean', z.boolean({ error: 'must be true or false' })),
-  optionalBoolean: () => spec('boolean', z.boolean({ error: 'must be true or false' }).nullable()),
+  optionalBoolean: () => spec('boolean', z.nullable(z.boolean({ error: 'must be true or false' }))),
   /** A calendar month, 'YYYY-MM' (ISO 8601). */
-  optionalMonth: () =>
-    spec(
-      'text',
-      z
-        .string()
-        .regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'must be a month like 2026-03')
-        .nullable(),
-    ),
-  optionalDate: () => spec('text', z.string().regex(DATE, 'must be a date like 2026-03-08').nullable()),
-  optionalTimestamp: () => spec('text', z.string().regex(TIMESTAMP, 'must be a UTC time like 2026-03-08T09:30:00.000Z').nullable()),
-  optionalRef: () => spec('uuid', z.uuid('must be a row id (UUID)').nullable()),
+  optionalMonth: () => spec('text', z.nullable(z.string().check(z.regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'must be a month like 2026-03')))),
+  optionalDate: () => spec('text', z.nullable(z.string().check(z.regex(DATE, 'must be a date like 2026-03-08')))),
+  optionalTimestamp: () => spec('text', z.nullable(z.string().check(z.regex(TIMESTAMP, 'must be a UTC time like 2026-03-08T09:30:00.000Z')))),
+  optionalRef: () => spec('uuid', z.nullable(z.uuid('must be a row id (UUID)'))),
   /** The id of one of the reader's books: a merge of two books moves it to the kept one. */
   optionalBookRef: (): FieldSpec<string | null> => ({ ...field.optionalRef(), bookIds: 'value' }),
   /** ISBN-13 digits only (ISO 2108): the client converts an ISBN-10 before writing. */
   optionalIsbn13: () =>
     spec(
       'text',
-      z
-        .string()
-        .regex(/^\d{13}$/, 'must be the 13 digits of an ISBN-13, without hyphens')
-        .refine(isValidIsbn13, 'is not a valid ISBN-13 (check digit)')
-        .nullable(),
+      z.nullable(
+        z
+          .string()
+          .check(z.regex(/^\d{13}$/, 'must be the 13 digits of an ISBN-13, without hyphens'), z.refine(isValidIsbn13, 'is not a valid ISBN-13 (check digit)')),
+      ),
     ),
   /** A language tag such as 'en' or 'pt-BR' (BCP 47 shape: a 2–3 letter language, then subtags). */
-  optionalLanguage: () =>
-    spec(
-      'text',
-      z
-        .string()
-        .regex(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/, 'must be a language tag like en or pt-BR')
-        .nullable(),
-    ),
+  optionalLanguage: () => spec('text', z.nullable(z.string().check(z.regex(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/, 'must be a language tag like en or pt-BR')))),
   /** The id of an uploaded image: the hex SHA-256 of its bytes (FIPS 180-4). */
-  optionalUploadId: () =>
-    spec(
-      'text',
-      z
-        .string()
-        .regex(/^[0-9a-f]{64}$/, 'must be an upload id (64 hex digits)')
-        .nullable(),
-    ),
+  optionalUploadId: () => spec('text', z.nullable(z.string().check(z.regex(/^[0-9a-f]{64}$/, 'must be an upload id (64 hex digits)')))),
   /** Any JSON value; `bookIds` says where it holds book ids, if it does. */
-  json: <T>(schema: z.ZodType<T>, bookIds?: BookIdsIn): FieldSpec<T> => ({ ...spec('jsonb', schema), ...(bookIds ? { bookIds } : {}) }),
+  json: <T>(schema: z.ZodMiniType<T>, bookIds?: BookIdsIn): FieldSpec<T> => ({ ...spec('jsonb', schema), ...(bookIds ? { bookIds } : {}) }),
 };
 
 /** camelCase field name → its snake_case column. */
@@ -144,3 +131,14 @@ export function columnName(fieldName: string): string {
 
 /** Whether a field merges per element (see {@link FieldKind}). */
 export const isSetField = (spec: FieldSpec | undefined): boolean => spec?.kind === 'set';
+
+/**
+ * The longest text a plain text field takes (unwrapping `nullable`), or `null` for other fields
+ * and string formats such as UUIDs. Read from the validator's checks, so it never drifts.
+ */
+export function textMaxLength(spec: FieldSpec): number | null {
+  const schema = spec.schema instanceof $ZodNullable ? spec.schema._zod.def.innerType : spec.schema;
+  if (!(schema instanceof $ZodString) || (schema._zod.def as { format?: string }).format) return null;
+  const max = schema._zod.def.checks?.find((check) => check._zod.def.check === 'max_length');
+  return (max?._zod.def as { maximum?: number } | undefined)?.maximum ?? null;
+}

@@ -2,22 +2,8 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 
-import { LazyOverlays } from '../../ui/lazy-overlays';
+import { installLamplight } from './install-lamplight';
 import { InstallPrompt } from './install-prompt';
-
-/**
- * Installs Lamplight: the browser's own prompt where it offers one, else (iOS) the steps to add it
- * to the home screen. Call in an injection context.
- */
-export function installLamplight(): () => void {
-  const prompt = inject(InstallPrompt);
-  const overlays = inject(LazyOverlays);
-  return () => {
-    if (prompt.option() === 'ios-how-to')
-      void import('./install-help-dialog').then(({ InstallHelpDialog }) => overlays.dialog(InstallHelpDialog, { width: '440px' }));
-    else void prompt.install();
-  };
-}
 
 /** "Install Lamplight" where the browser can install it (Settings), or a line saying it is installed. */
 @Component({

@@ -21,7 +21,7 @@ import { StarRating } from '../../ui/star-rating/star-rating';
 import { LabelChips } from '../../ui/label-chips/label-chips';
 import { LabelDirectory } from '../../core/read-model/label-directory';
 import { TimerStartButton } from '../timer';
-import { bookProgress } from '../sessions';
+import { bookProgress } from '../../core/read-model/book-forecast';
 import { shelfBooks, shelfSessions } from './library-data';
 
 type View = 'table' | 'covers';

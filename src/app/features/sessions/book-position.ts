@@ -1,5 +1,10 @@
 import type { Book, Session } from '@shared/sync/schema/collections';
 
+import { bookEnd } from '../../core/read-model/book-end';
+
+// Kept here too, where the sessions area has always found it.
+export { bookEnd };
+
 type Format = NonNullable<Book['format']>;
 
 /** Words readers see for how a session felt. */
@@ -10,16 +15,6 @@ export const MOOD_LABELS: Record<NonNullable<Session['mood']>, string> = {
   sleepy: 'Sleepy',
   moved: 'Moved',
 };
-
-/**
- * Where the book ends in its own unit: its page count (print), 100 percent (ebook) or its
- * listening minutes (audiobook); null when the length is not known.
- */
-export function bookEnd(book: Pick<Book, 'format' | 'pageCount' | 'audioMinutes'>): number | null {
-  if (book.format === 'ebook') return 100;
-  if (book.format === 'audiobook') return book.audioMinutes ?? null;
-  return book.pageCount ?? null;
-}
 
 /** Minutes as "45 min" or "2 h 5 min" (whole minutes, rounded). */
 export function minutesLine(minutes: number): string {

@@ -6,7 +6,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 
-import { DISPLAY_NAME_MAX_LENGTH } from '@shared/api/auth';
+import { DISPLAY_NAME_MAX_LENGTH } from '@shared/account/display-name';
 import { PASSWORD_MIN_LENGTH } from '@shared/account/password-policy';
 
 import { Auth } from '../../../core/auth/auth';

@@ -14,7 +14,7 @@ import { ReaderSettings } from '../../../core/settings/reader-settings';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { readerToday } from '../../../core/time/reader-today';
 import { TIME_ZONE } from '../../../core/time/time-zone';
-import { bookForecast, bookProgress } from '../../sessions';
+import { bookForecast, bookProgress } from '../../../core/read-model/book-forecast';
 import { LoanItem } from '../loan-item/loan-item';
 import { loansData } from '../loans-data';
 import { loanView } from '../loan-view';

@@ -11,7 +11,7 @@ import { JournalStore } from '../../../core/data/journal-store';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
-import { bookForecast, bookProgress } from '../book-forecast';
+import { bookForecast, bookProgress } from '../../../core/read-model/book-forecast';
 import { bookEnd, minutesLine, MOOD_LABELS, positionLine, progressLine } from '../book-position';
 import { latestPosition, newestFirst } from '../../../core/read-model/reading-sessions';
 import { undoableDelete } from '../../../ui/undoable-delete';

@@ -6,7 +6,7 @@ import { localDay } from '@shared/calendar/local-day';
 import { liveQuerySignal } from '../../../core/data/live-query';
 import { CLOCK } from '../../../core/time/clock';
 import { TIME_ZONE } from '../../../core/time/time-zone';
-import { bookForecast, bookProgress } from '../../sessions';
+import { bookForecast, bookProgress } from '../../../core/read-model/book-forecast';
 import { TimerStartButton } from '../../timer';
 import { currentSessionsAndBooks, NO_SESSIONS } from '../today-data';
 import { ReaderDatePipe } from '../../../ui/reader-date';

@@ -7,8 +7,8 @@ import { personalPace } from '@shared/reading/personal-pace';
 import { usualMinutesPerDay } from '@shared/reading/usual-minutes-per-day';
 import type { Book, Session } from '@shared/sync/schema/collections';
 
-import { bookEnd } from './book-position';
-import { latestPosition, logSessions, sessionFormat, timedSessions, toPaceSession } from '../../core/read-model/reading-sessions';
+import { bookEnd } from './book-end';
+import { latestPosition, logSessions, sessionFormat, timedSessions, toPaceSession } from './reading-sessions';
 
 /** How far the reader is through a book, in its own unit. */
 export interface BookProgress {
