@@ -1,7 +1,7 @@
 import * as z from 'zod/mini';
 
 import { defineCollection, type RowOf } from '../sync/schema/collection';
-import { field, type FieldSpec } from '../sync/schema/field';
+import { field, maxTextLength, type FieldSpec } from '../sync/schema/field';
 import { BOOK_FORMATS } from '../sync/schema/collections';
 import { PART_END_KINDS } from './schedule';
 
@@ -67,6 +67,9 @@ export const circlePosts = defineCollection('circlePosts', {
   /** Set by a host: the post is folded away for everyone. */
   hidden: field.optionalBoolean(),
 });
+
+/** The longest post, as the schema checks it: the post forms stop typing there. */
+export const POST_MAX_LENGTH = maxTextLength(circlePosts.fields.text);
 
 /** One reader's reaction of one kind to one post; `on` false takes it back. */
 export const circleReactions = defineCollection('circleReactions', {

@@ -1,7 +1,7 @@
 import { validatePatch } from '../sync/validate-patch';
 import { notebookPages, notebooks, pageTemplates } from '../sync/schema/collections';
-import { field } from '../sync/schema/field';
-import { maxTextLength, NOTEBOOK_LIMITS } from './notebook-limits';
+import { field, maxTextLength } from '../sync/schema/field';
+import { NOTEBOOK_LIMITS } from './notebook-limits';
 
 describe('notebook limits', () => {
   it('are the lengths the schema itself accepts: the limit passes, one more is refused', () => {

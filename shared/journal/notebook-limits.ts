@@ -1,12 +1,5 @@
-import { textMaxLength, type FieldSpec } from '../sync/schema/field';
+import { maxTextLength } from '../sync/schema/field';
 import { notebookPages, notebooks, pageTemplates } from '../sync/schema/collections';
-
-/** The longest text a text field of the schema takes (unwrapping `nullable`). */
-export function maxTextLength(spec: FieldSpec): number {
-  const max = textMaxLength(spec);
-  if (max === null) throw new Error('not a text field with a maximum length');
-  return max;
-}
 
 /** Lengths the notebook forms check before writing, read from the schema so they never drift. */
 export const NOTEBOOK_LIMITS = {

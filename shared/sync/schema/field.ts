@@ -132,6 +132,13 @@ export function columnName(fieldName: string): string {
 /** Whether a field merges per element (see {@link FieldKind}). */
 export const isSetField = (spec: FieldSpec | undefined): boolean => spec?.kind === 'set';
 
+/** The longest text a text field of the schema takes; throws for any other field. */
+export function maxTextLength(spec: FieldSpec): number {
+  const max = textMaxLength(spec);
+  if (max === null) throw new Error('not a text field with a maximum length');
+  return max;
+}
+
 /**
  * The longest text a plain text field takes (unwrapping `nullable`), or `null` for other fields
  * and string formats such as UUIDs. Read from the validator's checks, so it never drifts.

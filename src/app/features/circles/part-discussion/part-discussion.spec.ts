@@ -83,6 +83,9 @@ describe('PartDiscussion', () => {
       button('Reply')!.click();
       await until(() => page().querySelector('form[aria-label="Reply"] textarea') !== null, fixture);
       const box = page().querySelector<HTMLTextAreaElement>('form[aria-label="Reply"] textarea')!;
+      // Typing stops where the schema would refuse the post (circlePosts.text: 4,000 characters).
+      expect(box.maxLength).toBe(4000);
+      expect(page().querySelector<HTMLTextAreaElement>('form[aria-label="New post"] textarea')?.maxLength).toBe(4000);
       box.value = 'The *tide* chapter, yes';
       box.dispatchEvent(new Event('input'));
       page().querySelector<HTMLButtonElement>('form[aria-label="Reply"] button[type="submit"]')!.click();

@@ -7,7 +7,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 
-import { REACTIONS, type CirclePost, type Reaction } from '@shared/circles/circle-collections';
+import { POST_MAX_LENGTH, REACTIONS, type CirclePost, type Reaction } from '@shared/circles/circle-collections';
 import { isPostShielded } from '@shared/circles/spoiler-shield';
 import { deterministicId } from '@shared/sync/deterministic-id';
 
@@ -46,6 +46,7 @@ export class PartDiscussion {
   private readonly store = inject(CircleStore);
   protected readonly sync = inject(CircleSync);
   protected readonly fieldError = fieldError;
+  protected readonly postMaxLength = POST_MAX_LENGTH;
   protected readonly reactions = REACTIONS;
   protected readonly looks = REACTION_LOOKS;
 

@@ -4,6 +4,8 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 
+import { POST_MAX_LENGTH } from '@shared/circles/circle-collections';
+
 import { fieldError } from '../../../ui/field-errors';
 
 /** A post's text being written in place: a reply under a post, or an edit of the reader's own. */
@@ -14,7 +16,7 @@ import { fieldError } from '../../../ui/field-errors';
     <form [formGroup]="form()" (ngSubmit)="send.emit()" novalidate class="compose" [attr.aria-label]="name()">
       <mat-form-field appearance="outline">
         <mat-label>{{ label() }}</mat-label>
-        <textarea matInput formControlName="text" [rows]="rows()" maxlength="4000"></textarea>
+        <textarea matInput formControlName="text" [rows]="rows()" [maxlength]="maxLength"></textarea>
         <mat-error>{{ fieldError(form().controls.text, errorName()) }}</mat-error>
       </mat-form-field>
       <div class="row">
@@ -39,4 +41,5 @@ export class PostForm {
   readonly cancelled = output();
 
   protected readonly fieldError = fieldError;
+  protected readonly maxLength = POST_MAX_LENGTH;
 }
