@@ -3,6 +3,7 @@ import { useServerAndBrowser } from './support/harness';
 import { bookFacts, fillBook } from './support/library';
 import { registerThroughApi, signInThroughUi } from './support/reader';
 import { waitForOfflineReady } from './support/service-worker';
+import { settled, textWhen, valueWhen } from './support/settled';
 
 describe('The journal, offline', () => {
   const harness = useServerAndBrowser();
@@ -57,7 +58,7 @@ describe('The journal, offline', () => {
     await page.getByLabel('Start from').selectOption({ label: 'After a sitting' });
     await page.getByRole('button', { name: 'Add a page' }).click();
     await page.getByLabel('Page title').waitFor();
-    expect(await page.getByLabel('Page text').inputValue()).toContain('## Where I stopped');
+    expect(await valueWhen(page.getByLabel('Page text'), (text) => text.includes('## Where I stopped'))).toContain('## Where I stopped');
     await page.getByRole('button', { name: 'Save page', exact: true }).click();
     await page.getByRole('status').filter({ hasText: 'Saved on this device.' }).waitFor();
 
@@ -85,8 +86,12 @@ describe('The journal, offline', () => {
 
     // The label shows on the book and filters the library.
     await page.getByRole('link', { name: 'Wick and Ember' }).click();
-    expect((await bookFacts(page))['Series']).toContain('The Lanternwright Trilogy');
-    expect(await page.locator('ll-label-chips').first().textContent()).toContain('Buddy read');
+    const facts = await settled(
+      () => bookFacts(page),
+      (shown) => shown['Series']?.includes('The Lanternwright Trilogy') ?? false,
+    );
+    expect(facts['Series']).toContain('The Lanternwright Trilogy');
+    expect(await textWhen(page.locator('ll-label-chips').first(), (text) => text.includes('Buddy read'))).toContain('Buddy read');
     await page.goto(`${baseUrl}/library`);
     await page.getByLabel('Label', { exact: true }).selectOption({ label: 'Buddy read' });
     await page.getByText('1 of 3 books').waitFor();

@@ -8,6 +8,7 @@ import { seriousViolations } from './support/axe';
 import { useServerAndBrowser } from './support/harness';
 import { bookFacts, fillBook } from './support/library';
 import { registerThroughApi, signInThroughUi } from './support/reader';
+import { valueWhen } from './support/settled';
 
 /** The reader is in Tokyo (no DST, so the expected dates below hold whatever the date is). */
 const ZONE = 'Asia/Tokyo';
@@ -55,7 +56,7 @@ describe('Reading sessions and the daily log', () => {
 
     await page.getByRole('link', { name: 'Add a session' }).click();
     await page.getByLabel('Started').waitFor();
-    expect(await page.getByLabel('From page').inputValue()).toBe('30'); // where the last one ended
+    expect(await valueWhen(page.getByLabel('From page'), (value) => value === '30')).toBe('30'); // where the last one ended
     await fillSession(page, { started: `${day(-1)}T20:00`, ended: `${day(-1)}T20:30`, to: '60' });
     await page.waitForFunction(() => document.querySelectorAll('li.session').length === 2);
 

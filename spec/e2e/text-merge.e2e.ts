@@ -6,6 +6,7 @@ import { useServerAndBrowser } from './support/harness';
 import { syncNow } from './support/library';
 import { registerThroughApi, signInThroughUi } from './support/reader';
 import { waitForOfflineReady } from './support/service-worker';
+import { textWhen } from './support/settled';
 
 describe('A notebook page edited on two devices, one offline', () => {
   const harness = useServerAndBrowser();
@@ -100,7 +101,8 @@ describe('A notebook page edited on two devices, one offline', () => {
     );
     await laptop.getByRole('button', { name: 'Page history' }).click();
     await laptop.getByRole('button', { name: /· 27 characters$/ }).click();
-    expect(await laptop.getByLabel('The chosen version').textContent()).toBe('An older page about herons.');
+    const older = 'An older page about herons.';
+    expect(await textWhen(laptop.getByLabel('The chosen version'), (text) => text === older)).toBe(older);
     await laptop.getByRole('button', { name: 'Restore this version' }).click();
     await laptop.getByRole('status').filter({ hasText: 'Saved on this device.' }).waitFor();
     expect(await laptopText.inputValue()).toBe('An older page about herons.');
