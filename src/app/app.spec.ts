@@ -1,7 +1,6 @@
 import { provideHttpClient } from '@angular/common/http';
 import { DeferBlockState, TestBed, type ComponentFixture } from '@angular/core/testing';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { MAT_ICON_DEFAULT_OPTIONS } from '@angular/material/icon';
 import { provideRouter } from '@angular/router';
 import { provideServiceWorker } from '@angular/service-worker';
 
@@ -21,7 +20,6 @@ function configureShell(): void {
       provideHttpClient(),
       provideServiceWorker('ngsw-worker.js', { enabled: false }),
       { provide: PAGE_RELOAD, useValue: () => fail('the app tried to reload the page') },
-      { provide: MAT_ICON_DEFAULT_OPTIONS, useValue: { fontSet: 'material-symbols-outlined' } },
     ],
   });
 }
@@ -37,6 +35,19 @@ describe('App shell', () => {
   beforeEach(configureShell);
 
   afterEach(() => forgetSession());
+
+  it("draws the shell's icons with Lamplight's icon font, which the shell sets (the app config does not)", async () => {
+    rememberSession();
+    const fixture = TestBed.createComponent(App);
+    await renderShell(fixture);
+    const icons = Array.from((fixture.nativeElement as HTMLElement).querySelectorAll('mat-icon'));
+
+    expect(icons.length).toBeGreaterThan(0);
+    for (const icon of icons) {
+      expect(icon.classList).toContain('material-symbols-outlined');
+      expect(icon.classList).not.toContain('material-icons');
+    }
+  });
 
   it('for a signed-in reader, shows the Lamplight name, their name and a link to each main destination', async () => {
     rememberSession();

@@ -18,6 +18,7 @@ import { SyncStatus } from './core/sync/sync-status/sync-status';
 import { SignOutFlow } from './features/account';
 import { TimerBar } from './features/timer';
 import { deferredMenu, type MenuTriggerLike } from './ui/deferred-menu';
+import { useIconFont } from './ui/icon-font';
 import { LazyOverlays } from './ui/lazy-overlays';
 
 /** A place in the app the shell links to. */
@@ -73,6 +74,7 @@ export class SignedInShell {
   ];
 
   constructor() {
+    useIconFont(); // before any icon of the shell or its pages renders
     inject(TabCoordination);
     inject(ApplyTheme); // the reader's colour theme, from their synced settings
     inject(Covers); // uploads covers an earlier visit saved offline

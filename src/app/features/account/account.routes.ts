@@ -3,7 +3,7 @@ import type { Routes } from '@angular/router';
 import { signedOutGuard } from '../../core/auth/auth-guards';
 
 /** Signing in, creating a journal and choosing a new password (mounted at the root). */
-export default [
+const accountRoutes = [
   {
     path: 'sign-in',
     title: 'Sign in · Lamplight',
@@ -32,3 +32,14 @@ export default [
     loadComponent: () => import('./verify-email/verify-email').then((m) => m.VerifyEmail),
   },
 ] satisfies Routes;
+export default accountRoutes;
+
+/**
+ * Starts loading the page a signed-out reader opening `path` will see (sign-in, unless it is another
+ * account page) while Angular starts, rather than once the router has matched it: the first
+ * screen's chain of requests gets one step shorter. The router's own load reuses the module.
+ */
+export function preloadSignedOutPage(path: string): void {
+  const page = accountRoutes.find((route) => path === `/${route.path}`) ?? accountRoutes[0];
+  void page.loadComponent();
+}

@@ -3,7 +3,6 @@ import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 
 import { DISPLAY_NAME_MAX_LENGTH } from '@shared/account/display-name';
@@ -12,6 +11,7 @@ import { PASSWORD_MIN_LENGTH } from '@shared/account/password-policy';
 import { Auth } from '../../../core/auth/auth';
 import { AccountPage } from '../account-page/account-page';
 import { fieldError } from '../../../ui/field-errors';
+import { BusyBar } from '../../../ui/busy-bar/busy-bar';
 import { TextField } from '../../../ui/text-field/text-field';
 import { FormSubmission } from '../../../ui/form-submission';
 import { passwordPolicy } from '../../../ui/password-validator';
@@ -19,7 +19,7 @@ import { passwordPolicy } from '../../../ui/password-validator';
 /** Create an account: e-mail, a name to show and a long password (no composition rules). */
 @Component({
   selector: 'll-register',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, AccountPage, TextField],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatFormFieldModule, MatInputModule, AccountPage, BusyBar, TextField],
   templateUrl: './register.html',
   styleUrl: '../account-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

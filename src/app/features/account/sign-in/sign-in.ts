@@ -1,18 +1,18 @@
 import { ChangeDetectionStrategy, Component, inject, input } from '@angular/core';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 
 import { Auth } from '../../../core/auth/auth';
 import { AccountPage } from '../account-page/account-page';
+import { BusyBar } from '../../../ui/busy-bar/busy-bar';
 import { TextField } from '../../../ui/text-field/text-field';
 import { FormSubmission } from '../../../ui/form-submission';
 
 /** Sign in with e-mail and password; needed once per device, then the journal opens offline. */
 @Component({
   selector: 'll-sign-in',
-  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, MatProgressBarModule, AccountPage, TextField],
+  imports: [ReactiveFormsModule, RouterLink, MatButtonModule, AccountPage, BusyBar, TextField],
   templateUrl: './sign-in.html',
   styleUrl: '../account-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
