@@ -1,10 +1,10 @@
-import { ApplicationConfig, isDevMode, provideBrowserGlobalErrorListeners, provideZonelessChangeDetection } from '@angular/core';
+import { ApplicationConfig, provideBrowserGlobalErrorListeners, provideZonelessChangeDetection } from '@angular/core';
 import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
-import { provideServiceWorker } from '@angular/service-worker';
 
 import { routes } from './app.routes';
 import { authInterceptor } from './core/auth/auth-interceptor';
+import { provideLamplightWorker } from './core/pwa/worker-registration';
 
 export const appConfig: ApplicationConfig = {
   providers: [
@@ -16,9 +16,7 @@ export const appConfig: ApplicationConfig = {
     // XMLHttpRequest rather than fetch: only XHR reports upload progress (cover uploads).
     provideHttpClient(withInterceptors([authInterceptor])),
     // The icon font is set by the signed-in shell (ui/icon-font.ts): the sign-in page shows no icons.
-    provideServiceWorker('ngsw-worker.js', {
-      enabled: !isDevMode(),
-      registrationStrategy: 'registerWhenStable:10000',
-    }),
+    // Registers once a reader is signed in and the first sync is over (core/pwa/worker-registration.ts).
+    ...provideLamplightWorker(),
   ],
 };

@@ -32,8 +32,8 @@ export class App {
     destroyRef.onDestroy(() => (destroyed = true));
     // Update prompts need the snackbar, overlays and a dialog (~30 KB gzip), which the first screen
     // does without: they load when the worker announces a version (or a broken one), or once the
-    // app has been open a while, for their periodic check. The worker itself registers once the app
-    // is stable, or after 10 s at the latest (registerWhenStable:10000).
+    // app has been open a while, for their periodic check. The worker itself registers once a reader
+    // is signed in and the first sync is over (core/pwa/worker-registration.ts).
     const loadPrompts = () => void import('./core/pwa/app-updates').then(({ AppUpdates }) => destroyed || injector.get(AppUpdates));
     afterNextRender(() => {
       const timer = setTimeout(loadPrompts, PROMPTS_AFTER_MS);

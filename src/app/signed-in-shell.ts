@@ -10,6 +10,7 @@ import { Covers } from './core/covers/covers';
 import { LocalJournal } from './core/data/local-journal';
 import { browserStorage } from './core/device/browser-storage';
 import { DeviceStorage } from './core/device/device-storage';
+import { allowWorkerAfterFirstSync } from './core/pwa/allow-worker-after-first-sync';
 import { installLamplight } from './core/pwa/install-lamplight';
 import { InstallPrompt } from './core/pwa/install-prompt';
 import { ApplyTheme } from './core/settings/apply-theme';
@@ -78,6 +79,7 @@ export class SignedInShell {
     inject(TabCoordination);
     inject(ApplyTheme); // the reader's colour theme, from their synced settings
     inject(Covers); // uploads covers an earlier visit saved offline
+    allowWorkerAfterFirstSync();
     this.askToKeepStorage();
   }
 

@@ -1,16 +1,14 @@
 import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
-import Dexie from 'dexie';
 
 import { formatHlc } from '@shared/sync/hlc';
 
 import { Auth } from '../auth/auth';
 import { authInterceptor } from '../auth/auth-interceptor';
-import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../data/journal-db';
+import { READER, rememberSession } from '../auth/testing/session-fixtures';
+import type { JournalDb } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
-import { LocalJournal } from '../data/local-journal';
 import { deviceId } from '../device/device-id';
 import { SyncEngine } from './sync-engine';
 import {
@@ -26,6 +24,7 @@ import {
   UNAUTHORIZED,
   until,
 } from './testing/sync-backend';
+import { closeEngineTestBed, openEngineTestBed, type EngineTestBed } from './testing/engine-test-bed';
 
 /**
  * The engine against the real pieces of this device — IndexedDB through Dexie, the auth
@@ -33,6 +32,7 @@ import {
  * (timers and Date), while IndexedDB and locks run in real time; `until`/`sent` wait in real time.
  */
 describe('SyncEngine', () => {
+  let bed: EngineTestBed;
   let userId: string;
   let backend: HttpTestingController;
   let store: JournalStore;
@@ -40,27 +40,12 @@ describe('SyncEngine', () => {
   let clock: jasmine.Clock;
 
   beforeEach(async () => {
-    userId = `sync-${crypto.randomUUID()}`;
-    rememberSession({ user: { ...READER, id: userId } });
-    clock = jasmine.clock();
-    clock.install();
-    clock.mockDate(new Date());
-    TestBed.configureTestingModule({
-      providers: [provideHttpClient(withInterceptors([authInterceptor])), provideHttpClientTesting()],
-    });
-    backend = TestBed.inject(HttpTestingController);
+    bed = await openEngineTestBed('sync');
+    ({ userId, backend, clock, db } = bed);
     store = TestBed.inject(JournalStore);
-    db = TestBed.inject(LocalJournal).db()!;
-    await db.open();
   });
 
-  afterEach(async () => {
-    TestBed.resetTestingModule(); // stops the engine's timers and closes the database
-    clock.uninstall();
-    backend.verify();
-    await Dexie.delete(journalDbName(userId));
-    forgetSession();
-  });
+  afterEach(() => closeEngineTestBed({ ...bed, backend })); // a spec may start a fresh TestBed and backend
 
   /** The app starting: the engine is created and its start effect runs. */
   function start(): SyncEngine {

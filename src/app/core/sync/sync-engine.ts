@@ -42,6 +42,7 @@ export class SyncEngine {
   private readonly lastError = signal<string | null>(null);
   private readonly clockNoticeState = signal<string | null>(null);
   private readonly progressState = signal<PullProgress | null>(null);
+  private readonly roundsState = signal(0);
   /** Rounds one at a time; a trigger mid-sync goes round once more afterwards. */
   private readonly job = new SerialJob(() => this.cycle());
   /** Bulk writes under way ({@link holdWhile}): no round starts until they end. */
@@ -69,6 +70,8 @@ export class SyncEngine {
   readonly clockNotice = this.clockNoticeState.asReadonly();
   /** A pull of several pages under way: rows so far and about how many in all; null otherwise. */
   readonly pullProgress = this.progressState.asReadonly();
+  /** Sync rounds over since the app started, whatever their outcome (the first one ends a new device's first sync). */
+  readonly roundsOver = this.roundsState.asReadonly();
 
   constructor() {
     const destroyRef = inject(DestroyRef);
@@ -150,6 +153,8 @@ export class SyncEngine {
       this.progressState.set(null); // the next cycle resumes from the stored cursor and says so again
       this.phaseState.set(this.describeFailure(error));
       if (this.phaseState() !== 'needs-sign-in') this.job.retryLater();
+    } finally {
+      this.roundsState.update((rounds) => rounds + 1);
     }
   }
 
