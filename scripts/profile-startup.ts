@@ -1,11 +1,14 @@
 /**
  * Where a signed-in cold start spends its main thread: the demo reader (its whole library, after
- * a first sync) opens Today (or `LAMPLIGHT_PROFILE_PATH`) in a new tab, offline, with a CPU profile
- * (CDP `Profiler`) until the page has been quiet a while. Prints the script time before and after
- * the first in-progress book shows, by chunk and by function (self time), and the busiest call
- * paths. Build the app first (`npm run build`, or `npx ng build --configuration production
- * --optimization=false` for readable names), then `node scripts/bench.mjs ../scripts/profile-startup`
- * is not needed: `npx tsc -p sync-server/tsconfig.json && DATABASE_URL=… node dist/node/scripts/profile-startup.js`.
+ * a first sync) opens Today (or `LAMPLIGHT_PROFILE_PATH`, waiting for `LAMPLIGHT_PROFILE_SELECTOR`)
+ * in a new tab, offline, with a CPU profile (CDP `Profiler`) until the page has been quiet a while.
+ * Prints when each file was asked for and arrived, then the script time before and after the
+ * page shows its data, by file and by function (self and inclusive). Build the app first:
+ * `NG_BUILD_DEBUG_OPTIMIZE=1 npx ng build --configuration production` keeps names readable (a
+ * production build otherwise). Then `npx tsc -p sync-server/tsconfig.json` and
+ * `DATABASE_URL=$(scripts/db.sh url lamplight_profile) node dist/node/scripts/profile-startup.js`
+ * (`LAMPLIGHT_PROFILE_OUT=file.json` also writes the profile, for DevTools). On a busy machine a
+ * sample's time includes time the page was not running: compare only figures from a quiet one.
  */
 import { writeFileSync } from 'node:fs';
 
