@@ -1,4 +1,6 @@
 import fc from 'fast-check';
+import { dailyLog } from '../reading-log/daily-log';
+import { dayIndex } from '../reading-log/day-index';
 import { LogSession } from '../reading-log/log-session';
 import { usualMinutesPerDay } from './usual-minutes-per-day';
 import { expectProperty } from '../testing/expect-property';
@@ -71,6 +73,31 @@ describe('usualMinutesPerDay', () => {
             usual <= sessions.reduce((sum, s) => sum + s.activeMinutes, 0) + 1e-9
           );
         },
+      ),
+    );
+  });
+
+  it('reads only the window’s sessions yet agrees with the mean over the whole log (property)', () => {
+    // The definition above, over every session's days (dailyLog of all of them): sessions from
+    // months before "today" up to after it, in zones at both ends of the offsets (UTC+14, UTC−11).
+    const whole = (sessions: readonly LogSession[], today: string, zone: string, window: number) => {
+      const log = dailyLog(sessions, zone);
+      const windowStart = new Date((dayIndex(today) - window + 1) * 86_400_000).toISOString().slice(0, 10);
+      if (!log[0]) return 0;
+      const start = log[0].day > windowStart ? log[0].day : windowStart;
+      if (start > today) return 0;
+      const minutes = log.filter((e) => e.day >= start && e.day <= today).reduce((sum, e) => sum + e.minutes, 0);
+      return minutes / (dayIndex(today) - dayIndex(start) + 1);
+    };
+    const session = fc
+      .tuple(fc.integer({ min: 0, max: 60 * 24 * 120 }), fc.integer({ min: -30, max: 60 * 30 }), fc.integer({ min: 0, max: 90 }))
+      .map(([minute, span, active]) => ({ ...at(new Date(Date.UTC(2026, 0, 1) + minute * 60_000).toISOString(), span), activeMinutes: active }));
+    expectProperty(
+      fc.property(
+        fc.array(session, { maxLength: 25 }),
+        fc.constantFrom('UTC', 'Pacific/Kiritimati', 'Pacific/Pago_Pago', 'America/Los_Angeles'),
+        fc.integer({ min: 1, max: 40 }),
+        (sessions, zone, window) => Math.abs(usualMinutesPerDay(sessions, '2026-03-10', zone, window) - whole(sessions, '2026-03-10', zone, window)) < 1e-9,
       ),
     );
   });

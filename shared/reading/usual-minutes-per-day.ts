@@ -3,6 +3,8 @@ import { dayFromIndex } from '../reading-log/day-from-index';
 import { dayIndex } from '../reading-log/day-index';
 import { LogSession } from '../reading-log/log-session';
 
+const MS_PER_DAY = 86_400_000;
+
 /**
  * The reader's usual reading minutes per day: the mean over the last `windowDays` local days
  * up to and including `today`, counting days without reading as 0.
@@ -27,10 +29,22 @@ export function usualMinutesPerDay(sessions: readonly LogSession[], today: strin
   if (!Number.isInteger(windowDays) || windowDays < 1) {
     throw new RangeError(`windowDays must be a whole number ≥ 1, not ${windowDays}`);
   }
-  const log = dailyLog(sessions, timeZone);
   const todayIndex = dayIndex(today);
   const windowStart = dayFromIndex(todayIndex - windowDays + 1);
-  const firstDay = log[0]?.day;
+  // Only sessions that reach into the window are split into local days (the costly part, once per
+  // session and day in the time zone): one that ended over a day before the window's first
+  // midnight in UTC lies before it in every zone (offsets are within ±14 hours), and only says
+  // that the reader's log began before the window.
+  const before = (dayIndex(windowStart) - 1) * MS_PER_DAY;
+  let readBefore = false;
+  const inWindow = sessions.filter((session) => {
+    const last = Math.max(Date.parse(session.startedAt), Date.parse(session.endedAt));
+    if (!(last < before)) return true; // a malformed time too: dailyLog says what is wrong
+    readBefore ||= session.activeMinutes > 0 || (session.pages ?? 0) > 0;
+    return false;
+  });
+  const log = dailyLog(inWindow, timeZone);
+  const firstDay = readBefore ? windowStart : log[0]?.day;
   if (firstDay === undefined) return 0;
   const start = firstDay > windowStart ? firstDay : windowStart;
   if (start > today) return 0;

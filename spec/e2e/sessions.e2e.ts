@@ -95,6 +95,11 @@ describe('Reading sessions and the daily log', () => {
     expect(await log.locator('.longest-streak').textContent()).toContain('2 days');
     expect(await log.locator('.today').textContent()).toContain('0 min · 0 pages');
     const heatmap = log.locator('ll-year-heatmap');
+    // The heatmap renders after the book being read, once the browser is idle (a @defer): wait for its words.
+    await heatmap
+      .locator('figcaption')
+      .filter({ hasText: /days with reading/ })
+      .waitFor();
     expect(await heatmap.locator('figcaption').textContent()).toMatch(/^\d+ of 36[56] days with reading in \d{4}/);
     expect(await heatmap.locator('[data-day]').count()).toBe(Number(today.slice(0, 4)) % 4 === 0 ? 366 : 365);
     for (const reading of [day(-2), day(-1)].filter((d) => d.slice(0, 4) === today.slice(0, 4))) {

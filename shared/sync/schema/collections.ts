@@ -248,17 +248,18 @@ export type Timer = RowOf<typeof timers>;
 export const CHALLENGE_KINDS = ['count', 'alphabet', 'weekly', 'prompts'] as const;
 export const ALPHABET_BY = ['title', 'author-surname'] as const;
 
-/** A short checklist item (a reading goal that is not a number, a prompt with its book). */
-const checklist = z
-  .array(
-    z.object({
-      id: z.string().check(z.minLength(1), z.maxLength(36)),
-      text: z.string().check(z.maxLength(300, 'each entry must be at most 300 characters')),
-      done: z.optional(z.boolean()),
-      bookId: z.optional(z.nullable(z.uuid())),
-    }),
-  )
-  .check(z.maxLength(100, 'must have at most 100 entries'));
+/** A short checklist item (a reading goal that is not a number, a prompt with its book); built on first use, as every field's validator. */
+const checklist = () =>
+  z
+    .array(
+      z.object({
+        id: z.string().check(z.minLength(1), z.maxLength(36)),
+        text: z.string().check(z.maxLength(300, 'each entry must be at most 300 characters')),
+        done: z.optional(z.boolean()),
+        bookId: z.optional(z.nullable(z.uuid())),
+      }),
+    )
+    .check(z.maxLength(100, 'must have at most 100 entries'));
 
 /** The reader's plan for a year. Row id `deterministicId('year-plan', 'YYYY')`: one per year. */
 export const yearPlans = defineCollection('yearPlans', {
@@ -268,7 +269,7 @@ export const yearPlans = defineCollection('yearPlans', {
   minutesTarget: field.optionalInteger(1, 1_000_000),
   bestBookId: field.optionalBookRef(),
   /** Goals that are not numbers ("read a book in French"), as a checklist. */
-  otherGoals: field.json(z.nullable(checklist), 'entries'),
+  otherGoals: field.json(() => z.nullable(checklist()), 'entries'),
   notes: field.optionalText(20_000),
 });
 export type YearPlan = RowOf<typeof yearPlans>;
@@ -296,7 +297,7 @@ export const challenges = defineCollection('challenges', {
   /** Alphabet: a letter per title, or per author surname. */
   alphabetBy: field.optionalChoice(ALPHABET_BY),
   /** Prompts: the reader's own list, each with the book that answers it. */
-  prompts: field.json(z.nullable(checklist), 'entries'),
+  prompts: field.json(() => z.nullable(checklist()), 'entries'),
   /** When the finish was celebrated, so the celebration shows once. */
   celebratedAt: field.optionalTimestamp(),
 });

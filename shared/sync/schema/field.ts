@@ -46,12 +46,24 @@ export interface FieldSpec<T = unknown> {
  */
 export type BookIdsIn = 'value' | 'entries' | 'values';
 
-const spec = <T>(sqlType: SqlType, schema: z.ZodMiniType<T>): FieldSpec<T> => ({ kind: 'lww', sqlType, schema });
+/**
+ * A field whose validator is built on first use (`schema` is a caching getter): building every
+ * collection's zod schemas when the module loads cost a cold start ~50 ms, and reading the
+ * journal validates nothing. Spreading a spec builds its validator; pass `build` here instead.
+ */
+function lazySpec<T>(base: Omit<FieldSpec<T>, 'schema'>, build: () => z.ZodMiniType<T>): FieldSpec<T> {
+  let schema: z.ZodMiniType<T> | undefined;
+  return Object.defineProperty({ ...base }, 'schema', { get: () => (schema ??= build()), enumerable: true }) as FieldSpec<T>;
+}
+
+const spec = <T>(sqlType: SqlType, build: () => z.ZodMiniType<T>): FieldSpec<T> => lazySpec({ kind: 'lww', sqlType }, build);
 
 const stringList = (maxItems: number, maxLength: number) =>
   z
     .array(z.string().check(z.maxLength(maxLength, `each entry must be at most ${maxLength} characters`)))
     .check(z.maxLength(maxItems, `must have at most ${maxItems} entries`));
+
+const rowId = () => z.nullable(z.uuid('must be a row id (UUID)'));
 
 /** Calendar dates as readers think of them, 'YYYY-MM-DD' (RFC 3339 full-date). */
 const DATE = /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/;
@@ -63,53 +75,48 @@ const TIMESTAMP = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z$/;
  * several devices, so no field is ever "required" on the server.
  */
 export const field = {
-  text: (max: number) => spec('text', z.string().check(z.maxLength(max, `must be at most ${max} characters`))),
-  optionalText: (max: number) => spec('text', z.nullable(z.string().check(z.maxLength(max, `must be at most ${max} characters`)))),
+  text: (max: number) => spec('text', () => z.string().check(z.maxLength(max, `must be at most ${max} characters`))),
+  optionalText: (max: number) => spec('text', () => z.nullable(z.string().check(z.maxLength(max, `must be at most ${max} characters`)))),
   /** An ordered list (authors: the first is the main one). Last writer wins for the whole list. */
-  orderedList: (maxItems: number, maxLength: number) => spec('text[]', stringList(maxItems, maxLength)),
+  orderedList: (maxItems: number, maxLength: number) => spec('text[]', () => stringList(maxItems, maxLength)),
   /**
    * An unordered list of distinct strings (tags, label ids) merged per element, so two devices
    * adding different entries offline both keep theirs. The column holds the current elements;
    * the per-element state lives beside it (see `shared/sync/or-set.ts`).
    */
-  set: (maxItems: number, maxLength: number): FieldSpec<string[]> => ({
-    kind: 'set',
-    sqlType: 'text[]',
-    schema: stringList(maxItems, maxLength),
-    elements: { maxItems, maxLength },
-  }),
+  set: (maxItems: number, maxLength: number): FieldSpec<string[]> =>
+    lazySpec({ kind: 'set', sqlType: 'text[]', elements: { maxItems, maxLength } }, () => stringList(maxItems, maxLength)),
   /**
    * Long prose (a page, a review, a note) that merges per character (Yjs): the app reads it as
    * text; pushes carry Yjs updates (`shared/text/text-value.ts`), pulls the text and its state.
    */
-  mergeableText: (max: number): FieldSpec<string | null> => ({
-    kind: 'text',
-    sqlType: 'text',
-    schema: z.nullable(z.string().check(z.maxLength(max, `must be at most ${max} characters`))),
-    maxLength: max,
-  }),
-  choice: <const Values extends readonly [string, ...string[]]>(values: Values) => spec('text', z.enum(values, { error: `must be one of ${values.join(', ')}` })),
+  mergeableText: (max: number): FieldSpec<string | null> =>
+    lazySpec({ kind: 'text', sqlType: 'text', maxLength: max }, () => z.nullable(z.string().check(z.maxLength(max, `must be at most ${max} characters`)))),
+  choice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
+    spec('text', () => z.enum(values, { error: `must be one of ${values.join(', ')}` })),
   optionalChoice: <const Values extends readonly [string, ...string[]]>(values: Values) =>
-    spec('text', z.nullable(z.enum(values, { error: `must be one of ${values.join(', ')} or null` }))),
+    spec('text', () => z.nullable(z.enum(values, { error: `must be one of ${values.join(', ')} or null` }))),
   optionalInteger: (min: number, max: number) =>
-    spec('integer', z.nullable(z.number().check(z.int('must be a whole number'), z.gte(min, `must be at least ${min}`), z.lte(max, `must be at most ${max}`)))),
-  optionalNumber: (min: number, max: number, step?: number) => {
-    const number = z.number().check(z.gte(min, `must be at least ${min}`), z.lte(max, `must be at most ${max}`));
-    return spec('double precision', z.nullable(step ? number.check(z.multipleOf(step, `must be in steps of ${step}`)) : number));
-  },
-  boolean: () => spec('boolean', z.boolean({ error: 'must be true or false' })),
-  optionalBoolean: () => spec('boolean', z.nullable(z.boolean({ error: 'must be true or false' }))),
+    spec('integer', () =>
+      z.nullable(z.number().check(z.int('must be a whole number'), z.gte(min, `must be at least ${min}`), z.lte(max, `must be at most ${max}`))),
+    ),
+  optionalNumber: (min: number, max: number, step?: number) =>
+    spec('double precision', () => {
+      const number = z.number().check(z.gte(min, `must be at least ${min}`), z.lte(max, `must be at most ${max}`));
+      return z.nullable(step ? number.check(z.multipleOf(step, `must be in steps of ${step}`)) : number);
+    }),
+  boolean: () => spec('boolean', () => z.boolean({ error: 'must be true or false' })),
+  optionalBoolean: () => spec('boolean', () => z.nullable(z.boolean({ error: 'must be true or false' }))),
   /** A calendar month, 'YYYY-MM' (ISO 8601). */
-  optionalMonth: () => spec('text', z.nullable(z.string().check(z.regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'must be a month like 2026-03')))),
-  optionalDate: () => spec('text', z.nullable(z.string().check(z.regex(DATE, 'must be a date like 2026-03-08')))),
-  optionalTimestamp: () => spec('text', z.nullable(z.string().check(z.regex(TIMESTAMP, 'must be a UTC time like 2026-03-08T09:30:00.000Z')))),
-  optionalRef: () => spec('uuid', z.nullable(z.uuid('must be a row id (UUID)'))),
+  optionalMonth: () => spec('text', () => z.nullable(z.string().check(z.regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'must be a month like 2026-03')))),
+  optionalDate: () => spec('text', () => z.nullable(z.string().check(z.regex(DATE, 'must be a date like 2026-03-08')))),
+  optionalTimestamp: () => spec('text', () => z.nullable(z.string().check(z.regex(TIMESTAMP, 'must be a UTC time like 2026-03-08T09:30:00.000Z')))),
+  optionalRef: () => spec('uuid', rowId),
   /** The id of one of the reader's books: a merge of two books moves it to the kept one. */
-  optionalBookRef: (): FieldSpec<string | null> => ({ ...field.optionalRef(), bookIds: 'value' }),
+  optionalBookRef: (): FieldSpec<string | null> => lazySpec({ kind: 'lww', sqlType: 'uuid', bookIds: 'value' }, rowId),
   /** ISBN-13 digits only (ISO 2108): the client converts an ISBN-10 before writing. */
   optionalIsbn13: () =>
-    spec(
-      'text',
+    spec('text', () =>
       z.nullable(
         z
           .string()
@@ -117,11 +124,13 @@ export const field = {
       ),
     ),
   /** A language tag such as 'en' or 'pt-BR' (BCP 47 shape: a 2–3 letter language, then subtags). */
-  optionalLanguage: () => spec('text', z.nullable(z.string().check(z.regex(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/, 'must be a language tag like en or pt-BR')))),
+  optionalLanguage: () =>
+    spec('text', () => z.nullable(z.string().check(z.regex(/^[A-Za-z]{2,3}(-[A-Za-z0-9]{1,8})*$/, 'must be a language tag like en or pt-BR')))),
   /** The id of an uploaded image: the hex SHA-256 of its bytes (FIPS 180-4). */
-  optionalUploadId: () => spec('text', z.nullable(z.string().check(z.regex(/^[0-9a-f]{64}$/, 'must be an upload id (64 hex digits)')))),
-  /** Any JSON value; `bookIds` says where it holds book ids, if it does. */
-  json: <T>(schema: z.ZodMiniType<T>, bookIds?: BookIdsIn): FieldSpec<T> => ({ ...spec('jsonb', schema), ...(bookIds ? { bookIds } : {}) }),
+  optionalUploadId: () => spec('text', () => z.nullable(z.string().check(z.regex(/^[0-9a-f]{64}$/, 'must be an upload id (64 hex digits)')))),
+  /** Any JSON value (its validator, or a function building it on first use); `bookIds` says where it holds book ids, if it does. */
+  json: <T>(schema: z.ZodMiniType<T> | (() => z.ZodMiniType<T>), bookIds?: BookIdsIn): FieldSpec<T> =>
+    lazySpec({ kind: 'lww', sqlType: 'jsonb', ...(bookIds ? { bookIds } : {}) }, typeof schema === 'function' ? schema : () => schema),
 };
 
 /** camelCase field name → its snake_case column. */

@@ -131,9 +131,13 @@ export class JournalDb extends Dexie {
     return this.table(collection);
   }
 
-  /** The rows of a collection that are not deleted. */
-  current<C extends CollectionName>(collection: C): Promise<StoredRow<C>[]> {
-    return this.rows(collection).filter(isCurrent).toArray();
+  /**
+   * The rows of a collection that are not deleted. Read whole and filtered here: a Dexie
+   * `filter()` walks a cursor (a request per row), while `toArray()` is one `getAll`, and live
+   * queries asking for the same table at once share it (Dexie's live-query cache).
+   */
+  async current<C extends CollectionName>(collection: C): Promise<StoredRow<C>[]> {
+    return (await this.rows(collection).toArray()).filter(isCurrent);
   }
 
   /** The rows not deleted of several collections at once, by name: `currentOf('books', 'quotes')` → `{ books, quotes }`. */

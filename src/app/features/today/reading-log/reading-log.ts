@@ -28,6 +28,8 @@ export class ReadingLog {
   private readonly clock = inject(CLOCK);
 
   private readonly data = liveQuerySignal(allSessionsAndBooks, NO_SESSIONS);
+  /** The journal has answered (the heatmap renders only then, after Today's first screen). */
+  protected readonly loaded = computed(() => this.data() !== NO_SESSIONS);
   protected readonly log = computed(() => dailyLog(logSessions(this.data().sessions, this.data().books), this.timeZone));
 
   protected readonly today = computed(() => {
