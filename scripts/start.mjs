@@ -21,6 +21,7 @@ console.log('Building the server and the app (production)…');
 run(bin('tsc'), ['-p', 'sync-server/tsconfig.json']);
 run('node', ['scripts/subset-icons.mjs']);
 run(bin('ng'), ['build', '--configuration', 'production']);
+run('node', ['scripts/preload-initial.mjs']);
 run('node', ['scripts/precompress.mjs']);
 
 const smtpPort = process.env.LAMPLIGHT_DEV_SMTP_PORT ?? '2525';

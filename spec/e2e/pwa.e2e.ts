@@ -72,6 +72,24 @@ describe('Lamplight as an installed app on a plane', () => {
     await page.getByRole('button', { name: 'Reload', exact: true }).waitFor();
     await context.close();
   });
+
+  it('asks for every file of the first screen in its first round trip (scripts/preload-initial.mjs)', async () => {
+    const html = await (await fetch(`${server.baseUrl}/`)).text();
+    const main = html.match(/<script src="(main-[A-Z0-9]+\.js)"/)?.[1] ?? 'main.js';
+    const imported = new Set<string>();
+    const visit = (file: string) => {
+      for (const [, chunk] of readFileSync(path.join(appDir, file), 'utf8').matchAll(/(?:from|import)\s*"\.\/(chunk-[A-Z0-9]+\.js)"/g)) {
+        if (imported.has(chunk)) continue;
+        imported.add(chunk);
+        visit(chunk);
+      }
+    };
+    visit(main);
+
+    expect(imported.size).toBeGreaterThan(0);
+    expect([...imported].filter((chunk) => !html.includes(`<link rel="modulepreload" href="${chunk}">`))).toEqual([]);
+    expect(html.match(/<link rel="preload" href="media\/atkinson-hyperlegible-latin-(400|700)-normal-/g)?.length).toBe(2);
+  });
 });
 
 /** What a deployment changes: a file's content, and its SHA-1 in the service worker's manifest. */
