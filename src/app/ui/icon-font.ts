@@ -1,8 +1,9 @@
 import { inject } from '@angular/core';
 import { MatIconRegistry } from '@angular/material/icon';
 
-/** The class of Lamplight's icon font (`.material-symbols-outlined` in styles.scss). */
-export const ICON_FONT_CLASS = 'material-symbols-outlined';
+import { ICON_FONT_CLASS } from './icon-font-names';
+
+export { ICON_FONT_CLASS } from './icon-font-names';
 
 /**
  * Points every `<mat-icon>` without a `fontSet` of its own at our icon font (Material's default is
