@@ -42,4 +42,20 @@ describe('Library', () => {
     expect(bar.closest('td')?.textContent?.trim()).toBe('25 %');
     expect(element.querySelectorAll('td.mat-column-progress progress').length).toBe(1);
   });
+
+  it('saves the status a reader picks in a row, with its history entry, and shows it in the row', async () => {
+    const id = await journal.store.create('books', { title: 'Salt Hours', authors: ['Ivo Trask'], format: 'ebook', status: 'tbr', deleted: false });
+    const fixture = TestBed.createComponent(Library);
+    const element = fixture.nativeElement as HTMLElement;
+    await waitFor(fixture, () => element.querySelector('select[aria-label="Status of Salt Hours"]'), 'the status select');
+    const select = element.querySelector<HTMLSelectElement>('select[aria-label="Status of Salt Hours"]')!;
+
+    select.value = 'reading';
+    select.dispatchEvent(new Event('change', { bubbles: true }));
+
+    await waitFor(fixture, async () => (await journal.store.get('books', id))?.status === 'reading', 'the saved status');
+    const history = (await journal.store.list('bookStatusChanges')).filter((change) => change.bookId === id);
+    expect(history.map((change) => change.status)).toEqual(['reading']);
+    await waitFor(fixture, () => element.querySelector('select[aria-label="Status of Salt Hours"] option[value="reading"]:checked'), 'the row showing it');
+  });
 });
