@@ -35,7 +35,7 @@ export class Deletions {
 
   /** What would go with a delete of this row now (rows not deleted yet), per kind. */
   async companionsOf(collection: CollectionName, id: string): Promise<Companions[]> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     return Promise.all(
       dependentsOf(collection).map(async ({ collection: kind, ref }) => {
         const rows = (await db.rows(kind).where(ref).equals(id).toArray()) as Row[];
@@ -59,7 +59,7 @@ export class Deletions {
    * with it: a child alone would show nowhere. Resolves with the parents restored along.
    */
   async restore(collection: CollectionName, id: string): Promise<RestoredParent[]> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     const row = (await db.rows(collection).get(id)) as Row | undefined;
     if (!row || !deletionClock(row)) return [];
     const writes = await this.restoreWrites(db, collection, row);
@@ -85,11 +85,5 @@ export class Deletions {
       for (const child of rows) if (deletionClock(child) === clock) writes.push({ collection: kind, rowId: child.id, patch: { deleted: false } });
     }
     return writes;
-  }
-
-  private requireDb(): JournalDb {
-    const db = this.journal.db();
-    if (!db) throw new Error('Nobody is signed in on this device');
-    return db;
   }
 }
