@@ -1,6 +1,6 @@
 import { provideHttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component } from '@angular/core';
-import { type ComponentFixture, TestBed } from '@angular/core/testing';
+import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import Dexie from 'dexie';
 
@@ -8,7 +8,6 @@ import { forgetSession, READER, rememberSession } from '../auth/testing/session-
 import { journalDbName, type JournalDb } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
 import { LocalJournal } from '../data/local-journal';
-import { patienceDeadline, stillPatient } from './patience';
 import { CLOCK, fixedClock } from '../time/clock';
 import { TIME_ZONE } from '../time/time-zone';
 import { BROWSER_LOCALE } from '../settings/reader-settings';
@@ -53,14 +52,7 @@ export async function setUpGoalSpec(
 }
 
 /** Waits, a few milliseconds at a time, until `check` passes (live queries answer asynchronously). */
-export async function until(fixture: ComponentFixture<unknown>, check: () => unknown, what: string): Promise<void> {
-  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-    await fixture.whenStable();
-    if (check()) return;
-    await new Promise((resolve) => setTimeout(resolve, 5));
-  }
-  throw new Error(`gave up waiting for ${what}`);
-}
+export { waitFor as until } from './test-journal';
 
 /** The text of an element as words: its text pieces joined by spaces, icon names left out. */
 export function textOf(element: Element | null | undefined): string {
