@@ -1,7 +1,7 @@
 import { provideHttpClient } from '@angular/common/http';
 import { ApplicationRef, type EnvironmentProviders, type Provider } from '@angular/core';
 import { TestBed, type ComponentFixture } from '@angular/core/testing';
-import { provideRouter } from '@angular/router';
+import { provideRouter, type Routes } from '@angular/router';
 import Dexie from 'dexie';
 
 import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
@@ -20,10 +20,10 @@ export interface TestJournal {
 }
 
 /** Configures TestBed for a fresh reader; call in `beforeEach`, and `close()` in `afterEach`. */
-export function openTestJournal(providers: (Provider | EnvironmentProviders)[] = []): TestJournal {
+export function openTestJournal(providers: (Provider | EnvironmentProviders)[] = [], routes: Routes = []): TestJournal {
   const userId = `spec-${crypto.randomUUID()}`;
   rememberSession({ user: { ...READER, id: userId } });
-  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideRouter([]), ...providers] });
+  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideRouter(routes), ...providers] });
   const store = TestBed.inject(JournalStore);
   const db = TestBed.inject(LocalJournal).db()!;
   return {
