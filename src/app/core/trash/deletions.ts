@@ -38,7 +38,7 @@ export class Deletions {
     const db = this.journal.requireDb();
     return Promise.all(
       dependentsOf(collection).map(async ({ collection: kind, ref }) => {
-        const rows = (await db.rows(kind).where(ref).equals(id).toArray()) as Row[];
+        const rows = await rowsReferring(db, kind, ref, id);
         return { collection: kind, ids: rows.filter((row) => row.deleted !== true).map((row) => row.id) };
       }),
     );
@@ -81,9 +81,14 @@ export class Deletions {
     const clock = deletionClock(row);
     const writes: RowWrite[] = [{ collection, rowId: row.id, patch: { deleted: false } }];
     for (const { collection: kind, ref } of dependentsOf(collection)) {
-      const rows = (await db.rows(kind).where(ref).equals(row.id).toArray()) as Row[];
+      const rows = await rowsReferring(db, kind, ref, row.id);
       for (const child of rows) if (deletionClock(child) === clock) writes.push({ collection: kind, rowId: child.id, patch: { deleted: false } });
     }
     return writes;
   }
+}
+
+/** The rows of `collection` whose `ref` field points at `id` (a book's readings, a notebook's pages), deleted or not. */
+async function rowsReferring(db: JournalDb, collection: CollectionName, ref: string, id: string): Promise<Row[]> {
+  return (await db.rows(collection).where(ref).equals(id).toArray()) as Row[];
 }
