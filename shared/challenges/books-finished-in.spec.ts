@@ -1,16 +1,7 @@
 import fc from 'fast-check';
 import { booksFinishedIn } from './books-finished-in';
-import { ChallengeBook } from './challenge-book';
 import { expectProperty } from '../testing/expect-property';
-
-// Invented books.
-const book = (id: string, finishedOn: string | undefined, status = 'finished'): ChallengeBook => ({
-  id,
-  title: `Saltmarsh ${id}`,
-  authors: ['Kit Ashdown'],
-  status,
-  finishedOn,
-});
+import { inventedBook as book } from './testing/invented-book';
 
 describe('booksFinishedIn', () => {
   it('keeps finished books inside the period, both ends included, earliest first then by id', () => {

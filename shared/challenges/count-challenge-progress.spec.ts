@@ -1,14 +1,5 @@
-import { ChallengeBook } from './challenge-book';
 import { COUNT_CHALLENGE_TARGETS, countChallengeProgress } from './count-challenge-progress';
-
-// Invented books.
-const book = (id: string, finishedOn: string | undefined, status = 'finished'): ChallengeBook => ({
-  id,
-  title: `The Lantern Road ${id}`,
-  authors: ['Ruth Ellery'],
-  status,
-  finishedOn,
-});
+import { inventedBook as book } from './testing/invented-book';
 
 describe('countChallengeProgress', () => {
   it('offers 25, 50 and 100 as ready-made targets', () => {

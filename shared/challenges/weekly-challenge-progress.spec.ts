@@ -1,8 +1,6 @@
 import { ChallengeBook } from './challenge-book';
 import { weeklyChallengeProgress } from './weekly-challenge-progress';
-
-// Invented books.
-const finished = (id: string, finishedOn: string): ChallengeBook => ({ id, title: `Tidewater ${id}`, authors: ['Ada Okafor'], status: 'finished', finishedOn });
+import { inventedBook as finished } from './testing/invented-book';
 
 describe('weeklyChallengeProgress', () => {
   it('has 53 weeks in 2026, from Monday 2025-12-29 to Sunday 2027-01-03', () => {

@@ -1,9 +1,7 @@
+import type { LooseBookRow } from '../books/book-row';
+
 /** What two books must share to look like the same book. */
-export interface BookIdentity {
-  readonly title?: string | null;
-  readonly authors?: readonly string[] | null;
-  readonly isbn?: string | null;
-}
+export type BookIdentity = Pick<LooseBookRow, 'title' | 'authors' | 'isbn'>;
 
 /** Lower case, accents and punctuation gone, one space between words (Unicode NFKD, then combining marks dropped). */
 function fold(text: string): string {

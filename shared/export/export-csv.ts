@@ -17,6 +17,13 @@ type Column<Row> = readonly [header: string, value: (row: Row, titleOf: (bookId:
 
 const list = (value: unknown): string => (Array.isArray(value) ? value.join(CSV_LIST_SEPARATOR) : '');
 
+/** The first columns of a row about a book: its own id, the book's id and the book's title. */
+const aboutABook = <Row extends { readonly id: string; readonly bookId?: string | null }>(): readonly Column<Row>[] => [
+  ['id', (row) => row.id],
+  ['book_id', (row) => row.bookId],
+  ['book_title', (row, titleOf) => titleOf(row.bookId)],
+];
+
 /** Our own column names, documented in src/app/features/your-data/README.md. */
 const BOOK_COLUMNS: readonly Column<Book>[] = [
   ['id', (b) => b.id],
@@ -41,9 +48,7 @@ const BOOK_COLUMNS: readonly Column<Book>[] = [
 ];
 
 const READING_COLUMNS: readonly Column<Reading>[] = [
-  ['id', (r) => r.id],
-  ['book_id', (r) => r.bookId],
-  ['book_title', (r, titleOf) => titleOf(r.bookId)],
+  ...aboutABook<Reading>(),
   ['started_on', (r) => r.startedOn],
   ['finished_on', (r) => r.finishedOn],
   ['rating', (r) => r.rating],
@@ -54,9 +59,7 @@ const READING_COLUMNS: readonly Column<Reading>[] = [
 ];
 
 const SESSION_COLUMNS: readonly Column<Session>[] = [
-  ['id', (s) => s.id],
-  ['book_id', (s) => s.bookId],
-  ['book_title', (s, titleOf) => titleOf(s.bookId)],
+  ...aboutABook<Session>(),
   ['started_at', (s) => s.startedAt],
   ['ended_at', (s) => s.endedAt],
   ['active_minutes', (s) => s.activeMinutes],
@@ -69,9 +72,7 @@ const SESSION_COLUMNS: readonly Column<Session>[] = [
 ];
 
 const QUOTE_COLUMNS: readonly Column<Quote>[] = [
-  ['id', (q) => q.id],
-  ['book_id', (q) => q.bookId],
-  ['book_title', (q, titleOf) => titleOf(q.bookId)],
+  ...aboutABook<Quote>(),
   ['text', (q) => q.text],
   ['page', (q) => q.page],
   ['chapter', (q) => q.chapter],

@@ -1,13 +1,11 @@
 import { DailyLogEntry } from '../reading-log/log-session';
 import { amountsIn, amountsInLog, GoalSessionRow, monthlyAmounts, monthPeriod, recentRatesPerDay, sessionLog, yearPeriod } from './amounts-in';
-import { FinishedBook } from './finished-books';
+import { inventedFinish as finished } from '../challenges/testing/invented-book';
 
 // Offsets from the IANA tz database: Asia/Tokyo is UTC+9 all year; America/Los_Angeles is UTC−7
 // (PDT) all through May 2026 (US DST, Energy Policy Act of 2005: 8 March to 1 November 2026).
 const LA = 'America/Los_Angeles';
 const TOKYO = 'Asia/Tokyo';
-
-const finished = (id: string, finishedOn: string): FinishedBook => ({ id, title: `Brine ${id}`, authors: ['Ruth Ellery'], status: 'finished', finishedOn });
 
 /** Rounds away the float noise of a split session. */
 const rounded = (amounts: { books: number; pages: number; minutes: number }) => ({

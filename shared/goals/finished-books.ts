@@ -1,16 +1,9 @@
 import { localDay } from '../calendar/local-day';
 import { ChallengeBook } from '../challenges/challenge-book';
+import type { LooseBookRow } from '../books/book-row';
 
-/** What `finishedBooks` reads of a book row (a `books` row fits). */
-export interface GoalBookRow {
-  readonly id: string;
-  readonly title?: string | null;
-  readonly authors?: readonly string[] | null;
-  readonly status?: string | null;
-  /** An instant with 'Z' or an offset, as stored. */
-  readonly statusChangedAt?: string | null;
-  readonly deleted?: boolean | null;
-}
+/** What `finishedBooks` reads of a book row. */
+export type GoalBookRow = Pick<LooseBookRow, 'id' | 'title' | 'authors' | 'status' | 'statusChangedAt' | 'deleted'>;
 
 /** What `finishedBooks` reads of a reading row (a `readings` row fits). */
 export interface GoalReadingRow {

@@ -1,8 +1,6 @@
 import { DailyLogEntry } from '../reading-log/log-session';
-import { FinishedBook } from './finished-books';
 import { yearGoalPacing } from './year-goal-pacing';
-
-const finished = (id: string, finishedOn: string): FinishedBook => ({ id, title: `Harrow ${id}`, authors: ['Kit Ashdown'], status: 'finished', finishedOn });
+import { inventedFinish as finished } from '../challenges/testing/invented-book';
 
 describe('yearGoalPacing', () => {
   // Invented: 5 books finished in 2026 (one in the last 28 days), one on New Year's Eve 2025.

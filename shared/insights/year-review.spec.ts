@@ -1,6 +1,6 @@
-import type { FinishedBook } from '../goals/finished-books';
 import type { DailyLogEntry } from '../reading-log/log-session';
 import { ReviewBookRow, yearReview } from './year-review';
+import { inventedFinish as finished } from '../challenges/testing/invented-book';
 
 // An invented reader's 2028. 2028 is a leap year (Gregorian rule: divisible by 4, not a century),
 // so 28 February, 29 February and 1 March are three consecutive days.
@@ -11,7 +11,6 @@ const rows: ReviewBookRow[] = [
   { id: 'b4', title: 'Glass Weather', authors: ['Oskar Lind'], format: 'ebook', pageCount: 260, rating: 3 },
   { id: 'b5', title: 'Last Year’s Book', authors: ['Oskar Lind'], format: 'print', pageCount: 900, rating: 5 },
 ];
-const finished = (id: string, finishedOn: string): FinishedBook => ({ id, title: id, authors: [], status: 'finished', finishedOn });
 const books = new Map(rows.map((row) => [row.id, row]));
 const finishedList = [
   finished('b5', '2027-12-30'),

@@ -6,17 +6,10 @@ import { streaks } from '../reading-log/streaks';
 import { formatSplit, FormatSplit } from './format-split';
 import { ratingSpread } from './rating-spread';
 import { topTerms } from './top-terms';
+import type { LooseBookRow } from '../books/book-row';
 
-/** What the review reads of a book row (a `books` row fits). */
-export interface ReviewBookRow {
-  readonly id: string;
-  readonly title?: string | null;
-  readonly authors?: readonly string[] | null;
-  readonly format?: string | null;
-  readonly pageCount?: number | null;
-  readonly genres?: readonly string[] | null;
-  readonly rating?: number | null;
-}
+/** What the review reads of a book row. */
+export type ReviewBookRow = Pick<LooseBookRow, 'id' | 'title' | 'authors' | 'format' | 'pageCount' | 'genres' | 'rating'>;
 
 /** A book as the review names it. */
 export interface ReviewBook {

@@ -1,16 +1,10 @@
 import { booksFinishedIn } from '../challenges/books-finished-in';
 import { yearPeriod } from '../goals/amounts-in';
 import type { FinishedBook } from '../goals/finished-books';
+import type { LooseBookRow } from '../books/book-row';
 
-/** What the shelf reads of a book row (a `books` row fits). */
-export interface ShelfBookRow {
-  readonly id: string;
-  readonly title?: string | null;
-  readonly authors?: readonly string[] | null;
-  readonly format?: string | null;
-  readonly pageCount?: number | null;
-  readonly audioMinutes?: number | null;
-}
+/** What the shelf reads of a book row. */
+export type ShelfBookRow = Pick<LooseBookRow, 'id' | 'title' | 'authors' | 'format' | 'pageCount' | 'audioMinutes'>;
 
 /** One finished book drawn as a spine on the year's shelf. */
 export interface ShelfSpine {

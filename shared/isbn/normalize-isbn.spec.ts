@@ -2,12 +2,15 @@ import fc from 'fast-check';
 import { asIsbn13 } from 'isbn3';
 import { normalizeIsbn } from './normalize-isbn';
 import { expectProperty } from '../testing/expect-property';
+import { WORKED_ISBNS } from './testing/worked-examples';
 
 describe('normalizeIsbn', () => {
-  it("gives the same key for both forms of the ISBN Users' Manual example 0-8436-1072-7", () => {
-    expect(normalizeIsbn('0-8436-1072-7')).toBe('9780843610727');
-    expect(normalizeIsbn('978-0-8436-1072-7')).toBe('9780843610727');
-  });
+  for (const example of WORKED_ISBNS) {
+    it(`gives the same key for both forms of ${example.hyphenated10}, ${example.source}`, () => {
+      expect(normalizeIsbn(example.hyphenated10)).toBe(example.isbn13);
+      expect(normalizeIsbn(example.isbn13)).toBe(example.isbn13);
+    });
+  }
 
   it("keeps a valid ISBN-13 (ISBN Users' Manual example 978-92-95055-12-4) as digits", () => {
     expect(normalizeIsbn(' 978 92 95055 12 4 ')).toBe('9789295055124');

@@ -1,12 +1,10 @@
 import { finishBeforeDueSentence, type FinishBeforeDueInput } from './finish-before-due-sentence';
+import { BRIEF_EXAMPLE } from '../reading/testing/brief-example';
 
 /** 300 pages at 30 pages an hour (600 minutes), 45 minutes a day, from 1 March 2026. */
 const sentence = (changes: Partial<FinishBeforeDueInput>) =>
   finishBeforeDueSentence({
-    remaining: 300,
-    pace: { format: 'print', rate: 30 },
-    minutesPerDay: 45,
-    today: '2026-03-01',
+    ...BRIEF_EXAMPLE,
     timeZone: 'Europe/London',
     dueOn: '2026-03-16',
     ...changes,

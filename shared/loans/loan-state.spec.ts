@@ -1,14 +1,7 @@
 import { type LoanDates, loanState, needsAttention } from './loan-state';
+import { libraryLoan } from './testing/library-loan';
 
-const library = (changes: Partial<LoanDates> = {}): LoanDates => ({
-  kind: 'library',
-  dueOn: '2026-03-05',
-  returnedOn: null,
-  readyOn: null,
-  pickUpBy: null,
-  holdOutcome: null,
-  ...changes,
-});
+const library = (changes: Partial<LoanDates> = {}): LoanDates => libraryLoan({ dueOn: '2026-03-05', ...changes });
 
 describe('loanState', () => {
   it('counts a loan due today, tomorrow or the day after as due soon, and three days ahead as out', () => {

@@ -1,17 +1,9 @@
 import type { Loan } from '../sync/schema/collections';
+import { libraryLoan } from './testing/library-loan';
 import { byUrgency } from './urgency';
 
 type Row = Pick<Loan, 'id' | 'kind' | 'dueOn' | 'returnedOn' | 'readyOn' | 'pickUpBy' | 'holdOutcome'>;
-const row = (id: string, changes: Partial<Row>): Row => ({
-  id,
-  kind: 'library',
-  dueOn: null,
-  returnedOn: null,
-  readyOn: null,
-  pickUpBy: null,
-  holdOutcome: null,
-  ...changes,
-});
+const row = (id: string, changes: Partial<Row>): Row => ({ id, ...libraryLoan(changes) });
 
 describe('byUrgency', () => {
   it('lists overdue, ready holds, due soon, lent overdue, other loans, lent out, waiting holds, then closed', () => {

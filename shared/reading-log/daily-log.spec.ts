@@ -30,30 +30,44 @@ describe('dailyLog', () => {
     ]);
   });
 
-  it('splits a session across local midnight in proportion to time (Los Angeles, PST)', () => {
-    // IANA tz database: Los Angeles is UTC−8 on 7–8 March 2026 before 02:00, so 07:30Z–08:30Z is
-    // 23:30–00:30 PST. Hand-worked: 30 of the 60 wall minutes fall on each day → 30 min, 10 pages each.
-    const s = session('2026-03-08T07:30:00.000Z', '2026-03-08T08:30:00.000Z', 60, 20);
-    expect(rounded(dailyLog([s], 'America/Los_Angeles'))).toEqual([
-      { day: '2026-03-07', minutes: 30, pages: 10 },
-      { day: '2026-03-08', minutes: 30, pages: 10 },
-    ]);
-    // The same instants are 07:30–08:30 UTC and 16:30–17:30 JST (UTC+9): one day each.
-    expect(dailyLog([s], 'UTC')).toEqual([{ day: '2026-03-08', minutes: 60, pages: 20 }]);
-    expect(dailyLog([s], 'Asia/Tokyo')).toEqual([{ day: '2026-03-08', minutes: 60, pages: 20 }]);
-  });
-
-  it('splits by Tokyo midnight for a Tokyo reader (JST is UTC+9, no DST)', () => {
-    // IANA tz database: Japan has kept UTC+9 without DST since 1951, so 14:30Z–15:30Z is 23:30–00:30 JST.
-    // Hand-worked: active 40 of 60 wall minutes, spread evenly → 20 each day.
-    const s = session('2026-03-07T14:30:00.000Z', '2026-03-07T15:30:00.000Z', 40);
-    expect(rounded(dailyLog([s], 'Asia/Tokyo'))).toEqual([
-      { day: '2026-03-07', minutes: 20, pages: 0 },
-      { day: '2026-03-08', minutes: 20, pages: 0 },
-    ]);
-    expect(dailyLog([s], 'UTC')).toEqual([{ day: '2026-03-07', minutes: 40, pages: 0 }]);
-    expect(dailyLog([s], 'America/Los_Angeles')).toEqual([{ day: '2026-03-07', minutes: 40, pages: 0 }]);
-  });
+  // A session across the reader's local midnight splits in proportion to wall time; the same
+  // instants fall on one day in the other zones. Offsets from the IANA tz database.
+  const acrossMidnight = [
+    {
+      // Los Angeles is UTC−8 on 7–8 March 2026 before 02:00, so 07:30Z–08:30Z is 23:30–00:30 PST.
+      // Hand-worked: 30 of the 60 wall minutes fall on each day → 30 min, 10 pages each. The same
+      // instants are 07:30–08:30 UTC and 16:30–17:30 JST (UTC+9): one day each.
+      zone: 'America/Los_Angeles',
+      session: session('2026-03-08T07:30:00.000Z', '2026-03-08T08:30:00.000Z', 60, 20),
+      split: [
+        { day: '2026-03-07', minutes: 30, pages: 10 },
+        { day: '2026-03-08', minutes: 30, pages: 10 },
+      ],
+      oneDay: { day: '2026-03-08', minutes: 60, pages: 20 },
+      oneDayIn: ['UTC', 'Asia/Tokyo'],
+    },
+    {
+      // Japan has kept UTC+9 without DST since 1951, so 14:30Z–15:30Z is 23:30–00:30 JST.
+      // Hand-worked: active 40 of 60 wall minutes, spread evenly → 20 each day.
+      zone: 'Asia/Tokyo',
+      session: session('2026-03-07T14:30:00.000Z', '2026-03-07T15:30:00.000Z', 40),
+      split: [
+        { day: '2026-03-07', minutes: 20, pages: 0 },
+        { day: '2026-03-08', minutes: 20, pages: 0 },
+      ],
+      oneDay: { day: '2026-03-07', minutes: 40, pages: 0 },
+      oneDayIn: ['UTC', 'America/Los_Angeles'],
+    },
+  ];
+  for (const { zone, session: across, split, oneDay, oneDayIn } of acrossMidnight) {
+    it(`splits a session across midnight in ${zone} in proportion to time, and keeps it on one day in ${oneDayIn.join(' and ')}`, () => {
+      expect(rounded(dailyLog([across], zone))).toEqual(split);
+      for (const other of oneDayIn)
+        expect(dailyLog([across], other))
+          .withContext(other)
+          .toEqual([oneDay]);
+    });
+  }
 
   it('knows 8 March 2026 has 23 hours in Los Angeles (US DST starts)', () => {
     // Energy Policy Act of 2005 §110 (15 U.S.C. 260a): DST starts at 02:00 on the second Sunday

@@ -24,19 +24,21 @@ describe('yearHeatmap', () => {
   });
 
   it('levels minutes by the fixed thresholds 0 / >0 / 15 / 30 / 60', () => {
+    // [minutes read on a day, its level], one day each from 1 January; 8 January reads nothing.
+    const levels = [
+      [0.5, 1],
+      [14.9, 1],
+      [15, 2],
+      [30, 3],
+      [59, 3],
+      [60, 4],
+      [600, 4],
+    ] as const;
     const cells = yearHeatmap(
-      [
-        { day: '2026-01-01', minutes: 0.5, pages: 0 },
-        { day: '2026-01-02', minutes: 14.9, pages: 0 },
-        { day: '2026-01-03', minutes: 15, pages: 0 },
-        { day: '2026-01-04', minutes: 30, pages: 0 },
-        { day: '2026-01-05', minutes: 59, pages: 0 },
-        { day: '2026-01-06', minutes: 60, pages: 0 },
-        { day: '2026-01-07', minutes: 600, pages: 0 },
-      ],
+      levels.map(([minutes], n) => ({ day: `2026-01-0${n + 1}`, minutes, pages: 0 })),
       2026,
     );
-    expect(cells.slice(0, 8).map((c) => c.level)).toEqual([1, 1, 2, 3, 3, 4, 4, 0]);
+    expect(cells.slice(0, 8).map((c) => c.level)).toEqual([...levels.map(([, level]) => level), 0]);
     expect(HEATMAP_THRESHOLDS.slice(1)).toEqual([15, 30, 60]);
   });
 

@@ -2,14 +2,12 @@ import fc from 'fast-check';
 import { fallbackPace } from './fallback-pace';
 import { ForecastInput, forecastFinish } from './forecast-finish';
 import { expectProperty } from '../testing/expect-property';
+import { BRIEF_EXAMPLE } from './testing/brief-example';
 
 /** 300 pages at 30 pages/hour, 45 minutes a day, from 1 March 2026; override what a case needs. */
 const forecast = (changes: Partial<ForecastInput> = {}) =>
   forecastFinish({
-    remaining: 300,
-    pace: { format: 'print', rate: 30 },
-    minutesPerDay: 45,
-    today: '2026-03-01',
+    ...BRIEF_EXAMPLE,
     timeZone: 'America/Los_Angeles',
     ...changes,
   });

@@ -4,14 +4,12 @@ import { dayIndex } from '../reading-log/day-index';
 import { fallbackPace } from './fallback-pace';
 import { DueForecastInput, willFinishBeforeDue } from './will-finish-before-due';
 import { expectProperty } from '../testing/expect-property';
+import { BRIEF_EXAMPLE } from './testing/brief-example';
 
 /** 300 pages at 30 pages/hour (600 minutes), 45 minutes a day, from 1 March 2026, due 14 March. */
 const due = (changes: Partial<DueForecastInput> = {}) =>
   willFinishBeforeDue({
-    remaining: 300,
-    pace: { format: 'print', rate: 30 },
-    minutesPerDay: 45,
-    today: '2026-03-01',
+    ...BRIEF_EXAMPLE,
     timeZone: 'UTC',
     dueDate: '2026-03-14',
     ...changes,

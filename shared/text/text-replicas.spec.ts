@@ -154,14 +154,17 @@ describe('mergeTextUpdate', () => {
     edit(doc.getText(name));
     return Y.encodeStateAsUpdate(doc, vector);
   };
-
-  it('merges a good update and reports the new text', () => {
-    const result = mergeTextUpdate(
+  /** The stored text merged with an update that inserts `text` at `at`, within `maxLength` characters. */
+  const mergeInsert = (at: number, text: string, maxLength = 100) =>
+    mergeTextUpdate(
       NAME,
       stored,
-      editOf(NAME, (t) => t.insert(12, '!')),
-      100,
+      editOf(NAME, (t) => t.insert(at, text)),
+      maxLength,
     );
+
+  it('merges a good update and reports the new text', () => {
+    const result = mergeInsert(12, '!');
     expect(result).toEqual(jasmine.objectContaining({ ok: true, text: 'Stored words!', changed: true }));
   });
 
@@ -188,32 +191,11 @@ describe('mergeTextUpdate', () => {
   });
 
   it('refuses a NUL (PostgreSQL text cannot hold one) and never stores a lone surrogate', () => {
-    expect(
-      mergeTextUpdate(
-        NAME,
-        stored,
-        editOf(NAME, (t) => t.insert(0, 'a\u0000b')),
-        100,
-      ),
-    ).toEqual({ ok: false, reason: jasmine.stringContaining('NUL') });
+    expect(mergeInsert(0, 'a\u0000b')).toEqual({ ok: false, reason: jasmine.stringContaining('NUL') });
     // A lone surrogate cannot even travel: Yjs writes strings as UTF-8, which turns it into U+FFFD
     // (WHATWG Encoding Standard, UTF-8 encoder via TextEncoder).
-    expect(
-      mergeTextUpdate(
-        NAME,
-        stored,
-        editOf(NAME, (t) => t.insert(0, 'x\ud800y')),
-        100,
-      ),
-    ).toEqual(jasmine.objectContaining({ ok: true, text: 'x\ufffdyStored words' }));
-    expect(
-      mergeTextUpdate(
-        NAME,
-        stored,
-        editOf(NAME, (t) => t.insert(0, '\ud83d\udcd6')),
-        100,
-      ),
-    ).toEqual(jasmine.objectContaining({ ok: true }));
+    expect(mergeInsert(0, 'x\ud800y')).toEqual(jasmine.objectContaining({ ok: true, text: 'x\ufffdyStored words' }));
+    expect(mergeInsert(0, '\ud83d\udcd6')).toEqual(jasmine.objectContaining({ ok: true }));
   });
 
   it('refuses anything but plain text', () => {
@@ -222,14 +204,7 @@ describe('mergeTextUpdate', () => {
   });
 
   it('refuses an update that makes the text longer than the field allows', () => {
-    expect(
-      mergeTextUpdate(
-        NAME,
-        stored,
-        editOf(NAME, (t) => t.insert(0, 'abc')),
-        14,
-      ),
-    ).toEqual({
+    expect(mergeInsert(0, 'abc', 14)).toEqual({
       ok: false,
       reason: 'would make the text longer than 14 characters',
     });

@@ -18,3 +18,8 @@ export function standardEan13CheckDigit(twelveDigits: string): string {
   const sum = weights.reduce((total, weight, i) => total + weight * Number(twelveDigits.charAt(i)), 0);
   return String((10 - (sum % 10)) % 10);
 }
+
+/** `isbn` with the digit at `at` moved up by `shift` (1–9, mod 10): one wrong digit, as a typing slip makes. */
+export function withDigitShifted(isbn: string, at: number, shift: number): string {
+  return isbn.slice(0, at) + String((Number(isbn[at]) + shift) % 10) + isbn.slice(at + 1);
+}

@@ -8,6 +8,17 @@ import type { ChangeProblem, FieldChange, PushResponse } from '../../../shared/a
 import { mergeField, type Stamped } from '../../../shared/sync/merge';
 import { AppError } from '../errors';
 
+/** A `circle_rows` row as PostgreSQL answers it (`seq` a bigint, so text). */
+interface CircleRowRecord {
+  collection: string;
+  id: string;
+  circle_id: string;
+  author_id: string;
+  fields: Record<string, unknown>;
+  clocks: Record<string, string>;
+  seq: string;
+}
+
 /** A stored circle row: each field's value and clock. */
 interface StoredRow {
   collection: string;
@@ -79,15 +90,7 @@ export class CircleSyncStore {
   ): Promise<{ rows: CirclePulledRow[]; lastSeq: number; hasMore: boolean; role: CircleRole }> {
     return this.dataSource.transaction('REPEATABLE READ', async (manager) => {
       const role = await roleIn(manager, circleId, userId);
-      const stored: {
-        collection: string;
-        id: string;
-        author_id: string;
-        fields: Record<string, unknown>;
-        clocks: Record<string, string>;
-        seq: string;
-        member: boolean;
-      }[] = await manager.query(
+      const stored: (Omit<CircleRowRecord, 'circle_id'> & { member: boolean })[] = await manager.query(
         `SELECT r.collection, r.id, r.author_id, r.fields, r.clocks, r.seq,
                   EXISTS (SELECT 1 FROM circle_members m WHERE m.circle_id = r.circle_id AND m.user_id = r.author_id) AS member
              FROM circle_rows r WHERE r.circle_id = $1 AND r.seq > $2 ORDER BY r.seq LIMIT $3`,
@@ -125,7 +128,7 @@ function visibleFields(collection: string, fields: Record<string, unknown>, own:
 
 async function loadRows(manager: EntityManager, changes: readonly FieldChange[]): Promise<Map<string, StoredRow>> {
   const ids = [...new Set(changes.map((change) => change.rowId))];
-  const rows: { collection: string; id: string; circle_id: string; author_id: string; fields: Record<string, unknown>; clocks: Record<string, string> }[] =
+  const rows: Omit<CircleRowRecord, 'seq'>[] =
     ids.length === 0
       ? []
       : await manager.query('SELECT collection, id, circle_id, author_id, fields, clocks FROM circle_rows WHERE id = ANY($1::uuid[]) FOR UPDATE', [ids]);

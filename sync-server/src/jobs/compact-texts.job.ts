@@ -1,5 +1,5 @@
 import { TextStore, transactionalOf } from '../data-access/text-store';
-import type { Job } from './job';
+import { atMost, type Job } from './job';
 
 /** A text is compacted once nobody has written to it for this long. */
 const QUIET_SECONDS = 30;
@@ -15,6 +15,6 @@ export const compactTexts: Job = {
   cron: '* * * * *',
   async run({ dataSource }) {
     const db = transactionalOf(dataSource);
-    for (let n = 0; n < PER_RUN && (await TextStore.compactOne(db, QUIET_SECONDS)); n++);
+    await atMost(PER_RUN, () => TextStore.compactOne(db, QUIET_SECONDS));
   },
 };

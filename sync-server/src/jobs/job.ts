@@ -31,3 +31,11 @@ export interface Job {
   readonly cron?: string;
   readonly run: (context: JobContext) => Promise<void>;
 }
+
+/**
+ * Runs `step` until it finds nothing more to do or has run `most` times, so one run of a job
+ * stays short; the job's next run takes the rest.
+ */
+export async function atMost(most: number, step: () => Promise<boolean>): Promise<void> {
+  for (let n = 0; n < most && (await step()); n++);
+}

@@ -1,6 +1,6 @@
 import { queryableOf } from '../data-access/text-store';
 import { purgeTombstones } from '../data-access/tombstone-purge';
-import type { Job } from './job';
+import { atMost, type Job } from './job';
 
 /** Rounds of at most 1,000 rows per table a run does; a run that stops short finishes next day. */
 const ROUNDS = 50;
@@ -14,6 +14,6 @@ export const purgeTombstonesJob: Job = {
   cron: '40 3 * * *',
   async run({ dataSource }) {
     const db = queryableOf(dataSource);
-    for (let round = 0; round < ROUNDS && (await purgeTombstones(db, Date.now())) > 0; round++);
+    await atMost(ROUNDS, async () => (await purgeTombstones(db, Date.now())) > 0);
   },
 };

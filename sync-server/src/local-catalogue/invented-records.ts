@@ -1,5 +1,6 @@
 import { gs1CheckDigit } from '../../../shared/isbn/gs1-check-digit';
 import { isbn10CheckDigit } from '../../../shared/isbn/isbn10-check-digit';
+import hardCases from './hard-cases.json';
 import { field008, leader, type LocalRecord, type MarcField } from './marc-fields';
 
 /*
@@ -131,18 +132,13 @@ export function inventedIsbn10(serial: number): string {
 }
 
 const isbnField = (isbn: string, qualifier?: string): MarcField => ['020', '  ', 'a', qualifier ? `${isbn} (${qualifier})` : isbn];
-const nameField = (tag: '100' | '700', surname: string, given: string, dates?: string, relator?: string): MarcField => {
-  const field = [tag, '1 ', 'a', `${surname}, ${given},`];
-  if (dates) field.push('d', `${dates}${relator ? ',' : ''}`);
-  if (relator) field.push('e', `${relator}.`);
-  else field[field.length - 1] = field[field.length - 1]!.replace(/,$/, '.');
-  return field;
-};
+const authorField = (surname: string, given: string, dates?: string): MarcField =>
+  dates ? ['100', '1 ', 'a', `${surname}, ${given},`, 'd', dates] : ['100', '1 ', 'a', `${surname}, ${given}.`];
 const titleField = (title: string, subtitle: string | null, responsibility: string): MarcField =>
   subtitle ? ['245', '10', 'a', `${title} :`, 'b', `${subtitle} /`, 'c', `${responsibility}.`] : ['245', '10', 'a', `${title} /`, 'c', `${responsibility}.`];
 const published = (place: string, publisher: string, year: number): MarcField => ['264', ' 1', 'a', `${place} :`, 'b', `${publisher},`, 'c', `${year}.`];
 
-/** The hard cases named in the issue, each a record of its own with ISBNs specs can look up. */
+/** The hard cases named in the issue, each a record of its own (in hard-cases.json) with ISBNs specs can look up. */
 export const HARD_CASES = {
   /** Catalogued before 2007: only an ISBN-10, no 264 but a 260, extent in "p.". */
   isbn10Only: { isbn10: inventedIsbn10(1) },
@@ -162,155 +158,20 @@ export const HARD_CASES = {
   ebook: { isbn13: inventedIsbn13(9061) },
 } as const;
 
+/** A hard case as hard-cases.json writes it: the 008 and the leader are built here like every other record's. */
+interface HardCaseEntry {
+  readonly typeOfRecord: 'a' | 'i';
+  readonly year: number;
+  readonly language: string;
+  readonly formOfItem?: string;
+  readonly fields: readonly MarcField[];
+}
+
 function hardCaseRecords(): LocalRecord[] {
-  const h = HARD_CASES;
-  return [
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-1'],
-        ['008', field008(1998, 'eng')],
-        isbnField(h.isbn10Only.isbn10),
-        nameField('100', 'Pellingham', 'Tamsin'),
-        titleField('The cartographer of Lowater', null, 'Tamsin Pellingham'),
-        ['250', '  ', 'a', '2nd ed.'],
-        ['260', '  ', 'a', 'Eastmere :', 'b', 'Quayside Books,', 'c', 'c1998.'],
-        ['300', '  ', 'a', '[8], 233 p. ;', 'c', '22 cm.'],
-        ['650', ' 0', 'a', 'Maps', 'v', 'Fiction.'],
-      ],
-    },
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-2'],
-        ['008', field008(2021, 'eng')],
-        isbnField(h.qualified.isbn13, 'pbk.'),
-        ['020', '  ', 'a', h.qualified.otherIsbn13, 'q', '(hardback)'],
-        nameField('100', 'Roa', 'Ines'),
-        titleField('Salt and lantern', 'a novel', 'Ines Roa'),
-        published('Porthallow', '[Lanternfield Press]', 2021),
-        ['300', '  ', 'a', 'xii, 345 pages ;', 'c', '21 cm'],
-        ['520', '  ', 'a', 'A ferry pilot keeps a lantern lit for a brother who never comes home.'],
-        ['650', ' 0', 'a', 'Coastal life', 'v', 'Fiction.'],
-        ['650', ' 0', 'a', 'Brothers', 'v', 'Fiction.'],
-      ],
-    },
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-3'],
-        ['008', field008(2019, 'eng')],
-        isbnField(h.severalIsbns.hardback, 'hardback'),
-        isbnField(h.severalIsbns.paperback, 'paperback'),
-        isbnField(h.severalIsbns.ebook, 'ebook'),
-        ['020', '  ', 'z', '9781999900000'],
-        nameField('100', 'Quist', 'Bartholomew'),
-        titleField('Moths of the lower fen', 'a field guide', 'Bartholomew Quist'),
-        published('Kilbrannan', 'Mossgate Editions', 2019),
-        ['264', ' 4', 'c', '©2018'],
-        ['300', '  ', 'a', '288 pages :', 'b', 'illustrations ;', 'c', '24 cm'],
-        ['650', ' 0', 'a', 'Moths.'],
-        ['650', ' 0', 'a', 'Nature writing.'],
-      ],
-    },
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-4'],
-        ['008', field008(2023, 'eng')],
-        ['041', '1 ', 'a', 'eng', 'h', 'fre'],
-        isbnField(h.datedNames.isbn13),
-        nameField('100', 'Asquith', 'Juniper', '1961-'),
-        titleField('A grammar of rivers', null, 'Juniper Asquith and Odile Marchetti ; translated by Caspian Duvernoy'),
-        nameField('700', 'Marchetti', 'Odile', '1958-2020', 'author'),
-        nameField('700', 'Duvernoy', 'Caspian', undefined, 'translator'),
-        published('Eastmere', 'Tidewrack Press', 2023),
-        ['300', '  ', 'a', '1 volume (unpaged) ;', 'c', '20 cm'],
-        ['650', ' 0', 'a', 'Rivers.'],
-      ],
-    },
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-5'],
-        ['008', field008(2020, 'jpn')],
-        isbnField(h.nonLatin.japanese),
-        ['100', '1 ', 'a', '灯野, 澄子,', 'd', '1975-'],
-        ['245', '10', 'a', '灯台の夜 :', 'b', '短編集 /', 'c', '灯野澄子.'],
-        published('東京', '港書房', 2020),
-        ['300', '  ', 'a', '214ページ ;', 'c', '19 cm'],
-      ],
-    },
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-6'],
-        ['008', field008(2017, 'rus')],
-        isbnField(h.nonLatin.russian),
-        nameField('100', 'Лесовая', 'Мирослава'),
-        titleField('Сад у реки', 'повесть', 'Мирослава Лесовая'),
-        published('Лоуотер', 'Тихая гавань', 2017),
-        ['300', '  ', 'a', '190 pages ;', 'c', '20 cm'],
-      ],
-    },
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-7'],
-        ['008', field008(2022, 'gre')],
-        isbnField(h.nonLatin.greek),
-        nameField('100', 'Αλεξίου', 'Δανάη'),
-        titleField('Το σπίτι με τις κερήθρες', null, 'Δανάη Αλεξίου'),
-        published('Πόρθαλλου', 'Εκδόσεις Φάρος', 2022),
-        ['300', '  ', 'a', '156 pages ;', 'c', '21 cm'],
-      ],
-    },
-    {
-      leader: leader('i'),
-      fields: [
-        ['001', 'llc-hard-8'],
-        ['008', field008(2024, 'eng')],
-        isbnField(h.audiobook.isbn13, 'audio disc'),
-        nameField('100', 'Nyström', 'Halvard'),
-        titleField('The orchard under snow', null, 'Halvard Nyström'),
-        published('Lowater', 'Kestrel & Vane Audio', 2024),
-        ['300', '  ', 'a', '1 audio disc (9 hr., 15 min.) :', 'b', 'digital ;', 'c', '4 3/4 in.'],
-        ['306', '  ', 'a', '091500'],
-        ['511', '0 ', 'a', 'Read by Ottoline Brannagh.'],
-        nameField('700', 'Brannagh', 'Ottoline', undefined, 'narrator'),
-        ['650', ' 0', 'a', 'Winter', 'v', 'Fiction.'],
-        ['655', ' 7', 'a', 'Audiobooks.', '2', 'lcgft'],
-      ],
-    },
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-9'],
-        ['008', field008(2025, 'eng')],
-        isbnField(h.seriesEntry.isbn13),
-        nameField('100', 'Weatherby', 'Clementine'),
-        titleField('The tidal archivist', null, 'Clementine Weatherby'),
-        published('Porthallow', 'Quayside Books', 2025),
-        ['300', '  ', 'a', '412 pages ;', 'c', '20 cm'],
-        ['490', '1 ', 'a', 'The saltmarsh quartet ;', 'v', 'book 2'],
-        ['830', ' 0', 'a', 'Saltmarsh quartet ;', 'v', 'bk. 2.'],
-        ['650', ' 0', 'a', 'Detective and mystery stories.'],
-      ],
-    },
-    {
-      leader: leader('a'),
-      fields: [
-        ['001', 'llc-hard-10'],
-        ['008', field008(2020, 'eng', 'o')],
-        isbnField(h.ebook.isbn13, 'ebook'),
-        nameField('100', 'Oyelaran', 'Emrys'),
-        titleField('Letters to the lighthouse', null, 'Emrys Oyelaran'),
-        published('Kilbrannan', 'Underhill Lane', 2020),
-        ['300', '  ', 'a', '1 online resource (xii, 345 pages)'],
-        ['338', '  ', 'a', 'online resource', 'b', 'cr', '2', 'rdacarrier'],
-      ],
-    },
-  ];
+  return (hardCases as readonly HardCaseEntry[]).map(({ typeOfRecord, year, language, formOfItem, fields }) => ({
+    leader: leader(typeOfRecord),
+    fields: [['008', field008(year, language, formOfItem)], ...fields],
+  }));
 }
 
 function generatedRecord(index: number, random: () => number): LocalRecord {
@@ -325,7 +186,7 @@ function generatedRecord(index: number, random: () => number): LocalRecord {
     ['001', `llc-${String(index).padStart(4, '0')}`],
     ['008', field008(year, pick(LANGUAGES))],
     isbnField(inventedIsbn13(index), index % 3 === 0 ? 'pbk.' : undefined),
-    nameField('100', surname, given, index % 5 === 0 ? `${1930 + (index % 60)}-` : undefined),
+    authorField(surname, given, index % 5 === 0 ? `${1930 + (index % 60)}-` : undefined),
     titleField(
       title.replace(/^the (\w)/, (_, c: string) => `The ${c}`),
       subtitle,

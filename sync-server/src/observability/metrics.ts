@@ -8,20 +8,19 @@ import type { DataSource } from 'typeorm';
 export const registry = new Registry();
 collectDefaultMetrics({ register: registry, prefix: 'lamplight_' });
 
-export const httpDuration = new Histogram({
-  name: 'lamplight_http_request_duration_seconds',
-  help: 'Time from request to response, by method, route pattern and status',
-  labelNames: ['method', 'route', 'status'] as const,
-  buckets: [0.005, 0.01, 0.025, 0.05, 0.1, 0.25, 0.5, 1, 2.5, 5, 10],
-  registers: [registry],
-});
+/** A histogram in this process's registry. */
+function histogram<L extends string = never>(name: string, help: string, buckets: number[], labelNames: readonly L[] = []): Histogram<L> {
+  return new Histogram<L>({ name, help, buckets, labelNames, registers: [registry] });
+}
 
-export const pushChanges = new Histogram({
-  name: 'lamplight_sync_push_changes',
-  help: 'Field changes per accepted push',
-  buckets: [1, 5, 20, 50, 100, 250, 500, 1000],
-  registers: [registry],
-});
+export const httpDuration = histogram(
+  'lamplight_http_request_duration_seconds',
+  'Time from request to response, by method, route pattern and status',
+  [0.005, 0.01, 0.025, 0.05, 0.1, 0.25, 0.5, 1, 2.5, 5, 10],
+  ['method', 'route', 'status'] as const,
+);
+
+export const pushChanges = histogram('lamplight_sync_push_changes', 'Field changes per accepted push', [1, 5, 20, 50, 100, 250, 500, 1000]);
 
 export const pushOutcome = new Counter({
   name: 'lamplight_sync_push_changes_total',
@@ -30,26 +29,19 @@ export const pushOutcome = new Counter({
   registers: [registry],
 });
 
-export const pullChanges = new Histogram({
-  name: 'lamplight_sync_pull_changes',
-  help: 'Field changes per pulled page',
-  buckets: [0, 1, 10, 100, 500, 1000, 2500, 5000],
-  registers: [registry],
-});
+export const pullChanges = histogram('lamplight_sync_pull_changes', 'Field changes per pulled page', [0, 1, 10, 100, 500, 1000, 2500, 5000]);
 
-export const mergeDuration = new Histogram({
-  name: 'lamplight_sync_merge_seconds',
-  help: 'Time to merge one push in PostgreSQL (lock, merge statements, commit)',
-  buckets: [0.001, 0.0025, 0.005, 0.01, 0.025, 0.05, 0.1, 0.25, 0.5, 1, 2.5],
-  registers: [registry],
-});
+export const mergeDuration = histogram(
+  'lamplight_sync_merge_seconds',
+  'Time to merge one push in PostgreSQL (lock, merge statements, commit)',
+  [0.001, 0.0025, 0.005, 0.01, 0.025, 0.05, 0.1, 0.25, 0.5, 1, 2.5],
+);
 
-export const outboxLag = new Histogram({
-  name: 'lamplight_sync_outbox_lag_seconds',
-  help: "Time from a change's clock on the device to its push reaching the server (device clocks may be off)",
-  buckets: [1, 5, 15, 60, 300, 900, 3600, 6 * 3600, 24 * 3600, 7 * 24 * 3600],
-  registers: [registry],
-});
+export const outboxLag = histogram(
+  'lamplight_sync_outbox_lag_seconds',
+  "Time from a change's clock on the device to its push reaching the server (device clocks may be off)",
+  [1, 5, 15, 60, 300, 900, 3600, 6 * 3600, 24 * 3600, 7 * 24 * 3600],
+);
 
 const pools = new Set<DataSource>();
 

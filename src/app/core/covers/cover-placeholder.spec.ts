@@ -1,14 +1,5 @@
+import { contrastRatio as contrast } from '../testing/contrast-ratio';
 import { fnv1a32, PLACEHOLDER_COLOURS, PLACEHOLDER_INK, placeholderColour, titleInitials } from './cover-placeholder';
-
-/** Contrast ratio of two sRGB colours, by the WCAG 2.2 definitions of relative luminance and contrast ratio. */
-function contrast(a: string, b: string): number {
-  const luminance = (hex: string) => {
-    const [r, g, b] = [1, 3, 5].map((at) => parseInt(hex.slice(at, at + 2), 16) / 255).map((c) => (c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4));
-    return 0.2126 * r! + 0.7152 * g! + 0.0722 * b!;
-  };
-  const [light, dark] = [luminance(a), luminance(b)].sort((x, y) => y - x);
-  return (light! + 0.05) / (dark! + 0.05);
-}
 
 describe('cover placeholder', () => {
   it('takes the first letters of the first two words', () => {

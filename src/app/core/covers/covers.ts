@@ -74,7 +74,7 @@ export class Covers {
    * @throws CoverError (its message is for the reader) when the file is not a readable image.
    */
   async save(file: Blob): Promise<string> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     const cover = await prepareCover(file);
     await db.transaction('rw', db.covers, async () => {
       if (!(await db.covers.get(cover.id))) await db.covers.add({ id: cover.id, blob: cover.blob, mediaType: cover.mediaType, state: 'pending' });
@@ -206,11 +206,5 @@ export class Covers {
     if (fraction === null) next.delete(id);
     else next.set(id, Math.min(1, Math.max(0, fraction)));
     this.progressState.set(next);
-  }
-
-  private requireDb(): JournalDb {
-    const db = this.journal.db();
-    if (!db) throw new Error('Nobody is signed in on this device');
-    return db;
   }
 }

@@ -82,7 +82,7 @@ export class JournalStore {
   }
 
   private async commit(writes: readonly RowWrite[], guard: Guard | null, allNew = false): Promise<void> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     for (const { collection, patch } of writes) {
       const problems = validatePatch(COLLECTIONS[collection], patch);
       if (Object.keys(problems).length > 0) throw new InvalidFieldsError(problems);
@@ -163,7 +163,7 @@ export class JournalStore {
 
   /** Rows of a collection that are not deleted. */
   async list<C extends CollectionName>(collection: C): Promise<RowOf<Spec<C>>[]> {
-    return (await this.requireDb().rows(collection).toArray()).filter((row) => !row['deleted']) as unknown as RowOf<Spec<C>>[];
+    return (await this.journal.requireDb().rows(collection).toArray()).filter((row) => !row['deleted']) as unknown as RowOf<Spec<C>>[];
   }
 
   /** Deletes by tombstone, which syncs like any other edit. */
@@ -173,13 +173,7 @@ export class JournalStore {
 
   /** One row, or `undefined` when it does not exist here (yet). */
   async get<C extends CollectionName>(collection: C, rowId: string): Promise<RowOf<Spec<C>> | undefined> {
-    return (await this.requireDb().rows(collection).get(rowId)) as RowOf<Spec<C>> | undefined;
-  }
-
-  private requireDb(): JournalDb {
-    const db = this.journal.db();
-    if (!db) throw new Error('Nobody is signed in on this device');
-    return db;
+    return (await this.journal.requireDb().rows(collection).get(rowId)) as RowOf<Spec<C>> | undefined;
   }
 }
 

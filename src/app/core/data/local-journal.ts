@@ -41,6 +41,13 @@ export class LocalJournal {
     });
   }
 
+  /** The reader's database, for work that only makes sense signed in: throws when nobody is. */
+  requireDb(): JournalDb {
+    const db = this.db();
+    if (!db) throw new Error('Nobody is signed in on this device');
+    return db;
+  }
+
   /** Changes written on this device that the server has not confirmed yet. */
   async pendingChanges(): Promise<number> {
     const db = this.db();

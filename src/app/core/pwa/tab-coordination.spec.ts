@@ -7,10 +7,10 @@ import Dexie from 'dexie';
 import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
 import { JOURNAL_DB_VERSION, journalDbName } from '../data/journal-db';
 import { LocalJournal } from '../data/local-journal';
-import { patienceDeadline, stillPatient } from '../testing/patience';
 import { PAGE_RELOAD } from './page-reload';
 import { TabCoordination } from './tab-coordination';
 import { UnsavedWork } from './unsaved-work';
+import { untilTicked as until } from './testing/leave-question';
 import { snackBarText } from './testing/pwa-fixtures';
 
 /**
@@ -25,15 +25,6 @@ function olderTabHolding(name: string): Promise<IDBDatabase> {
     request.onsuccess = () => resolve(request.result);
     request.onerror = () => reject(request.error);
   });
-}
-
-async function until(check: () => boolean, what: string): Promise<void> {
-  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-    TestBed.tick();
-    if (check()) return;
-    await new Promise((resolve) => setTimeout(resolve, 10));
-  }
-  throw new Error(`gave up waiting for ${what}`);
 }
 
 /** Waits one real task (a message, which the mocked clock does not hold back). */

@@ -65,6 +65,15 @@ describe('SyncEngine', () => {
 
   const outbox = () => db.outbox.orderBy('seq').toArray();
 
+  /** The server's side of one round: it takes a push of `count` changes and has nothing to pull; resolves once the outbox is empty. */
+  async function oneRoundPushing(count: number, what: string): Promise<void> {
+    const push = await sent(backend, '/api/sync/push');
+    expect((push.request.body as { changes: unknown[] }).changes.length).toBe(count);
+    push.flush(pushed(count));
+    (await sent(backend, '/api/sync/pull')).flush(emptyPage('cursor-2'));
+    await until(async () => (await db.outbox.count()) === 0, what);
+  }
+
   describe('a push and pull cycle', () => {
     it('sends the whole outbox with this device id, keeps it until the server confirms, then clears it', async () => {
       await store.create('books', { title: 'The Lantern Ferry', format: 'print', status: 'reading' });
@@ -237,11 +246,7 @@ describe('SyncEngine', () => {
       await expectNothingSent(backend);
       clock.tick(1);
       clock.tick(0);
-      const push = await sent(backend, '/api/sync/push');
-      expect((push.request.body as { changes: unknown[] }).changes.length).toBe(3);
-      push.flush(pushed(3));
-      (await sent(backend, '/api/sync/pull')).flush(emptyPage('cursor-2'));
-      await until(async () => (await db.outbox.count()) === 0, 'the writes are pushed');
+      await oneRoundPushing(3, 'the writes are pushed');
     });
 
     it('holds rounds back while a bulk import writes, then sends all of it in one round', async () => {
@@ -267,11 +272,7 @@ describe('SyncEngine', () => {
         clock.tick(0);
         return engine.pending() === 2;
       }, 'the outbox counted again once the import is done');
-      const push = await sent(backend, '/api/sync/push');
-      expect((push.request.body as { changes: unknown[] }).changes.length).toBe(2);
-      push.flush(pushed(2));
-      (await sent(backend, '/api/sync/pull')).flush(emptyPage('cursor-2'));
-      await until(async () => (await db.outbox.count()) === 0, 'the import is pushed');
+      await oneRoundPushing(2, 'the import is pushed');
     });
 
     it('looks for other devices’ changes every minute while the page is visible', async () => {

@@ -1,17 +1,11 @@
-import { provideHttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component } from '@angular/core';
-import { type ComponentFixture, TestBed } from '@angular/core/testing';
-import { provideRouter } from '@angular/router';
-import Dexie from 'dexie';
 
-import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
-import { journalDbName, type JournalDb } from '../data/journal-db';
-import { JournalStore } from '../data/journal-store';
-import { LocalJournal } from '../data/local-journal';
-import { patienceDeadline, stillPatient } from './patience';
+import type { JournalDb } from '../data/journal-db';
+import type { JournalStore } from '../data/journal-store';
 import { CLOCK, fixedClock } from '../time/clock';
 import { TIME_ZONE } from '../time/time-zone';
 import { BROWSER_LOCALE } from '../settings/reader-settings';
+import { openTestJournal } from './test-journal';
 
 /** Noon on 1 July 2026 in Los Angeles (PDT, UTC−7): the "now" of goal specs unless they say otherwise. */
 export const JULY_FIRST_NOON_LA = '2026-07-01T19:00:00.000Z';
@@ -27,40 +21,21 @@ class SpecLanding {}
 export async function setUpGoalSpec(
   options: { timeZone?: string; now?: string } = {},
 ): Promise<{ store: JournalStore; db: () => JournalDb; tearDown: () => Promise<void> }> {
-  const userId = `goals-${crypto.randomUUID()}`;
-  rememberSession({ user: { ...READER, id: userId } });
-  TestBed.configureTestingModule({
-    providers: [
-      provideHttpClient(),
-      provideRouter([{ path: '**', component: SpecLanding }]),
+  const journal = openTestJournal(
+    [
       { provide: TIME_ZONE, useValue: options.timeZone ?? 'America/Los_Angeles' },
       // Dates in one fixed locale, whatever the test browser's language.
       { provide: BROWSER_LOCALE, useValue: 'en-GB' },
       { provide: CLOCK, useValue: fixedClock(new Date(options.now ?? JULY_FIRST_NOON_LA).getTime()) },
     ],
-  });
-  const db = () => TestBed.inject(LocalJournal).db()!;
-  await db().open(); // before any spec ends, so teardown never closes it mid-open
-  return {
-    store: TestBed.inject(JournalStore),
-    db,
-    tearDown: async () => {
-      TestBed.resetTestingModule();
-      await Dexie.delete(journalDbName(userId));
-      forgetSession();
-    },
-  };
+    [{ path: '**', component: SpecLanding }],
+  );
+  await journal.db.open(); // before any spec ends, so teardown never closes it mid-open
+  return { store: journal.store, db: () => journal.db, tearDown: () => journal.close() };
 }
 
 /** Waits, a few milliseconds at a time, until `check` passes (live queries answer asynchronously). */
-export async function until(fixture: ComponentFixture<unknown>, check: () => unknown, what: string): Promise<void> {
-  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-    await fixture.whenStable();
-    if (check()) return;
-    await new Promise((resolve) => setTimeout(resolve, 5));
-  }
-  throw new Error(`gave up waiting for ${what}`);
-}
+export { waitFor as until } from './test-journal';
 
 /** The text of an element as words: its text pieces joined by spaces, icon names left out. */
 export function textOf(element: Element | null | undefined): string {

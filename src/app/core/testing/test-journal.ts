@@ -1,7 +1,7 @@
 import { provideHttpClient } from '@angular/common/http';
 import { ApplicationRef, type EnvironmentProviders, type Provider } from '@angular/core';
 import { TestBed, type ComponentFixture } from '@angular/core/testing';
-import { provideRouter } from '@angular/router';
+import { provideRouter, type Routes } from '@angular/router';
 import Dexie from 'dexie';
 
 import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
@@ -9,7 +9,7 @@ import type { JournalDb } from '../data/journal-db';
 import { journalDbName } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
 import { LocalJournal } from '../data/local-journal';
-import { PATIENCE_MS, patienceDeadline, stillPatient } from './patience';
+import { PATIENCE_MS, patiently } from './patience';
 
 /** A signed-in reader with a fresh, real IndexedDB journal (Dexie in Chromium), for one spec. */
 export interface TestJournal {
@@ -20,10 +20,10 @@ export interface TestJournal {
 }
 
 /** Configures TestBed for a fresh reader; call in `beforeEach`, and `close()` in `afterEach`. */
-export function openTestJournal(providers: (Provider | EnvironmentProviders)[] = []): TestJournal {
+export function openTestJournal(providers: (Provider | EnvironmentProviders)[] = [], routes: Routes = []): TestJournal {
   const userId = `spec-${crypto.randomUUID()}`;
   rememberSession({ user: { ...READER, id: userId } });
-  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideRouter([]), ...providers] });
+  TestBed.configureTestingModule({ providers: [provideHttpClient(), provideRouter(routes), ...providers] });
   const store = TestBed.inject(JournalStore);
   const db = TestBed.inject(LocalJournal).db()!;
   return {
@@ -42,13 +42,7 @@ export function openTestJournal(providers: (Provider | EnvironmentProviders)[] =
  * Live queries answer asynchronously, so a fixed wait would be either flaky or slow.
  */
 export async function until(check: () => boolean, fixture?: ComponentFixture<unknown>, timeoutMs = PATIENCE_MS): Promise<void> {
-  const deadline = performance.now() + timeoutMs;
-  for (;;) {
-    if (fixture) await fixture.whenStable();
-    if (check()) return;
-    if (!stillPatient(deadline)) throw new Error('timed out waiting for the condition');
-    await new Promise((resolve) => setTimeout(resolve, 20));
-  }
+  await patiently('the condition', check, () => fixture?.whenStable(), timeoutMs);
 }
 
 /**
@@ -56,26 +50,15 @@ export async function until(check: () => boolean, fixture?: ComponentFixture<unk
  * between; fails naming `what` when it has waited too long.
  */
 export async function waitFor(fixture: ComponentFixture<unknown>, check: () => unknown, what: string): Promise<void> {
-  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-    await fixture.whenStable();
-    if (await check()) return;
-    await new Promise((resolve) => setTimeout(resolve, 5));
-  }
-  throw new Error(`gave up waiting for ${what}`);
+  await patiently(what, check, () => fixture.whenStable());
 }
 
 /**
  * Waits until `check` gives something (a dialog's element, say), letting the whole app settle in
  * between: for what lives outside any fixture, such as a dialog. Fails naming `what`.
  */
-export async function found<T>(check: () => T | null | undefined | false, what: string): Promise<T> {
-  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-    const value = check();
-    if (value) return value;
-    await TestBed.inject(ApplicationRef).whenStable();
-    await new Promise((resolve) => setTimeout(resolve, 10));
-  }
-  throw new Error(`Timed out waiting for ${what}`);
+export function found<T>(check: () => T | null | undefined | false, what: string): Promise<T> {
+  return patiently(what, check, () => TestBed.inject(ApplicationRef).whenStable()) as Promise<T>;
 }
 
 /** The element's text with runs of whitespace as single spaces. */

@@ -35,10 +35,10 @@ export class Deletions {
 
   /** What would go with a delete of this row now (rows not deleted yet), per kind. */
   async companionsOf(collection: CollectionName, id: string): Promise<Companions[]> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     return Promise.all(
       dependentsOf(collection).map(async ({ collection: kind, ref }) => {
-        const rows = (await db.rows(kind).where(ref).equals(id).toArray()) as Row[];
+        const rows = await rowsReferring(db, kind, ref, id);
         return { collection: kind, ids: rows.filter((row) => row.deleted !== true).map((row) => row.id) };
       }),
     );
@@ -59,7 +59,7 @@ export class Deletions {
    * with it: a child alone would show nowhere. Resolves with the parents restored along.
    */
   async restore(collection: CollectionName, id: string): Promise<RestoredParent[]> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     const row = (await db.rows(collection).get(id)) as Row | undefined;
     if (!row || !deletionClock(row)) return [];
     const writes = await this.restoreWrites(db, collection, row);
@@ -81,15 +81,14 @@ export class Deletions {
     const clock = deletionClock(row);
     const writes: RowWrite[] = [{ collection, rowId: row.id, patch: { deleted: false } }];
     for (const { collection: kind, ref } of dependentsOf(collection)) {
-      const rows = (await db.rows(kind).where(ref).equals(row.id).toArray()) as Row[];
+      const rows = await rowsReferring(db, kind, ref, row.id);
       for (const child of rows) if (deletionClock(child) === clock) writes.push({ collection: kind, rowId: child.id, patch: { deleted: false } });
     }
     return writes;
   }
+}
 
-  private requireDb(): JournalDb {
-    const db = this.journal.db();
-    if (!db) throw new Error('Nobody is signed in on this device');
-    return db;
-  }
+/** The rows of `collection` whose `ref` field points at `id` (a book's readings, a notebook's pages), deleted or not. */
+async function rowsReferring(db: JournalDb, collection: CollectionName, ref: string, id: string): Promise<Row[]> {
+  return (await db.rows(collection).where(ref).equals(id).toArray()) as Row[];
 }

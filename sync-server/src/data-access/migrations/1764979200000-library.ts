@@ -1,13 +1,6 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 
-/** The columns every synced table has besides its fields (see CreateSync1764806400000). */
-const SYNCED_ROW = `
-  user_id uuid NOT NULL REFERENCES users (id) ON DELETE CASCADE,
-  id uuid NOT NULL,
-  deleted boolean,
-  clocks jsonb NOT NULL DEFAULT '{}',
-  seq bigint NOT NULL,
-  PRIMARY KEY (user_id, id)`;
+import { SYNCED_ROW_COLUMNS } from './synced-row-columns';
 
 /** The library: more about each book, its status history, and readings with their reviews. */
 export class Library1764979200000 implements MigrationInterface {
@@ -26,11 +19,11 @@ export class Library1764979200000 implements MigrationInterface {
         ADD COLUMN status_changed_at text,
         ADD COLUMN copy text,
         ADD COLUMN cover_id text`);
-    await queryRunner.query(`CREATE TABLE book_status_changes (book_id uuid, status text, changed_at text, ${SYNCED_ROW})`);
+    await queryRunner.query(`CREATE TABLE book_status_changes (book_id uuid, status text, changed_at text, ${SYNCED_ROW_COLUMNS})`);
     await queryRunner.query(`
       CREATE TABLE readings (
         book_id uuid, started_on text, finished_on text, rating double precision, summary text,
-        review text, takeaways text, recommend text, recommend_to text, ${SYNCED_ROW})`);
+        review text, takeaways text, recommend text, recommend_to text, ${SYNCED_ROW_COLUMNS})`);
     // Partial on purpose, like books_user_seq_idx: never chosen for a primary-key lookup.
     for (const table of ['book_status_changes', 'readings']) {
       await queryRunner.query(`CREATE INDEX ${table}_user_seq_idx ON ${table} (user_id, seq) WHERE seq IS NOT NULL`);

@@ -1,6 +1,6 @@
 /**
  * The columns every synced table has besides its fields, as CreateSync1764806400000 made them for
- * `books`. Migrations from Journal1765065600000 on share this text. Never change it: a migration
+ * `books`. Migrations from Library1764979200000 on share this text. Never change it: a migration
  * that already ran must keep meaning what it meant; new columns get a migration of their own.
  */
 export const SYNCED_ROW_COLUMNS = `

@@ -4,7 +4,7 @@ import { type ComponentFixture, TestBed } from '@angular/core/testing';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 
 import type { JournalDb } from '../../data/journal-db';
-import { patienceDeadline, stillPatient } from '../../testing/patience';
+import { patiently } from '../../testing/patience';
 import { sha256Hex } from '../sha256-hex';
 import { useCoverJournal } from '../testing/cover-journal';
 import { drawnImage } from '../testing/test-images';
@@ -24,20 +24,14 @@ describe('CoverPicker', () => {
   let root: () => HTMLElement;
   let stable: () => Promise<unknown>;
 
-  const turn = () => new Promise((resolve) => setTimeout(resolve, 5));
   const db = (): JournalDb => covers().journal.db;
   const query = <T extends Element>(selector: string) => root().querySelector<T>(selector);
   const text = (selector: string) => query(selector)?.textContent?.trim() ?? '';
   const offline = () => spyOnProperty(navigator, 'onLine').and.returnValue(false);
 
-  async function until(check: () => unknown, what: string): Promise<void> {
-    for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-      await stable();
-      if (check()) return;
-      await turn();
-    }
-    throw new Error(`gave up waiting for ${what}`);
-  }
+  const until = async (check: () => unknown, what: string) => {
+    await patiently(what, check, stable);
+  };
 
   const sent = (url: string) => covers().sent(url);
 

@@ -1,6 +1,6 @@
 import { TestBed } from '@angular/core/testing';
 
-import { patienceDeadline, stillPatient } from '../../testing/patience';
+import { patiently } from '../../testing/patience';
 
 /** The open "Leave without saving?" dialog, if any. */
 export const leaveQuestion = (): Element | null => document.querySelector('ll-leave-dialog');
@@ -14,10 +14,5 @@ export const leaveAnswer = (text: 'Leave' | 'Keep editing'): HTMLButtonElement =
  * waiting on the question is a pending task, so the app never settles while it asks.
  */
 export async function untilTicked(check: () => boolean, what: string): Promise<void> {
-  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-    TestBed.tick();
-    if (check()) return;
-    await new Promise((resolve) => setTimeout(resolve, 10));
-  }
-  throw new Error(`gave up waiting for ${what}`);
+  await patiently(what, check, () => TestBed.tick());
 }

@@ -2,31 +2,19 @@ import type { HttpTestingController, TestRequest } from '@angular/common/http/te
 
 import type { PullResponse } from '@shared/api/sync';
 
-import { patienceDeadline, stillPatient } from '../../testing/patience';
-
-/** The browser's own timer, kept before any spec installs jasmine.clock, so waits stay real. */
-const realSetTimeout = globalThis.setTimeout.bind(globalThis);
+import { patiently, realPause } from '../../testing/patience';
 
 /** A few real milliseconds for IndexedDB, the Web Lock and the interceptor to move on. */
-export const turn = (ms = 5) => new Promise<void>((resolve) => realSetTimeout(resolve, ms));
+export const turn = realPause;
 
 /** Resolves once `check` holds; fails the spec with `what` (said when it gives up) if it never does. */
 export async function until(check: () => boolean | Promise<boolean>, what: string | (() => string)): Promise<void> {
-  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-    if (await check()) return;
-    await turn();
-  }
-  throw new Error(`timed out waiting until ${typeof what === 'string' ? what : what()}`);
+  await patiently(what, check);
 }
 
 /** The request to `url` once it has been sent (Dexie reads, the tab lock and the token take a few turns). */
-export async function sent(backend: HttpTestingController, url: string): Promise<TestRequest> {
-  for (const deadline = patienceDeadline(); stillPatient(deadline);) {
-    const [found] = backend.match((request) => request.url === url);
-    if (found) return found;
-    await turn();
-  }
-  throw new Error(`no request to ${url} was sent`);
+export function sent(backend: HttpTestingController, url: string): Promise<TestRequest> {
+  return patiently(`a request to ${url}`, () => backend.match((request) => request.url === url)[0]);
 }
 
 /** Gives a sync that should not happen time to start, then checks that nothing was sent. */
