@@ -6,7 +6,6 @@ import { appendPage, byPosition, movePage } from '@shared/journal/page-order';
 import type { TemplateView } from '@shared/journal/starter-templates';
 import type { NotebookPage } from '@shared/sync/schema/collections';
 
-import type { JournalDb } from '../../core/data/journal-db';
 import { JournalStore, type RowWrite } from '../../core/data/journal-store';
 import { LocalJournal } from '../../core/data/local-journal';
 import { ReaderSettings } from '../../core/settings/reader-settings';
@@ -37,7 +36,7 @@ export class Notebooks {
 
   /** The pages of a notebook in reading order (deleted ones left out). */
   async pagesOf(notebookId: string): Promise<NotebookPage[]> {
-    const pages = await this.db().rows('notebookPages').where('notebookId').equals(notebookId).toArray();
+    const pages = await this.journal.requireDb().rows('notebookPages').where('notebookId').equals(notebookId).toArray();
     return byPosition(pages.filter((page) => !page.deleted));
   }
 
@@ -103,12 +102,6 @@ export class Notebooks {
 
   private positionWrites(writes: readonly { id: string; position: number }[]): RowWrite[] {
     return writes.map(({ id, position }) => ({ collection: 'notebookPages', rowId: id, patch: { position } }));
-  }
-
-  private db(): JournalDb {
-    const db = this.journal.db();
-    if (!db) throw new Error('Nobody is signed in on this device');
-    return db;
   }
 }
 

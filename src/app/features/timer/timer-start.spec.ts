@@ -48,7 +48,7 @@ describe('Starting the timer from a start button', () => {
     const button = (fixture.nativeElement as HTMLElement).querySelector('button')!;
     expect(button.getAttribute('aria-label')).toBe('Start the timer for Small Rain');
     button.click();
-    await until(() => TestBed.inject(Router).url === '/timer', 3000, 'the timer page');
+    await until(() => TestBed.inject(Router).url === '/timer', 'the timer page');
     expect((await row())?.bookId).toBe(bookId);
     await until(() => (fixture.detectChanges(), !!(fixture.nativeElement as HTMLElement).querySelector('a[aria-label="Open the timer for Small Rain"]')));
   });
@@ -61,16 +61,16 @@ describe('Starting the timer from a start button', () => {
 
     const fixture = startButton(second, 'Small Rain');
     (fixture.nativeElement as HTMLElement).querySelector('button')!.click();
-    await until(() => !!dialogButton('Keep the current one'), 3000, 'the question');
+    await until(() => !!dialogButton('Keep the current one'), 'the question');
     expect(document.querySelector('ll-confirm-dialog')!.textContent).toContain('You are timing The Cartographer of Tides.');
     dialogButton('Keep the current one')!.click();
-    await until(() => !document.querySelector('ll-confirm-dialog'), 3000, 'the dialog to close');
+    await until(() => !document.querySelector('ll-confirm-dialog'), 'the dialog to close');
     expect((await row())?.bookId).toBe(first);
 
     (fixture.nativeElement as HTMLElement).querySelector('button')!.click();
-    await until(() => !!dialogButton('Stop it and start'), 3000, 'the question again');
+    await until(() => !!dialogButton('Stop it and start'), 'the question again');
     dialogButton('Stop it and start')!.click();
-    await until(() => TestBed.inject(Router).url === '/timer', 3000, 'the timer page');
+    await until(() => TestBed.inject(Router).url === '/timer', 'the timer page');
     expect((await row())?.bookId).toBe(second);
     const sessions = (await store.list('sessions')) as Session[];
     expect(sessions.map((s) => [s.bookId, s.activeMinutes])).toEqual([[first, 12]]);

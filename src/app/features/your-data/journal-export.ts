@@ -35,7 +35,7 @@ export class JournalExport {
 
   /** The whole journal as a Lamplight export file (JSON), reporting progress as it goes. */
   async everything(onProgress: (progress: ExportProgress) => void = () => {}, now = new Date()): Promise<Blob> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     const counts = await Promise.all(EXPORT_COLLECTIONS.map((name) => db.rows(name).count()));
     const total = counts.reduce((sum, count) => sum + count, 0);
     const collections = new Map<CollectionName, ExportRow[]>();
@@ -67,7 +67,7 @@ export class JournalExport {
    * are counted in {@link missingCovers}; the books keep their `coverId`.
    */
   private async covers(ids: readonly string[]): Promise<ExportCover[]> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     const stored = await db.covers.bulkGet([...ids]);
     const covers: ExportCover[] = [];
     this.missingCovers = 0;
@@ -82,15 +82,9 @@ export class JournalExport {
 
   /** One collection as CSV (books, readings, sessions or quotes). */
   async csv(collection: CsvCollection): Promise<Blob> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     const [rows, books] = await Promise.all([db.rows(collection).toArray(), collection === 'books' ? [] : db.rows('books').toArray()]);
     return new Blob([collectionCsv(collection, rows, (collection === 'books' ? rows : books) as unknown as Book[])], { type: 'text/csv;charset=utf-8' });
-  }
-
-  private requireDb() {
-    const db = this.journal.db();
-    if (!db) throw new Error('Nobody is signed in on this device');
-    return db;
   }
 }
 

@@ -6,7 +6,7 @@ import { HlcClock } from '@shared/sync/hlc';
 import { validatePatch } from '@shared/sync/validate-patch';
 
 import { InvalidFieldsError } from '../../../core/data/field-errors';
-import type { CircleOutboxEntry, JournalDb } from '../../../core/data/journal-db';
+import type { CircleOutboxEntry } from '../../../core/data/journal-db';
 import { LocalJournal } from '../../../core/data/local-journal';
 import { deviceId } from '../../../core/device/device-id';
 import type { LocalCircleRow } from './circle-rows';
@@ -29,7 +29,7 @@ export class CircleStore {
   async write(collection: CircleCollectionName, rowId: string, circleId: string, patch: Readonly<Record<string, unknown>>): Promise<void> {
     const problems = validatePatch(CIRCLE_COLLECTIONS[collection], patch);
     if (Object.keys(problems).length > 0) throw new InvalidFieldsError(problems);
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     const table = db.table<LocalCircleRow, string>(collection);
     const changed = await db.transaction('rw', [table, db.circleOutbox, db.meta], async () => {
       const row: LocalCircleRow = (await table.get(rowId)) ?? { id: rowId, _hlc: {}, _author: db.userId };
@@ -57,11 +57,5 @@ export class CircleStore {
     const id = crypto.randomUUID();
     await this.write(collection, id, circleId, { ...fields, deleted: false });
     return id;
-  }
-
-  private requireDb(): JournalDb {
-    const db = this.journal.db();
-    if (!db) throw new Error('Nobody is signed in on this device');
-    return db;
   }
 }

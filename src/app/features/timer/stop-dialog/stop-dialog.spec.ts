@@ -42,8 +42,8 @@ describe('StopDialog', () => {
     const closed = firstValueFrom(ref.afterClosed());
     TestBed.tick();
     headingsSeen.push(document.querySelector('ll-stop-dialog h2')?.textContent ?? '');
-    await until(() => (TestBed.tick(), !!document.querySelector('ll-stop-dialog input')), 3000, 'the form');
-    await until(() => (TestBed.tick(), field('toPosition')?.value !== '' || !previous), 3000, 'the prefill');
+    await until(() => (TestBed.tick(), !!document.querySelector('ll-stop-dialog input')), 'the form');
+    await until(() => (TestBed.tick(), field('toPosition')?.value !== '' || !previous), 'the prefill');
     return { bookId, sessionId, closed };
   }
 
@@ -93,7 +93,7 @@ describe('StopDialog', () => {
     const { sessionId } = await stopped({ format: 'print', pageCount: 320, status: 'reading' }, { toPosition: 88 });
     type('toPosition', '400');
     click('Save');
-    await until(() => (TestBed.tick(), dialogText().includes('The book has 320 pages')), 3000, 'the message');
+    await until(() => (TestBed.tick(), dialogText().includes('The book has 320 pages')), 'the message');
     expect(((await store.get('sessions', sessionId)) as Session).toPosition ?? null).toBeNull();
   });
 
@@ -102,7 +102,7 @@ describe('StopDialog', () => {
     expect(field('ebookLocation')).not.toBeNull();
     type('toPosition', '100');
     click('Save');
-    await until(() => (TestBed.tick(), dialogText().includes('Mark it finished?')), 3000, 'the question');
+    await until(() => (TestBed.tick(), dialogText().includes('Mark it finished?')), 'the question');
     click('Mark it finished');
     expect(await closed).toBeTrue();
     const book = (await store.get('books', bookId)) as Book;
@@ -121,7 +121,7 @@ describe('StopDialog', () => {
   it('says "1 minute" for a one-minute session, never "less than a minute", even while it loads', async () => {
     headingsSeen.length = 0;
     const { sessionId, closed } = await stopped({ format: 'print', pageCount: 320, status: 'reading' }, { toPosition: 40 }, 1);
-    await until(() => (TestBed.tick(), dialogText().includes('You read for 1 minute')), 3000, 'the heading');
+    await until(() => (TestBed.tick(), dialogText().includes('You read for 1 minute')), 'the heading');
     expect(headingsSeen.join(' ')).not.toContain('less than a minute');
     expect(dialogText()).not.toContain('under a minute');
     click('Skip');
@@ -131,7 +131,7 @@ describe('StopDialog', () => {
 
   it('discards a session under a minute on Skip, and says so before and after', async () => {
     const { sessionId, closed } = await stopped({ format: 'print', pageCount: 320, status: 'reading' }, undefined, 0.5);
-    await until(() => (TestBed.tick(), dialogText().includes('under a minute')), 3000, 'the warning');
+    await until(() => (TestBed.tick(), dialogText().includes('under a minute')), 'the warning');
     expect(dialogText()).toContain('You read for less than a minute');
     click('Skip');
     expect(await closed).toBeFalse();
@@ -143,7 +143,7 @@ describe('StopDialog', () => {
 
   it('keeps a session under a minute when the reader saves it', async () => {
     const { sessionId, closed } = await stopped({ format: 'print', pageCount: 320, status: 'reading' }, undefined, 0.5);
-    await until(() => (TestBed.tick(), dialogText().includes('under a minute')), 3000, 'the form to load');
+    await until(() => (TestBed.tick(), dialogText().includes('under a minute')), 'the form to load');
     type('toPosition', '12');
     click('Save');
     expect(await closed).toBeTrue();

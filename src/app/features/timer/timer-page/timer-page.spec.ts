@@ -51,7 +51,7 @@ describe('TimerPage', () => {
   const text = () => (fixture.nativeElement as HTMLElement).textContent!.replace(/\s+/g, ' ');
   const button = (name: string) =>
     Array.from((fixture.nativeElement as HTMLElement).querySelectorAll<HTMLButtonElement>('button')).find((b) => b.textContent!.trim().endsWith(name));
-  const shown = (what: string) => until(() => (fixture.detectChanges(), text().includes(what)), 3000, `“${what}” on the page`);
+  const shown = (what: string) => until(() => (fixture.detectChanges(), text().includes(what)), `“${what}” on the page`);
 
   async function runningOn(fields: Record<string, unknown> = {}): Promise<string> {
     const bookId = await store.create('books', { title: 'The Cartographer of Tides', format: 'print', status: 'reading', pageCount: 320 });
@@ -93,7 +93,7 @@ describe('TimerPage', () => {
     clock.advance(25 * MINUTE);
     const unsaved = TestBed.inject(UnsavedWork);
     button('Stop')!.click();
-    await until(() => !!document.querySelector('ll-stop-dialog h2')?.textContent?.includes('You read for 25 minutes'), 3000, 'the stop form');
+    await until(() => !!document.querySelector('ll-stop-dialog h2')?.textContent?.includes('You read for 25 minutes'), 'the stop form');
     expect(unsaved.present()).toBeTrue();
     const sessions = (await store.list('sessions')) as Session[];
     expect(sessions.find((s) => s.source === 'timer')?.activeMinutes).toBe(25);
@@ -101,7 +101,7 @@ describe('TimerPage', () => {
     Array.from(document.querySelectorAll<HTMLButtonElement>('ll-stop-dialog button'))
       .find((b) => b.textContent!.trim() === 'Skip')!
       .click();
-    await until(() => !unsaved.present(), 3000, 'the stop form to close');
+    await until(() => !unsaved.present(), 'the stop form to close');
     await shown('No timer is running');
     await shown('Last session');
     expect(text()).toContain('The Cartographer of Tides · 25 minutes');
@@ -124,15 +124,15 @@ describe('TimerPage', () => {
     )!;
     expect(toggle()).not.toBeNull();
     keepOn.querySelector<HTMLButtonElement>('button')!.click();
-    await until(() => wakeLock.held === 1, 3000, 'the wake lock');
+    await until(() => wakeLock.held === 1, 'the wake lock');
 
     await wakeLock.sentinels[0]!.release(); // the browser lets go when the page is hidden…
     document.dispatchEvent(new Event('visibilitychange')); // …and it is visible again
-    await until(() => wakeLock.held === 1 && wakeLock.sentinels.length === 2, 3000, 'the lock taken again');
+    await until(() => wakeLock.held === 1 && wakeLock.sentinels.length === 2, 'the lock taken again');
 
     button('Stop')!.click();
-    await until(() => wakeLock.held === 0, 3000, 'the lock let go');
-    await until(() => document.querySelector<HTMLInputElement>('ll-stop-dialog input')?.value === '88', 3000, 'the stop form, loaded');
+    await until(() => wakeLock.held === 0, 'the lock let go');
+    await until(() => document.querySelector<HTMLInputElement>('ll-stop-dialog input')?.value === '88', 'the stop form, loaded');
   });
 
   it('suggests a calm break after 20 minutes, marked as common practice rather than medical advice', async () => {
@@ -144,7 +144,7 @@ describe('TimerPage', () => {
     await shown('Rest your eyes for a moment?');
     expect(text()).toContain('common practice, not medical advice');
     button('Thanks')!.click();
-    await until(() => (fixture.detectChanges(), !text().includes('Rest your eyes')), 3000, 'the suggestion to go');
+    await until(() => (fixture.detectChanges(), !text().includes('Rest your eyes')), 'the suggestion to go');
   });
 
   it('captures a quote in one tap, with the page prefilled from where the reader is', async () => {

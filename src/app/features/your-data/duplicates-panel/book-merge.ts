@@ -28,7 +28,7 @@ export class BookMerge {
     const moves = referenceMoves(await this.referencingRows(other.id), other.id, kept.id);
     await this.store.writeAll(mergeBooks(kept, other, picks, moves));
     for (const move of moves.filter((one) => one.circle)) {
-      const row = (await this.requireDb().table(move.collection).get(move.rowId)) as { circleId?: string } | undefined;
+      const row = (await this.journal.requireDb().table(move.collection).get(move.rowId)) as { circleId?: string } | undefined;
       if (row?.circleId) await this.circles.write(move.collection as CircleCollectionName, move.rowId, row.circleId, move.patch);
     }
     return moves.length;
@@ -36,7 +36,7 @@ export class BookMerge {
 
   /** Rows that may name the book, not deleted: by index where the field has one, else the (small) table. */
   private async referencingRows(bookId: string): Promise<Rows> {
-    const db = this.requireDb();
+    const db = this.journal.requireDb();
     const rows: Rows = {};
     for (const { collection, field, holds } of BOOK_REFERENCES) {
       const table = db.table<Record<string, unknown>, string>(collection);
@@ -45,11 +45,5 @@ export class BookMerge {
       rows[collection] = [...(rows[collection] ?? []), ...found.filter((row) => !row['deleted'])];
     }
     return rows;
-  }
-
-  private requireDb() {
-    const db = this.journal.db();
-    if (!db) throw new Error('Nobody is signed in on this device');
-    return db;
   }
 }
