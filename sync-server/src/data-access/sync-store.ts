@@ -9,7 +9,7 @@ import { COLLECTIONS, collectionSpec, fieldSpecOf } from '../../../shared/sync/s
 import { changedTablesSql, mergeSql, pullPageSql, remainingSql } from './merge-sql';
 import { notifyPushedSql } from './sync-notifications';
 import { queryableOf, TextStore } from './text-store';
-import { textFieldMax } from '../../../shared/text/text-fields';
+import { TEXT_FIELDS, textFieldMax } from '../../../shared/text/text-fields';
 
 const SPECS = Object.values(COLLECTIONS);
 /** Per collection: its columns by field. */
@@ -77,8 +77,8 @@ export interface PulledPage {
   /** The sequence to continue after. */
   readonly lastSeq: number;
   readonly hasMore: boolean;
-  /** `changes` as JSON text, exactly as measured against the byte budget (the route sends it as is). */
-  readonly changesJson: string;
+  /** `changes` as JSON text in UTF-8, exactly as measured against the byte budget (the route sends it as is). */
+  readonly changesBytes: Buffer;
   /** Rows still to pull after this page (only while there are more pages). */
   readonly remaining?: number;
 }
@@ -173,12 +173,12 @@ export class SyncStore {
     const [probe] = await this.read<{ latest: (string | null)[] }>(CHANGED_TABLES_SQL, [userId, sinceSeq]);
     const latest = probe?.latest ?? [];
     let tables = latest.flatMap((seq, c) => (seq === null ? [] : [c]));
-    if (tables.length === 0) return { changes: [], changesJson: '[]', lastSeq: sinceSeq, hasMore: false };
+    if (tables.length === 0) return { changes: [], changesBytes: Buffer.from('[]'), lastSeq: sinceSeq, hasMore: false };
     // Every row up to here has committed (see changedTablesSql): reading no further, the tables' reads agree.
     const upTo = Math.max(...tables.map((c) => Number(latest[c])));
     const changes: PulledChange[] = [];
-    // Each row's changes as JSON, measured once and sent as they are (no second serialisation).
-    const parts: string[] = [];
+    // Each round's rows as one JSON array, measured once and sent as they are (no second serialisation).
+    const parts: Buffer[] = [];
     let lastSeq = sinceSeq;
     let taken = 0;
     let bytes = 0;
@@ -206,34 +206,27 @@ export class SyncStore {
         fields += candidates.at(-1)!.length;
       }
       // Texts' Yjs states count towards the page's bytes too, so they are read before the page is cut.
-      const withStates = await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat());
-      let offset = 0;
-      let full = false;
-      for (const [index, candidate] of candidates.entries()) {
-        const pieces = withStates.slice(offset, offset + candidate.length);
-        offset += pieces.length;
-        const json = JSON.stringify(pieces);
-        const size = Buffer.byteLength(json);
-        // The first row always fits, so paging always moves on.
-        if (taken > 0 && (changes.length + pieces.length > limit || bytes + size > maxBytes)) {
-          full = true;
-          break;
-        }
-        changes.push(...pieces);
-        if (pieces.length > 0) parts.push(json.slice(1, -1));
-        bytes += size;
-        lastSeq = Number(rows[index]!.row.seq);
-        taken++;
-      }
+      const withStates = candidates.some((row) => hasTextFields(row))
+        ? await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat())
+        : candidates.flat();
+      const [fieldsLeft, bytesLeft, first] = [limit - changes.length, maxBytes - bytes, taken === 0] as const;
+      const took = takeWhole(candidates, withStates, fieldsLeft, bytesLeft, first) ?? takeRowByRow(candidates, withStates, fieldsLeft, bytesLeft, first);
+      for (let n = 0; n < took.fields; n++) changes.push(withStates[n]!);
+      if (took.fields > 0) parts.push(took.json);
+      bytes += took.json.length;
+      taken += took.rows;
+      if (took.rows > 0) lastSeq = Number(rows[took.rows - 1]!.row.seq);
+      const full = took.rows < candidates.length;
       // A row read but not taken is still to come; none means every table ran out.
       hasMore = rows.some(({ row }) => Number(row.seq) > lastSeq);
       if (!hasMore || full || changes.length >= limit || bytes >= maxBytes) break;
       tables = [...new Set(rows.filter(({ row }) => Number(row.seq) > lastSeq).map(({ c }) => c))];
       fieldsPerRow = Math.max(1, changes.length / taken);
     }
-    const changesJson = `[${parts.join(',')}]`;
-    if (!hasMore) return { changes, changesJson, lastSeq, hasMore };
-    return { changes, changesJson, lastSeq, hasMore, remaining: await this.remaining(userId, sinceSeq, lastSeq, taken) };
+    // Most pages are one round: its bytes are the answer's as they are, without a copy.
+    const changesBytes = parts.length === 1 ? parts[0]! : joinJsonArrays(parts);
+    if (!hasMore) return { changes, changesBytes, lastSeq, hasMore };
+    return { changes, changesBytes, lastSeq, hasMore, remaining: await this.remaining(userId, sinceSeq, lastSeq, taken) };
   }
 
   /**
@@ -339,16 +332,76 @@ async function storedSetStates(client: PgClient, userId: string, changes: readon
   return states;
 }
 
+/** Per collection: each field's name, column and whether it is a set, in the schema's order (made once, not per row). */
+const PULLED_FIELDS = new Map(
+  SPECS.map((spec) => [spec.name, Object.entries(spec.fields as Record<string, FieldSpec>).map(([field, fieldSpec]) => ({ field, column: columnName(field), set: fieldSpec.kind === 'set' }))]),
+);
+/** Collections with a mergeable text field, whose pulled fields carry the text's state from `text_states`. */
+const WITH_TEXTS = new Set(TEXT_FIELDS.map((entry) => entry.collection.name));
+const hasTextFields = (row: readonly PulledChange[]) => row.length > 0 && WITH_TEXTS.has(row[0]!.collection);
+
+/** The rows a page takes of what a round read: how many, their fields and their JSON text (an array) in UTF-8. */
+interface Taken {
+  readonly rows: number;
+  readonly fields: number;
+  readonly json: Buffer;
+}
+
+/**
+ * A JSON text's UTF-8 bytes. Counting them makes V8 flatten the text `JSON.stringify` built in
+ * pieces, which costs most; after that, a text of ASCII only (most pages) is copied byte for byte,
+ * many times faster than encoding it, and only others are encoded.
+ */
+function utf8Of(text: string): Buffer {
+  return Buffer.byteLength(text) === text.length ? Buffer.from(text, 'latin1') : Buffer.from(text, 'utf8');
+}
+
+/** Several JSON arrays' bytes as one array (a page of several rounds). */
+function joinJsonArrays(arrays: readonly Buffer[]): Buffer {
+  const inner = arrays.flatMap((array, n) => [Buffer.from(n === 0 ? '[' : ','), array.subarray(1, -1)]);
+  return Buffer.concat([...inner, Buffer.from(']')]);
+}
+
+/**
+ * The rows that fit the fields left, as one JSON text made by one `JSON.stringify` (a page's
+ * thousands of small texts, one per row, cost several times as much to make and join), when it
+ * fits the bytes left too; `undefined` when it does not, so the rows are measured one by one.
+ */
+function takeWhole(rows: readonly PulledChange[][], pieces: readonly PulledChange[], fieldsLeft: number, bytesLeft: number, first: boolean): Taken | undefined {
+  let count = 0;
+  let fields = 0;
+  while (count < rows.length && (fields + rows[count]!.length <= fieldsLeft || (first && count === 0))) fields += rows[count++]!.length;
+  const json = utf8Of(JSON.stringify(count === rows.length ? pieces : pieces.slice(0, fields)));
+  return json.length <= bytesLeft || (first && count === 1) ? { rows: count, fields, json } : undefined;
+}
+
+/** The rows that fit, measured one by one (a page near its byte budget); the first row always fits, so paging moves on. */
+function takeRowByRow(rows: readonly PulledChange[][], pieces: readonly PulledChange[], fieldsLeft: number, bytesLeft: number, first: boolean): Taken {
+  const parts: string[] = [];
+  let count = 0;
+  let offset = 0;
+  let bytes = 0;
+  for (const row of rows) {
+    const json = JSON.stringify(pieces.slice(offset, offset + row.length));
+    const size = Buffer.byteLength(json);
+    if ((!first || count > 0) && (offset + row.length > fieldsLeft || bytes + size > bytesLeft)) break;
+    if (row.length > 0) parts.push(json.slice(1, -1));
+    count++;
+    offset += row.length;
+    bytes += size;
+  }
+  return { rows: count, fields: offset, json: utf8Of(`[${parts.join(',')}]`) };
+}
+
 function rowFields(collection: string, row: Record<string, unknown>): PulledChange[] {
-  const spec = collectionSpec(collection)!;
   const clocks = row['clocks'] as Record<string, string>;
-  const sets = (row['sets'] ?? {}) as Record<string, OrSetState>;
   const rowId = row['id'] as string;
-  return Object.entries(spec.fields as Record<string, FieldSpec>)
-    .filter(([field]) => clocks[field] !== undefined)
-    .map(([field, fieldSpec]) => {
-      const value = row[columnName(field)] ?? null;
-      const hlc = clocks[field]!;
-      return fieldSpec.kind === 'set' ? { collection, rowId, field, value, hlc, state: sets[field] ?? {} } : { collection, rowId, field, value, hlc };
-    });
+  const changes: PulledChange[] = [];
+  for (const { field, column, set } of PULLED_FIELDS.get(collection)!) {
+    const hlc = clocks[field];
+    if (hlc === undefined) continue;
+    const value = row[column] ?? null;
+    changes.push(set ? { collection, rowId, field, value, hlc, state: (row['sets'] as Record<string, OrSetState>)[field] ?? {} } : { collection, rowId, field, value, hlc });
+  }
+  return changes;
 }
