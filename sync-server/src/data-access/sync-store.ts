@@ -334,7 +334,10 @@ async function storedSetStates(client: PgClient, userId: string, changes: readon
 
 /** Per collection: each field's name, column and whether it is a set, in the schema's order (made once, not per row). */
 const PULLED_FIELDS = new Map(
-  SPECS.map((spec) => [spec.name, Object.entries(spec.fields as Record<string, FieldSpec>).map(([field, fieldSpec]) => ({ field, column: columnName(field), set: fieldSpec.kind === 'set' }))]),
+  SPECS.map((spec) => [
+    spec.name,
+    Object.entries(spec.fields as Record<string, FieldSpec>).map(([field, fieldSpec]) => ({ field, column: columnName(field), set: fieldSpec.kind === 'set' })),
+  ]),
 );
 /** Collections with a mergeable text field, whose pulled fields carry the text's state from `text_states`. */
 const WITH_TEXTS = new Set(TEXT_FIELDS.map((entry) => entry.collection.name));
@@ -401,7 +404,9 @@ function rowFields(collection: string, row: Record<string, unknown>): PulledChan
     const hlc = clocks[field];
     if (hlc === undefined) continue;
     const value = row[column] ?? null;
-    changes.push(set ? { collection, rowId, field, value, hlc, state: (row['sets'] as Record<string, OrSetState>)[field] ?? {} } : { collection, rowId, field, value, hlc });
+    changes.push(
+      set ? { collection, rowId, field, value, hlc, state: (row['sets'] as Record<string, OrSetState>)[field] ?? {} } : { collection, rowId, field, value, hlc },
+    );
   }
   return changes;
 }
