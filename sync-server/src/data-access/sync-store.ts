@@ -350,15 +350,6 @@ interface Taken {
   readonly json: Buffer;
 }
 
-/**
- * A JSON text's UTF-8 bytes. Counting them makes V8 flatten the text `JSON.stringify` built in
- * pieces, which costs most; after that, a text of ASCII only (most pages) is copied byte for byte,
- * many times faster than encoding it, and only others are encoded.
- */
-function utf8Of(text: string): Buffer {
-  return Buffer.byteLength(text) === text.length ? Buffer.from(text, 'latin1') : Buffer.from(text, 'utf8');
-}
-
 /** Several JSON arrays' bytes as one array (a page of several rounds). */
 function joinJsonArrays(arrays: readonly Buffer[]): Buffer {
   const inner = arrays.flatMap((array, n) => [Buffer.from(n === 0 ? '[' : ','), array.subarray(1, -1)]);
@@ -369,12 +360,14 @@ function joinJsonArrays(arrays: readonly Buffer[]): Buffer {
  * The rows that fit the fields left, as one JSON text made by one `JSON.stringify` (a page's
  * thousands of small texts, one per row, cost several times as much to make and join), when it
  * fits the bytes left too; `undefined` when it does not, so the rows are measured one by one.
+ * The text is encoded once, straight from what `JSON.stringify` built in pieces: counting its
+ * bytes first (`Buffer.byteLength`) makes V8 copy it into one piece, which cost more than encoding.
  */
 function takeWhole(rows: readonly PulledChange[][], pieces: readonly PulledChange[], fieldsLeft: number, bytesLeft: number, first: boolean): Taken | undefined {
   let count = 0;
   let fields = 0;
   while (count < rows.length && (fields + rows[count]!.length <= fieldsLeft || (first && count === 0))) fields += rows[count++]!.length;
-  const json = utf8Of(JSON.stringify(count === rows.length ? pieces : pieces.slice(0, fields)));
+  const json = Buffer.from(JSON.stringify(count === rows.length ? pieces : pieces.slice(0, fields)));
   return json.length <= bytesLeft || (first && count === 1) ? { rows: count, fields, json } : undefined;
 }
 
@@ -393,7 +386,7 @@ function takeRowByRow(rows: readonly PulledChange[][], pieces: readonly PulledCh
     offset += row.length;
     bytes += size;
   }
-  return { rows: count, fields: offset, json: utf8Of(`[${parts.join(',')}]`) };
+  return { rows: count, fields: offset, json: Buffer.from(`[${parts.join(',')}]`) };
 }
 
 function rowFields(collection: string, row: Record<string, unknown>): PulledChange[] {
