@@ -91,7 +91,8 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
 /**
  * One collection's rows changed after a sequence, in sequence order (`$1` user, `$2` sequence,
  * `$3` rows at most, `$4` the greatest sequence to read): plain paging on the table's
- * (user_id, seq) index, with only the columns a pull sends (values, clocks, set states). The
+ * (user_id, seq) index, with only the columns a pull sends: id, seq, clocks, sets, then the
+ * fields in the schema's order (the store reads rows as arrays in this order). The
  * caller merges the collections' pages by sequence and builds the answer's JSON for the rows that
  * fit (see `SyncStore.pull`): a pull reads what a plain paging client would, and builds nothing in SQL.
  */

@@ -45,11 +45,15 @@ const MIN_ROWS_PER_TABLE = 16;
 const MAX_REMEMBERED_POSITIONS = 1000;
 
 /** A row as a pull reads it: its id, sequence, clocks, set states and columns. */
-type PulledRow = Record<string, unknown> & { seq: string };
+/**
+ * A row as a pull reads it, as an array in `pullPageSql`'s column order (id, seq, clocks, sets,
+ * then the fields in the schema's order): forty-odd named properties a row cost more to make.
+ */
+type PulledRow = unknown[];
 
 /** The part of a node-postgres client the hot path uses. */
 interface PgClient {
-  query(config: { name?: string; text: string; values?: unknown[] } | string, values?: unknown[]): Promise<{ rows: Record<string, unknown>[] }>;
+  query(config: { name?: string; text: string; values?: unknown[]; rowMode?: 'array' } | string, values?: unknown[]): Promise<{ rows: Record<string, unknown>[] }>;
 }
 
 /**
@@ -189,19 +193,19 @@ export class SyncStore {
       // more than asked says that the table goes on, and bounds what can be taken from the others.
       const rowLimit = Math.max(MIN_ROWS_PER_TABLE, Math.ceil((limit - changes.length) / fieldsPerRow / tables.length));
       const pages: PulledRow[][] = [];
-      for (const c of tables) pages.push(await this.read<PulledRow>(PULL_PAGE_SQL[c]!, [userId, lastSeq, rowLimit + 1, upTo]));
+      for (const c of tables) pages.push(await this.read<PulledRow>(PULL_PAGE_SQL[c]!, [userId, lastSeq, rowLimit + 1, upTo], 'array'));
       let bound = Infinity;
-      const rows: { c: number; row: PulledRow }[] = [];
+      const rows: { c: number; seq: number; row: PulledRow }[] = [];
       for (const [n, page] of pages.entries()) {
-        if (page.length > rowLimit) bound = Math.min(bound, Number(page[rowLimit - 1]!.seq));
-        for (const row of page) rows.push({ c: tables[n]!, row });
+        if (page.length > rowLimit) bound = Math.min(bound, Number(page[rowLimit - 1]![1]));
+        for (const row of page) rows.push({ c: tables[n]!, seq: Number(row[1]), row });
       }
-      rows.sort((a, b) => Number(a.row.seq) - Number(b.row.seq));
+      if (pages.length > 1) rows.sort((a, b) => a.seq - b.seq);
       // The rows that can be taken (in order, up to the bound) and may fit the fields still free.
       const candidates: PulledChange[][] = [];
       let fields = changes.length;
-      for (const { c, row } of rows) {
-        if (Number(row.seq) > bound || (candidates.length > 0 && fields >= limit)) break;
+      for (const { c, seq, row } of rows) {
+        if (seq > bound || (candidates.length > 0 && fields >= limit)) break;
         candidates.push(rowFields(SPECS[c]!.name, row));
         fields += candidates.at(-1)!.length;
       }
@@ -215,12 +219,12 @@ export class SyncStore {
       if (took.fields > 0) parts.push(took.json);
       bytes += took.json.length;
       taken += took.rows;
-      if (took.rows > 0) lastSeq = Number(rows[took.rows - 1]!.row.seq);
+      if (took.rows > 0) lastSeq = rows[took.rows - 1]!.seq;
       const full = took.rows < candidates.length;
       // A row read but not taken is still to come; none means every table ran out.
-      hasMore = rows.some(({ row }) => Number(row.seq) > lastSeq);
+      hasMore = rows.some(({ seq }) => seq > lastSeq);
       if (!hasMore || full || changes.length >= limit || bytes >= maxBytes) break;
-      tables = [...new Set(rows.filter(({ row }) => Number(row.seq) > lastSeq).map(({ c }) => c))];
+      tables = [...new Set(rows.filter(({ seq }) => seq > lastSeq).map(({ c }) => c))];
       fieldsPerRow = Math.max(1, changes.length / taken);
     }
     // Most pages are one round: its bytes are the answer's as they are, without a copy.
@@ -249,9 +253,9 @@ export class SyncStore {
    * A read outside a transaction, straight on the pool: prepared under its name once per
    * connection (planning the pull costs more than running it), unnamed behind a transaction pooler.
    */
-  private async read<Row>(statement: { name: string; text: string }, values: unknown[]): Promise<Row[]> {
+  private async read<Row>(statement: { name: string; text: string }, values: unknown[], rowMode?: 'array'): Promise<Row[]> {
     const pool = (this.dataSource.driver as unknown as { master: PgClient }).master;
-    const config = this.options.namedStatements === false ? { text: statement.text, values } : { ...statement, values };
+    const config = { ...(this.options.namedStatements === false ? { text: statement.text } : statement), values, ...(rowMode ? { rowMode } : {}) };
     return (await pool.query(config)).rows as Row[];
   }
 }
@@ -332,11 +336,11 @@ async function storedSetStates(client: PgClient, userId: string, changes: readon
   return states;
 }
 
-/** Per collection: each field's name, column and whether it is a set, in the schema's order (made once, not per row). */
+/** Per collection: each field's name, place in a pulled row (after id, seq, clocks and sets) and whether it is a set, made once, not per row. */
 const PULLED_FIELDS = new Map(
   SPECS.map((spec) => [
     spec.name,
-    Object.entries(spec.fields as Record<string, FieldSpec>).map(([field, fieldSpec]) => ({ field, column: columnName(field), set: fieldSpec.kind === 'set' })),
+    Object.entries(spec.fields as Record<string, FieldSpec>).map(([field, fieldSpec], n) => ({ field, index: 4 + n, set: fieldSpec.kind === 'set' })),
   ]),
 );
 /** Collections with a mergeable text field, whose pulled fields carry the text's state from `text_states`. */
@@ -352,8 +356,8 @@ interface Taken {
 
 /** Several JSON arrays' bytes as one array (a page of several rounds). */
 function joinJsonArrays(arrays: readonly Buffer[]): Buffer {
-  const inner = arrays.flatMap((array, n) => [Buffer.from(n === 0 ? '[' : ','), array.subarray(1, -1)]);
-  return Buffer.concat([...inner, Buffer.from(']')]);
+  const inner = arrays.flatMap((array, n) => [Buffer.from(n === 0 ? '' : ','), array.subarray(1, -1)]);
+  return Buffer.concat([Buffer.from('['), ...inner, Buffer.from(']')]);
 }
 
 /**
@@ -389,17 +393,14 @@ function takeRowByRow(rows: readonly PulledChange[][], pieces: readonly PulledCh
   return { rows: count, fields: offset, json: Buffer.from(`[${parts.join(',')}]`) };
 }
 
-function rowFields(collection: string, row: Record<string, unknown>): PulledChange[] {
-  const clocks = row['clocks'] as Record<string, string>;
-  const rowId = row['id'] as string;
+function rowFields(collection: string, row: PulledRow): PulledChange[] {
+  const [id, , clocks, sets] = row as [string, string, Record<string, string>, Record<string, OrSetState>];
   const changes: PulledChange[] = [];
-  for (const { field, column, set } of PULLED_FIELDS.get(collection)!) {
+  for (const { field, index, set } of PULLED_FIELDS.get(collection)!) {
     const hlc = clocks[field];
     if (hlc === undefined) continue;
-    const value = row[column] ?? null;
-    changes.push(
-      set ? { collection, rowId, field, value, hlc, state: (row['sets'] as Record<string, OrSetState>)[field] ?? {} } : { collection, rowId, field, value, hlc },
-    );
+    const value = row[index] ?? null;
+    changes.push(set ? { collection, rowId: id, field, value, hlc, state: sets[field] ?? {} } : { collection, rowId: id, field, value, hlc });
   }
   return changes;
 }
