@@ -44,7 +44,6 @@ const MIN_ROWS_PER_TABLE = 16;
 /** Positions whose remaining count an instance remembers (a few per first sync under way). */
 const MAX_REMEMBERED_POSITIONS = 1000;
 
-/** A row as a pull reads it: its id, sequence, clocks, set states and columns. */
 /**
  * A row as a pull reads it, as an array in `pullPageSql`'s column order (id, seq, clocks, sets,
  * then the fields in the schema's order): forty-odd named properties a row cost more to make.
@@ -394,13 +393,13 @@ function takeRowByRow(rows: readonly PulledChange[][], pieces: readonly PulledCh
 }
 
 function rowFields(collection: string, row: PulledRow): PulledChange[] {
-  const [id, , clocks, sets] = row as [string, string, Record<string, string>, Record<string, OrSetState>];
+  const [id, , clocks, sets] = row as [string, string, Record<string, string>, Record<string, OrSetState> | null];
   const changes: PulledChange[] = [];
   for (const { field, index, set } of PULLED_FIELDS.get(collection)!) {
     const hlc = clocks[field];
     if (hlc === undefined) continue;
     const value = row[index] ?? null;
-    changes.push(set ? { collection, rowId: id, field, value, hlc, state: sets[field] ?? {} } : { collection, rowId: id, field, value, hlc });
+    changes.push(set ? { collection, rowId: id, field, value, hlc, state: sets?.[field] ?? {} } : { collection, rowId: id, field, value, hlc });
   }
   return changes;
 }
