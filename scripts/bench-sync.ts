@@ -10,7 +10,7 @@
  * alternates round by round so machine noise hits all. Then the pull: everything to a fresh
  * device over HTTP at the app's page size, for three account sizes (1,000, 10,000 and 50,000
  * fields), against plain SQL paging of the same rows by (user_id, seq) with as many rows a page,
- * reading the values and their clocks, alternating, median ratios. Both HTTP paths use a plain
+ * reading the values and their clocks, alternating (15 rounds), median ratios. Both HTTP paths use a plain
  * keep-alive client with native gzip (as a browser); the pulled pages are merged and checked after
  * the timing.
  */
@@ -35,6 +35,8 @@ const ROWS = 10_000;
 const FIELDS = ['title', 'authors', 'format', 'status', 'rating'] as const;
 const BATCH = MAX_PUSH_CHANGES;
 const ROUNDS = 5;
+/** Pulls are short and this machine is shared: more rounds keep their medians steadier. */
+const PULL_ROUNDS = 15;
 
 function changesFor(rowIds: readonly string[], clock: HlcClock, edition: number): FieldChange[][] {
   const all: FieldChange[] = [];
@@ -89,9 +91,9 @@ async function timed(work: () => Promise<unknown>): Promise<number> {
  * decompresses through web streams in JavaScript, which cost more than the server's work here.
  */
 const agent = new Agent({ keepAlive: true, maxSockets: 1 });
-function httpRequest(url: string, method: 'GET' | 'POST', token: string, body?: string): Promise<{ status: number; text: string }> {
+function httpRequest(url: string, method: 'GET' | 'POST', token: string, body?: string, encoding = 'gzip'): Promise<{ status: number; text: string }> {
   return new Promise((resolve, reject) => {
-    const headers: Record<string, string> = { authorization: `Bearer ${token}`, 'accept-encoding': 'gzip' };
+    const headers: Record<string, string> = { authorization: `Bearer ${token}`, 'accept-encoding': encoding };
     if (body !== undefined) Object.assign(headers, { 'content-type': 'application/json', 'content-length': String(Buffer.byteLength(body)) });
     const req = request(url, { method, headers, agent }, (res) => {
       const chunks: Buffer[] = [];
@@ -204,25 +206,38 @@ async function main(): Promise<void> {
   };
   const pullReaders = [await small(200), await small(2000), { userId: lastUser, token: lastToken }];
   await dataSource.query('ANALYZE');
-  const pullOnce = async (token: string) => {
+  const pullOnce = async (token: string, encoding = 'gzip') => {
     let cursor = '';
     const pages: PullResponse[] = [];
     for (;;) {
-      const res = await httpRequest(`${baseUrl}/api/sync/pull?limit=${MAX_PULL_LIMIT}${cursor ? `&since=${cursor}` : ''}`, 'GET', token);
+      const res = await httpRequest(`${baseUrl}/api/sync/pull?limit=${MAX_PULL_LIMIT}${cursor ? `&since=${cursor}` : ''}`, 'GET', token, undefined, encoding);
       const page = JSON.parse(res.text) as PullResponse;
       pages.push(page);
       cursor = page.cursor;
       if (!page.hasMore) return pages;
     }
   };
+  // Where the time goes: the store's pull in this process (SQL and the answer's JSON, no HTTP), and
+  // HTTP without compression; the plain paging runs in this process too.
+  const storePull = async (userId: string) => {
+    for (let seq = 0; ;) {
+      const page = await store.pull(userId, seq, MAX_PULL_LIMIT);
+      if (!page.hasMore) return;
+      seq = page.lastSeq;
+    }
+  };
   const pullLines: string[] = [];
   for (const reader of pullReaders) {
     const pullTimes: number[] = [];
     const plainTimes: number[] = [];
+    const storeTimes: number[] = [];
+    const identityTimes: number[] = [];
     let pages: PullResponse[] = [];
-    for (let round = 0; round < ROUNDS; round++) {
+    for (let round = 0; round < PULL_ROUNDS; round++) {
       if (round % 2 === 0) pullTimes.push(await timed(async () => (pages = await pullOnce(reader.token))));
       plainTimes.push(await timed(() => plainPull(dataSource, reader.userId, MAX_PULL_LIMIT / FIELDS.length)));
+      storeTimes.push(await timed(() => storePull(reader.userId)));
+      identityTimes.push(await timed(() => pullOnce(reader.token, 'identity')));
       if (round % 2 === 1) pullTimes.push(await timed(async () => (pages = await pullOnce(reader.token))));
     }
     // Checked after the timing: the device's merge is the client's work, not the pull's.
@@ -231,6 +246,7 @@ async function main(): Promise<void> {
     if (state.size !== rows * FIELDS.length) throw new Error(`expected ${rows * FIELDS.length} field values after the pull, got ${state.size}`);
     pullLines.push(
       `  ${String(state.size).padStart(6)} field values in ${String(pages.length).padStart(2)} pages: HTTP median ${median(pullTimes).toFixed(0).padStart(5)} ms; plain SQL paging ${median(plainTimes).toFixed(0).padStart(4)} ms; ratio ${(median(pullTimes) / median(plainTimes)).toFixed(2)} (goal ≤ 1.5)`,
+      `         parts: store.pull in process (SQL + JSON) ${median(storeTimes).toFixed(0).padStart(4)} ms (${(median(storeTimes) / median(plainTimes)).toFixed(2)}×), HTTP uncompressed ${median(identityTimes).toFixed(0).padStart(4)} ms (${(median(identityTimes) / median(plainTimes)).toFixed(2)}×), gzip ${(median(pullTimes) / median(plainTimes)).toFixed(2)}×`,
     );
   }
   child.disconnect();
@@ -246,7 +262,7 @@ async function main(): Promise<void> {
     const ratios = (path: Path) => median(t.raw.map((raw, n) => raw / t[path][n]!)).toFixed(2);
     console.log(`            throughput / raw, median of rounds: merge ${ratios('ours')}, HTTP ${ratios('http')} (goal ≥ 0.80)`);
   }
-  console.log(`pull to a fresh device over HTTP (${MAX_PULL_LIMIT} fields a page) against plain SQL paging by (user_id, seq), ${ROUNDS} alternating rounds:`);
+  console.log(`pull to a fresh device over HTTP (${MAX_PULL_LIMIT} fields a page) against plain SQL paging by (user_id, seq), ${PULL_ROUNDS} alternating rounds:`);
   for (const line of pullLines) console.log(line);
   agent.destroy();
   await dataSource.destroy();

@@ -81,6 +81,42 @@ describe('Sync sizes and limits', () => {
     expect(seen.size).toBe(10);
   });
 
+  it('sends a pull page as UTF-8 whose Content-Length counts its bytes, ASCII-only or not', async () => {
+    const { client, accessToken } = await reader();
+    const { request } = await import('node:http');
+    const pullBytes = (since?: string) =>
+      new Promise<{ length: number; body: Buffer }>((resolve, reject) =>
+        request(
+          `${server.baseUrl}/api/sync/pull${since ? `?since=${since}` : ''}`,
+          { headers: { authorization: `Bearer ${accessToken}`, 'accept-encoding': 'identity' } },
+          (res) => {
+            const chunks: Buffer[] = [];
+            res.on('data', (chunk: Buffer) => chunks.push(chunk));
+            res.on('end', () => resolve({ length: Number(res.headers['content-length']), body: Buffer.concat(chunks) }));
+          },
+        )
+          .on('error', reject)
+          .end(),
+      );
+    // The second push adds titles outside ASCII: two, three and four bytes a character in UTF-8.
+    const titles = [
+      ['Plain title', 'Another plain one'],
+      ['Über die Lampe', '灯下读书', 'Shelf 📚 of nights'],
+    ];
+    let cursor: string | undefined;
+    for (const batch of titles) {
+      await client.push(batch.map((title, n) => fieldChange(randomUUID(), 'title', title, { wall: NOW + n })));
+      const { length, body } = await pullBytes(cursor);
+      // WHATWG Encoding's fatal decoder refuses any byte sequence that is not UTF-8 (RFC 8259 §8.1 asks for UTF-8).
+      const text = new TextDecoder('utf-8', { fatal: true }).decode(body);
+      expect(length).withContext('Content-Length').toBe(body.length);
+      expect(new TextEncoder().encode(text).length).toBe(body.length);
+      const page = JSON.parse(text) as { changes: { value: unknown }[]; cursor: string };
+      expect(page.changes.map((change) => change.value).sort()).toEqual([...batch].sort());
+      cursor = page.cursor;
+    }
+  });
+
   it('answers 429 with Retry-After to a reader running too many pulls at once, and never a 5xx', async () => {
     const { client, accessToken } = await reader();
     for (let n = 0; n < 6; n++) await client.push([fieldChange(randomUUID(), 'body', '\u0001'.repeat(50_000), { wall: NOW + n }, 'notebookPages')]);

@@ -55,11 +55,12 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
     ), decided AS (
       -- A scalar subquery is never flattened into a join: one primary-key probe per row, even
       -- while statistics lag behind a big first sync (a join was planned as a scan of all the
-      -- reader's rows then).
+      -- reader's rows then). OFFSET 0 keeps probed a subquery of its own: pulled up, the probe
+      -- ran once for each use of stored, three a row.
       SELECT probed.*, stored->'c' AS stored_clocks, stored->'s' AS stored_sets
         FROM (SELECT i.id, ${lww.map((field) => `i.${column(field)}, `).join('')}i.clocks, coalesce(i.sets, '{}'::jsonb) AS sets, i.seq,
                      (SELECT jsonb_build_object('c', t.clocks, 's', t.sets) FROM ${spec.table} t WHERE t.user_id = $1::uuid AND t.id = i.id) AS stored
-                FROM input i) probed
+                FROM input i OFFSET 0) probed
     ), merged AS (
       INSERT INTO ${spec.table} AS t (user_id, id, ${[...lww, ...sets].map(column).join(', ')}, clocks, sets, seq)
       SELECT $1::uuid, d.id, ${[...lww.map((field) => `d.${column(field)}`), ...setColumnsOnInsert].join(', ')}, d.clocks, d.sets, d.seq
@@ -82,7 +83,7 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
       RETURNING 1
     )
     SELECT (SELECT count(*) FROM merged)::int AS rows,
-           (SELECT jsonb_object_agg(d.id, jsonb_build_object('c', d.stored_clocks, 'g', jsonb_build_array(${sets
+           (SELECT json_object_agg(d.id, json_build_object('c', d.stored_clocks, 'g', json_build_array(${sets
              .map((field) => `CASE WHEN ${grows(field, 'd.sets', 'd.stored_sets')} THEN '${field}' END`)
              .join(', ')})))
               FROM decided d WHERE d.stored IS NOT NULL) AS before`;
@@ -91,7 +92,8 @@ export function mergeSql(spec: CollectionSpec, fields: readonly string[] = Objec
 /**
  * One collection's rows changed after a sequence, in sequence order (`$1` user, `$2` sequence,
  * `$3` rows at most, `$4` the greatest sequence to read): plain paging on the table's
- * (user_id, seq) index, with only the columns a pull sends (values, clocks, set states). The
+ * (user_id, seq) index, with only the columns a pull sends: id, seq, clocks, sets, then the
+ * fields in the schema's order (the store reads rows as arrays in this order). The
  * caller merges the collections' pages by sequence and builds the answer's JSON for the rows that
  * fit (see `SyncStore.pull`): a pull reads what a plain paging client would, and builds nothing in SQL.
  */

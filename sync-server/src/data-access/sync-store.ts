@@ -9,7 +9,7 @@ import { COLLECTIONS, collectionSpec, fieldSpecOf } from '../../../shared/sync/s
 import { changedTablesSql, mergeSql, pullPageSql, remainingSql } from './merge-sql';
 import { notifyPushedSql } from './sync-notifications';
 import { queryableOf, TextStore } from './text-store';
-import { textFieldMax } from '../../../shared/text/text-fields';
+import { TEXT_FIELDS, textFieldMax } from '../../../shared/text/text-fields';
 
 const SPECS = Object.values(COLLECTIONS);
 /** Per collection: its columns by field. */
@@ -44,12 +44,15 @@ const MIN_ROWS_PER_TABLE = 16;
 /** Positions whose remaining count an instance remembers (a few per first sync under way). */
 const MAX_REMEMBERED_POSITIONS = 1000;
 
-/** A row as a pull reads it: its id, sequence, clocks, set states and columns. */
-type PulledRow = Record<string, unknown> & { seq: string };
+/**
+ * A row as a pull reads it, as an array in `pullPageSql`'s column order (id, seq, clocks, sets,
+ * then the fields in the schema's order): forty-odd named properties a row cost more to make.
+ */
+type PulledRow = unknown[];
 
 /** The part of a node-postgres client the hot path uses. */
 interface PgClient {
-  query(config: { name?: string; text: string; values?: unknown[] } | string, values?: unknown[]): Promise<{ rows: Record<string, unknown>[] }>;
+  query(config: { name?: string; text: string; values?: unknown[]; rowMode?: 'array' } | string, values?: unknown[]): Promise<{ rows: Record<string, unknown>[] }>;
 }
 
 /**
@@ -77,8 +80,8 @@ export interface PulledPage {
   /** The sequence to continue after. */
   readonly lastSeq: number;
   readonly hasMore: boolean;
-  /** `changes` as JSON text, exactly as measured against the byte budget (the route sends it as is). */
-  readonly changesJson: string;
+  /** `changes` as JSON text in UTF-8, exactly as measured against the byte budget (the route sends it as is). */
+  readonly changesBytes: Buffer;
   /** Rows still to pull after this page (only while there are more pages). */
   readonly remaining?: number;
 }
@@ -173,12 +176,12 @@ export class SyncStore {
     const [probe] = await this.read<{ latest: (string | null)[] }>(CHANGED_TABLES_SQL, [userId, sinceSeq]);
     const latest = probe?.latest ?? [];
     let tables = latest.flatMap((seq, c) => (seq === null ? [] : [c]));
-    if (tables.length === 0) return { changes: [], changesJson: '[]', lastSeq: sinceSeq, hasMore: false };
+    if (tables.length === 0) return { changes: [], changesBytes: Buffer.from('[]'), lastSeq: sinceSeq, hasMore: false };
     // Every row up to here has committed (see changedTablesSql): reading no further, the tables' reads agree.
     const upTo = Math.max(...tables.map((c) => Number(latest[c])));
     const changes: PulledChange[] = [];
-    // Each row's changes as JSON, measured once and sent as they are (no second serialisation).
-    const parts: string[] = [];
+    // Each round's rows as one JSON array, measured once and sent as they are (no second serialisation).
+    const parts: Buffer[] = [];
     let lastSeq = sinceSeq;
     let taken = 0;
     let bytes = 0;
@@ -189,51 +192,44 @@ export class SyncStore {
       // more than asked says that the table goes on, and bounds what can be taken from the others.
       const rowLimit = Math.max(MIN_ROWS_PER_TABLE, Math.ceil((limit - changes.length) / fieldsPerRow / tables.length));
       const pages: PulledRow[][] = [];
-      for (const c of tables) pages.push(await this.read<PulledRow>(PULL_PAGE_SQL[c]!, [userId, lastSeq, rowLimit + 1, upTo]));
+      for (const c of tables) pages.push(await this.read<PulledRow>(PULL_PAGE_SQL[c]!, [userId, lastSeq, rowLimit + 1, upTo], 'array'));
       let bound = Infinity;
-      const rows: { c: number; row: PulledRow }[] = [];
+      const rows: { c: number; seq: number; row: PulledRow }[] = [];
       for (const [n, page] of pages.entries()) {
-        if (page.length > rowLimit) bound = Math.min(bound, Number(page[rowLimit - 1]!.seq));
-        for (const row of page) rows.push({ c: tables[n]!, row });
+        if (page.length > rowLimit) bound = Math.min(bound, Number(page[rowLimit - 1]![1]));
+        for (const row of page) rows.push({ c: tables[n]!, seq: Number(row[1]), row });
       }
-      rows.sort((a, b) => Number(a.row.seq) - Number(b.row.seq));
+      if (pages.length > 1) rows.sort((a, b) => a.seq - b.seq);
       // The rows that can be taken (in order, up to the bound) and may fit the fields still free.
       const candidates: PulledChange[][] = [];
       let fields = changes.length;
-      for (const { c, row } of rows) {
-        if (Number(row.seq) > bound || (candidates.length > 0 && fields >= limit)) break;
+      for (const { c, seq, row } of rows) {
+        if (seq > bound || (candidates.length > 0 && fields >= limit)) break;
         candidates.push(rowFields(SPECS[c]!.name, row));
         fields += candidates.at(-1)!.length;
       }
       // Texts' Yjs states count towards the page's bytes too, so they are read before the page is cut.
-      const withStates = await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat());
-      let offset = 0;
-      let full = false;
-      for (const [index, candidate] of candidates.entries()) {
-        const pieces = withStates.slice(offset, offset + candidate.length);
-        offset += pieces.length;
-        const json = JSON.stringify(pieces);
-        const size = Buffer.byteLength(json);
-        // The first row always fits, so paging always moves on.
-        if (taken > 0 && (changes.length + pieces.length > limit || bytes + size > maxBytes)) {
-          full = true;
-          break;
-        }
-        changes.push(...pieces);
-        if (pieces.length > 0) parts.push(json.slice(1, -1));
-        bytes += size;
-        lastSeq = Number(rows[index]!.row.seq);
-        taken++;
-      }
+      const withStates = candidates.some((row) => hasTextFields(row))
+        ? await TextStore.withStates(queryableOf(this.dataSource), userId, candidates.flat())
+        : candidates.flat();
+      const [fieldsLeft, bytesLeft, first] = [limit - changes.length, maxBytes - bytes, taken === 0] as const;
+      const took = takeWhole(candidates, withStates, fieldsLeft, bytesLeft, first) ?? takeRowByRow(candidates, withStates, fieldsLeft, bytesLeft, first);
+      for (let n = 0; n < took.fields; n++) changes.push(withStates[n]!);
+      if (took.fields > 0) parts.push(took.json);
+      bytes += took.json.length;
+      taken += took.rows;
+      if (took.rows > 0) lastSeq = rows[took.rows - 1]!.seq;
+      const full = took.rows < candidates.length;
       // A row read but not taken is still to come; none means every table ran out.
-      hasMore = rows.some(({ row }) => Number(row.seq) > lastSeq);
+      hasMore = rows.some(({ seq }) => seq > lastSeq);
       if (!hasMore || full || changes.length >= limit || bytes >= maxBytes) break;
-      tables = [...new Set(rows.filter(({ row }) => Number(row.seq) > lastSeq).map(({ c }) => c))];
+      tables = [...new Set(rows.filter(({ seq }) => seq > lastSeq).map(({ c }) => c))];
       fieldsPerRow = Math.max(1, changes.length / taken);
     }
-    const changesJson = `[${parts.join(',')}]`;
-    if (!hasMore) return { changes, changesJson, lastSeq, hasMore };
-    return { changes, changesJson, lastSeq, hasMore, remaining: await this.remaining(userId, sinceSeq, lastSeq, taken) };
+    // Most pages are one round: its bytes are the answer's as they are, without a copy.
+    const changesBytes = parts.length === 1 ? parts[0]! : joinJsonArrays(parts);
+    if (!hasMore) return { changes, changesBytes, lastSeq, hasMore };
+    return { changes, changesBytes, lastSeq, hasMore, remaining: await this.remaining(userId, sinceSeq, lastSeq, taken) };
   }
 
   /**
@@ -256,9 +252,9 @@ export class SyncStore {
    * A read outside a transaction, straight on the pool: prepared under its name once per
    * connection (planning the pull costs more than running it), unnamed behind a transaction pooler.
    */
-  private async read<Row>(statement: { name: string; text: string }, values: unknown[]): Promise<Row[]> {
+  private async read<Row>(statement: { name: string; text: string }, values: unknown[], rowMode?: 'array'): Promise<Row[]> {
     const pool = (this.dataSource.driver as unknown as { master: PgClient }).master;
-    const config = this.options.namedStatements === false ? { text: statement.text, values } : { ...statement, values };
+    const config = { ...(this.options.namedStatements === false ? { text: statement.text } : statement), values, ...(rowMode ? { rowMode } : {}) };
     return (await pool.query(config)).rows as Row[];
   }
 }
@@ -339,16 +335,71 @@ async function storedSetStates(client: PgClient, userId: string, changes: readon
   return states;
 }
 
-function rowFields(collection: string, row: Record<string, unknown>): PulledChange[] {
-  const spec = collectionSpec(collection)!;
-  const clocks = row['clocks'] as Record<string, string>;
-  const sets = (row['sets'] ?? {}) as Record<string, OrSetState>;
-  const rowId = row['id'] as string;
-  return Object.entries(spec.fields as Record<string, FieldSpec>)
-    .filter(([field]) => clocks[field] !== undefined)
-    .map(([field, fieldSpec]) => {
-      const value = row[columnName(field)] ?? null;
-      const hlc = clocks[field]!;
-      return fieldSpec.kind === 'set' ? { collection, rowId, field, value, hlc, state: sets[field] ?? {} } : { collection, rowId, field, value, hlc };
-    });
+/** Per collection: each field's name, place in a pulled row (after id, seq, clocks and sets) and whether it is a set, made once, not per row. */
+const PULLED_FIELDS = new Map(
+  SPECS.map((spec) => [
+    spec.name,
+    Object.entries(spec.fields as Record<string, FieldSpec>).map(([field, fieldSpec], n) => ({ field, index: 4 + n, set: fieldSpec.kind === 'set' })),
+  ]),
+);
+/** Collections with a mergeable text field, whose pulled fields carry the text's state from `text_states`. */
+const WITH_TEXTS = new Set(TEXT_FIELDS.map((entry) => entry.collection.name));
+const hasTextFields = (row: readonly PulledChange[]) => row.length > 0 && WITH_TEXTS.has(row[0]!.collection);
+
+/** The rows a page takes of what a round read: how many, their fields and their JSON text (an array) in UTF-8. */
+interface Taken {
+  readonly rows: number;
+  readonly fields: number;
+  readonly json: Buffer;
+}
+
+/** Several JSON arrays' bytes as one array (a page of several rounds). */
+function joinJsonArrays(arrays: readonly Buffer[]): Buffer {
+  const inner = arrays.flatMap((array, n) => [Buffer.from(n === 0 ? '' : ','), array.subarray(1, -1)]);
+  return Buffer.concat([Buffer.from('['), ...inner, Buffer.from(']')]);
+}
+
+/**
+ * The rows that fit the fields left, as one JSON text made by one `JSON.stringify` (a page's
+ * thousands of small texts, one per row, cost several times as much to make and join), when it
+ * fits the bytes left too; `undefined` when it does not, so the rows are measured one by one.
+ * The text is encoded once, straight from what `JSON.stringify` built in pieces: counting its
+ * bytes first (`Buffer.byteLength`) makes V8 copy it into one piece, which cost more than encoding.
+ */
+function takeWhole(rows: readonly PulledChange[][], pieces: readonly PulledChange[], fieldsLeft: number, bytesLeft: number, first: boolean): Taken | undefined {
+  let count = 0;
+  let fields = 0;
+  while (count < rows.length && (fields + rows[count]!.length <= fieldsLeft || (first && count === 0))) fields += rows[count++]!.length;
+  const json = Buffer.from(JSON.stringify(count === rows.length ? pieces : pieces.slice(0, fields)));
+  return json.length <= bytesLeft || (first && count === 1) ? { rows: count, fields, json } : undefined;
+}
+
+/** The rows that fit, measured one by one (a page near its byte budget); the first row always fits, so paging moves on. */
+function takeRowByRow(rows: readonly PulledChange[][], pieces: readonly PulledChange[], fieldsLeft: number, bytesLeft: number, first: boolean): Taken {
+  const parts: string[] = [];
+  let count = 0;
+  let offset = 0;
+  let bytes = 0;
+  for (const row of rows) {
+    const json = JSON.stringify(pieces.slice(offset, offset + row.length));
+    const size = Buffer.byteLength(json);
+    if ((!first || count > 0) && (offset + row.length > fieldsLeft || bytes + size > bytesLeft)) break;
+    if (row.length > 0) parts.push(json.slice(1, -1));
+    count++;
+    offset += row.length;
+    bytes += size;
+  }
+  return { rows: count, fields: offset, json: Buffer.from(`[${parts.join(',')}]`) };
+}
+
+function rowFields(collection: string, row: PulledRow): PulledChange[] {
+  const [id, , clocks, sets] = row as [string, string, Record<string, string>, Record<string, OrSetState> | null];
+  const changes: PulledChange[] = [];
+  for (const { field, index, set } of PULLED_FIELDS.get(collection)!) {
+    const hlc = clocks[field];
+    if (hlc === undefined) continue;
+    const value = row[index] ?? null;
+    changes.push(set ? { collection, rowId: id, field, value, hlc, state: sets?.[field] ?? {} } : { collection, rowId: id, field, value, hlc });
+  }
+  return changes;
 }

@@ -42,13 +42,13 @@ async function refusingBadData<T>(work: () => Promise<T>): Promise<T> {
 }
 
 /**
- * Sends JSON that is already text: `res.json` would serialise it again and `res.send` would hash
+ * Sends JSON that is already UTF-8: `res.json` would serialise it again and `res.send` would hash
  * it for an ETag, which answers marked `no-store` never use.
  */
-function sendJsonText(res: Response, text: string): void {
+function sendJsonBytes(res: Response, bytes: Buffer): void {
   res.setHeader('Content-Type', 'application/json; charset=utf-8');
-  res.setHeader('Content-Length', Buffer.byteLength(text));
-  res.end(text);
+  res.setHeader('Content-Length', bytes.length);
+  res.end(bytes);
 }
 
 /** `/api/sync` (behind requireAuth): push field changes, pull winning values. */
@@ -94,7 +94,7 @@ export function syncRoutes(store: SyncStore, serverSecret: Uint8Array): Router {
     pullsInFlight.set(userId, running + 1);
     try {
       const page = await store.pull(userId, sinceSeq, limit);
-      // The rest of the answer, then the changes as the store already serialised them (a page is up to 2 MiB of JSON).
+      // The changes as the store already serialised them (a page is up to 2 MiB of JSON), then the rest of the answer.
       const rest: Omit<PullResponse, 'changes'> = {
         // Nothing new: the device's own cursor still says where it is (no sealing on the hot path).
         cursor: since && page.lastSeq === sinceSeq && cursors.isCurrent(since) ? since : cursors.seal(userId, page.lastSeq),
@@ -102,7 +102,7 @@ export function syncRoutes(store: SyncStore, serverSecret: Uint8Array): Router {
         ...(page.remaining === undefined ? {} : { remaining: page.remaining }),
         serverTime: new Date().toISOString(),
       };
-      sendJsonText(res, `{"changes":${page.changesJson},${JSON.stringify(rest).slice(1)}`);
+      sendJsonBytes(res, Buffer.concat([Buffer.from('{"changes":'), page.changesBytes, Buffer.from(`,${JSON.stringify(rest).slice(1)}`)]));
     } finally {
       const left = (pullsInFlight.get(userId) ?? 1) - 1;
       if (left > 0) pullsInFlight.set(userId, left);
