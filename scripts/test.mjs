@@ -65,7 +65,11 @@ const suites = [
     name: 'production build of the app',
     start: 1,
     id: 'build',
-    command: ['bash', '-c', `node scripts/subset-icons.mjs && ${bin('ng')} build --configuration production && node scripts/preload-initial.mjs && node scripts/precompress.mjs`],
+    command: [
+      'bash',
+      '-c',
+      `node scripts/subset-icons.mjs && ${bin('ng')} build --configuration production && node scripts/preload-initial.mjs && node scripts/precompress.mjs`,
+    ],
   },
   {
     name: 'browser e2e specs (Playwright, Chromium)',
