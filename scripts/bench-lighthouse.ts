@@ -9,7 +9,7 @@
  * Signed-in pages keep all storage (Lighthouse's storage reset would sign the reader out): a
  * returning reader whose installed app (service worker and its caches) is warm. Clearing only the
  * caches or the worker under Lighthouse failed its runs (an error page, or a lost trace).
- * `LAMPLIGHT_BENCH_WHERE=1` also prints, for each run, the scripts with the most main-thread time
+ * `LAMPLIGHT_BENCH_WHERE=1` also prints, for each run, the largest transfers, the LCP element and the scripts with the most main-thread time
  * (Lighthouse's bootup-time audit): where to look next for Total Blocking Time.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -48,6 +48,15 @@ interface BootupItem {
   scripting: number;
 }
 
+/** A row of Lighthouse's network-requests audit (the fields used here). */
+interface NetworkItem {
+  url: string;
+  transferSize: number;
+  priority?: string;
+}
+
+const shortUrl = (url: string) => url.replace(/^https?:\/\/[^/]+\//, '/');
+
 function freePort(): Promise<number> {
   return new Promise((resolve) => {
     const probe = createServer().listen(0, '127.0.0.1', () => {
@@ -71,9 +80,16 @@ async function audit(url: string, port: number, keepStorage: boolean): Promise<R
     tbt: numeric('total-blocking-time'),
     fcp: numeric('first-contentful-paint'),
     bytes: numeric('total-byte-weight'),
-    where: ((lhr.audits['bootup-time']?.details as { items?: BootupItem[] } | undefined)?.items ?? [])
-      .slice(0, 6)
-      .map((item) => `${item.url.replace(/^https?:\/\/[^/]+\//, '/')} ${Math.round(item.total)} ms (script ${Math.round(item.scripting)})`),
+    where: [
+      ...((lhr.audits['bootup-time']?.details as { items?: BootupItem[] } | undefined)?.items ?? [])
+        .slice(0, 6)
+        .map((item) => `${shortUrl(item.url)} ${Math.round(item.total)} ms (script ${Math.round(item.scripting)})`),
+      ...((lhr.audits['network-requests']?.details as { items?: NetworkItem[] } | undefined)?.items ?? [])
+        .sort((a, b) => b.transferSize - a.transferSize)
+        .slice(0, 8)
+        .map((item) => `${shortUrl(item.url)} ${(item.transferSize / 1024).toFixed(1)} KiB, ${item.priority ?? '?'} priority`),
+      `LCP element: ${JSON.stringify(lhr.audits['largest-contentful-paint-element']?.details ?? null).slice(0, 300)}`,
+    ],
   };
 }
 

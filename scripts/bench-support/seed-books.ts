@@ -28,6 +28,12 @@ export function benchBooks(count: number): Record<string, unknown>[] {
 export async function seedBooks(page: Page, name: string, count: number): Promise<void> {
   await page.evaluate(
     async ({ name, books }) => {
+      // The app makes its database once the signed-in shell has loaded, which can be after sign-in
+      // returns on a busy machine; opened first from here, it would be made empty (no `books`).
+      for (const giveUp = Date.now() + 60_000; !(await indexedDB.databases()).some((db) => db.name === name);) {
+        if (Date.now() > giveUp) throw new Error(`no database ${name} after 60 s`);
+        await new Promise((resolve) => setTimeout(resolve, 50));
+      }
       const db: IDBDatabase = await new Promise((resolve, reject) => {
         const open = indexedDB.open(name);
         open.onsuccess = () => resolve(open.result);
