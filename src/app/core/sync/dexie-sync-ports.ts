@@ -24,6 +24,11 @@ const MANY_ROWS = 200;
 /** The browser's side of the shared sync cycle: the outbox and rows in Dexie, the server over HTTP. */
 export class DexieSyncPorts implements SyncPorts {
   private pageLimit = SMALL_PAGE;
+  /**
+   * Whether held changes of known collections may be waiting: looked for on the first page only,
+   * since applying it releases them all and later pages hold only unknown collections' changes.
+   */
+  private mayRelease = true;
 
   /**
    * @param known the collections this version of the app knows; changes to others are held on
@@ -151,19 +156,11 @@ export class DexieSyncPorts implements SyncPorts {
     const tables = this.db.tables.filter((table) => this.known.has(table.name)).map((table) => table.name);
     // Yjs loads on the first pulled text, before the transaction (which must not await anything else).
     const isText = (change: { collection: string; field: string }) => textFieldMax(change.collection, change.field) !== undefined;
-    const texts =
-      page.changes.some(isText) ||
-      (await this.db.held
-        .where('collection')
-        .anyOf([...this.known])
-        .count()) > 0
-        ? await import('@shared/text/apply-pulled-texts')
-        : null;
+    const heldKnown = () => this.db.held.where('collection').anyOf([...this.known]);
+    const releasing = this.mayRelease && (await heldKnown().count()) > 0;
+    const texts = page.changes.some(isText) || releasing ? await import('@shared/text/apply-pulled-texts') : null;
     await this.db.transaction('rw', [...tables.map((name) => this.db.rows(name)), this.db.meta, this.db.held], async () => {
-      const released = await this.db.held
-        .where('collection')
-        .anyOf([...this.known])
-        .toArray();
+      const released = releasing ? await heldKnown().toArray() : [];
       await this.merge(
         [...released.map(({ seq: _seq, ...change }) => change), ...page.changes.filter((change) => this.known.has(change.collection))],
         [...new Set([...collections, ...released.map((change) => change.collection)])],
@@ -177,6 +174,7 @@ export class DexieSyncPorts implements SyncPorts {
         { key: 'lastSyncedAt', value: new Date().toISOString() },
       ]);
     });
+    this.mayRelease = false;
   }
 
   /** Mergeable texts merge their Yjs states (when Yjs is loaded); every other field by the shared per-field rule. */
