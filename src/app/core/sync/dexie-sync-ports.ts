@@ -29,6 +29,11 @@ export class DexieSyncPorts implements SyncPorts {
    * since applying it releases them all and later pages hold only unknown collections' changes.
    */
   private mayRelease = true;
+  /**
+   * The offset from the server's time each pulled page's answer gave, saved with the page: a
+   * transaction of its own for it waited for the page before and held up the next one.
+   */
+  private readonly offsets = new WeakMap<PullResponse, number>();
 
   /**
    * @param known the collections this version of the app knows; changes to others are held on
@@ -138,7 +143,8 @@ export class DexieSyncPorts implements SyncPorts {
     if (cursor) params['since'] = cursor;
     const sentAt = Date.now();
     const res = await firstValueFrom(this.http.get<PullResponse>('/api/sync/pull', { params, observe: 'response' }));
-    await this.learnTime(res, sentAt, res.body?.serverTime);
+    const offset = offsetFrom(res, sentAt, res.body?.serverTime);
+    if (offset !== null && res.body) this.offsets.set(res.body, offset);
     // A long pull (a first sync) goes on in the largest pages: fewer transactions, fewer re-renders.
     if ((res.body?.remaining ?? 0) > SMALL_PAGE) this.pageLimit = MAX_PULL_LIMIT;
     return res.body!;
@@ -159,7 +165,9 @@ export class DexieSyncPorts implements SyncPorts {
     const heldKnown = () => this.db.held.where('collection').anyOf([...this.known]);
     const releasing = this.mayRelease && (await heldKnown().count()) > 0;
     const texts = page.changes.some(isText) || releasing ? await import('@shared/text/apply-pulled-texts') : null;
+    const offset = this.offsets.get(page);
     await this.db.transaction('rw', [...tables.map((name) => this.db.rows(name)), this.db.meta, this.db.held], async () => {
+      if (offset !== undefined) await this.db.meta.put({ key: 'clockOffset', value: String(offset) }); // before adoptClocks reads it
       const released = releasing ? await heldKnown().toArray() : [];
       await this.merge(
         [...released.map(({ seq: _seq, ...change }) => change), ...page.changes.filter((change) => this.known.has(change.collection))],
@@ -215,9 +223,8 @@ export class DexieSyncPorts implements SyncPorts {
 
   /** Keeps the offset from the server's time: the answer's `serverTime`, else its HTTP Date header. */
   private async learnTime(res: Pick<HttpResponse<unknown>, 'headers'>, sentAt: number, serverTime?: string): Promise<void> {
-    const server = Date.parse(serverTime ?? res.headers?.get('Date') ?? '');
-    if (!Number.isFinite(server)) return;
-    await this.db.meta.put({ key: 'clockOffset', value: String(clockOffsetMs(server, sentAt, Date.now())) });
+    const offset = offsetFrom(res, sentAt, serverTime);
+    if (offset !== null) await this.db.meta.put({ key: 'clockOffset', value: String(offset) });
   }
 
   /** HLC receive rule: later local edits order after everything seen from other devices. */
@@ -231,6 +238,12 @@ export class DexieSyncPorts implements SyncPorts {
     clock.receive(latest, { checkedByServer: true });
     await this.db.meta.put({ key: 'clock', value: clock.current() });
   }
+}
+
+/** This device's offset from the server's time: from the answer's `serverTime`, else its HTTP Date header; null without either. */
+function offsetFrom(res: Pick<HttpResponse<unknown>, 'headers'>, sentAt: number, serverTime?: string): number | null {
+  const server = Date.parse(serverTime ?? res.headers?.get('Date') ?? '');
+  return Number.isFinite(server) ? clockOffsetMs(server, sentAt, Date.now()) : null;
 }
 
 /**

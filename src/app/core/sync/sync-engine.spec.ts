@@ -169,6 +169,17 @@ describe('SyncEngine', () => {
       watching.unsubscribe();
     });
 
+    it('keeps the offset from the server’s time a pull answered, saved with its page, and says once that the date looks wrong', async () => {
+      const day = 86_400_000;
+      const engine = start();
+      (await sent(backend, '/api/sync/pull')).flush({ ...emptyPage('cursor-1'), serverTime: new Date(Date.now() + 3 * day).toISOString() });
+      await until(() => engine.phase() === 'idle', 'the cycle is done');
+
+      expect(Number((await db.meta.get('clockOffset'))?.value) / day).toBeCloseTo(3, 3);
+      expect((await db.meta.get('cursor'))?.value).toBe('cursor-1');
+      expect(engine.clockNotice()).toContain('about 3 days behind');
+    });
+
     it('moves a change the server refuses for good to the refused list with its reason, and sends the rest again', async () => {
       await store.create('books', { title: 'A Winter in Tolvik' });
       const [deleted, title] = (await outbox()).sort((a, b) => a.field.localeCompare(b.field));
