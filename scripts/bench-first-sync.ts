@@ -8,32 +8,16 @@
 
 import type { Browser } from 'playwright-core';
 
-import type { FieldChange } from '../shared/api/sync';
-import { MAX_PULL_LIMIT, MAX_PUSH_CHANGES } from '../shared/api/sync';
-import { HlcClock } from '../shared/sync/hlc';
+import { MAX_PULL_LIMIT } from '../shared/api/sync';
 import { launchBrowser } from '../spec/e2e/support/browser';
 import { registerThroughApi } from '../spec/e2e/support/reader';
 import { SyncClient } from '../spec/support/sync-client';
 import { startTestServer } from '../spec/support/test-server';
-import { benchBooks, median } from './bench-support/seed-books';
+import { median } from './bench-support/seed-books';
+import { seedServerBooks } from './bench-support/seed-server';
 
 const BOOKS = 10_000;
 const ROUNDS = 3;
-
-/** The books as field changes, pushed through the wire contract in batches of its largest size. */
-async function seedServer(client: SyncClient): Promise<void> {
-  const clock = new HlcClock('bench-seeder');
-  const changes: FieldChange[] = benchBooks(BOOKS).flatMap((book) => {
-    const hlc = clock.tick();
-    return Object.entries(book)
-      .filter(([field]) => field !== 'id' && field !== '_hlc')
-      .map(([field, value]) => ({ id: crypto.randomUUID(), collection: 'books', rowId: String(book['id']), field, value, hlc }));
-  });
-  for (let i = 0; i < changes.length; i += MAX_PUSH_CHANGES) {
-    const { status } = await client.push(changes.slice(i, i + MAX_PUSH_CHANGES));
-    if (status !== 200) throw new Error(`seeding push answered ${status}`);
-  }
-}
 
 /** The app's time, and how long of it the sign-in request took from sent to answered. */
 async function appRound(browser: Browser, baseUrl: string, email: string, password: string): Promise<{ ms: number; signInMs: number }> {
@@ -106,7 +90,7 @@ async function main(): Promise<void> {
   const baseline: number[] = [];
   try {
     const reader = await registerThroughApi(server.baseUrl, 'Bench First Sync');
-    await seedServer(new SyncClient(server.baseUrl, reader.accessToken));
+    await seedServerBooks(new SyncClient(server.baseUrl, reader.accessToken), BOOKS);
     for (let round = 0; round < ROUNDS; round++) {
       const appFirst = round % 2 === 0;
       const appOnce = async () => {

@@ -93,23 +93,54 @@ export async function runSyncCycle(ports: SyncPorts, options: CycleOptions | num
       refused++;
     }
   }
+  const { pulled } = await pullAll(ports, prefetch, onPulled);
+  return { pushed, refused, pulled };
+}
+
+/** With prefetch, at most this many pages are fetched (or on their way) and not yet stored. */
+const PAGES_AHEAD = 2;
+
+/**
+ * Pulls from the stored cursor until there is no more, storing each page in order. With
+ * `prefetch`, each page is asked for as soon as the one before it arrives (up to
+ * {@link PAGES_AHEAD} waiting), so the network does not wait for the store nor the store for it.
+ */
+async function pullAll(ports: SyncPorts, prefetch: boolean, onPulled?: (progress: PullProgress) => void): Promise<{ pulled: number }> {
+  const waiting: Promise<PullResponse>[] = [];
+  /** The cursor of an arrived page whose next page is not asked for yet (too many waiting). */
+  let parked: string | null = null;
+  const fetch = (cursor: string | undefined) => {
+    const request = ports.pull(cursor);
+    request.catch(() => undefined); // a failed prefetch surfaces when it is awaited, not as an unhandled rejection
+    waiting.push(request);
+    if (!prefetch) return;
+    request.then(
+      (page) => {
+        if (!page.hasMore) return;
+        if (waiting.length < PAGES_AHEAD) fetch(page.cursor);
+        else parked = page.cursor;
+      },
+      () => undefined,
+    );
+  };
+  fetch(await ports.cursor());
   let pulled = 0;
   let rows = 0;
-  let next: Promise<PullResponse> = ports.pull(await ports.cursor());
   for (;;) {
-    const page = await next;
-    if (prefetch && page.hasMore) {
-      next = ports.pull(page.cursor);
-      next.catch(() => undefined); // a failed prefetch surfaces when it is awaited, not as an unhandled rejection
+    const page = await waiting[0]!;
+    waiting.shift();
+    if (parked !== null) {
+      const cursor: string = parked;
+      parked = null;
+      fetch(cursor);
     }
     await ports.apply(page);
     pulled += page.changes.length;
     rows += new Set(page.changes.map((change) => `${change.collection}/${change.rowId}`)).size;
     onPulled?.({ rows, aboutTotal: page.hasMore && page.remaining !== undefined ? rows + page.remaining : page.hasMore ? null : rows });
-    if (!page.hasMore) break;
-    if (!prefetch) next = ports.pull(page.cursor);
+    if (!page.hasMore) return { pulled };
+    if (!prefetch) fetch(page.cursor);
   }
-  return { pushed, refused, pulled };
 }
 
 /**

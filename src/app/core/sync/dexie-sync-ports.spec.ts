@@ -52,3 +52,40 @@ describe('DexieSyncPorts.restamp (a device whose date was wrong)', () => {
     expect((await db.meta.get('restamped'))!.value).toBe(outbox[1]!.hlc);
   });
 });
+
+describe('DexieSyncPorts.apply (a large page, as in a first sync)', () => {
+  let journal: TestJournal;
+
+  beforeEach(async () => {
+    journal = openTestJournal();
+    await journal.db.open();
+  });
+  afterEach(() => journal.close());
+
+  it('stores the new rows of a page of 300 books and merges the few already stored by the per-field rule', async () => {
+    const { db, store } = journal;
+    // Two books this device has: one with a title typed later than the pulled one, one with an older title.
+    const mine = await store.create('books', { title: 'Typed on the ferry', status: 'reading' });
+    const theirs = await store.create('books', { title: 'A first draft' });
+    const local = (await db.rows('books').get(mine))!._hlc['title']!;
+    const at = (offsetMs: number, counter: number) => formatHlc({ wall: parseHlc(local)!.wall + offsetMs, counter, node: 'laptop' });
+    const fresh = Array.from({ length: 298 }, (_, n) => ({ rowId: crypto.randomUUID(), title: `The Fen Ledger ${n}` }));
+    const changes = [
+      { collection: 'books', rowId: mine, field: 'title', value: 'An older title', hlc: at(-60_000, 0) },
+      { collection: 'books', rowId: mine, field: 'status', value: 'finished', hlc: at(60_000, 0) },
+      { collection: 'books', rowId: theirs, field: 'title', value: 'The final title', hlc: at(60_000, 1) },
+      ...fresh.map(({ rowId, title }, n) => ({ collection: 'books', rowId, field: 'title', value: title, hlc: at(60_000, n + 2) })),
+    ];
+
+    await new DexieSyncPorts(db, TestBed.inject(HttpClient)).apply({ changes, cursor: 'djE6MzAw', hasMore: false, serverTime: new Date().toISOString() });
+
+    // LWW per field (the same rule the server applies, shared/sync/merge.ts): the later clock wins.
+    expect(await db.rows('books').get(mine)).toEqual(jasmine.objectContaining({ title: 'Typed on the ferry', status: 'finished' }));
+    expect((await db.rows('books').get(theirs))?.['title']).toBe('The final title');
+    const stored = await db.rows('books').bulkGet(fresh.map(({ rowId }) => rowId));
+    expect(stored.map((row) => row?.['title'])).toEqual(fresh.map(({ title }) => title));
+    expect(stored[0]!._hlc).toEqual({ title: at(60_000, 2) });
+    expect(await db.rows('books').count()).toBe(300);
+    expect((await db.meta.get('cursor'))?.value).toBe('djE6MzAw');
+  });
+});

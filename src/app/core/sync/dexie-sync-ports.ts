@@ -1,4 +1,5 @@
 import { HttpClient, HttpErrorResponse, type HttpResponse } from '@angular/common/http';
+import type { Table } from 'dexie';
 import { firstValueFrom } from 'rxjs';
 
 import { isApiErrorBody } from '@shared/api/api-error';
@@ -17,10 +18,22 @@ import { rememberOverwritten } from './overwritten-edits';
 
 /** Fields per pull page, until the server says many more are to come. */
 const SMALL_PAGE = 1000;
+/** From this many rows of one collection in a page, stored ones are found from one key listing rather than a read per row. */
+const MANY_ROWS = 200;
 
 /** The browser's side of the shared sync cycle: the outbox and rows in Dexie, the server over HTTP. */
 export class DexieSyncPorts implements SyncPorts {
   private pageLimit = SMALL_PAGE;
+  /**
+   * Whether held changes of known collections may be waiting: looked for on the first page only,
+   * since applying it releases them all and later pages hold only unknown collections' changes.
+   */
+  private mayRelease = true;
+  /**
+   * The offset from the server's time each pulled page's answer gave, saved with the page: a
+   * transaction of its own for it waited for the page before and held up the next one.
+   */
+  private readonly offsets = new WeakMap<PullResponse, number>();
 
   /**
    * @param known the collections this version of the app knows; changes to others are held on
@@ -130,7 +143,8 @@ export class DexieSyncPorts implements SyncPorts {
     if (cursor) params['since'] = cursor;
     const sentAt = Date.now();
     const res = await firstValueFrom(this.http.get<PullResponse>('/api/sync/pull', { params, observe: 'response' }));
-    await this.learnTime(res, sentAt, res.body?.serverTime);
+    const offset = offsetFrom(res, sentAt, res.body?.serverTime);
+    if (offset !== null && res.body) this.offsets.set(res.body, offset);
     // A long pull (a first sync) goes on in the largest pages: fewer transactions, fewer re-renders.
     if ((res.body?.remaining ?? 0) > SMALL_PAGE) this.pageLimit = MAX_PULL_LIMIT;
     return res.body!;
@@ -148,19 +162,13 @@ export class DexieSyncPorts implements SyncPorts {
     const tables = this.db.tables.filter((table) => this.known.has(table.name)).map((table) => table.name);
     // Yjs loads on the first pulled text, before the transaction (which must not await anything else).
     const isText = (change: { collection: string; field: string }) => textFieldMax(change.collection, change.field) !== undefined;
-    const texts =
-      page.changes.some(isText) ||
-      (await this.db.held
-        .where('collection')
-        .anyOf([...this.known])
-        .count()) > 0
-        ? await import('@shared/text/apply-pulled-texts')
-        : null;
+    const heldKnown = () => this.db.held.where('collection').anyOf([...this.known]);
+    const releasing = this.mayRelease && (await heldKnown().count()) > 0;
+    const texts = page.changes.some(isText) || releasing ? await import('@shared/text/apply-pulled-texts') : null;
+    const offset = this.offsets.get(page);
     await this.db.transaction('rw', [...tables.map((name) => this.db.rows(name)), this.db.meta, this.db.held], async () => {
-      const released = await this.db.held
-        .where('collection')
-        .anyOf([...this.known])
-        .toArray();
+      if (offset !== undefined) await this.db.meta.put({ key: 'clockOffset', value: String(offset) }); // before adoptClocks reads it
+      const released = releasing ? await heldKnown().toArray() : [];
       await this.merge(
         [...released.map(({ seq: _seq, ...change }) => change), ...page.changes.filter((change) => this.known.has(change.collection))],
         [...new Set([...collections, ...released.map((change) => change.collection)])],
@@ -174,6 +182,7 @@ export class DexieSyncPorts implements SyncPorts {
         { key: 'lastSyncedAt', value: new Date().toISOString() },
       ]);
     });
+    this.mayRelease = false;
   }
 
   /** Mergeable texts merge their Yjs states (when Yjs is loaded); every other field by the shared per-field rule. */
@@ -192,7 +201,10 @@ export class DexieSyncPorts implements SyncPorts {
     for (const collection of collections) {
       const entries = [...byRow.values()].filter((entry) => entry.collection === collection);
       const table = this.db.rows(collection);
-      const current = await table.bulkGet(entries.map((entry) => entry.rowId));
+      const current = await storedRows(
+        table,
+        entries.map((entry) => entry.rowId),
+      );
       const isText = (change: PulledChange) => applyPulledTexts !== null && textFieldMax(collection, change.field) !== undefined;
       const merged: LocalRow[] = entries.map((entry, n) => {
         const row = applyPulled(
@@ -211,9 +223,8 @@ export class DexieSyncPorts implements SyncPorts {
 
   /** Keeps the offset from the server's time: the answer's `serverTime`, else its HTTP Date header. */
   private async learnTime(res: Pick<HttpResponse<unknown>, 'headers'>, sentAt: number, serverTime?: string): Promise<void> {
-    const server = Date.parse(serverTime ?? res.headers?.get('Date') ?? '');
-    if (!Number.isFinite(server)) return;
-    await this.db.meta.put({ key: 'clockOffset', value: String(clockOffsetMs(server, sentAt, Date.now())) });
+    const offset = offsetFrom(res, sentAt, serverTime);
+    if (offset !== null) await this.db.meta.put({ key: 'clockOffset', value: String(offset) });
   }
 
   /** HLC receive rule: later local edits order after everything seen from other devices. */
@@ -227,4 +238,23 @@ export class DexieSyncPorts implements SyncPorts {
     clock.receive(latest, { checkedByServer: true });
     await this.db.meta.put({ key: 'clock', value: clock.current() });
   }
+}
+
+/** This device's offset from the server's time: from the answer's `serverTime`, else its HTTP Date header; null without either. */
+function offsetFrom(res: Pick<HttpResponse<unknown>, 'headers'>, sentAt: number, serverTime?: string): number | null {
+  const server = Date.parse(serverTime ?? res.headers?.get('Date') ?? '');
+  return Number.isFinite(server) ? clockOffsetMs(server, sentAt, Date.now()) : null;
+}
+
+/**
+ * The stored rows for these ids (undefined where there is none), in order. A large page (a first
+ * sync's) lists the table's keys once and reads only rows that are there: its rows are mostly
+ * new, and a read per row cost as much as writing them.
+ */
+async function storedRows(table: Table<LocalRow, string>, ids: readonly string[]): Promise<(LocalRow | undefined)[]> {
+  if (ids.length < MANY_ROWS) return table.bulkGet([...ids]);
+  const keys = new Set(await table.toCollection().primaryKeys());
+  const found = await table.bulkGet(ids.filter((id) => keys.has(id)));
+  const byId = new Map(found.map((row) => [row!.id, row]));
+  return ids.map((id) => byId.get(id));
 }

@@ -9,6 +9,7 @@ import { authInterceptor } from '../auth/auth-interceptor';
 import { READER, rememberSession } from '../auth/testing/session-fixtures';
 import type { JournalDb } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
+import { LiveQueryPace } from '../data/live-query-pace';
 import { deviceId } from '../device/device-id';
 import { SyncEngine } from './sync-engine';
 import {
@@ -143,6 +144,49 @@ describe('SyncEngine', () => {
       expect(next.request.params.get('since')).toBe('cursor-2');
       next.flush(emptyPage('cursor-2'));
       await until(() => engine.phase() === 'idle', 'the next cycle is done');
+    });
+
+    it('paces the screens’ live queries while a long pull stores pages, says how far it is, and stops pacing when it ends or fails', async () => {
+      const paced: boolean[] = [];
+      const watching = TestBed.inject(LiveQueryPace).paced.subscribe((value) => paced.push(value));
+      const book = (n: number) => ({
+        collection: 'books',
+        rowId: crypto.randomUUID(),
+        field: 'title',
+        value: `Copper Fen ${n}`,
+        hlc: formatHlc({ wall: Date.now() - 5000, counter: n, node: 'other-device' }),
+      });
+      const engine = start();
+
+      (await sent(backend, '/api/sync/pull')).flush({ ...pullPage('cursor-1', [book(1)], true), remaining: 2 });
+      await until(() => paced.at(-1) === true, 'pacing begins after the first page');
+      expect(engine.pullProgress()).toEqual({ rows: 1, aboutTotal: 3 });
+      (await sent(backend, '/api/sync/pull')).flush({ ...pullPage('cursor-2', [book(2)], true), remaining: 1 });
+      await until(() => engine.pullProgress()?.rows === 2, 'the second page is stored');
+      expect(paced.at(-1)).toBeTrue();
+      (await sent(backend, '/api/sync/pull')).flush(pullPage('cursor-3', [book(3)]));
+      await until(() => engine.phase() === 'idle', 'the cycle is done');
+      expect(paced).toEqual([false, true, false]);
+      expect(await db.rows('books').count()).toBe(3);
+
+      void engine.syncNow();
+      (await sent(backend, '/api/sync/pull')).flush({ ...pullPage('cursor-4', [book(4)], true), remaining: 2 });
+      await until(() => paced.at(-1) === true, 'pacing again');
+      (await sent(backend, '/api/sync/pull')).flush({ error: { code: 'internal', message: 'Down', details: null } }, SERVER_ERROR);
+      await until(() => engine.phase() === 'retrying', 'the pull failed');
+      expect(paced.at(-1)).withContext('a failed pull paces nothing').toBeFalse();
+      watching.unsubscribe();
+    });
+
+    it('keeps the offset from the server’s time a pull answered, saved with its page, and says once that the date looks wrong', async () => {
+      const day = 86_400_000;
+      const engine = start();
+      (await sent(backend, '/api/sync/pull')).flush({ ...emptyPage('cursor-1'), serverTime: new Date(Date.now() + 3 * day).toISOString() });
+      await until(() => engine.phase() === 'idle', 'the cycle is done');
+
+      expect(Number((await db.meta.get('clockOffset'))?.value) / day).toBeCloseTo(3, 3);
+      expect((await db.meta.get('cursor'))?.value).toBe('cursor-1');
+      expect(engine.clockNotice()).toContain('about 3 days behind');
     });
 
     it('moves a change the server refuses for good to the refused list with its reason, and sends the rest again', async () => {

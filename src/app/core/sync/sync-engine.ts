@@ -13,6 +13,7 @@ import type { JournalDb } from '../data/journal-db';
 import { JournalStore } from '../data/journal-store';
 import { liveQuerySignal } from '../data/live-query';
 import { liveQueryFor } from '../data/live-query-for';
+import { LiveQueryPace } from '../data/live-query-pace';
 import { LocalJournal } from '../data/local-journal';
 import { SerialJob, withTabLock } from '../tasks/serial-job';
 import { DexieSyncPorts } from './dexie-sync-ports';
@@ -37,6 +38,7 @@ export class SyncEngine {
   private readonly http = inject(HttpClient);
   private readonly auth = inject(Auth);
   private readonly journal = inject(LocalJournal);
+  private readonly pace = inject(LiveQueryPace);
 
   private readonly phaseState = signal<SyncPhase>('idle');
   private readonly lastError = signal<string | null>(null);
@@ -141,8 +143,15 @@ export class SyncEngine {
     try {
       // Back from offline: a cheap probe first, so a still-missing network costs one small request.
       if (wasOffline) await firstValueFrom(this.http.get<HealthAnswer>('/api/health'));
-      // Pages are fetched while the last one is stored; progress shows only while more pages are to come.
-      const onPulled = (progress: PullProgress) => this.progressState.set(progress.aboutTotal !== null && progress.aboutTotal > progress.rows ? progress : null);
+      // Pages are fetched while the last one is stored; progress shows only while more pages are to come,
+      // and meanwhile the screens re-read what arrived about once a second rather than after each page.
+      const onPulled = (progress: PullProgress) => {
+        const more = progress.aboutTotal !== null && progress.aboutTotal > progress.rows;
+        this.progressState.set(more ? progress : null);
+        if (!more) return this.pace.stop(); // the last page: re-run at once
+        this.pace.pageStored(); // (after the first page nothing is paced yet: its queries re-ran already)
+        this.pace.start();
+      };
       const ran = await withTabLock(`lamplight-sync-${db.userId}`, () => runSyncCycle(new DexieSyncPorts(db, this.http), { prefetch: true, onPulled }));
       await this.noticeWrongDate(db);
       this.job.succeeded();
@@ -154,6 +163,7 @@ export class SyncEngine {
       this.phaseState.set(this.describeFailure(error));
       if (this.phaseState() !== 'needs-sign-in') this.job.retryLater();
     } finally {
+      this.pace.stop();
       this.roundsState.update((rounds) => rounds + 1);
     }
   }
