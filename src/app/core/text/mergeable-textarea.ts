@@ -1,4 +1,4 @@
-import { Directive, effect, ElementRef, inject, input } from '@angular/core';
+import { DestroyRef, Directive, effect, ElementRef, inject, input } from '@angular/core';
 import { NgControl } from '@angular/forms';
 import { liveQuery } from 'dexie';
 import * as Y from 'yjs';
@@ -53,14 +53,20 @@ export class MergeableTextarea {
   private name = '';
   private loaded = false;
   private edits: Uint8Array[] = [];
+  private markArrived: () => void = () => undefined;
+  /** Settles once the stored text of the current target has arrived ({@link whenLoaded}). */
+  private arrived = new Promise<void>((resolve) => (this.markArrived = resolve));
 
   constructor() {
+    inject(DestroyRef).onDestroy(() => this.markArrived()); // a save awaiting a closed form goes on
     effect((onCleanup) => {
       const target = this.llMergeableText();
       const db = this.journal.db();
-      if (!db) return;
+      if (!db) return this.markArrived(); // nobody signed in: nothing will arrive, and nothing saves
       this.name = textDocName(target.collection, target.rowId, target.field);
       this.doc = new Y.Doc();
+      // A new target's text is awaited afresh; one still awaited stays the same promise.
+      if (this.loaded) this.arrived = new Promise<void>((resolve) => (this.markArrived = resolve));
       this.loaded = false;
       this.edits = [];
       this.doc.on('update', (update: Uint8Array, origin: unknown) => {
@@ -72,6 +78,14 @@ export class MergeableTextarea {
         this.doc.destroy();
       });
     });
+  }
+
+  /**
+   * Resolves once the stored text has arrived: until then, what was typed is not yet an edit of it,
+   * and {@link pendingEdits} would not hold it. A form awaits this before it saves.
+   */
+  whenLoaded(): Promise<void> {
+    return this.arrived;
   }
 
   /** The edits typed since the last save, as one update; null when there are none. */
@@ -110,6 +124,7 @@ export class MergeableTextarea {
       this.loaded = true;
       // Typed before the stored text arrived: keep it as the reader's edit.
       if (this.element.value !== '' && this.element.value !== textOf(this.doc, this.name)) this.typed();
+      this.markArrived();
     }
     const next = textOf(this.doc, this.name);
     if (next === this.element.value) return;

@@ -100,7 +100,9 @@ export class ReadingEditor {
       takeaways: _takeaways,
       ...patch
     }: Record<string, unknown> = existing ? changedReadingFields(this.original, value) : { ...toReadingFields(value), bookId, deleted: false };
-    // The review and takeaways are saved as the edits typed here, which merge with other devices'.
+    // The review and takeaways are saved as the edits typed here, which merge with other devices'
+    // (typed before the stored text arrived, they are edits only once it has).
+    await Promise.all(this.texts().map((text) => text.whenLoaded()));
     const typed = this.texts()
       .map((text) => [text, text.pendingEdits()] as const)
       .filter((entry): entry is [MergeableTextarea, PendingEdits] => entry[1] !== null);

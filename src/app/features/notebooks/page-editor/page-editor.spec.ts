@@ -10,6 +10,7 @@ import { loadTextDoc, textDocName } from '@shared/text/text-doc';
 import { encodeTextBytes } from '@shared/text/text-value';
 
 import { UnsavedWork } from '../../../core/pwa/unsaved-work';
+import { patiently } from '../../../core/testing/patience';
 import { Notebooks } from '../notebooks';
 import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
 import { PageEditor } from './page-editor';
@@ -66,6 +67,21 @@ describe('PageEditor', () => {
     expect(changes.map((c) => [c.rowId, c.field])).toEqual([[pageId, 'body']]);
     expect((await journal.store.get('notebookPages', pageId))?.body).toBe('# Low tide\nGulls and **one heron**.\n[ ] come back at dawn');
     expect(unsaved.present()).toBeFalse();
+  });
+
+  it('saves what was typed before the stored text reached the editor, rather than saying saved and dropping it', async () => {
+    fixture = TestBed.createComponent(PageEditor);
+    fixture.componentRef.setInput('id', notebookId);
+    fixture.componentRef.setInput('pageId', pageId);
+    element = fixture.nativeElement as HTMLElement;
+    // The look that first finds the field types and saves in the same task: before the text
+    // binding's read of the stored text can have answered.
+    await patiently('the page field', () => (fixture.detectChanges(), element.querySelector('textarea')));
+    type(textarea(), 'Gulls. A heron, early.');
+    buttonNamed('Save page').click();
+    await until(() => textOf(element.querySelector('[role=status]')) === 'Saved on this device.', fixture);
+
+    expect((await journal.store.get('notebookPages', pageId))?.body).toBe('Gulls. A heron, early.');
   });
 
   it('shows a change from another device while the reader types, keeping the caret and the typed words', async () => {

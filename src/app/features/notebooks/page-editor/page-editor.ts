@@ -103,6 +103,7 @@ export class PageEditor {
     try {
       // The body is saved as the edits typed here; changes from elsewhere are already stored.
       const { body: _typed, ...patch }: Record<string, unknown> = changedPageFields(this.original, value);
+      await this.bodyText()?.whenLoaded(); // typed before the stored text arrived is an edit only then
       const edits = this.bodyText()?.pendingEdits();
       if (edits) patch['body'] = edits.value;
       if (Object.keys(patch).length) await this.store.write('notebookPages', this.pageId(), patch);
