@@ -9,8 +9,8 @@
  * Signed-in pages keep all storage (Lighthouse's storage reset would sign the reader out): a
  * returning reader whose installed app (service worker and its caches) is warm. Clearing only the
  * caches or the worker under Lighthouse failed its runs (an error page, or a lost trace).
- * `LAMPLIGHT_BENCH_WHERE=1` also prints, for each run, the largest transfers, the LCP element and the scripts with the most main-thread time
- * (Lighthouse's bootup-time audit): where to look next for Total Blocking Time.
+ * `LAMPLIGHT_BENCH_WHERE=1` also prints, for each run, the scripts with the most main-thread time
+ * (Lighthouse's bootup-time audit) and the largest transfers: where to look next.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer, type AddressInfo } from 'node:net';
@@ -88,7 +88,6 @@ async function audit(url: string, port: number, keepStorage: boolean): Promise<R
         .sort((a, b) => b.transferSize - a.transferSize)
         .slice(0, 8)
         .map((item) => `${shortUrl(item.url)} ${(item.transferSize / 1024).toFixed(1)} KiB, ${item.priority ?? '?'} priority`),
-      `LCP element: ${JSON.stringify(lhr.audits['largest-contentful-paint-element']?.details ?? null).slice(0, 300)}`,
     ],
   };
 }
