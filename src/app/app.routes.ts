@@ -37,8 +37,12 @@ export const routes: Routes = [
  * `@defer` block, the router and the icons reuse what this fetched.
  */
 export function preloadSignedInPage(path: string): void {
-  void import('./signed-in-shell');
-  void globalThis.document?.fonts?.load(`24px '${ICON_FONT_FAMILY}'`);
+  const later = () => undefined; // a fetch that fails here fails again where it is used, and is reported there
+  import('./signed-in-shell').catch(later);
+  globalThis.document?.fonts?.load(`24px '${ICON_FONT_FAMILY}'`).catch(later);
   const area = path.split('/')[1] || 'today';
-  void signedInAreas.find((route) => route.path === area)?.loadChildren();
+  signedInAreas
+    .find((route) => route.path === area)
+    ?.loadChildren()
+    .catch(later);
 }

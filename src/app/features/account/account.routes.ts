@@ -41,5 +41,5 @@ export default accountRoutes;
  */
 export function preloadSignedOutPage(path: string): void {
   const page = accountRoutes.find((route) => path === `/${route.path}`) ?? accountRoutes[0];
-  void page.loadComponent();
+  page.loadComponent().catch(() => undefined); // a failed fetch fails again where the router loads it, and is reported there
 }
