@@ -103,12 +103,13 @@ describe('MonthPage', () => {
     await store.create('quotes', { bookId: BOOK.harrow, text: 'The light held.', capturedAt: '2026-06-20T18:05:00.000Z' });
     await open();
     await until(fixture, () => element().querySelectorAll('[aria-labelledby="finished-heading"] li a').length === 2, 'the books');
+    // The status changes and quotes come from their own live query; the quote was written last.
+    await until(fixture, () => textOf(element().querySelector('.tally'))?.includes('1 quote kept') ?? false, 'the quote counted');
     const listed = (heading: string) => Array.from(element().querySelectorAll(`[aria-labelledby="${heading}"] li`)).map(textOf);
     // Harrow Light's reading began on 1 June (the seed); An Owl at Dusk moved to reading on 3 June.
     expect(listed('started-heading')).toEqual(['Harrow Light', 'An Owl at Dusk']);
     expect(listed('finished-heading')).toEqual(['Harrow Light 20 June', 'The Blue Ferry 30 June']);
     expect(listed('abandoned-heading')).toEqual(['Evening Tide']);
-    await until(fixture, () => textOf(element().querySelector('.tally'))?.includes('1 quote kept') ?? false, 'the quote counted');
 
     const selects = Array.from(element().querySelectorAll<HTMLSelectElement>('label.native select'));
     expect(selects.length).toBe(1);
