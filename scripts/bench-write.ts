@@ -42,7 +42,7 @@ async function makeBaseline(page: Page, count: number): Promise<void> {
  * answers when (`timeOrigin + now()`, comparable across threads). A worker, not the page: the
  * page's main thread is busy right after the app's commit (its live queries and re-render), and a
  * detector there could time that work as well. (It did not explain why 28 books measure slower
- * than 10,000: see DEVELOPERS.md, bench:write.)
+ * than 10,000: see scripts/benchmarks.md, bench:write.)
  */
 const DETECTOR = `
   const dbs = new Map();
