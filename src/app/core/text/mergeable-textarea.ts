@@ -53,9 +53,12 @@ export class MergeableTextarea {
   private name = '';
   private loaded = false;
   private edits: Uint8Array[] = [];
-  private markArrived: () => void = () => undefined;
-  /** Settles once the stored text of the current target has arrived ({@link whenLoaded}). */
-  private arrived = new Promise<void>((resolve) => (this.markArrived = resolve));
+  private markArrived: (failure?: unknown) => void = () => undefined;
+  /**
+   * Settles once the stored text of the current target has arrived, or with why it could not be
+   * read ({@link whenLoaded}); never rejects, so a form that is not saving leaves nothing unhandled.
+   */
+  private arrived = this.awaitStoredText();
 
   constructor() {
     inject(DestroyRef).onDestroy(() => this.markArrived()); // a save awaiting a closed form goes on
@@ -66,13 +69,17 @@ export class MergeableTextarea {
       this.name = textDocName(target.collection, target.rowId, target.field);
       this.doc = new Y.Doc();
       // A new target's text is awaited afresh; one still awaited stays the same promise.
-      if (this.loaded) this.arrived = new Promise<void>((resolve) => (this.markArrived = resolve));
+      if (this.loaded) this.arrived = this.awaitStoredText();
       this.loaded = false;
       this.edits = [];
       this.doc.on('update', (update: Uint8Array, origin: unknown) => {
         if (origin !== STORED) this.edits.push(update);
       });
-      const subscription = liveQuery(() => db.rows(target.collection).get(target.rowId)).subscribe((row) => this.receive(row, target.field));
+      const subscription = liveQuery(() => db.rows(target.collection).get(target.rowId)).subscribe({
+        next: (row) => this.receive(row, target.field),
+        // A save waiting for the stored text must not wait forever (the database closed under it, say).
+        error: (failure: unknown) => this.markArrived(failure ?? new Error('the stored text could not be read')),
+      });
       onCleanup(() => {
         subscription.unsubscribe();
         this.doc.destroy();
@@ -82,10 +89,17 @@ export class MergeableTextarea {
 
   /**
    * Resolves once the stored text has arrived: until then, what was typed is not yet an edit of it,
-   * and {@link pendingEdits} would not hold it. A form awaits this before it saves.
+   * and {@link pendingEdits} would not hold it. A form awaits this before it saves. Rejects when the
+   * stored text could not be read: the form then says it did not save, and the typed text stays.
    */
   whenLoaded(): Promise<void> {
-    return this.arrived;
+    return this.arrived.then((failure) => {
+      if (failure !== undefined) throw failure;
+    });
+  }
+
+  private awaitStoredText(): Promise<unknown> {
+    return new Promise<unknown>((resolve) => (this.markArrived = resolve));
   }
 
   /** The edits typed since the last save, as one update; null when there are none. */

@@ -6,7 +6,9 @@ import { localTextState } from '@shared/text/local-text';
 import { loadTextDoc, textDocName } from '@shared/text/text-doc';
 import { encodeTextBytes } from '@shared/text/text-value';
 
-import { openTestJournal, until, type TestJournal } from '../../../core/testing/test-journal';
+import { patiently } from '../../../core/testing/patience';
+import { openTestJournal, textOf, until, type TestJournal } from '../../../core/testing/test-journal';
+import { MergeableTextarea } from '../../../core/text/mergeable-textarea';
 import { fieldOverlaps } from '../../../ui/testing/field-overlaps';
 import { ReadingEditor } from './reading-editor';
 
@@ -63,14 +65,22 @@ describe('ReadingEditor (review and takeaways as mergeable texts)', () => {
 
     element.querySelector<HTMLFormElement>('form')!.requestSubmit();
     const expected = 'A slow start, then wonderful.\nRead it on the train.';
-    const deadline = Date.now() + 3000;
-    let stored = await journal.store.get('readings', readingId);
-    while (stored?.review !== expected && Date.now() < deadline) {
-      await new Promise((resolve) => setTimeout(resolve, 20));
-      stored = await journal.store.get('readings', readingId);
-    }
-    expect(stored?.review).toBe(expected);
+    await patiently('the review saved', async () => (await journal.store.get('readings', readingId))?.review === expected);
+    expect((await journal.store.get('readings', readingId))?.review).toBe(expected);
     const last = (await journal.db.outbox.toArray()).filter((change) => change.field === 'review').at(-1)!;
     expect(Object.keys(last.value as object)).toEqual(['yjs']);
+  });
+
+  it('says the reading was not saved when its stored review could not be read, keeping the typing and writing nothing', async () => {
+    spyOn(MergeableTextarea.prototype, 'whenLoaded').and.rejectWith(new Error('The database connection is closing.'));
+    const before = await journal.db.outbox.count();
+    review().value = 'A slow start, then wonderful.';
+    review().dispatchEvent(new Event('input'));
+    element.querySelector<HTMLFormElement>('form')!.requestSubmit();
+    await until(() => textOf(element.querySelector('[role=alert]')) !== '', fixture);
+    expect(textOf(element.querySelector('[role=alert]'))).toBe('This reading could not be saved. What was saved before is unchanged.');
+    expect(review().value).toBe('A slow start, then wonderful.');
+    expect(await journal.db.outbox.count()).toBe(before);
+    expect((await journal.store.get('readings', readingId))?.review).toBe('A slow start.');
   });
 });

@@ -100,19 +100,19 @@ export class ReadingEditor {
       takeaways: _takeaways,
       ...patch
     }: Record<string, unknown> = existing ? changedReadingFields(this.original, value) : { ...toReadingFields(value), bookId, deleted: false };
-    // The review and takeaways are saved as the edits typed here, which merge with other devices'
-    // (typed before the stored text arrived, they are edits only once it has).
-    await Promise.all(this.texts().map((text) => text.whenLoaded()));
-    const typed = this.texts()
-      .map((text) => [text, text.pendingEdits()] as const)
-      .filter((entry): entry is [MergeableTextarea, PendingEdits] => entry[1] !== null);
-    for (const [text, edits] of typed) patch[text.llMergeableText().field] = edits.value;
-    const writes: RowWrite[] = [{ collection: 'readings', rowId: readingId, patch }];
-    if (patch['rating'] !== undefined && (await this.isLatest(bookId, readingId, value.startedOn))) {
-      // The book's rating follows its latest reading.
-      writes.push({ collection: 'books', rowId: bookId, patch: { rating: patch['rating'] as number | null } });
-    }
     try {
+      // The review and takeaways are saved as the edits typed here, which merge with other devices'
+      // (typed before the stored text arrived, they are edits only once it has).
+      await Promise.all(this.texts().map((text) => text.whenLoaded()));
+      const typed = this.texts()
+        .map((text) => [text, text.pendingEdits()] as const)
+        .filter((entry): entry is [MergeableTextarea, PendingEdits] => entry[1] !== null);
+      for (const [text, edits] of typed) patch[text.llMergeableText().field] = edits.value;
+      const writes: RowWrite[] = [{ collection: 'readings', rowId: readingId, patch }];
+      if (patch['rating'] !== undefined && (await this.isLatest(bookId, readingId, value.startedOn))) {
+        // The book's rating follows its latest reading.
+        writes.push({ collection: 'books', rowId: bookId, patch: { rating: patch['rating'] as number | null } });
+      }
       await this.store.writeAll(writes);
       for (const [text, edits] of typed) text.saved(edits);
       this.form.markAsPristine();
