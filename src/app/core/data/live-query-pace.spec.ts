@@ -50,7 +50,7 @@ describe('LiveQueryPace (live queries during a long pull)', () => {
     expect(answers).toEqual([0, 1, 2]);
   });
 
-  it('while paced, re-runs once per stored page window rather than per transaction, and at once when the pull ends', async () => {
+  it('while paced, re-runs once per stored page window (each longer than the last) rather than per transaction, and at once when the pull ends', async () => {
     watchBooks();
     await until(() => answers.length === 1, 'the first answer');
     pace.start();
@@ -69,11 +69,17 @@ describe('LiveQueryPace (live queries during a long pull)', () => {
     await until(() => answers.at(-1) === 3, 'the window ends and what arrived shows');
     expect(runs).toBe(3);
 
+    await pulledBook('Harrow Lane');
+    pace.pageStored(); // the next window is a second longer
+    await turn(PACED_MS + 200);
+    expect(answers.at(-1)).withContext('inside the second, longer window').toBe(3);
+    await until(() => answers.at(-1) === 4, 'the second window ends');
+
     await pulledBook('Fen Harbour');
     pace.stop();
-    await until(() => answers.at(-1) === 4, 'the pull is over: live again');
+    await until(() => answers.at(-1) === 5, 'the pull is over: live again');
     await pulledBook('Winter Salt');
-    await until(() => answers.at(-1) === 5, 'a later change shows at once');
+    await until(() => answers.at(-1) === 6, 'a later change shows at once');
   });
 
   it('answers at once when a screen opens during a paced pull, and shows this tab’s own writes at once', async () => {

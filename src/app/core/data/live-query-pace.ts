@@ -14,24 +14,31 @@ import {
   Subject,
   switchMap,
   take,
-  throttleTime,
+  throttle,
+  timer,
 } from 'rxjs';
 
 import { JournalStore } from './journal-store';
 
-/** While paced, live queries re-run at most this often (plus after this tab's own writes). */
+/** While paced, live queries re-run at most this often at first (plus after this tab's own writes)… */
 export const PACED_MS = 1000;
+/** …and each window is {@link PACED_MS} longer than the one before, up to this. */
+export const PACED_MAX_MS = 4000;
 
 /**
  * How often live queries re-run. Normally after every transaction that touched what they read;
- * while a long pull stores page after page ({@link start} … {@link stop}), once per
- * {@link PACED_MS} at most: re-reading whole tables and re-rendering after each page cost more
- * than storing the pages (issue 17). What has arrived still shows within about a second.
+ * while a long pull stores page after page ({@link start} … {@link stop}), once per window at
+ * most, the windows growing from {@link PACED_MS} to {@link PACED_MAX_MS}: re-reading whole
+ * tables and re-rendering after each page cost more than storing the pages, and each re-run
+ * costs more as the tables grow (issue 17). The first page shows at once, what arrives later
+ * within a few seconds (the sync's progress bar moves with every page meanwhile).
  */
 @Injectable({ providedIn: 'root' })
 export class LiveQueryPace {
   private readonly pacedState = new BehaviorSubject(false);
   private readonly stored = new Subject<void>();
+  /** Windows begun since pacing started. */
+  private windows = 0;
 
   /** Whether live queries are paced now. */
   readonly paced: Observable<boolean> = this.pacedState.pipe(distinctUntilChanged());
@@ -40,12 +47,13 @@ export class LiveQueryPace {
    * last page of a window at its end), and right after this tab's own writes.
    */
   readonly ticks: Observable<void> = merge(
-    this.stored.pipe(throttleTime(PACED_MS, asyncScheduler, { leading: true, trailing: true })),
+    this.stored.pipe(throttle(() => timer(this.nextWindow(), asyncScheduler), { leading: true, trailing: true })),
     inject(JournalStore).localWrites,
   ).pipe(share());
 
   /** A long pull is storing pages: from now on, re-run on ticks. */
   start(): void {
+    if (!this.pacedState.value) this.windows = 0;
     this.pacedState.next(true);
   }
 
@@ -57,6 +65,10 @@ export class LiveQueryPace {
   /** The pull is over (or failed): back to re-running after every change, at once. */
   stop(): void {
     this.pacedState.next(false);
+  }
+
+  private nextWindow(): number {
+    return Math.min(PACED_MS * ++this.windows, PACED_MAX_MS);
   }
 }
 

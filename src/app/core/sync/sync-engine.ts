@@ -144,7 +144,7 @@ export class SyncEngine {
       // Back from offline: a cheap probe first, so a still-missing network costs one small request.
       if (wasOffline) await firstValueFrom(this.http.get<HealthAnswer>('/api/health'));
       // Pages are fetched while the last one is stored; progress shows only while more pages are to come,
-      // and meanwhile the screens re-read what arrived about once a second rather than after each page.
+      // and meanwhile the screens re-read what arrived once per window (1 s, growing to 4 s) rather than after each page.
       const onPulled = (progress: PullProgress) => {
         const more = progress.aboutTotal !== null && progress.aboutTotal > progress.rows;
         this.progressState.set(more ? progress : null);

@@ -1,3 +1,5 @@
+import equal from 'fast-deep-equal';
+
 import type { Book } from '@shared/sync/schema/collections';
 import { bookKeys, findDuplicates } from '@shared/duplicates/book-keys';
 import { foldSearchText as fold } from '@shared/text/fold-search-text';
@@ -127,12 +129,11 @@ export function queryLibrary(books: readonly Book[], index: ReadonlyMap<string, 
   );
 }
 
-/** Two versions of a book hold the same values (rows from IndexedDB are fresh objects each time). */
-function sameBook(a: Book, b: Book): boolean {
-  const keys = Object.keys(b) as (keyof Book)[];
-  if (Object.keys(a).length !== keys.length) return false;
-  return keys.every((key) => a[key] === b[key] || JSON.stringify(a[key]) === JSON.stringify(b[key]));
-}
+/**
+ * Two versions of a book hold the same values (rows from IndexedDB are fresh objects each time).
+ * Asked of every book on every re-read: a structural compare, not JSON text of each field.
+ */
+const sameBook = (a: Book, b: Book): boolean => equal(a, b);
 
 const STATUS_ORDER = ['reading', 'paused', 'tbr', 'finished', 'dnf'];
 const SORT_KEYS: Record<LibrarySortKey, (book: Book) => string | number | null> = {

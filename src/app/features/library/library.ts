@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, ElementRef, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -134,7 +134,15 @@ export class Library {
     browserStorage.write(VIEW_KEY, view);
   }
 
-  protected changeStatus(book: Book, status: string): void {
-    void this.bookStatus.change(book.id, status as NonNullable<Book['status']>);
+  constructor() {
+    // A row's status is chosen through a listener Angular does not wrap: a template listener marks
+    // the Library for change detection, and that frame ran before IndexedDB could answer the
+    // write's reads (bench:write). Nothing on screen changes until the write is stored; the row
+    // then follows from the books' live query.
+    inject<ElementRef<HTMLElement>>(ElementRef).nativeElement.addEventListener('change', (event) => {
+      const select = event.target;
+      if (!(select instanceof HTMLSelectElement) || !select.classList.contains('quick-status') || !select.dataset['bookId']) return;
+      void this.bookStatus.change(select.dataset['bookId'], select.value as NonNullable<Book['status']>);
+    });
   }
 }
