@@ -2,7 +2,11 @@
 // once. The CLI writes `modulepreload` for at most 10 of main's static imports (MODULE_PRELOAD_MAX
 // in @angular/build); the rest, Angular core among them, were found only once a chunk importing
 // them had been parsed: one round trip more before anything renders. The text faces every page
-// uses are preloaded too, instead of being found when the first heading renders. Then the
+// uses are preloaded too, instead of being found when the first heading renders. So is the sign-in
+// page's chunk with its static imports: `main.ts` asks for it, but its 16 imports were found only
+// once it had arrived and been parsed, two round trips after main (and, under Lighthouse's simulated
+// throttling, after main's evaluation ×4). A signed-in start fetches them too; from the worker's
+// cache, and about half are the shell's own. Then the
 // service worker's manifest gets the new page's hash, or the worker would refuse the page.
 // Usage: node scripts/preload-initial.mjs [dir]   (default dist/app/browser)
 import { createHash } from 'node:crypto';
@@ -14,6 +18,8 @@ import { root } from './lib.mjs';
 const dir = path.resolve(root, process.argv[2] ?? 'dist/app/browser');
 /** The faces of the first screen: body text and headings (latin; other scripts load when used). */
 const FIRST_FACES = /^atkinson-hyperlegible-latin-(400|700)-normal-[A-Z0-9]+\.woff2$/;
+/** The selector of the page a first visit shows (features/account/sign-in), to find its chunk. */
+const FIRST_PAGE_SELECTOR = /selectors:\[\[["`]ll-sign-in["`]\]\]/;
 
 const indexPath = path.join(dir, 'index.html');
 let html = readFileSync(indexPath, 'utf8');
@@ -22,13 +28,16 @@ if (!entry) throw new Error(`preload-initial: no main-*.js script in ${indexPath
 
 /** Every chunk `file` imports statically, however deep (not `import()`: those load on demand). */
 function staticImports(file, seen = new Set()) {
-  for (const [, chunk] of readFileSync(path.join(dir, file), 'utf8').matchAll(/(?:from|import)\s*"\.\/(chunk-[A-Z0-9]+\.js)"/g)) {
+  for (const [, chunk] of readFileSync(path.join(dir, file), 'utf8').matchAll(/(?:from|import)\s*"\.\/(chunk-[\w-]+\.js)"/g)) {
     if (!seen.has(chunk)) staticImports(chunk, seen.add(chunk));
   }
   return seen;
 }
 
-const missing = [...staticImports(entry)].filter((chunk) => !html.includes(`href="${chunk}"`));
+const firstPage = readdirSync(dir).filter((name) => /^chunk-[\w-]+\.js$/.test(name) && FIRST_PAGE_SELECTOR.test(readFileSync(path.join(dir, name), 'utf8')));
+if (firstPage.length !== 1) throw new Error(`preload-initial: ${firstPage.length} chunks hold ${FIRST_PAGE_SELECTOR}, expected one`);
+const wanted = new Set([...staticImports(entry), firstPage[0], ...staticImports(firstPage[0])]);
+const missing = [...wanted].filter((chunk) => !html.includes(`href="${chunk}"`));
 const faces = existsSync(path.join(dir, 'media')) ? readdirSync(path.join(dir, 'media')).filter((name) => FIRST_FACES.test(name)) : [];
 const newFaces = faces.filter((face) => !html.includes(`media/${face}`));
 const links = [
