@@ -23,7 +23,7 @@ const FIRST_PAGE_SELECTOR = /selectors:\[\[["`]ll-sign-in["`]\]\]/;
 
 const indexPath = path.join(dir, 'index.html');
 let html = readFileSync(indexPath, 'utf8');
-const entry = html.match(/<script src="(main-[A-Z0-9]+\.js)" type="module">/)?.[1];
+const entry = html.match(/<script src="(main-[\w-]+\.js)" type="module">/)?.[1];
 if (!entry) throw new Error(`preload-initial: no main-*.js script in ${indexPath}`);
 
 /** Every chunk `file` imports statically, however deep (not `import()`: those load on demand). */
