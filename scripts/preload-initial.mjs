@@ -10,7 +10,7 @@
 // service worker's manifest gets the new page's hash, or the worker would refuse the page.
 // Usage: node scripts/preload-initial.mjs [dir]   (default dist/app/browser)
 import { createHash } from 'node:crypto';
-import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 
 import { root } from './lib.mjs';
@@ -37,21 +37,22 @@ function staticImports(file, seen = new Set()) {
 const firstPage = readdirSync(dir).filter((name) => /^chunk-[\w-]+\.js$/.test(name) && FIRST_PAGE_SELECTOR.test(readFileSync(path.join(dir, name), 'utf8')));
 if (firstPage.length !== 1) throw new Error(`preload-initial: ${firstPage.length} chunks hold ${FIRST_PAGE_SELECTOR}, expected one`);
 const wanted = new Set([...staticImports(entry), firstPage[0], ...staticImports(firstPage[0])]);
-const missing = [...wanted].filter((chunk) => !html.includes(`href="${chunk}"`));
 const faces = existsSync(path.join(dir, 'media')) ? readdirSync(path.join(dir, 'media')).filter((name) => FIRST_FACES.test(name)) : [];
-const newFaces = faces.filter((face) => !html.includes(`media/${face}`));
+// Largest first, main before all: on HTTP/1.1's six connections a big file asked for last ends last.
+const bySize = [...wanted].sort((a, b) => statSync(path.join(dir, b)).size - statSync(path.join(dir, a)).size);
 const links = [
-  ...newFaces.map((face) => `<link rel="preload" href="media/${face}" as="font" type="font/woff2" crossorigin>`),
-  ...missing.map((chunk) => `<link rel="modulepreload" href="${chunk}">`),
+  `<link rel="modulepreload" href="${entry}">`,
+  ...faces.map((face) => `<link rel="preload" href="media/${face}" as="font" type="font/woff2" crossorigin>`),
+  ...bySize.map((chunk) => `<link rel="modulepreload" href="${chunk}">`),
 ];
-if (links.length > 0) {
-  html = html.replace(`<script src="${entry}"`, `${links.join('')}<script src="${entry}"`);
-  writeFileSync(indexPath, html);
-  const manifestPath = path.join(dir, 'ngsw.json');
-  if (existsSync(manifestPath)) {
-    const manifest = JSON.parse(readFileSync(manifestPath, 'utf8'));
-    manifest.hashTable['/index.html'] = createHash('sha1').update(html).digest('hex');
-    writeFileSync(manifestPath, `${JSON.stringify(manifest, null, 2)}\n`);
-  }
+// The CLI's own modulepreloads (and this script's, when run again) are replaced by the list above.
+html = html.replace(/<link rel="(?:modulepreload|preload)" href="(?:chunk-|main-|media\/atkinson-)[^"]*"[^>]*>/g, '');
+html = html.replace(`<script src="${entry}"`, `${links.join('')}<script src="${entry}"`);
+writeFileSync(indexPath, html);
+const manifestPath = path.join(dir, 'ngsw.json');
+if (existsSync(manifestPath)) {
+  const manifest = JSON.parse(readFileSync(manifestPath, 'utf8'));
+  manifest.hashTable['/index.html'] = createHash('sha1').update(html).digest('hex');
+  writeFileSync(manifestPath, `${JSON.stringify(manifest, null, 2)}\n`);
 }
-console.log(`preload-initial: ${missing.length} more chunks and ${newFaces.length} faces preloaded in ${path.relative(root, indexPath)}`);
+console.log(`preload-initial: main, ${bySize.length} chunks and ${faces.length} faces preloaded in ${path.relative(root, indexPath)}`);
