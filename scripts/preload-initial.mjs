@@ -48,6 +48,9 @@ const links = [
 // The CLI's own modulepreloads (and this script's, when run again) are replaced by the list above.
 html = html.replace(/<link rel="(?:modulepreload|preload)" href="(?:chunk-|main-|media\/atkinson-)[^"]*"[^>]*>/g, '');
 html = html.replace(`<script src="${entry}"`, `${links.join('')}<script src="${entry}"`);
+// src/warm-up.js (angular.json `scripts`): a module with no imports runs as soon as it arrives, and is
+// fetched at high priority; the CLI writes it as a deferred classic script (low priority, run late).
+html = html.replace(/<script src="(warm-up-[\w-]+\.js)" defer><\/script>/, '<script src="$1" type="module"></script>');
 writeFileSync(indexPath, html);
 const manifestPath = path.join(dir, 'ngsw.json');
 if (existsSync(manifestPath)) {
