@@ -11,8 +11,12 @@
  * caches or the worker under Lighthouse failed its runs (an error page, or a lost trace).
  * `LAMPLIGHT_BENCH_WHERE=1` also prints, for each run, the scripts with the most main-thread time
  * (Lighthouse's bootup-time audit) and the largest transfers: where to look next.
+ * `LAMPLIGHT_BENCH_PAGES=sign-in` runs only the pages named (comma-separated; `blank app` too);
+ * `LAMPLIGHT_BENCH_BASELINE=DIR` adds the sign-in page of another build (its `dist/app/browser`,
+ * served by a second server) in the same alternating rounds: old and new under the same load;
+ * `LAMPLIGHT_BENCH_JSON=DIR` keeps each run's Lighthouse report there.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer, type AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -31,6 +35,9 @@ const ROUNDS = Number(process.env['LAMPLIGHT_BENCH_ROUNDS'] ?? 3);
 const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
 const CATEGORIES = ['performance', 'accessibility', 'best-practices', 'seo'] as const;
 const WHERE = process.env['LAMPLIGHT_BENCH_WHERE'] === '1';
+const ONLY = process.env['LAMPLIGHT_BENCH_PAGES']?.split(',').map((name) => name.trim().toLowerCase());
+const BASELINE = process.env['LAMPLIGHT_BENCH_BASELINE'];
+const JSON_DIR = process.env['LAMPLIGHT_BENCH_JSON'];
 
 interface Run {
   scores: Record<string, number>;
@@ -66,13 +73,17 @@ function freePort(): Promise<number> {
   });
 }
 
-async function audit(url: string, port: number, keepStorage: boolean): Promise<Run> {
+async function audit(url: string, port: number, keepStorage: boolean, name: string): Promise<Run> {
   // Lighthouse is ECMAScript-module only; this file compiles to CommonJS.
   const { default: lighthouse } = await import('lighthouse');
   const result = await lighthouse(url, { port, logLevel: 'error', onlyCategories: [...CATEGORIES], disableStorageReset: keepStorage });
   if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
   const { lhr } = result;
   if (lhr.runtimeError) throw new Error(`Lighthouse on ${url}: ${lhr.runtimeError.message}`);
+  if (JSON_DIR) {
+    mkdirSync(JSON_DIR, { recursive: true });
+    writeFileSync(path.join(JSON_DIR, `${name.replace(/\W+/g, '-')}-${Date.now()}.json`), JSON.stringify(lhr));
+  }
   const numeric = (id: string) => lhr.audits[id]?.numericValue ?? NaN;
   return {
     scores: Object.fromEntries(CATEGORIES.map((id) => [id, Math.round((lhr.categories[id]?.score ?? NaN) * 100)])),
@@ -93,10 +104,10 @@ async function audit(url: string, port: number, keepStorage: boolean): Promise<R
 }
 
 /** One audit, tried again once: Lighthouse sometimes loses a trace on a busy machine. */
-async function attempt(url: string, port: number, keepStorage: boolean): Promise<Run | null> {
+async function attempt(url: string, port: number, keepStorage: boolean, name: string): Promise<Run | null> {
   for (let tries = 1; ; tries++) {
     try {
-      return await audit(url, port, keepStorage);
+      return await audit(url, port, keepStorage, name);
     } catch (error) {
       console.log(`  (${url}: ${(error as Error).message}${tries < 2 ? '; trying again' : '; skipped'})`);
       if (tries >= 2) return null;
@@ -106,11 +117,13 @@ async function attempt(url: string, port: number, keepStorage: boolean): Promise
 
 function line(name: string, run: Run): string {
   const scores = CATEGORIES.map((id) => `${id} ${String(run.scores[id]).padStart(3)}`).join('  ');
-  return `  ${name.padEnd(16)} ${scores}   FCP ${(run.fcp / 1000).toFixed(1)} s  LCP ${(run.lcp / 1000).toFixed(1)} s  TBT ${Math.round(run.tbt)} ms  ${Math.round(run.bytes / 1024)} KiB`;
+  return `  ${name.padEnd(18)} ${scores}   FCP ${(run.fcp / 1000).toFixed(1)} s  LCP ${(run.lcp / 1000).toFixed(1)} s  TBT ${Math.round(run.tbt)} ms  ${Math.round(run.bytes / 1024)} KiB`;
 }
 
+const wanted = (name: string) => !ONLY || ONLY.includes(name.toLowerCase()) || (name === 'sign-in (baseline)' && ONLY.includes('sign-in'));
+
 async function main(): Promise<void> {
-  const blankDir = buildBlankApp();
+  const blankDir = wanted('blank app') ? buildBlankApp() : mkdtempSync(path.join(tmpdir(), 'lamplight-no-blank-'));
   const blank = express()
     .use(express.static(path.join(blankDir, 'dist/browser')))
     .listen(0, '127.0.0.1');
@@ -119,6 +132,7 @@ async function main(): Promise<void> {
   const dataSource = await testDataSource();
   await seedDemo(dataSource, 4);
   const server = await startTestServer({ withApp: true });
+  const baseline = BASELINE ? await startTestServer({ withApp: true, env: { LAMPLIGHT_APP_DIR: path.resolve(BASELINE) } }) : null;
   const port = await freePort();
   const profileDir = mkdtempSync(path.join(tmpdir(), 'lamplight-lighthouse-'));
   const profile = await chromium.launchPersistentContext(profileDir, {
@@ -130,12 +144,14 @@ async function main(): Promise<void> {
     const pages: { name: string; url: string; signedIn: boolean }[] = [
       { name: 'blank app', url: blankUrl, signedIn: false },
       { name: 'sign-in', url: `${server.baseUrl}/sign-in`, signedIn: false },
+      ...(baseline ? [{ name: 'sign-in (baseline)', url: `${baseline.baseUrl}/sign-in`, signedIn: false }] : []),
       { name: 'Today', url: `${server.baseUrl}/today`, signedIn: true },
       { name: 'Library', url: `${server.baseUrl}/library`, signedIn: true },
-    ];
+    ].filter((page) => wanted(page.name));
     const runs = new Map<string, Run[]>(pages.map((page) => [page.name, []]));
     // Signed-out pages first, then the demo reader signs in once for the rest.
     for (const signedIn of [false, true]) {
+      if (!pages.some((page) => page.signedIn === signedIn)) continue;
       if (signedIn) {
         const reader = DEMO_ACCOUNTS.find((account) => account.withLibrary)!;
         const page = await profile.newPage();
@@ -153,7 +169,7 @@ async function main(): Promise<void> {
         const order = round % 2 === 0 ? group : [...group].reverse();
         for (const page of order) {
           if (signedIn && page.name === 'blank app' && round > 0) continue; // enough blank rounds
-          const run = await attempt(page.url, port, page.signedIn);
+          const run = await attempt(page.url, port, page.signedIn, page.name);
           if (run) runs.get(page.name)!.push(run);
           if (run) console.log(`${line(page.name, run)}   (round ${round + 1})`);
           if (run && WHERE) for (const where of run.where) console.log(`      ${where}`);
@@ -164,7 +180,7 @@ async function main(): Promise<void> {
     for (const page of pages) {
       const all = runs.get(page.name)!;
       if (all.length === 0) {
-        console.log(`  ${page.name.padEnd(16)} no run finished`);
+        console.log(`  ${page.name.padEnd(18)} no run finished`);
         continue;
       }
       const middle = median(all.map((run) => run.scores['performance']!));
@@ -174,6 +190,7 @@ async function main(): Promise<void> {
   } finally {
     await profile.close();
     await server.close();
+    await baseline?.close();
     await dataSource.destroy();
     blank.close();
     rmSync(blankDir, { recursive: true, force: true });

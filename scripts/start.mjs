@@ -20,7 +20,7 @@ startDatabase();
 console.log('Building the server and the app (production)…');
 run(bin('tsc'), ['-p', 'sync-server/tsconfig.json']);
 run('node', ['scripts/subset-icons.mjs']);
-run(bin('ng'), ['build', '--configuration', 'production']);
+run(bin('ng'), ['build', '--configuration', 'production'], { env: { ...process.env, NG_BUILD_OPTIMIZE_CHUNKS: '1' } });
 run('node', ['scripts/preload-initial.mjs']);
 run('node', ['scripts/precompress.mjs']);
 

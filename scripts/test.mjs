@@ -68,7 +68,7 @@ const suites = [
     command: [
       'bash',
       '-c',
-      `node scripts/subset-icons.mjs && ${bin('ng')} build --configuration production && node scripts/preload-initial.mjs && node scripts/precompress.mjs`,
+      `node scripts/subset-icons.mjs && NG_BUILD_OPTIMIZE_CHUNKS=1 ${bin('ng')} build --configuration production && node scripts/preload-initial.mjs && node scripts/precompress.mjs`,
     ],
   },
   {

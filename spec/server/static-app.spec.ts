@@ -14,6 +14,8 @@ describe('Serving the built app', () => {
     appDir = mkdtempSync(path.join(tmpdir(), 'lamplight-app-'));
     writeFileSync(path.join(appDir, 'index.html'), '<!doctype html><title>Lamplight</title>');
     writeFileSync(path.join(appDir, 'main-ABCDEFGH.js'), 'console.log(1)');
+    writeFileSync(path.join(appDir, 'chunk--_81Vfg9.js'), 'console.log(2)');
+    writeFileSync(path.join(appDir, 'ngsw-worker.js'), 'console.log(3)');
   });
 
   it('When a client route is asked for, then index.html answers so the client router can take it', async () => {
@@ -31,6 +33,10 @@ describe('Serving the built app', () => {
     const res = await request(app).get('/main-ABCDEFGH.js').expect(200);
 
     expect(res.headers['cache-control']).toContain('immutable');
+    // A chunk named by the build's chunk optimiser (Rollup's base64url hash: letters of both cases, - and _).
+    expect((await request(app).get('/chunk--_81Vfg9.js').expect(200)).headers['cache-control']).toContain('immutable');
+    // Unhashed files keep one name across versions: the browser asks again.
+    expect((await request(app).get('/ngsw-worker.js').expect(200)).headers['cache-control']).toBe('no-cache');
   });
 
   it('When an unknown API route is asked for, then the fallback does not hide the JSON 404', async () => {

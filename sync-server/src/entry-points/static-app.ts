@@ -31,7 +31,8 @@ export function staticApp(appDir: string): Router {
       serveStatic: {
         setHeaders(res, filePath) {
           const name = path.basename(filePath);
-          if (/-[A-Z0-9]{8}\.(js|css|woff2?)(\.(br|gz))?$/.test(name)) {
+          // esbuild hashes are 8 of [A-Z0-9]; the build's chunk optimiser (Rollup) writes base64url ones.
+          if (/-[\w-]{8}\.(js|css|woff2?)(\.(br|gz))?$/.test(name)) {
             res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
           } else {
             res.setHeader('Cache-Control', 'no-cache');
