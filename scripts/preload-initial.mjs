@@ -5,12 +5,13 @@
 // uses are preloaded too, instead of being found when the first heading renders. So is the sign-in
 // page's chunk with its static imports: `main.ts` asks for it, but its 16 imports were found only
 // once it had arrived and been parsed, two round trips after main (and, under Lighthouse's simulated
-// throttling, after main's evaluation ×4). A signed-in start fetches them too; from the worker's
-// cache, and about half are the shell's own. Then the
+// throttling, after main's evaluation ×4). Those are asked for by a small module script of their
+// own (`sign-in-preloads-<hash>.js`, beside main, `async`) and only when no reader is signed in on
+// this device: a signed-in start has no use for them (about 30 KB gzip). Then the
 // service worker's manifest gets the new page's hash, or the worker would refuse the page.
 // Usage: node scripts/preload-initial.mjs [dir]   (default dist/app/browser)
 import { createHash } from 'node:crypto';
-import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 
 import { root } from './lib.mjs';
@@ -36,23 +37,51 @@ function staticImports(file, seen = new Set()) {
 
 const firstPage = readdirSync(dir).filter((name) => /^chunk-[\w-]+\.js$/.test(name) && FIRST_PAGE_SELECTOR.test(readFileSync(path.join(dir, name), 'utf8')));
 if (firstPage.length !== 1) throw new Error(`preload-initial: ${firstPage.length} chunks hold ${FIRST_PAGE_SELECTOR}, expected one`);
-const wanted = new Set([...staticImports(entry), firstPage[0], ...staticImports(firstPage[0])]);
+const everyStart = staticImports(entry);
+const signedOutOnly = [firstPage[0], ...staticImports(firstPage[0])].filter((chunk) => !everyStart.has(chunk));
 const faces = existsSync(path.join(dir, 'media')) ? readdirSync(path.join(dir, 'media')).filter((name) => FIRST_FACES.test(name)) : [];
 // Largest first, main before all: on HTTP/1.1's six connections a big file asked for last ends last.
-const bySize = [...wanted].sort((a, b) => statSync(path.join(dir, b)).size - statSync(path.join(dir, a)).size);
+const bySize = (chunks) => [...chunks].sort((a, b) => statSync(path.join(dir, b)).size - statSync(path.join(dir, a)).size);
+
+// The sign-in closure's preloads, added by a script when nobody is signed in (SESSION_STORAGE_KEY
+// in core/auth/stored-session.ts); storage that cannot be read counts as signed out.
+const script = `// Written by scripts/preload-initial.mjs: the sign-in page's chunks, preloaded only when signed out.
+let signedIn = false;
+try { signedIn = localStorage.getItem('lamplight.session') !== null; } catch {}
+if (!signedIn) for (const href of ${JSON.stringify(bySize(signedOutOnly))}) {
+  const link = document.createElement('link');
+  link.rel = 'modulepreload';
+  link.href = href;
+  document.head.append(link);
+}
+`;
+for (const old of readdirSync(dir).filter((name) => /^sign-in-preloads-[\w-]{8}\.js$/.test(name))) unlinkSync(path.join(dir, old));
+const scriptName = `sign-in-preloads-${createHash('sha1').update(script).digest('base64url').slice(0, 8)}.js`;
+writeFileSync(path.join(dir, scriptName), script);
+
 const links = [
   `<link rel="modulepreload" href="${entry}">`,
+  `<script src="${scriptName}" type="module" async></script>`,
   ...faces.map((face) => `<link rel="preload" href="media/${face}" as="font" type="font/woff2" crossorigin>`),
-  ...bySize.map((chunk) => `<link rel="modulepreload" href="${chunk}">`),
+  ...bySize(everyStart).map((chunk) => `<link rel="modulepreload" href="${chunk}">`),
 ];
 // The CLI's own modulepreloads (and this script's, when run again) are replaced by the list above.
 html = html.replace(/<link rel="(?:modulepreload|preload)" href="(?:chunk-|main-|media\/atkinson-)[^"]*"[^>]*>/g, '');
+html = html.replace(/<script src="sign-in-preloads-[\w-]{8}\.js" type="module" async><\/script>/g, '');
 html = html.replace(`<script src="${entry}"`, `${links.join('')}<script src="${entry}"`);
 writeFileSync(indexPath, html);
 const manifestPath = path.join(dir, 'ngsw.json');
 if (existsSync(manifestPath)) {
   const manifest = JSON.parse(readFileSync(manifestPath, 'utf8'));
   manifest.hashTable['/index.html'] = createHash('sha1').update(html).digest('hex');
+  // The worker serves the script offline like the other app files (the app shell group).
+  for (const url of Object.keys(manifest.hashTable).filter((url) => /^\/sign-in-preloads-/.test(url))) delete manifest.hashTable[url];
+  manifest.hashTable[`/${scriptName}`] = createHash('sha1').update(script).digest('hex');
+  const shell = manifest.assetGroups.find((group) => group.urls.includes('/index.html'));
+  shell.urls = [...shell.urls.filter((url) => !/^\/sign-in-preloads-/.test(url)), `/${scriptName}`];
   writeFileSync(manifestPath, `${JSON.stringify(manifest, null, 2)}\n`);
 }
-console.log(`preload-initial: main, ${bySize.length} chunks and ${faces.length} faces preloaded in ${path.relative(root, indexPath)}`);
+console.log(
+  `preload-initial: main, ${everyStart.size} chunks and ${faces.length} faces preloaded in ${path.relative(root, indexPath)}; ` +
+    `${signedOutOnly.length} more when signed out (${scriptName})`,
+);
