@@ -12,6 +12,7 @@ import { TabCoordination } from './tab-coordination';
 import { UnsavedWork } from './unsaved-work';
 import { untilTicked as until } from './testing/leave-question';
 import { snackBarText } from './testing/pwa-fixtures';
+import { patiently } from '../testing/patience';
 
 /**
  * "Another tab" still running an older Lamplight: a plain IndexedDB connection at the previous
@@ -85,6 +86,8 @@ describe('TabCoordination', () => {
 
     it('says so and reloads this tab shortly after, or at once on Reload now', async () => {
       await upgradedElsewhere();
+      // Under load the snack bar can take more than one task to open (real time; the mocked clock stands still).
+      await patiently('the snack bar', snackBarText, () => TestBed.tick());
       expect(snackBarText()).toBe('Lamplight was updated in another tab, so this tab reloads to keep up.');
       jasmine.clock().tick(2499);
       expect(reload).not.toHaveBeenCalled();
