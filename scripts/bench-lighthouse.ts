@@ -10,9 +10,13 @@
  * returning reader whose installed app (service worker and its caches) is warm. Clearing only the
  * caches or the worker under Lighthouse failed its runs (an error page, or a lost trace).
  * `LAMPLIGHT_BENCH_WHERE=1` also prints, for each run, the scripts with the most main-thread time
- * (Lighthouse's bootup-time audit) and the largest transfers: where to look next.
+ * (Lighthouse's bootup-time audit), the longest main-thread tasks and the largest transfers:
+ * where to look next. `LAMPLIGHT_BENCH_PAGES=signed-in` runs only Today and Library;
+ * `LAMPLIGHT_BENCH_BASELINE=DIR` also serves another build's `browser` folder (say the previous
+ * commit's, built into a temporary folder) and runs its pages in turn with this build's, so both
+ * see the same machine load; `LAMPLIGHT_BENCH_LHR_DIR=DIR` keeps each run's Lighthouse JSON and trace.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer, type AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -31,6 +35,9 @@ const ROUNDS = Number(process.env['LAMPLIGHT_BENCH_ROUNDS'] ?? 3);
 const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
 const CATEGORIES = ['performance', 'accessibility', 'best-practices', 'seo'] as const;
 const WHERE = process.env['LAMPLIGHT_BENCH_WHERE'] === '1';
+const SIGNED_IN_ONLY = process.env['LAMPLIGHT_BENCH_PAGES'] === 'signed-in';
+const BASELINE_DIR = process.env['LAMPLIGHT_BENCH_BASELINE'];
+const LHR_DIR = process.env['LAMPLIGHT_BENCH_LHR_DIR'];
 
 interface Run {
   scores: Record<string, number>;
@@ -46,6 +53,13 @@ interface BootupItem {
   url: string;
   total: number;
   scripting: number;
+}
+
+/** A row of Lighthouse's long-tasks audit. */
+interface LongTaskItem {
+  url: string;
+  duration: number;
+  startTime: number;
 }
 
 /** A row of Lighthouse's network-requests audit (the fields used here). */
@@ -66,6 +80,8 @@ function freePort(): Promise<number> {
   });
 }
 
+let saved = 0;
+
 async function audit(url: string, port: number, keepStorage: boolean): Promise<Run> {
   // Lighthouse is ECMAScript-module only; this file compiles to CommonJS.
   const { default: lighthouse } = await import('lighthouse');
@@ -73,6 +89,14 @@ async function audit(url: string, port: number, keepStorage: boolean): Promise<R
   if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
   const { lhr } = result;
   if (lhr.runtimeError) throw new Error(`Lighthouse on ${url}: ${lhr.runtimeError.message}`);
+  if (LHR_DIR) {
+    mkdirSync(LHR_DIR, { recursive: true });
+    writeFileSync(
+      path.join(LHR_DIR, `${String(++saved).padStart(2, '0')}-${new URL(url).port}${new URL(url).pathname.replaceAll('/', '-')}.json`),
+      JSON.stringify(lhr),
+    );
+    writeFileSync(path.join(LHR_DIR, `${String(saved).padStart(2, '0')}-trace.json`), JSON.stringify(result.artifacts.Trace));
+  }
   const numeric = (id: string) => lhr.audits[id]?.numericValue ?? NaN;
   return {
     scores: Object.fromEntries(CATEGORIES.map((id) => [id, Math.round((lhr.categories[id]?.score ?? NaN) * 100)])),
@@ -84,6 +108,9 @@ async function audit(url: string, port: number, keepStorage: boolean): Promise<R
       ...((lhr.audits['bootup-time']?.details as { items?: BootupItem[] } | undefined)?.items ?? [])
         .slice(0, 6)
         .map((item) => `${shortUrl(item.url)} ${Math.round(item.total)} ms (script ${Math.round(item.scripting)})`),
+      ...((lhr.audits['long-tasks']?.details as { items?: LongTaskItem[] } | undefined)?.items ?? [])
+        .slice(0, 6)
+        .map((item) => `long task ${Math.round(item.duration)} ms at ${Math.round(item.startTime)} ms: ${shortUrl(item.url)}`),
       ...((lhr.audits['network-requests']?.details as { items?: NetworkItem[] } | undefined)?.items ?? [])
         .sort((a, b) => b.transferSize - a.transferSize)
         .slice(0, 8)
@@ -106,19 +133,21 @@ async function attempt(url: string, port: number, keepStorage: boolean): Promise
 
 function line(name: string, run: Run): string {
   const scores = CATEGORIES.map((id) => `${id} ${String(run.scores[id]).padStart(3)}`).join('  ');
-  return `  ${name.padEnd(16)} ${scores}   FCP ${(run.fcp / 1000).toFixed(1)} s  LCP ${(run.lcp / 1000).toFixed(1)} s  TBT ${Math.round(run.tbt)} ms  ${Math.round(run.bytes / 1024)} KiB`;
+  return `  ${name.padEnd(20)} ${scores}   FCP ${(run.fcp / 1000).toFixed(1)} s  LCP ${(run.lcp / 1000).toFixed(1)} s  TBT ${Math.round(run.tbt)} ms  ${Math.round(run.bytes / 1024)} KiB`;
 }
 
 async function main(): Promise<void> {
-  const blankDir = buildBlankApp();
+  // Only Today and Library: no blank app to build.
+  const blankDir = SIGNED_IN_ONLY ? null : buildBlankApp();
   const blank = express()
-    .use(express.static(path.join(blankDir, 'dist/browser')))
+    .use(express.static(path.join(blankDir ?? tmpdir(), 'dist/browser')))
     .listen(0, '127.0.0.1');
   await new Promise((resolve) => blank.once('listening', resolve));
   const blankUrl = `http://127.0.0.1:${(blank.address() as AddressInfo).port}/`;
   const dataSource = await testDataSource();
   await seedDemo(dataSource, 4);
   const server = await startTestServer({ withApp: true });
+  const baseline = BASELINE_DIR ? await startTestServer({ withApp: true, env: { LAMPLIGHT_APP_DIR: path.resolve(BASELINE_DIR) } }) : null;
   const port = await freePort();
   const profileDir = mkdtempSync(path.join(tmpdir(), 'lamplight-lighthouse-'));
   const profile = await chromium.launchPersistentContext(profileDir, {
@@ -127,26 +156,31 @@ async function main(): Promise<void> {
     args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-component-update', `--remote-debugging-port=${port}`],
   });
   try {
+    const builds = [{ label: '', baseUrl: server.baseUrl }, ...(baseline ? [{ label: ' (baseline)', baseUrl: baseline.baseUrl }] : [])];
     const pages: { name: string; url: string; signedIn: boolean }[] = [
-      { name: 'blank app', url: blankUrl, signedIn: false },
-      { name: 'sign-in', url: `${server.baseUrl}/sign-in`, signedIn: false },
-      { name: 'Today', url: `${server.baseUrl}/today`, signedIn: true },
-      { name: 'Library', url: `${server.baseUrl}/library`, signedIn: true },
+      ...(SIGNED_IN_ONLY ? [] : [{ name: 'blank app', url: blankUrl, signedIn: false }]),
+      ...(SIGNED_IN_ONLY ? [] : builds.map(({ label, baseUrl }) => ({ name: `sign-in${label}`, url: `${baseUrl}/sign-in`, signedIn: false }))),
+      ...builds.flatMap(({ label, baseUrl }) => [
+        { name: `Today${label}`, url: `${baseUrl}/today`, signedIn: true },
+        { name: `Library${label}`, url: `${baseUrl}/library`, signedIn: true },
+      ]),
     ];
     const runs = new Map<string, Run[]>(pages.map((page) => [page.name, []]));
     // Signed-out pages first, then the demo reader signs in once for the rest.
     for (const signedIn of [false, true]) {
       if (signedIn) {
         const reader = DEMO_ACCOUNTS.find((account) => account.withLibrary)!;
-        const page = await profile.newPage();
-        await signInThroughUi(page, server.baseUrl, reader.email, reader.password);
-        // The first sync brings the demo library into IndexedDB; then it is a returning reader.
-        await page
-          .getByText(/^Synced/)
-          .first()
-          .waitFor({ timeout: 120_000 })
-          .catch(() => console.log('  (the first sync did not say "Synced" within 120 s; measuring anyway)'));
-        await page.close();
+        for (const { baseUrl } of builds) {
+          const page = await profile.newPage();
+          await signInThroughUi(page, baseUrl, reader.email, reader.password);
+          // The first sync brings the demo library into IndexedDB; then it is a returning reader.
+          await page
+            .getByText(/^Synced/)
+            .first()
+            .waitFor({ timeout: 120_000 })
+            .catch(() => console.log('  (the first sync did not say "Synced" within 120 s; measuring anyway)'));
+          await page.close();
+        }
       }
       const group = pages.filter((page) => page.signedIn === signedIn || page.name === 'blank app');
       for (let round = 0; round < ROUNDS; round++) {
@@ -164,7 +198,7 @@ async function main(): Promise<void> {
     for (const page of pages) {
       const all = runs.get(page.name)!;
       if (all.length === 0) {
-        console.log(`  ${page.name.padEnd(16)} no run finished`);
+        console.log(`  ${page.name.padEnd(20)} no run finished`);
         continue;
       }
       const middle = median(all.map((run) => run.scores['performance']!));
@@ -174,9 +208,10 @@ async function main(): Promise<void> {
   } finally {
     await profile.close();
     await server.close();
+    await baseline?.close();
     await dataSource.destroy();
     blank.close();
-    rmSync(blankDir, { recursive: true, force: true });
+    if (blankDir) rmSync(blankDir, { recursive: true, force: true });
     rmSync(profileDir, { recursive: true, force: true });
   }
 }

@@ -1,5 +1,6 @@
 import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import { provideHttpClientTesting } from '@angular/common/http/testing';
+import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import Dexie from 'dexie';
 
@@ -7,6 +8,7 @@ import { authInterceptor } from '../auth/auth-interceptor';
 import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
 import { journalDbName } from '../data/journal-db';
 import { LocalJournal } from '../data/local-journal';
+import { FIRST_SCREEN_SETTLED } from '../tasks/first-screen';
 import { EVENT_STREAM_FETCH, SyncEvents } from './sync-events';
 import { until } from './testing/sync-backend';
 
@@ -46,7 +48,12 @@ describe('SyncEvents', () => {
       return new Response(body, { status: 200, headers: { 'content-type': 'text/event-stream' } });
     };
     TestBed.configureTestingModule({
-      providers: [provideHttpClient(withInterceptors([authInterceptor])), provideHttpClientTesting(), { provide: EVENT_STREAM_FETCH, useValue: server }],
+      providers: [
+        provideHttpClient(withInterceptors([authInterceptor])),
+        provideHttpClientTesting(),
+        { provide: EVENT_STREAM_FETCH, useValue: server },
+        { provide: FIRST_SCREEN_SETTLED, useValue: signal(true) },
+      ],
     });
     await TestBed.inject(LocalJournal).db()!.open();
   });

@@ -5,6 +5,7 @@ import { retryDelayMs } from '@shared/sync/sync-cycle';
 
 import { Auth } from '../auth/auth';
 import { LocalJournal } from '../data/local-journal';
+import { FIRST_SCREEN_SETTLED } from '../tasks/first-screen';
 
 /** How the stream is fetched; specs hand in their own server. */
 export const EVENT_STREAM_FETCH = new InjectionToken<typeof fetch>('fetch for the live sync stream', {
@@ -33,6 +34,7 @@ export class SyncEvents {
   private readonly journal = inject(LocalJournal);
   private readonly fetch = inject(EVENT_STREAM_FETCH);
   private readonly document = inject(DOCUMENT);
+  private readonly firstScreen = inject(FIRST_SCREEN_SETTLED);
 
   private readonly online = signal(globalThis.navigator?.onLine ?? true);
   private readonly visible = signal(this.document.visibilityState !== 'hidden');
@@ -52,7 +54,7 @@ export class SyncEvents {
     globalThis.addEventListener?.('offline', setOffline);
     this.document.addEventListener('visibilitychange', setVisibility);
     effect(() => {
-      const wanted = this.poke() !== null && !!this.journal.db() && !this.auth.needsSignIn() && this.online() && this.visible();
+      const wanted = this.poke() !== null && this.firstScreen() && !!this.journal.db() && !this.auth.needsSignIn() && this.online() && this.visible();
       if (wanted && !this.abort) this.start();
       if (!wanted) this.stop();
     });
