@@ -5,6 +5,7 @@ import { retryDelayMs } from '@shared/sync/sync-cycle';
 
 import { Auth } from '../auth/auth';
 import { LocalJournal } from '../data/local-journal';
+import { browserStorage } from '../device/browser-storage';
 import { FIRST_SCREEN_SETTLED } from '../tasks/first-screen';
 
 /** How the stream is fetched; specs hand in their own server. */
@@ -12,6 +13,9 @@ export const EVENT_STREAM_FETCH = new InjectionToken<typeof fetch>('fetch for th
   providedIn: 'root',
   factory: () => globalThis.fetch.bind(globalThis),
 });
+
+/** Where the last poke's id is kept (then `.` and the reader's id). */
+const EVENT_ID_KEY = 'lamplight.syncEventId';
 
 /** A server without live updates (older, or behind a proxy that refuses streams): look again this much later. */
 const NOT_OFFERED_PAUSE_MS = 10 * 60_000;
@@ -41,7 +45,19 @@ export class SyncEvents {
   private readonly poke = signal<(() => void) | null>(null);
   private readonly openState = signal(false);
   private abort: AbortController | null = null;
-  private lastEventId: string | undefined;
+  /**
+   * The last poke's id, kept across visits (per reader): reopening the app then gets no poke on
+   * connect unless something changed since, so a start pulls once (its own round) instead of twice.
+   * Safe to skip that poke: every start syncs anyway.
+   */
+  private get lastEventId(): string | undefined {
+    const userId = this.auth.user()?.id;
+    return (userId && browserStorage.read<string>(`${EVENT_ID_KEY}.${userId}`)) || undefined;
+  }
+  private set lastEventId(id: string) {
+    const userId = this.auth.user()?.id;
+    if (userId) browserStorage.write(`${EVENT_ID_KEY}.${userId}`, id);
+  }
 
   /** Whether a stream is open right now. */
   readonly open = this.openState.asReadonly();
@@ -100,7 +116,8 @@ export class SyncEvents {
     const token = await this.auth.freshAccessToken();
     if (!token || signal.aborted) return 'failed';
     const headers: Record<string, string> = { accept: 'text/event-stream', authorization: `Bearer ${token}`, 'ngsw-bypass': 'true' };
-    if (this.lastEventId !== undefined) headers['last-event-id'] = this.lastEventId;
+    const lastEventId = this.lastEventId;
+    if (lastEventId !== undefined) headers['last-event-id'] = lastEventId;
     const res = await this.fetch('/api/sync/events', { headers, signal, cache: 'no-store' });
     if (res.status === 401) {
       await this.auth.refresh(token).catch(() => null); // an expired token: the next attempt uses the new one
