@@ -144,7 +144,8 @@ async function profiledStart(page: Page, url: string): Promise<CpuProfile> {
     })();
   });
   await page.waitForTimeout(Number(process.env['LAMPLIGHT_PROFILE_AFTER_MS'] ?? 4000));
-  if (SHIFTS) for (const shift of await page.evaluate(() => (globalThis as unknown as { benchShifts: string[] }).benchShifts)) console.log(`layout shift at ${shift}`);
+  if (SHIFTS)
+    for (const shift of await page.evaluate(() => (globalThis as unknown as { benchShifts: string[] }).benchShifts)) console.log(`layout shift at ${shift}`);
   const { profile } = await cdp.send('Profiler.stop');
   return profile as CpuProfile;
 }
