@@ -29,7 +29,7 @@ export class ReadingLog {
 
   private readonly data = liveQuerySignal(allSessionsAndBooks, NO_SESSIONS);
   /** The journal has answered (the heatmap renders only then, after Today's first screen). */
-  readonly loaded = computed(() => this.data() !== NO_SESSIONS);
+  protected readonly loaded = computed(() => this.data() !== NO_SESSIONS);
   protected readonly log = computed(() => dailyLog(logSessions(this.data().sessions, this.data().books), this.timeZone));
 
   protected readonly today = computed(() => {
