@@ -10,11 +10,12 @@
  * returning reader whose installed app (service worker and its caches) is warm. Clearing only the
  * caches or the worker under Lighthouse failed its runs (an error page, or a lost trace).
  * `LAMPLIGHT_BENCH_WHERE=1` also prints, for each run, the scripts with the most main-thread time
- * (Lighthouse's bootup-time audit) and the largest transfers: where to look next.
- * `LAMPLIGHT_BENCH_PAGES=sign-in` runs only the pages named (comma-separated; `blank app` too);
- * `LAMPLIGHT_BENCH_BASELINE=DIR` adds the sign-in page of another build (its `dist/app/browser`,
- * served by a second server) in the same alternating rounds: old and new under the same load;
- * `LAMPLIGHT_BENCH_JSON=DIR` keeps each run's Lighthouse report there.
+ * (Lighthouse's bootup-time audit), the longest main-thread tasks and the largest transfers:
+ * where to look next. `LAMPLIGHT_BENCH_PAGES` runs only the pages named (comma-separated: `blank
+ * app`, `sign-in`, `Today`, `Library`, or `signed-in` for the last two);
+ * `LAMPLIGHT_BENCH_BASELINE=DIR` also serves another build's `browser` folder (say the previous
+ * commit's, built into a temporary folder) and runs its pages in turn with this build's, so both
+ * see the same machine load; `LAMPLIGHT_BENCH_JSON=DIR` keeps each run's Lighthouse JSON and trace.
  */
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer, type AddressInfo } from 'node:net';
@@ -35,9 +36,13 @@ const ROUNDS = Number(process.env['LAMPLIGHT_BENCH_ROUNDS'] ?? 3);
 const CHROMIUM = process.env['CHROME_BIN'] ?? '/usr/bin/chromium';
 const CATEGORIES = ['performance', 'accessibility', 'best-practices', 'seo'] as const;
 const WHERE = process.env['LAMPLIGHT_BENCH_WHERE'] === '1';
-const ONLY = process.env['LAMPLIGHT_BENCH_PAGES']?.split(',').map((name) => name.trim().toLowerCase());
-const BASELINE = process.env['LAMPLIGHT_BENCH_BASELINE'];
-const JSON_DIR = process.env['LAMPLIGHT_BENCH_JSON'];
+const ONLY = process.env['LAMPLIGHT_BENCH_PAGES']
+  ?.split(',')
+  .flatMap((name) => (name.trim().toLowerCase() === 'signed-in' ? ['today', 'library'] : [name.trim().toLowerCase()]));
+const BASELINE_DIR = process.env['LAMPLIGHT_BENCH_BASELINE'];
+const LHR_DIR = process.env['LAMPLIGHT_BENCH_JSON'];
+/** Whether a page (a baseline's by its own name) is one the run asked for. */
+const wanted = (name: string) => !ONLY || ONLY.includes(name.replace(' (baseline)', '').toLowerCase());
 
 interface Run {
   scores: Record<string, number>;
@@ -53,6 +58,13 @@ interface BootupItem {
   url: string;
   total: number;
   scripting: number;
+}
+
+/** A row of Lighthouse's long-tasks audit. */
+interface LongTaskItem {
+  url: string;
+  duration: number;
+  startTime: number;
 }
 
 /** A row of Lighthouse's network-requests audit (the fields used here). */
@@ -73,16 +85,22 @@ function freePort(): Promise<number> {
   });
 }
 
-async function audit(url: string, port: number, keepStorage: boolean, name: string): Promise<Run> {
+let saved = 0;
+
+async function audit(url: string, port: number, keepStorage: boolean): Promise<Run> {
   // Lighthouse is ECMAScript-module only; this file compiles to CommonJS.
   const { default: lighthouse } = await import('lighthouse');
   const result = await lighthouse(url, { port, logLevel: 'error', onlyCategories: [...CATEGORIES], disableStorageReset: keepStorage });
   if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
   const { lhr } = result;
   if (lhr.runtimeError) throw new Error(`Lighthouse on ${url}: ${lhr.runtimeError.message}`);
-  if (JSON_DIR) {
-    mkdirSync(JSON_DIR, { recursive: true });
-    writeFileSync(path.join(JSON_DIR, `${name.replace(/\W+/g, '-')}-${Date.now()}.json`), JSON.stringify(lhr));
+  if (LHR_DIR) {
+    mkdirSync(LHR_DIR, { recursive: true });
+    writeFileSync(
+      path.join(LHR_DIR, `${String(++saved).padStart(2, '0')}-${new URL(url).port}${new URL(url).pathname.replaceAll('/', '-')}.json`),
+      JSON.stringify(lhr),
+    );
+    writeFileSync(path.join(LHR_DIR, `${String(saved).padStart(2, '0')}-trace.json`), JSON.stringify(result.artifacts.Trace));
   }
   const numeric = (id: string) => lhr.audits[id]?.numericValue ?? NaN;
   return {
@@ -95,6 +113,9 @@ async function audit(url: string, port: number, keepStorage: boolean, name: stri
       ...((lhr.audits['bootup-time']?.details as { items?: BootupItem[] } | undefined)?.items ?? [])
         .slice(0, 6)
         .map((item) => `${shortUrl(item.url)} ${Math.round(item.total)} ms (script ${Math.round(item.scripting)})`),
+      ...((lhr.audits['long-tasks']?.details as { items?: LongTaskItem[] } | undefined)?.items ?? [])
+        .slice(0, 6)
+        .map((item) => `long task ${Math.round(item.duration)} ms at ${Math.round(item.startTime)} ms: ${shortUrl(item.url)}`),
       ...((lhr.audits['network-requests']?.details as { items?: NetworkItem[] } | undefined)?.items ?? [])
         .sort((a, b) => b.transferSize - a.transferSize)
         .slice(0, 8)
@@ -104,10 +125,10 @@ async function audit(url: string, port: number, keepStorage: boolean, name: stri
 }
 
 /** One audit, tried again once: Lighthouse sometimes loses a trace on a busy machine. */
-async function attempt(url: string, port: number, keepStorage: boolean, name: string): Promise<Run | null> {
+async function attempt(url: string, port: number, keepStorage: boolean): Promise<Run | null> {
   for (let tries = 1; ; tries++) {
     try {
-      return await audit(url, port, keepStorage, name);
+      return await audit(url, port, keepStorage);
     } catch (error) {
       console.log(`  (${url}: ${(error as Error).message}${tries < 2 ? '; trying again' : '; skipped'})`);
       if (tries >= 2) return null;
@@ -117,22 +138,20 @@ async function attempt(url: string, port: number, keepStorage: boolean, name: st
 
 function line(name: string, run: Run): string {
   const scores = CATEGORIES.map((id) => `${id} ${String(run.scores[id]).padStart(3)}`).join('  ');
-  return `  ${name.padEnd(18)} ${scores}   FCP ${(run.fcp / 1000).toFixed(1)} s  LCP ${(run.lcp / 1000).toFixed(1)} s  TBT ${Math.round(run.tbt)} ms  ${Math.round(run.bytes / 1024)} KiB`;
+  return `  ${name.padEnd(20)} ${scores}   FCP ${(run.fcp / 1000).toFixed(1)} s  LCP ${(run.lcp / 1000).toFixed(1)} s  TBT ${Math.round(run.tbt)} ms  ${Math.round(run.bytes / 1024)} KiB`;
 }
 
-const wanted = (name: string) => !ONLY || ONLY.includes(name.toLowerCase()) || (name === 'sign-in (baseline)' && ONLY.includes('sign-in'));
-
 async function main(): Promise<void> {
-  const blankDir = wanted('blank app') ? buildBlankApp() : mkdtempSync(path.join(tmpdir(), 'lamplight-no-blank-'));
+  const blankDir = wanted('blank app') ? buildBlankApp() : null;
   const blank = express()
-    .use(express.static(path.join(blankDir, 'dist/browser')))
+    .use(express.static(path.join(blankDir ?? tmpdir(), 'dist/browser')))
     .listen(0, '127.0.0.1');
   await new Promise((resolve) => blank.once('listening', resolve));
   const blankUrl = `http://127.0.0.1:${(blank.address() as AddressInfo).port}/`;
   const dataSource = await testDataSource();
   await seedDemo(dataSource, 4);
   const server = await startTestServer({ withApp: true });
-  const baseline = BASELINE ? await startTestServer({ withApp: true, env: { LAMPLIGHT_APP_DIR: path.resolve(BASELINE) } }) : null;
+  const baseline = BASELINE_DIR ? await startTestServer({ withApp: true, env: { LAMPLIGHT_APP_DIR: path.resolve(BASELINE_DIR) } }) : null;
   const port = await freePort();
   const profileDir = mkdtempSync(path.join(tmpdir(), 'lamplight-lighthouse-'));
   const profile = await chromium.launchPersistentContext(profileDir, {
@@ -141,12 +160,14 @@ async function main(): Promise<void> {
     args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-component-update', `--remote-debugging-port=${port}`],
   });
   try {
+    const builds = [{ label: '', baseUrl: server.baseUrl }, ...(baseline ? [{ label: ' (baseline)', baseUrl: baseline.baseUrl }] : [])];
     const pages: { name: string; url: string; signedIn: boolean }[] = [
       { name: 'blank app', url: blankUrl, signedIn: false },
-      { name: 'sign-in', url: `${server.baseUrl}/sign-in`, signedIn: false },
-      ...(baseline ? [{ name: 'sign-in (baseline)', url: `${baseline.baseUrl}/sign-in`, signedIn: false }] : []),
-      { name: 'Today', url: `${server.baseUrl}/today`, signedIn: true },
-      { name: 'Library', url: `${server.baseUrl}/library`, signedIn: true },
+      ...builds.map(({ label, baseUrl }) => ({ name: `sign-in${label}`, url: `${baseUrl}/sign-in`, signedIn: false })),
+      ...builds.flatMap(({ label, baseUrl }) => [
+        { name: `Today${label}`, url: `${baseUrl}/today`, signedIn: true },
+        { name: `Library${label}`, url: `${baseUrl}/library`, signedIn: true },
+      ]),
     ].filter((page) => wanted(page.name));
     const runs = new Map<string, Run[]>(pages.map((page) => [page.name, []]));
     // Signed-out pages first, then the demo reader signs in once for the rest.
@@ -154,22 +175,24 @@ async function main(): Promise<void> {
       if (!pages.some((page) => page.signedIn === signedIn)) continue;
       if (signedIn) {
         const reader = DEMO_ACCOUNTS.find((account) => account.withLibrary)!;
-        const page = await profile.newPage();
-        await signInThroughUi(page, server.baseUrl, reader.email, reader.password);
-        // The first sync brings the demo library into IndexedDB; then it is a returning reader.
-        await page
-          .getByText(/^Synced/)
-          .first()
-          .waitFor({ timeout: 120_000 })
-          .catch(() => console.log('  (the first sync did not say "Synced" within 120 s; measuring anyway)'));
-        await page.close();
+        for (const { baseUrl } of builds) {
+          const page = await profile.newPage();
+          await signInThroughUi(page, baseUrl, reader.email, reader.password);
+          // The first sync brings the demo library into IndexedDB; then it is a returning reader.
+          await page
+            .getByText(/^Synced/)
+            .first()
+            .waitFor({ timeout: 120_000 })
+            .catch(() => console.log('  (the first sync did not say "Synced" within 120 s; measuring anyway)'));
+          await page.close();
+        }
       }
       const group = pages.filter((page) => page.signedIn === signedIn || page.name === 'blank app');
       for (let round = 0; round < ROUNDS; round++) {
         const order = round % 2 === 0 ? group : [...group].reverse();
         for (const page of order) {
           if (signedIn && page.name === 'blank app' && round > 0) continue; // enough blank rounds
-          const run = await attempt(page.url, port, page.signedIn, page.name);
+          const run = await attempt(page.url, port, page.signedIn);
           if (run) runs.get(page.name)!.push(run);
           if (run) console.log(`${line(page.name, run)}   (round ${round + 1})`);
           if (run && WHERE) for (const where of run.where) console.log(`      ${where}`);
@@ -180,7 +203,7 @@ async function main(): Promise<void> {
     for (const page of pages) {
       const all = runs.get(page.name)!;
       if (all.length === 0) {
-        console.log(`  ${page.name.padEnd(18)} no run finished`);
+        console.log(`  ${page.name.padEnd(20)} no run finished`);
         continue;
       }
       const middle = median(all.map((run) => run.scores['performance']!));
@@ -193,7 +216,7 @@ async function main(): Promise<void> {
     await baseline?.close();
     await dataSource.destroy();
     blank.close();
-    rmSync(blankDir, { recursive: true, force: true });
+    if (blankDir) rmSync(blankDir, { recursive: true, force: true });
     rmSync(profileDir, { recursive: true, force: true });
   }
 }

@@ -7,7 +7,10 @@
  * `NG_BUILD_DEBUG_OPTIMIZE=1 npx ng build --configuration production` keeps names readable (a
  * production build otherwise). Then `npx tsc -p sync-server/tsconfig.json` and
  * `DATABASE_URL=$(scripts/db.sh url lamplight_profile) node dist/node/scripts/profile-startup.js`
- * (`LAMPLIGHT_PROFILE_OUT=file.json` also writes the profile, for DevTools). On a busy machine a
+ * (`LAMPLIGHT_PROFILE_OUT=file.json` also writes the profile, for DevTools;
+ * `LAMPLIGHT_PROFILE_ONLINE=1` starts online, as Lighthouse does: sync and its stream run too;
+ * `LAMPLIGHT_PROFILE_SHIFTS=1` uses Lighthouse's mobile viewport and prints each layout shift,
+ * with the elements that moved: what Lighthouse's CLS counts). On a busy machine a
  * sample's time includes time the page was not running: compare only figures from a quiet one.
  */
 import { writeFileSync } from 'node:fs';
@@ -91,7 +94,34 @@ function report(profile: CpuProfile): void {
   }
 }
 
+const SHIFTS = process.env['LAMPLIGHT_PROFILE_SHIFTS'] === '1';
+
+/** Records layout shifts from the start (a PerformanceObserver that sees them all, buffered). */
+function recordShifts(): void {
+  interface Shift extends PerformanceEntry {
+    value: number;
+    hadRecentInput: boolean;
+    sources: { node?: Node; previousRect: DOMRectReadOnly; currentRect: DOMRectReadOnly }[];
+  }
+  const seen: string[] = [];
+  (globalThis as unknown as { benchShifts: string[] }).benchShifts = seen;
+  new PerformanceObserver((list) => {
+    for (const entry of list.getEntries() as Shift[]) {
+      const moved = entry.sources.map(({ node, previousRect: a, currentRect: b }) => {
+        const element = node instanceof Element ? node : node?.parentElement;
+        const name = element ? `${element.tagName.toLowerCase()}${element.className ? `.${String(element.className).split(' ').join('.')}` : ''}` : '?';
+        return `${name} y ${Math.round(a.y)}→${Math.round(b.y)} h ${Math.round(a.height)}→${Math.round(b.height)}`;
+      });
+      seen.push(`${entry.startTime.toFixed(0)} ms: ${entry.value.toFixed(3)}${entry.hadRecentInput ? ' (input)' : ''}: ${moved.join('; ')}`);
+    }
+  }).observe({ type: 'layout-shift', buffered: true });
+}
+
 async function profiledStart(page: Page, url: string): Promise<CpuProfile> {
+  if (SHIFTS) {
+    await page.setViewportSize({ width: 412, height: 823 }); // Lighthouse's mobile screen (Moto G Power)
+    await page.addInitScript(recordShifts);
+  }
   const cdp = await page.context().newCDPSession(page);
   await cdp.send('Profiler.enable');
   await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
@@ -114,6 +144,8 @@ async function profiledStart(page: Page, url: string): Promise<CpuProfile> {
     })();
   });
   await page.waitForTimeout(Number(process.env['LAMPLIGHT_PROFILE_AFTER_MS'] ?? 4000));
+  if (SHIFTS)
+    for (const shift of await page.evaluate(() => (globalThis as unknown as { benchShifts: string[] }).benchShifts)) console.log(`layout shift at ${shift}`);
   const { profile } = await cdp.send('Profiler.stop');
   return profile as CpuProfile;
 }
@@ -133,7 +165,7 @@ async function main(): Promise<void> {
       .waitFor({ timeout: 120_000 });
     await waitForOfflineReady(page, server.baseUrl);
     await page.close();
-    await context.setOffline(true);
+    if (process.env['LAMPLIGHT_PROFILE_ONLINE'] !== '1') await context.setOffline(true);
     for (let round = 0; round < 2; round++) {
       const tab = await context.newPage();
       const profile = await profiledStart(tab, `${server.baseUrl}${PATH}`);

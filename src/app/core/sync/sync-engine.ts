@@ -15,6 +15,7 @@ import { liveQuerySignal } from '../data/live-query';
 import { liveQueryFor } from '../data/live-query-for';
 import { LiveQueryPace } from '../data/live-query-pace';
 import { LocalJournal } from '../data/local-journal';
+import { FIRST_SCREEN_SETTLED } from '../tasks/first-screen';
 import { SerialJob, withTabLock } from '../tasks/serial-job';
 import { DexieSyncPorts } from './dexie-sync-ports';
 import { SyncEvents } from './sync-events';
@@ -77,9 +78,11 @@ export class SyncEngine {
 
   constructor() {
     const destroyRef = inject(DestroyRef);
-    // A reader signed in (or the app opened with one): sync now.
+    // A reader signed in (or the app opened with one): sync once the first screen is up (it reads the
+    // local journal, not the server).
+    const firstScreen = inject(FIRST_SCREEN_SETTLED);
     effect(() => {
-      if (this.journal.db() && !this.auth.needsSignIn()) this.job.schedule(0);
+      if (firstScreen() && this.journal.db() && !this.auth.needsSignIn()) this.job.schedule(0);
     });
     inject(SyncEvents).connect(() => void this.syncNow()); // another device pushed: pull now
     // While offline, writes and the minute timer leave the backoff's probe alone (no retry storm).

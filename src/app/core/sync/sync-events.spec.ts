@@ -1,5 +1,6 @@
 import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import { provideHttpClientTesting } from '@angular/common/http/testing';
+import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import Dexie from 'dexie';
 
@@ -7,6 +8,7 @@ import { authInterceptor } from '../auth/auth-interceptor';
 import { forgetSession, READER, rememberSession } from '../auth/testing/session-fixtures';
 import { journalDbName } from '../data/journal-db';
 import { LocalJournal } from '../data/local-journal';
+import { FIRST_SCREEN_SETTLED } from '../tasks/first-screen';
 import { EVENT_STREAM_FETCH, SyncEvents } from './sync-events';
 import { until } from './testing/sync-backend';
 
@@ -45,15 +47,26 @@ describe('SyncEvents', () => {
       });
       return new Response(body, { status: 200, headers: { 'content-type': 'text/event-stream' } });
     };
+    await configure(server);
+  });
+
+  /** A fresh app (as on a new visit) whose stream requests go to `server`. */
+  async function configure(server: typeof fetch): Promise<void> {
     TestBed.configureTestingModule({
-      providers: [provideHttpClient(withInterceptors([authInterceptor])), provideHttpClientTesting(), { provide: EVENT_STREAM_FETCH, useValue: server }],
+      providers: [
+        provideHttpClient(withInterceptors([authInterceptor])),
+        provideHttpClientTesting(),
+        { provide: EVENT_STREAM_FETCH, useValue: server },
+        { provide: FIRST_SCREEN_SETTLED, useValue: signal(true) },
+      ],
     });
     await TestBed.inject(LocalJournal).db()!.open();
-  });
+  }
 
   afterEach(async () => {
     TestBed.resetTestingModule();
     await Dexie.delete(journalDbName(userId));
+    localStorage.removeItem(`lamplight.syncEventId.${userId}`);
     forgetSession();
   });
 
@@ -88,6 +101,19 @@ describe('SyncEvents', () => {
     opened[0]!.end(); // as at token expiry
     await until(() => opened.length === 2, 'a second stream');
     expect(opened[1]!.headers['last-event-id']).toBe('7');
+  });
+
+  it('sends the last event id of an earlier visit, so a start with nothing new is not poked', async () => {
+    connected();
+    await until(() => opened.length === 1, 'the stream is open');
+    opened[0]!.send('event: sync\nid: 9\ndata: {"seq":9}\n\n');
+    await until(() => pokes === 1, 'the poke');
+    const server = TestBed.inject(EVENT_STREAM_FETCH);
+    TestBed.resetTestingModule(); // the app closed
+    await configure(server);
+    connected();
+    await until(() => opened.length === 2, 'the next visit opens its stream');
+    expect(opened[1]!.headers['last-event-id']).toBe('9');
   });
 
   it('closes while offline and opens again when back online', async () => {

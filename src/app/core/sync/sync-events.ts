@@ -5,12 +5,17 @@ import { retryDelayMs } from '@shared/sync/sync-cycle';
 
 import { Auth } from '../auth/auth';
 import { LocalJournal } from '../data/local-journal';
+import { browserStorage } from '../device/browser-storage';
+import { FIRST_SCREEN_SETTLED } from '../tasks/first-screen';
 
 /** How the stream is fetched; specs hand in their own server. */
 export const EVENT_STREAM_FETCH = new InjectionToken<typeof fetch>('fetch for the live sync stream', {
   providedIn: 'root',
   factory: () => globalThis.fetch.bind(globalThis),
 });
+
+/** Where the last poke's id is kept (then `.` and the reader's id). */
+const EVENT_ID_KEY = 'lamplight.syncEventId';
 
 /** A server without live updates (older, or behind a proxy that refuses streams): look again this much later. */
 const NOT_OFFERED_PAUSE_MS = 10 * 60_000;
@@ -33,13 +38,26 @@ export class SyncEvents {
   private readonly journal = inject(LocalJournal);
   private readonly fetch = inject(EVENT_STREAM_FETCH);
   private readonly document = inject(DOCUMENT);
+  private readonly firstScreen = inject(FIRST_SCREEN_SETTLED);
 
   private readonly online = signal(globalThis.navigator?.onLine ?? true);
   private readonly visible = signal(this.document.visibilityState !== 'hidden');
   private readonly poke = signal<(() => void) | null>(null);
   private readonly openState = signal(false);
   private abort: AbortController | null = null;
-  private lastEventId: string | undefined;
+  /**
+   * The last poke's id, kept across visits (per reader): reopening the app then gets no poke on
+   * connect unless something changed since, so a start pulls once (its own round) instead of twice.
+   * Safe to skip that poke: every start syncs anyway.
+   */
+  private get lastEventId(): string | undefined {
+    const userId = this.auth.user()?.id;
+    return (userId && browserStorage.read<string>(`${EVENT_ID_KEY}.${userId}`)) || undefined;
+  }
+  private set lastEventId(id: string) {
+    const userId = this.auth.user()?.id;
+    if (userId) browserStorage.write(`${EVENT_ID_KEY}.${userId}`, id);
+  }
 
   /** Whether a stream is open right now. */
   readonly open = this.openState.asReadonly();
@@ -52,7 +70,7 @@ export class SyncEvents {
     globalThis.addEventListener?.('offline', setOffline);
     this.document.addEventListener('visibilitychange', setVisibility);
     effect(() => {
-      const wanted = this.poke() !== null && !!this.journal.db() && !this.auth.needsSignIn() && this.online() && this.visible();
+      const wanted = this.poke() !== null && this.firstScreen() && !!this.journal.db() && !this.auth.needsSignIn() && this.online() && this.visible();
       if (wanted && !this.abort) this.start();
       if (!wanted) this.stop();
     });
@@ -98,7 +116,8 @@ export class SyncEvents {
     const token = await this.auth.freshAccessToken();
     if (!token || signal.aborted) return 'failed';
     const headers: Record<string, string> = { accept: 'text/event-stream', authorization: `Bearer ${token}`, 'ngsw-bypass': 'true' };
-    if (this.lastEventId !== undefined) headers['last-event-id'] = this.lastEventId;
+    const lastEventId = this.lastEventId;
+    if (lastEventId !== undefined) headers['last-event-id'] = lastEventId;
     const res = await this.fetch('/api/sync/events', { headers, signal, cache: 'no-store' });
     if (res.status === 401) {
       await this.auth.refresh(token).catch(() => null); // an expired token: the next attempt uses the new one

@@ -1,5 +1,6 @@
 import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import Dexie from 'dexie';
 
@@ -7,6 +8,7 @@ import { authInterceptor } from '../../auth/auth-interceptor';
 import { forgetSession, READER, rememberSession } from '../../auth/testing/session-fixtures';
 import { journalDbName, type JournalDb } from '../../data/journal-db';
 import { LocalJournal } from '../../data/local-journal';
+import { FIRST_SCREEN_SETTLED } from '../../tasks/first-screen';
 
 /** What a spec of the sync engine works with. */
 export interface EngineTestBed {
@@ -28,7 +30,8 @@ export async function openEngineTestBed(prefix: string): Promise<EngineTestBed> 
   clock.install();
   clock.mockDate(new Date());
   TestBed.configureTestingModule({
-    providers: [provideHttpClient(withInterceptors([authInterceptor])), provideHttpClientTesting()],
+    // The first screen is up: sync starts at once.
+    providers: [provideHttpClient(withInterceptors([authInterceptor])), provideHttpClientTesting(), { provide: FIRST_SCREEN_SETTLED, useValue: signal(true) }],
   });
   const db = TestBed.inject(LocalJournal).db()!;
   await db.open();

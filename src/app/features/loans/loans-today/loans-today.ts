@@ -5,7 +5,7 @@ import { needsAttention } from '@shared/loans/loan-state';
 import { byUrgency } from '@shared/loans/urgency';
 
 import { readerToday } from '../../../core/time/reader-today';
-import { loansData } from '../loans-data';
+import { loansData, NO_LOANS } from '../loans-data';
 import { loanView } from '../loan-view';
 
 /** Today's card: loans due within 3 days or overdue, and holds ready; nothing at all otherwise. */
@@ -19,6 +19,8 @@ import { loanView } from '../loan-view';
 export class LoansToday {
   private readonly today = readerToday();
   private readonly data = loansData();
+  /** The store has answered (Today shows its cards together, so none pushes another down). */
+  readonly loaded = computed(() => this.data() !== NO_LOANS);
   protected readonly items = computed(() => {
     const books = new Map(this.data().books.map((b) => [b.id, b]));
     const libraries = new Map(this.data().libraries.map((l) => [l.id, l]));

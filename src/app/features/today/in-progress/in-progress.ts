@@ -34,6 +34,8 @@ export class InProgress {
   private readonly clock = inject(CLOCK);
 
   private readonly data = liveQuerySignal(currentSessionsAndBooks, NO_SESSIONS);
+  /** The journal has answered (Today shows its panels together, so none pushes another down). */
+  readonly loaded = computed(() => this.data() !== NO_SESSIONS);
 
   protected readonly lines = computed<InProgressLine[]>(() => {
     const { sessions, books } = this.data();
